@@ -1,0 +1,2 @@
+// Placeholder: replaced by the database setup (migrations on the test cluster).
+export default async function setup() {}

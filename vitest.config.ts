@@ -1,0 +1,15 @@
+import { defineConfig } from "vitest/config";
+import path from "node:path";
+
+export default defineConfig({
+  resolve: { alias: { "@": path.resolve(import.meta.dirname) } },
+  test: {
+    include: ["tests/**/*.test.ts"],
+    exclude: ["tests/e2e/**", "node_modules/**"],
+    globalSetup: ["tests/setup/global-setup.ts"],
+    setupFiles: ["tests/setup/each-file.ts"],
+    fileParallelism: false,
+    testTimeout: 20_000,
+    hookTimeout: 60_000,
+  },
+});
