@@ -1,0 +1,23 @@
+"use client";
+import { useState } from "react";
+import { LogOut } from "lucide-react";
+import { authClient } from "@/lib/auth/client";
+
+export function SignOutButton() {
+  const [pending, setPending] = useState(false);
+  return (
+    <button
+      type="button"
+      className="btn-quiet px-3 py-1.5"
+      disabled={pending}
+      onClick={async () => {
+        setPending(true);
+        await authClient.signOut();
+        window.location.assign("/sign-in?signed-out=1");
+      }}
+    >
+      <LogOut className="size-4" aria-hidden="true" />
+      {pending ? "Signing out…" : "Sign out"}
+    </button>
+  );
+}

@@ -1,0 +1,35 @@
+import { Entity, Index, OneToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { randomUUID } from "node:crypto";
+import { User } from "./user.entity";
+
+/**
+ * Someone the shop builds for. A customer who signs up online has a user; one who phones the
+ * counter may not (the counter keeps their details here).
+ */
+@Entity({ tableName: "customer" })
+export class Customer {
+  @PrimaryKey({ type: "uuid" })
+  id: string = randomUUID();
+
+  @Property({ type: "text" })
+  name!: string;
+
+  @Index()
+  @Property({ type: "text" })
+  email!: string;
+
+  @Property({ type: "text", nullable: true })
+  phone?: string | null;
+
+  @Property({ type: "text", nullable: true })
+  company?: string | null;
+
+  @Property({ type: "text", nullable: true })
+  addressLines?: string | null;
+
+  @OneToOne(() => User, { nullable: true, unique: true, deleteRule: "set null" })
+  user?: User | null;
+
+  @Property({ type: "Date", defaultRaw: "now()" })
+  createdAt: Date = new Date();
+}

@@ -1,0 +1,49 @@
+import "server-only";
+import type { ZodType } from "zod";
+import { AccessError, authorize, type CurrentUser } from "@/lib/auth/guard";
+import type { Permission } from "@/lib/auth/permissions";
+import { AppError } from "@/lib/http/errors";
+import { logger } from "@/lib/logger";
+import { zodIssues } from "@/lib/validation";
+
+export type ActionResult<T> =
+  | { ok: true; data: T }
+  | { ok: false; error: { code: string; message: string; fields?: Record<string, string> } };
+
+/**
+ * Builds a server action that checks the session and permission, validates its input with the
+ * same schema the form uses, and returns `{ ok, data | error }` instead of throwing.
+ */
+export function defineAction<I, O>(
+  permission: Permission,
+  schema: ZodType<I>,
+  run: (input: I, user: CurrentUser) => Promise<O>,
+): (input: unknown) => Promise<ActionResult<O>> {
+  return async (raw) => {
+    try {
+      const user = await authorize(permission);
+      const parsed = schema.safeParse(raw);
+      if (!parsed.success) {
+        const issues = zodIssues(parsed.error);
+        return {
+          ok: false,
+          error: {
+            code: "invalid",
+            message: "Check the highlighted fields.",
+            fields: Object.fromEntries(issues.map((i) => [i.path, i.message])),
+          },
+        };
+      }
+      return { ok: true, data: await run(parsed.data, user) };
+    } catch (error) {
+      if (error instanceof AccessError) {
+        return { ok: false, error: { code: error.status === 401 ? "unauthenticated" : "forbidden", message: error.message } };
+      }
+      if (error instanceof AppError) {
+        return { ok: false, error: { code: error.code, message: error.message, fields: error.fields } };
+      }
+      logger.error({ err: error }, "unhandled error in server action");
+      return { ok: false, error: { code: "internal", message: "Something went wrong on our side." } };
+    }
+  };
+}

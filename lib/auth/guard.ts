@@ -1,0 +1,64 @@
+import "server-only";
+import { cache } from "react";
+import { headers } from "next/headers";
+import { forbidden, redirect } from "next/navigation";
+import { auth } from "./server";
+import { can, type Permission } from "./permissions";
+import { isRole, type Role } from "./roles";
+
+export interface CurrentUser {
+  id: string;
+  name: string;
+  email: string;
+  role: Role;
+}
+
+/** Thrown when a caller is not signed in (401) or not allowed (403). */
+export class AccessError extends Error {
+  constructor(readonly status: 401 | 403) {
+    super(status === 401 ? "Sign in to continue." : "You do not have access to this.");
+  }
+}
+
+async function sessionUser(requestHeaders: Headers): Promise<CurrentUser | null> {
+  const session = await auth.api.getSession({ headers: requestHeaders });
+  if (!session) return null;
+  const { id, name, email } = session.user;
+  const role = (session.user as { role?: unknown }).role;
+  return { id, name, email, role: isRole(role) ? role : "customer" };
+}
+
+/** The signed-in user of this request, or null (read once per request). */
+export const getCurrentUser = cache(async (): Promise<CurrentUser | null> => sessionUser(await headers()));
+
+/**
+ * The one access check. Every protected page, server action and route handler goes through it:
+ * returns the user who holds `permission`, or throws AccessError(401 | 403).
+ */
+export async function authorize(permission: Permission | null, requestHeaders?: Headers): Promise<CurrentUser> {
+  const user = requestHeaders ? await sessionUser(requestHeaders) : await getCurrentUser();
+  if (!user) throw new AccessError(401);
+  if (permission && !can(user.role, permission)) throw new AccessError(403);
+  return user;
+}
+
+/** For pages: anonymous visitors go to sign-in (and come back), others without access get 403. */
+export async function requirePermission(permission: Permission | null, from?: string): Promise<CurrentUser> {
+  try {
+    return await authorize(permission);
+  } catch (error) {
+    if (!(error instanceof AccessError)) throw error;
+    if (error.status === 401) {
+      const back = from ?? (await headers()).get("x-yokeline-path");
+      redirect(back ? `/sign-in?next=${encodeURIComponent(back)}` : "/sign-in");
+    }
+    forbidden();
+  }
+}
+
+/** For pages that belong to one set of roles (e.g. every staff page). */
+export async function requireRole(roles: readonly Role[], from?: string): Promise<CurrentUser> {
+  const user = await requirePermission(null, from);
+  if (!roles.includes(user.role)) forbidden();
+  return user;
+}

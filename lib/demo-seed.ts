@@ -1,0 +1,53 @@
+import { Customer, Shop } from "@/entities";
+import { getEm } from "@/lib/db/orm";
+import { createStaffUser } from "@/lib/users/staff";
+import { auth } from "@/lib/auth/server";
+import { DEMO_CUSTOMERS, DEMO_PASSWORD, DEMO_PHONE_CUSTOMERS, DEMO_STAFF } from "@/lib/demo";
+
+/**
+ * Seeds the invented demo shop into an empty database: the shop, one user per staff role,
+ * customers with accounts and one known only by phone. Does nothing when a shop exists.
+ * Returns whether it seeded.
+ */
+export async function seedDemoShop(): Promise<boolean> {
+  const em = await getEm();
+  if (await em.findOne(Shop, { id: 1 })) return false;
+
+  em.create(Shop, {
+    id: 1,
+    name: "Tallgrass Driveline Works",
+    addressLines: "1840 Foundry Road\nMillbrook, KS 67599",
+    phone: "(555) 010-4420",
+    email: "shop@tallgrass.example",
+    currency: "USD",
+    updatedAt: new Date(),
+  });
+  await em.flush();
+
+  for (const s of DEMO_STAFF) {
+    await createStaffUser({ name: s.name, email: s.email, role: s.role, password: DEMO_PASSWORD }, null);
+  }
+
+  const ctx = await auth.$context;
+  for (const c of DEMO_CUSTOMERS) {
+    const user = await ctx.internalAdapter.createUser({ email: c.email, name: c.name, emailVerified: true, role: "customer" }, { method: "admin" });
+    await ctx.internalAdapter.linkAccount({
+      userId: user.id,
+      providerId: "credential",
+      accountId: user.id,
+      password: await ctx.password.hash(DEMO_PASSWORD),
+    });
+  }
+  // The sign-up hook made their customer records; add what the counter knows about them.
+  const fill = em.fork();
+  const byEmail = new Map((await fill.find(Customer, {})).map((c) => [c.email, c]));
+  for (const c of DEMO_CUSTOMERS) {
+    const row = byEmail.get(c.email);
+    if (row) fill.assign(row, { company: c.company, phone: c.phone });
+  }
+  for (const c of DEMO_PHONE_CUSTOMERS) {
+    fill.create(Customer, { ...c, createdAt: new Date() });
+  }
+  await fill.flush();
+  return true;
+}

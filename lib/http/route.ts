@@ -1,0 +1,88 @@
+import "server-only";
+import { NextResponse, type NextRequest } from "next/server";
+import { ZodError, type ZodType } from "zod";
+import { AccessError, authorize, type CurrentUser } from "@/lib/auth/guard";
+import type { Permission } from "@/lib/auth/permissions";
+import { logger } from "@/lib/logger";
+import { AppError, STATUS_OF, type ErrorBody } from "./errors";
+import { zodIssues } from "@/lib/validation";
+
+type Access = { permission: Permission } | { permission: null } | "public";
+
+interface HandlerContext<P> {
+  req: NextRequest;
+  params: P;
+  /** The caller; null only on public routes. */
+  user: CurrentUser | null;
+}
+
+/**
+ * Wraps every route handler once: checks the session and permission, and turns errors into
+ * `{ error: { code, message, fields? } }` with the status from one map.
+ */
+export function route<P = Record<string, string>>(
+  access: Access,
+  handler: (ctx: HandlerContext<P>) => Promise<Response>,
+) {
+  return async (req: NextRequest, context: { params: Promise<P> }): Promise<Response> => {
+    try {
+      const user =
+        access === "public"
+          ? await authorize(null, req.headers).catch(() => null)
+          : await authorize(access.permission, req.headers);
+      return await handler({ req, params: await (context?.params ?? ({} as P)), user });
+    } catch (error) {
+      return errorResponse(error);
+    }
+  };
+}
+
+export function errorResponse(error: unknown): Response {
+  if (error instanceof AccessError) {
+    const code = error.status === 401 ? "unauthenticated" : "forbidden";
+    return json<ErrorBody>({ error: { code, message: error.message } }, error.status);
+  }
+  if (error instanceof AppError) {
+    return json<ErrorBody>(
+      { error: { code: error.code, message: error.message, fields: error.fields } },
+      STATUS_OF[error.code],
+    );
+  }
+  if (error instanceof ZodError) {
+    const issues = zodIssues(error);
+    return json<ErrorBody>(
+      {
+        error: {
+          code: "invalid",
+          message: issues.map((i) => `${i.path}: ${i.message}`).join("\n"),
+          fields: Object.fromEntries(issues.map((i) => [i.path, i.message])),
+        },
+      },
+      422,
+    );
+  }
+  if (isUniqueViolation(error)) {
+    return json<ErrorBody>({ error: { code: "conflict", message: "That already exists." } }, 409);
+  }
+  logger.error({ err: error }, "unhandled error in route handler");
+  return json<ErrorBody>({ error: { code: "internal", message: "Something went wrong on our side." } }, 500);
+}
+
+function isUniqueViolation(error: unknown): boolean {
+  return typeof error === "object" && error !== null && (error as { code?: string }).code === "23505";
+}
+
+export function json<T>(body: T, status = 200, headers?: HeadersInit): Response {
+  return NextResponse.json(body, { status, headers });
+}
+
+/** Parses a JSON body with a schema; a body that is not JSON is a 422 too. */
+export async function parseJson<T>(req: Request, schema: ZodType<T>): Promise<T> {
+  let body: unknown;
+  try {
+    body = await req.json();
+  } catch {
+    throw new AppError("invalid", "The request body is not valid JSON.");
+  }
+  return schema.parse(body);
+}

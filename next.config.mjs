@@ -1,0 +1,19 @@
+/** @type {import('next').NextConfig} */
+export default {
+  // MikroORM keys entities by class name, so server code must keep its class names.
+  experimental: { serverMinification: false, authInterrupts: true },
+  serverExternalPackages: [
+    "@mikro-orm/core",
+    "@mikro-orm/knex",
+    "@mikro-orm/postgresql",
+    "@mikro-orm/migrations",
+    "@mikro-orm/reflection",
+    "knex",
+    "pg",
+    "pg-boss",
+    "pino",
+    "nodemailer",
+  ],
+  poweredByHeader: false,
+  typedRoutes: false,
+};

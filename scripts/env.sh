@@ -1,0 +1,18 @@
+#!/usr/bin/env bash
+# Environment of a local (development or test) run: the app talks to the project's own fakes.
+# Ports: app 3000, Stripe fake 12111, mail fake SMTP 12525 / HTTP 12580 (tests use others).
+yokeline_env_local() {
+  export NEXT_TELEMETRY_DISABLED=1
+  export YOKELINE_DEMO="${YOKELINE_DEMO:-1}"
+  export APP_URL="http://127.0.0.1:${APP_PORT}"
+  export BETTER_AUTH_URL="$APP_URL"
+  export STRIPE_FAKE_PORT="${STRIPE_FAKE_PORT:-12111}"
+  export STRIPE_API_HOST="127.0.0.1" STRIPE_API_PORT="$STRIPE_FAKE_PORT" STRIPE_API_PROTOCOL="http"
+  export STRIPE_SECRET_KEY="${STRIPE_SECRET_KEY:-sk_test_local_fake}"
+  export STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_local_fake}"
+  export STRIPE_FAKE_WEBHOOK_URL="$APP_URL/api/payments/webhook"
+  export MAIL_FAKE_SMTP_PORT="${MAIL_FAKE_SMTP_PORT:-12525}" MAIL_FAKE_HTTP_PORT="${MAIL_FAKE_HTTP_PORT:-12580}"
+  export SMTP_URL="smtp://127.0.0.1:${MAIL_FAKE_SMTP_PORT}"
+  export MAIL_FAKE_URL="http://127.0.0.1:${MAIL_FAKE_HTTP_PORT}"
+  export UPLOADS_DIR="${UPLOADS_DIR:-$PWD/.data/uploads}"
+}
