@@ -1,0 +1,162 @@
+/** Shape of the evaluation report (contract fields plus additions) and the standing texts. */
+import type { Check, CheckStatus } from "./checks";
+import type { CurveSet } from "./curves";
+import type { TubeCandidate, TubeSelection } from "./tube-selection";
+
+/** Shown whenever any check warns or fails (engineering reference, "Cautions shown to users"). */
+export const SAFETY_CAUTION =
+  "Results are engineering estimates for a shop's use. A driveshaft that fails or whirls can cause loss of vehicle control, injury and death: keep guards and safety loops where the application calls for them, follow the component makers' ratings, and defer to a qualified engineer and to the local codes and inspection rules that apply.";
+
+/** Always shown. */
+export const DISCLAIMER =
+  "Yokeline results do not replace a qualified engineer or the local rules and inspections that apply to the vehicle.";
+
+/** Shown when the built-in demonstration catalogue was used. */
+export const DEMO_CATALOGUE_NOTE =
+  "Parts, ratings and prices come from the built-in demonstration catalogue (invented parts); use the shop's own catalogue and the makers' ratings for a build.";
+
+export interface JointReport {
+  readonly position: "front" | "centre" | "rear";
+  /** True 3-D working angle, deg. */
+  readonly workingAngleDeg: number;
+  /** Extremes of ω(out)/ω(in) over one turn for this joint alone. */
+  readonly maxSpeedRatio: number;
+  readonly minSpeedRatio: number;
+  /** (max − min) × 100 for this joint alone, %. */
+  readonly speedVariationPct: number;
+  /** Largest lead/lag of the output over the input, deg. */
+  readonly maxLeadLagDeg: number;
+  /** Peak output angular acceleration of this joint alone, input constant at service rpm, rad/s². */
+  readonly peakAngularAccelerationRadS2: number;
+  /** Largest working angle keeping that acceleration within the shop limit at service rpm, deg. */
+  readonly maxAngleAtServiceRpmDeg: number;
+  readonly jointSeriesId: string | null;
+}
+
+export interface PhasingReport {
+  /** Best rear-yoke index, deg in (−90, 90], + clockwise looking rearward. */
+  readonly phaseIndexDeg: number;
+  /** (max − min) of ω(pinion)/ω(transmission) × 100 at the best index. */
+  readonly outputSpeedVariationPct: number;
+  /** Single-joint angle with the same variation, exact, deg. */
+  readonly equivalentAngleDeg: number;
+  /** Small-angle estimate √|β₁² − β₂²| (SAE AE-7 form), deg. */
+  readonly equivalentAngleSmallAngleDeg: number;
+  /** Angle between the two joints' planes about the driveshaft axis, deg (= the index mod 180°). */
+  readonly jointPlaneAngleDeg: number;
+  /** Variation with the yokes in phase (index 0), for comparison, %. */
+  readonly inPhaseOutputSpeedVariationPct: number;
+  readonly toleranceDeg: number;
+  /** Present when the design gives phaseIndexDeg. */
+  readonly asSpecified?: { readonly phaseIndexDeg: number; readonly outputSpeedVariationPct: number; readonly equivalentAngleDeg: number };
+}
+
+export interface EndReport {
+  readonly fittingId: string;
+  readonly name: string;
+  readonly kind: string;
+  readonly jointSeriesId: string;
+  readonly jointCentreToWeldSeatMm: number;
+  readonly massKg: number;
+  readonly torqueRatingNm: number;
+  readonly priceCents: number;
+  /** "design" when the design names it, "suggested" when Yokeline picked it. */
+  readonly origin: "design" | "suggested";
+}
+
+export interface TubeReport {
+  readonly tubeId: string | null;
+  readonly materialId: string;
+  readonly odMm: number;
+  readonly wallMm: number;
+  readonly massKg: number;
+  /** Tube length cut (cut length when known, else the installed length), mm. */
+  readonly tubeLengthMm: number;
+  readonly origin: "design" | "catalogue";
+  readonly elasticModulusGPa: number;
+  readonly densityKgM3: number;
+  readonly shearYieldMPa: number;
+  readonly priceCents: number | null;
+}
+
+export interface SlipReport {
+  /** Out from fully collapsed at ride height, mm. */
+  readonly outAtRideHeightMm: number;
+  readonly outAtFullDroopMm: number;
+  readonly outAtFullBumpMm: number;
+  /** Spline left engaged at full droop, mm. */
+  readonly reserveAtFullDroopMm: number;
+  readonly recommendedOutMinMm: number;
+  readonly recommendedOutMaxMm: number;
+}
+
+export interface PieceReport {
+  readonly position: "front" | "rear";
+  readonly spanMm: number;
+  readonly tube: TubeCandidate;
+  readonly cutLengthMm: number | null;
+}
+
+export interface TwoPieceProposal {
+  readonly reason: string;
+  readonly feasible: boolean;
+  /** Centre-bearing joint centre from the front joint centre, along the shaft line, mm. */
+  readonly centreBearingFromFrontMm: number;
+  /** Drop of the centre-bearing joint below the straight joint-to-joint line, mm. */
+  readonly centreBearingDropMm: number;
+  readonly pieces: readonly PieceReport[];
+  readonly joints: readonly JointReport[];
+  readonly phasing: {
+    /** Index of each piece's rear yoke from in phase, deg. */
+    readonly phaseIndicesDeg: readonly number[];
+    readonly outputSpeedVariationPct: number;
+    readonly equivalentAngleDeg: number;
+  };
+  readonly peakAngularAccelerationRadS2: number;
+  readonly checks: readonly Check[];
+  readonly overall: CheckStatus;
+}
+
+export interface EvaluationReport {
+  readonly overall: CheckStatus;
+  readonly designName: string | null;
+  readonly service: {
+    readonly maxShaftRpm: number;
+    readonly peakShaftTorqueNm: number;
+    readonly governedBy: "maxShaftRpm" | "vehicle" | "engine";
+    readonly vehicleRpm: number | null;
+    readonly engineRpm: number | null;
+  };
+  readonly lengthMm: number;
+  readonly joints: readonly JointReport[];
+  readonly phasing: PhasingReport;
+  /** Largest angular acceleration of the tube over one turn, input constant at service rpm. */
+  readonly peakAngularAccelerationRadS2: number;
+  readonly tube: TubeReport;
+  readonly criticalSpeedRpm: number;
+  readonly criticalSpeedRatio: number;
+  readonly torsion: { readonly shearStressMPa: number; readonly shearYieldMPa: number; readonly safetyFactor: number };
+  readonly balance: {
+    readonly gradeMmS: number;
+    readonly speedRpm: number;
+    readonly rotorMassKg: number;
+    readonly permissibleUnbalanceGmm: number;
+    readonly perPlaneGmm: number;
+  };
+  readonly ends: { readonly front: EndReport | null; readonly rear: EndReport | null };
+  /** Installed length minus each fitting's joint centre to weld seat; null without both fittings. */
+  readonly cutLengthMm: number | null;
+  readonly slip: SlipReport | null;
+  readonly shopFloor: {
+    readonly lengthToleranceMm: number;
+    readonly runoutEndsMm: number;
+    readonly runoutCentreMm: number;
+    readonly phasingToleranceDeg: number;
+    readonly sources: readonly string[];
+  };
+  readonly tubeSelection: TubeSelection | null;
+  readonly twoPiece: TwoPieceProposal | null;
+  readonly checks: readonly Check[];
+  readonly cautions: readonly string[];
+  readonly curves?: CurveSet;
+}

@@ -1,0 +1,248 @@
+/**
+ * zod schemas of the design file, shop settings and catalogue. Every message names what is
+ * expected ("must be a positive number"); `parseDesign` prefixes the field path.
+ */
+import { z } from "zod";
+import type { Catalogue } from "./catalogue/types";
+import { defaultCatalogue } from "./catalogue/default";
+import { defaultSettings, type SettingKey } from "./settings";
+
+const POSITIVE = "must be a positive number";
+const NUMBER = "must be a number";
+
+const positive = () => z.number({ error: POSITIVE }).positive({ error: POSITIVE });
+const optionalPositive = () => positive().nullish();
+const angleDeg = (maxAbs: number) =>
+  z
+    .number({ error: `must be an angle in degrees between −${maxAbs} and ${maxAbs}` })
+    .min(-maxAbs, { error: `must be an angle in degrees between −${maxAbs} and ${maxAbs}` })
+    .max(maxAbs, { error: `must be an angle in degrees between −${maxAbs} and ${maxAbs}` });
+const object = <T extends z.ZodRawShape>(shape: T) => z.object(shape, { error: "must be an object" });
+const id = () => z.string({ error: "must be a non-empty text id" }).min(1, { error: "must be a non-empty text id" });
+
+/** Largest projected shaft angle accepted; beyond it the shop measurement is suspect. */
+export const MAX_PROJECTED_ANGLE_DEG = 40;
+
+const shaftAnglesSchema = object({
+  verticalDeg: angleDeg(MAX_PROJECTED_ANGLE_DEG),
+  horizontalDeg: angleDeg(MAX_PROJECTED_ANGLE_DEG),
+});
+
+const pointSchema = object({
+  x: z.number({ error: NUMBER }),
+  y: z.number({ error: NUMBER }),
+  z: z.number({ error: NUMBER }),
+});
+
+const tubeSchema = object({
+  materialId: id(),
+  odMm: positive(),
+  wallMm: positive(),
+}).check((ctx) => {
+  const t = ctx.value;
+  if (t.wallMm * 2 >= t.odMm) {
+    ctx.issues.push({ code: "custom", input: t.wallMm, path: ["wallMm"], message: "must be less than half of odMm" });
+  }
+});
+
+const materialSchema = object({
+  elasticModulusGPa: optionalPositive(),
+  densityKgM3: optionalPositive(),
+  shearYieldMPa: optionalPositive(),
+});
+
+const endSchema = object({ fittingId: id() });
+
+/** Slip-joint data: lengths joint centre to joint centre, mm. */
+const slipSchema = object({
+  /** Installed length with the slip fully collapsed. */
+  collapsedLengthMm: positive(),
+  /** Total spline travel from fully collapsed to fully out. */
+  travelMm: positive(),
+  /** Lengthening from ride height at full suspension droop (default 0). */
+  droopExtensionMm: z.number({ error: "must be a number ≥ 0" }).min(0, { error: "must be a number ≥ 0" }).nullish(),
+  /** Shortening from ride height at full bump (default 0). */
+  bumpCompressionMm: z.number({ error: "must be a number ≥ 0" }).min(0, { error: "must be a number ≥ 0" }).nullish(),
+});
+
+/** The design file (contract: /shared/spec/design-file.md). Unknown fields are ignored. */
+export const designFileSchema = object({
+  name: z.string({ error: "must be text" }).nullish(),
+  lengthMm: positive(),
+  tube: tubeSchema.nullish(),
+  material: materialSchema.nullish(),
+  geometry: object({
+    transmission: shaftAnglesSchema,
+    driveshaft: shaftAnglesSchema.nullish(),
+    pinion: shaftAnglesSchema,
+    /** Joint centres in vehicle axes (mm); used for the driveshaft axis when it is not given. */
+    frontJointCentreMm: pointSchema.nullish(),
+    rearJointCentreMm: pointSchema.nullish(),
+  }),
+  torque: object({
+    engineTorqueNm: positive(),
+    firstGearRatio: optionalPositive(),
+    transferCaseLowRatio: optionalPositive(),
+    converterStallRatio: optionalPositive(),
+  }),
+  speed: object({
+    maxShaftRpm: optionalPositive(),
+    topSpeedKmh: optionalPositive(),
+    axleRatio: optionalPositive(),
+    tireDiameterMm: optionalPositive(),
+    maxEngineRpm: optionalPositive(),
+    topGearRatio: optionalPositive(),
+  }),
+  balanceGradeMmS: optionalPositive(),
+  ends: object({ front: endSchema.nullish(), rear: endSchema.nullish() }).nullish(),
+  slip: slipSchema.nullish(),
+  /** As-built (or planned) index of the rear yoke, deg in (−90, 90]; absent: the best index. */
+  phaseIndexDeg: z
+    .number({ error: "must be an angle in degrees, more than −90 and at most 90" })
+    .gt(-90, { error: "must be an angle in degrees, more than −90 and at most 90" })
+    .lte(90, { error: "must be an angle in degrees, more than −90 and at most 90" })
+    .nullish(),
+}).check((ctx) => {
+  const d = ctx.value;
+  const add = (path: (string | number)[], message: string) =>
+    ctx.issues.push({ code: "custom", input: d, path, message });
+  const g = d.geometry;
+  if (g && !g.driveshaft) {
+    if (!g.frontJointCentreMm || !g.rearJointCentreMm) {
+      add(["geometry", "driveshaft"], "is required unless frontJointCentreMm and rearJointCentreMm are both given");
+    } else if (!(g.rearJointCentreMm.x > g.frontJointCentreMm.x)) {
+      add(["geometry", "rearJointCentreMm", "x"], "must be rearward of frontJointCentreMm (larger x)");
+    }
+  }
+  const s = d.speed;
+  if (s) {
+    const vehicle = s.topSpeedKmh != null && s.axleRatio != null && s.tireDiameterMm != null;
+    const engine = s.maxEngineRpm != null && s.topGearRatio != null;
+    if (s.maxShaftRpm == null && !vehicle && !engine) {
+      add(["speed", "maxShaftRpm"], `${POSITIVE} unless topSpeedKmh, axleRatio and tireDiameterMm are all given`);
+    }
+  }
+  if (d.slip && d.lengthMm != null && d.slip.collapsedLengthMm > d.lengthMm) {
+    add(["slip", "collapsedLengthMm"], "must not exceed lengthMm (the slip cannot be shorter than collapsed)");
+  }
+});
+
+/** A design file after parsing (also the input type of `evaluateDesign`). */
+export type DesignFile = z.infer<typeof designFileSchema>;
+
+/** One bad field: `path` in dot form ("torque.engineTorqueNm"), `message` says what is expected. */
+export interface FieldIssue {
+  readonly path: string;
+  readonly message: string;
+}
+
+export type ParseResult<T> = { ok: true; design: T } | { ok: false; issues: FieldIssue[] };
+
+/** Dot path with [i] for array indices; "design" for the root. */
+export function formatPath(path: readonly PropertyKey[]): string {
+  let out = "";
+  for (const key of path) {
+    if (typeof key === "number") out += `[${key}]`;
+    else out += out ? `.${String(key)}` : String(key);
+  }
+  return out || "design";
+}
+
+function toIssues(error: z.ZodError): FieldIssue[] {
+  const seen = new Set<string>();
+  const issues: FieldIssue[] = [];
+  for (const issue of error.issues) {
+    const path = formatPath(issue.path);
+    const message = `${path}: ${issue.message}`;
+    if (seen.has(message)) continue;
+    seen.add(message);
+    issues.push({ path, message });
+  }
+  return issues;
+}
+
+/** Checks that need the catalogue: known material (or a complete one-off) and known fittings. */
+function catalogueIssues(design: DesignFile, catalogue: Catalogue): FieldIssue[] {
+  const issues: FieldIssue[] = [];
+  const m = design.material;
+  const complete = m != null && m.elasticModulusGPa != null && m.densityKgM3 != null && m.shearYieldMPa != null;
+  if (design.tube && !complete && !catalogue.materials.some((x) => x.id === design.tube!.materialId)) {
+    const known = catalogue.materials.map((x) => x.id).join(", ");
+    issues.push({
+      path: "tube.materialId",
+      message: `tube.materialId: must be a catalogue material (${known}) unless material gives elasticModulusGPa, densityKgM3 and shearYieldMPa`,
+    });
+  }
+  for (const end of ["front", "rear"] as const) {
+    const fittingId = design.ends?.[end]?.fittingId;
+    if (fittingId != null && !catalogue.endFittings.some((f) => f.id === fittingId)) {
+      const path = `ends.${end}.fittingId`;
+      issues.push({ path, message: `${path}: must be an end fitting in the catalogue (unknown "${fittingId}")` });
+    }
+  }
+  return issues;
+}
+
+/**
+ * Validate an untrusted design (parsed JSON). Never throws; each issue's message reads
+ * `torque.engineTorqueNm: must be a positive number`.
+ */
+export function parseDesign(input: unknown, options?: { catalogue?: Catalogue }): ParseResult<DesignFile> {
+  const result = designFileSchema.safeParse(input);
+  if (!result.success) return { ok: false, issues: toIssues(result.error) };
+  const issues = catalogueIssues(result.data, options?.catalogue ?? defaultCatalogue);
+  return issues.length ? { ok: false, issues } : { ok: true, design: result.data };
+}
+
+const limitSchema = object({ value: z.number({ error: NUMBER }), source: z.string({ error: "must be text" }).min(1) });
+
+/** A shop's settings file: any subset of the limits, each a number or { value, source }. */
+export const shopSettingsSchema = z.partialRecord(
+  z.enum(Object.keys(defaultSettings) as [SettingKey, ...SettingKey[]], { error: "must be a known setting" }),
+  z.union([z.number({ error: NUMBER }), limitSchema], { error: "must be a number or { value, source }" }),
+);
+
+const materialEntrySchema = object({
+  id: id(),
+  name: z.string({ error: "must be text" }),
+  elasticModulusGPa: positive(),
+  densityKgM3: positive(),
+  tensileYieldMPa: positive(),
+  shearYieldMPa: positive(),
+  weldFamily: z.enum(["steel", "aluminium", "composite"], { error: "must be steel, aluminium or composite" }),
+  source: z.string({ error: "must be text" }),
+});
+
+const cents = () =>
+  z.number({ error: "must be a whole number of cents" }).int({ error: "must be a whole number of cents" }).min(0, { error: "must be a whole number of cents" });
+
+/** A shop catalogue (same shape as `defaultCatalogue`). */
+export const catalogueSchema = object({
+  id: id(),
+  name: z.string({ error: "must be text" }),
+  demo: z.boolean({ error: "must be true or false" }),
+  materials: z.array(materialEntrySchema, { error: "must be a list" }),
+  tubes: z.array(
+    object({ id: id(), materialId: id(), odMm: positive(), wallMm: positive(), maxLengthMm: positive(), pricePerMetreCents: cents() }),
+    { error: "must be a list" },
+  ),
+  endFittings: z.array(
+    object({
+      id: id(),
+      name: z.string({ error: "must be text" }),
+      kind: z.enum(["weld-yoke", "slip-yoke-assembly", "flange-yoke"], { error: "must be weld-yoke, slip-yoke-assembly or flange-yoke" }),
+      jointSeriesId: id(),
+      tubeOdMm: positive(),
+      weldFamily: z.enum(["steel", "aluminium", "composite"], { error: "must be steel, aluminium or composite" }),
+      jointCentreToWeldSeatMm: positive(),
+      massKg: positive(),
+      torqueRatingNm: positive(),
+      priceCents: cents(),
+    }),
+    { error: "must be a list" },
+  ),
+  jointSeries: z.array(
+    object({ id: id(), name: z.string({ error: "must be text" }), torqueRatingNm: positive(), maxWorkingAngleDeg: positive(), massKg: positive(), priceCents: cents() }),
+    { error: "must be a list" },
+  ),
+}) satisfies z.ZodType<Catalogue>;
