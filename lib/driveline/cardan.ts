@@ -70,5 +70,7 @@ export function cardanMaxAngularDeviationRad(betaRad: number): number {
  */
 export function equivalentAngleRad(peakToPeakVariation: number): number {
   const v = Math.max(0, peakToPeakVariation);
-  return Math.acos((-v + Math.sqrt(v * v + 4)) / 2);
+  // Rationalised root (no cancellation), then atan2(sin, cos) with sin² = V·c, exact near 0.
+  const c = 2 / (v + Math.sqrt(v * v + 4));
+  return Math.atan2(Math.sqrt(v * c), c);
 }
