@@ -21,6 +21,7 @@ const signInMax = Number(process.env.AUTH_SIGN_IN_MAX ?? 8);
  */
 export const auth = betterAuth({
   appName: "Yokeline",
+  logger: { level: process.env.NODE_ENV === "test" ? "error" : "warn" },
   baseURL: process.env.BETTER_AUTH_URL ?? process.env.APP_URL ?? "http://127.0.0.1:3000",
   secret: process.env.BETTER_AUTH_SECRET,
   database: pool,

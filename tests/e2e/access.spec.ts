@@ -1,0 +1,56 @@
+import { expect, test } from "@playwright/test";
+import { ACCOUNTS, signIn } from "./fixtures";
+
+const STAFF_PAGES = ["/desk", "/desk/new", "/desk/customers", "/floor", "/floor/queue", "/overview", "/overview/catalogue", "/overview/staff"];
+
+test("an anonymous visitor is sent to sign-in, and comes back after", async ({ page }) => {
+  await page.goto("/desk/customers");
+  await expect(page).toHaveURL(/\/sign-in\?next=%2Fdesk%2Fcustomers/);
+  await page.getByLabel("E-mail").fill(ACCOUNTS.counter);
+  await page.getByLabel("Password").fill("yokeline-demo-2026");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page).toHaveURL("/desk/customers");
+  await expect(page.getByRole("cell", { name: "Harlan Voss" })).toBeVisible();
+});
+
+test("a customer is refused every staff page with 403", async ({ page }) => {
+  await signIn(page, ACCOUNTS.customer);
+  for (const path of STAFF_PAGES) {
+    const res = await page.goto(path);
+    expect(res?.status(), path).toBe(403);
+    await expect(page.getByRole("heading", { name: "This page is for shop staff" })).toBeVisible();
+  }
+});
+
+test("floor staff are refused the owner's pages", async ({ page }) => {
+  await signIn(page, ACCOUNTS.floor);
+  for (const path of ["/overview", "/overview/staff", "/desk"]) {
+    expect((await page.goto(path))?.status(), path).toBe(403);
+  }
+});
+
+test("the owner adds a counter member who can then sign in", async ({ page, browser }) => {
+  await signIn(page, ACCOUNTS.owner);
+  await page.goto("/overview/staff");
+  const email = `new-counter-${Date.now()}@tallgrass.example`;
+  await page.getByLabel("Name").fill("Noor Haddad");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Role").selectOption("counter");
+  await page.getByLabel("First password").fill("counter-password-1");
+  await page.getByRole("button", { name: "Add staff member" }).click();
+  await expect(page.getByRole("status")).toContainText("Noor Haddad can now sign in");
+  await expect(page.getByRole("cell", { name: email })).toBeVisible();
+
+  const other = await browser.newPage();
+  await signIn(other, email, "counter-password-1");
+  await expect(other).toHaveURL("/desk");
+  await other.close();
+});
+
+test("health reports the version and a database round-trip", async ({ request }) => {
+  const res = await request.get("/api/health");
+  expect(res.status()).toBe(200);
+  const body = await res.json();
+  expect(body.database.ok).toBe(true);
+  expect(body.version).toMatch(/^\d+\.\d+\.\d+/);
+});
