@@ -1,13 +1,63 @@
 import { Account } from "./account.entity";
 import { AuditEvent } from "./audit-event.entity";
 import { Customer } from "./customer.entity";
+import { Design } from "./design.entity";
+import { EmailMessage } from "./email-message.entity";
+import { Order } from "./order.entity";
+import { OrderEvent } from "./order-event.entity";
+import { OrderShaft } from "./order-shaft.entity";
+import { Payment } from "./payment.entity";
 import { RateLimit } from "./rate-limit.entity";
+import { Refund } from "./refund.entity";
 import { Session } from "./session.entity";
 import { Shop } from "./shop.entity";
+import { ShopConfig } from "./shop-config.entity";
+import { Upload } from "./upload.entity";
 import { User } from "./user.entity";
 import { Verification } from "./verification.entity";
+import { WebhookEvent } from "./webhook-event.entity";
 
-export { Account, AuditEvent, Customer, RateLimit, Session, Shop, User, Verification };
+export {
+  Account,
+  AuditEvent,
+  Customer,
+  Design,
+  EmailMessage,
+  Order,
+  OrderEvent,
+  OrderShaft,
+  Payment,
+  RateLimit,
+  Refund,
+  Session,
+  Shop,
+  ShopConfig,
+  Upload,
+  User,
+  Verification,
+  WebhookEvent,
+};
+export type { OrderStatus, PaymentState } from "./order.entity";
+export type { OrderEventKind } from "./order-event.entity";
 
 /** Every entity, for the ORM configuration. */
-export const entities = [User, Session, Account, Verification, RateLimit, Shop, Customer, AuditEvent];
+export const entities = [
+  User,
+  Session,
+  Account,
+  Verification,
+  RateLimit,
+  Shop,
+  ShopConfig,
+  Customer,
+  AuditEvent,
+  Design,
+  Order,
+  OrderShaft,
+  Payment,
+  Refund,
+  WebhookEvent,
+  OrderEvent,
+  EmailMessage,
+  Upload,
+];

@@ -1,4 +1,6 @@
-import { Customer, Shop } from "@/entities";
+import { Customer, Shop, ShopConfig } from "@/entities";
+import { defaultCatalogue } from "@/lib/driveline";
+import { defaultPriceBook } from "@/lib/pricing/price-book";
 import { getEm } from "@/lib/db/orm";
 import { createStaffUser } from "@/lib/users/staff";
 import { auth } from "@/lib/auth/server";
@@ -20,6 +22,13 @@ export async function seedDemoShop(): Promise<boolean> {
     phone: "(555) 010-4420",
     email: "shop@tallgrass.example",
     currency: "USD",
+    updatedAt: new Date(),
+  });
+  em.create(ShopConfig, {
+    id: 1,
+    catalogue: defaultCatalogue,
+    settings: {},
+    priceBook: defaultPriceBook,
     updatedAt: new Date(),
   });
   await em.flush();

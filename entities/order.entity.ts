@@ -1,0 +1,93 @@
+import { Collection, Entity, Enum, Index, ManyToOne, OneToMany, PrimaryKey, Property } from "@mikro-orm/core";
+import { randomUUID } from "node:crypto";
+import { Customer } from "./customer.entity";
+import { User } from "./user.entity";
+import { OrderShaft } from "./order-shaft.entity";
+import { Payment } from "./payment.entity";
+import { OrderEvent } from "./order-event.entity";
+
+export const ORDER_STATUSES = ["awaiting_payment", "received", "in_shop", "ready", "shipped", "cancelled"] as const;
+export type OrderStatus = (typeof ORDER_STATUSES)[number];
+export const PAYMENT_STATES = ["unpaid", "deposit_paid", "paid", "partially_refunded", "refunded"] as const;
+export type PaymentState = (typeof PAYMENT_STATES)[number];
+
+/** One customer order: one or more shafts, a price, a promised date, its payments and timeline. */
+@Entity({ tableName: "shop_order" })
+export class Order {
+  @PrimaryKey({ type: "uuid" })
+  id: string = randomUUID();
+
+  /** The number people say on the phone, e.g. "Y26-0007". */
+  @Property({ type: "text", unique: true })
+  number!: string;
+
+  @Index()
+  @ManyToOne(() => Customer, { deleteRule: "restrict" })
+  customer!: Customer;
+
+  @ManyToOne(() => User, { nullable: true, deleteRule: "set null" })
+  placedBy?: User | null;
+
+  @Enum({ items: ["online", "counter"], nativeEnumName: "order_channel" })
+  channel!: "online" | "counter";
+
+  @Index()
+  @Enum({ items: () => ORDER_STATUSES, nativeEnumName: "order_status" })
+  status: OrderStatus = "awaiting_payment";
+
+  @Enum({ items: () => PAYMENT_STATES, nativeEnumName: "payment_state" })
+  paymentState: PaymentState = "unpaid";
+
+  @Enum({ items: ["pickup", "ship"], nativeEnumName: "fulfilment" })
+  fulfilment!: "pickup" | "ship";
+
+  @Property({ type: "text", nullable: true })
+  shipTo?: string | null;
+
+  @Property({ type: "text" })
+  currency!: string;
+
+  @Property({ type: "integer" })
+  subtotalCents!: number;
+
+  @Property({ type: "integer" })
+  taxCents!: number;
+
+  @Property({ type: "integer" })
+  shippingCents!: number;
+
+  @Property({ type: "integer" })
+  totalCents!: number;
+
+  /** What the shop's policy asks up front (deposit, or the total). */
+  @Property({ type: "integer" })
+  depositCents!: number;
+
+  @Property({ type: "integer", default: 0 })
+  paidCents: number = 0;
+
+  @Property({ type: "integer", default: 0 })
+  refundedCents: number = 0;
+
+  @Property({ type: "date" })
+  promisedDate!: string;
+
+  @Property({ type: "text", nullable: true })
+  notes?: string | null;
+
+  @OneToMany(() => OrderShaft, (s) => s.order, { orderBy: { position: "asc" } })
+  shafts = new Collection<OrderShaft>(this);
+
+  @OneToMany(() => Payment, (p) => p.order, { orderBy: { createdAt: "asc" } })
+  payments = new Collection<Payment>(this);
+
+  @OneToMany(() => OrderEvent, (e) => e.order, { orderBy: { at: "asc" } })
+  events = new Collection<OrderEvent>(this);
+
+  @Index()
+  @Property({ type: "Date", defaultRaw: "now()" })
+  createdAt: Date = new Date();
+
+  @Property({ type: "Date", defaultRaw: "now()", onUpdate: () => new Date() })
+  updatedAt: Date = new Date();
+}

@@ -1,0 +1,51 @@
+import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { randomUUID } from "node:crypto";
+import type { Order } from "./order.entity";
+import { User } from "./user.entity";
+
+/** One request for money on an order (deposit, balance or full), through a hosted checkout. */
+@Entity({ tableName: "payment" })
+export class Payment {
+  @PrimaryKey({ type: "uuid" })
+  id: string = randomUUID();
+
+  @Index()
+  @ManyToOne("Order", { deleteRule: "restrict" })
+  order!: Order;
+
+  @Enum({ items: ["deposit", "balance", "full"], nativeEnumName: "payment_kind" })
+  kind!: "deposit" | "balance" | "full";
+
+  @Property({ type: "integer" })
+  amountCents!: number;
+
+  @Property({ type: "text" })
+  currency!: string;
+
+  @Enum({ items: ["open", "succeeded", "failed", "expired"], nativeEnumName: "payment_status" })
+  status: "open" | "succeeded" | "failed" | "expired" = "open";
+
+  @Property({ type: "text", unique: true })
+  checkoutSessionId!: string;
+
+  @Property({ type: "text" })
+  checkoutUrl!: string;
+
+  @Property({ type: "text", nullable: true })
+  paymentIntentId?: string | null;
+
+  @Property({ type: "integer", default: 0 })
+  refundedCents: number = 0;
+
+  @Property({ type: "text", nullable: true })
+  failureMessage?: string | null;
+
+  @ManyToOne(() => User, { nullable: true, deleteRule: "set null" })
+  requestedBy?: User | null;
+
+  @Property({ type: "Date", defaultRaw: "now()" })
+  createdAt: Date = new Date();
+
+  @Property({ type: "Date", nullable: true })
+  paidAt?: Date | null;
+}

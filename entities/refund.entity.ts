@@ -1,0 +1,29 @@
+import { Entity, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { randomUUID } from "node:crypto";
+import { Payment } from "./payment.entity";
+import { User } from "./user.entity";
+
+/** Money given back on a payment, by an owner. */
+@Entity({ tableName: "refund" })
+export class Refund {
+  @PrimaryKey({ type: "uuid" })
+  id: string = randomUUID();
+
+  @ManyToOne(() => Payment, { deleteRule: "restrict" })
+  payment!: Payment;
+
+  @Property({ type: "integer" })
+  amountCents!: number;
+
+  @Property({ type: "text", unique: true })
+  providerRefundId!: string;
+
+  @Property({ type: "text" })
+  reason!: string;
+
+  @ManyToOne(() => User, { nullable: true, deleteRule: "set null" })
+  by?: User | null;
+
+  @Property({ type: "Date", defaultRaw: "now()" })
+  createdAt: Date = new Date();
+}

@@ -1,0 +1,26 @@
+import { Entity, PrimaryKey, Property } from "@mikro-orm/core";
+import type { Catalogue, SettingKey } from "../lib/driveline";
+import type { PriceBook } from "../lib/pricing/price-book";
+
+/**
+ * The shop's engineering catalogue, its limits and its price book (one row). Kept as
+ * documents: the engineering core validates them with its own schemas when they are read.
+ */
+@Entity({ tableName: "shop_config" })
+export class ShopConfig {
+  @PrimaryKey({ type: "integer", autoincrement: false })
+  id: number = 1;
+
+  @Property({ type: "json" })
+  catalogue!: Catalogue;
+
+  /** Overrides of the engineering limits (missing keys use the reference defaults). */
+  @Property({ type: "json" })
+  settings: Partial<Record<SettingKey, number>> = {};
+
+  @Property({ type: "json" })
+  priceBook!: PriceBook;
+
+  @Property({ type: "Date", defaultRaw: "now()", onUpdate: () => new Date() })
+  updatedAt: Date = new Date();
+}

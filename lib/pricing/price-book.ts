@@ -1,0 +1,128 @@
+import { addBusinessDays, formatISO } from "date-fns";
+import { z } from "zod";
+
+/** A price book: what the shop charges beyond the catalogue's parts. Money in integer cents. */
+export const priceBookSchema = z.object({
+  currency: z.string().length(3),
+  /** Cutting, welding, phasing and straightening one shaft. */
+  labourPerShaftCents: z.number().int().nonnegative(),
+  balancingPerShaftCents: z.number().int().nonnegative(),
+  /** Tube is charged on the cut length plus this allowance for facing and waste. */
+  tubeAllowanceMm: z.number().nonnegative(),
+  /** Shortest length of tube charged. */
+  minimumTubeChargeMm: z.number().nonnegative(),
+  taxRatePercent: z.number().min(0).max(50),
+  shippingCents: z.number().int().nonnegative(),
+  /** 0 < deposit < 100 asks a deposit and the balance at final inspection; 100 asks everything up front. */
+  depositPercent: z.number().int().min(1).max(100),
+  /** Working days from order to the promised date. */
+  leadTimeWorkingDays: z.number().int().min(0).max(120),
+});
+export type PriceBook = z.infer<typeof priceBookSchema>;
+
+/** Demo data: an invented shop's prices. */
+export const defaultPriceBook: PriceBook = {
+  currency: "USD",
+  labourPerShaftCents: 14500,
+  balancingPerShaftCents: 6500,
+  tubeAllowanceMm: 50,
+  minimumTubeChargeMm: 300,
+  taxRatePercent: 8.5,
+  shippingCents: 4800,
+  depositPercent: 50,
+  leadTimeWorkingDays: 5,
+};
+
+export interface QuoteLine {
+  code: "tube" | "fitting" | "joint" | "labour" | "balance" | "shipping" | "tax";
+  label: string;
+  quantity: number;
+  unitCents: number;
+  totalCents: number;
+}
+
+/** The parts of an evaluation report that pricing reads (kept narrow so frozen copies stay priceable). */
+export interface PricedShaft {
+  tube: { tubeId?: string | null; odMm: number; wallMm: number; materialId: string; tubeLengthMm: number; priceCents?: number | null };
+  ends: {
+    front: { name: string; priceCents: number; jointSeriesId: string } | null;
+    rear: { name: string; priceCents: number; jointSeriesId: string } | null;
+  } | null;
+}
+
+export interface JointPrice {
+  id: string;
+  name: string;
+  priceCents: number;
+}
+
+const line = (code: QuoteLine["code"], label: string, quantity: number, unitCents: number): QuoteLine => ({
+  code,
+  label,
+  quantity,
+  unitCents,
+  totalCents: Math.round(quantity * unitCents),
+});
+
+/**
+ * The price lines of one shaft: tube by length (from the catalogue price per metre), the two end
+ * fittings, a joint (cross) at each end, labour and balancing.
+ */
+export function quoteShaft(
+  shaft: PricedShaft,
+  book: PriceBook,
+  tubePricePerMetreCents: number,
+  joints: readonly JointPrice[],
+): QuoteLine[] {
+  const chargedMm = Math.max(book.minimumTubeChargeMm, shaft.tube.tubeLengthMm + book.tubeAllowanceMm);
+  const metres = Math.round(chargedMm) / 1000;
+  const lines: QuoteLine[] = [
+    line(
+      "tube",
+      `Tube ${shaft.tube.odMm.toFixed(1)} × ${shaft.tube.wallMm.toFixed(2)} mm ${shaft.tube.materialId}, ${Math.round(chargedMm)} mm`,
+      metres,
+      tubePricePerMetreCents,
+    ),
+  ];
+  for (const end of [shaft.ends?.front, shaft.ends?.rear]) {
+    if (!end) continue;
+    lines.push(line("fitting", end.name, 1, end.priceCents));
+    const joint = joints.find((j) => j.id === end.jointSeriesId);
+    if (joint) lines.push(line("joint", `Universal joint ${joint.name}`, 1, joint.priceCents));
+  }
+  lines.push(line("labour", "Cut, weld, phase and straighten", 1, book.labourPerShaftCents));
+  lines.push(line("balance", "Dynamic balance", 1, book.balancingPerShaftCents));
+  return lines;
+}
+
+export interface OrderQuote {
+  currency: string;
+  lines: QuoteLine[];
+  subtotalCents: number;
+  shippingCents: number;
+  taxCents: number;
+  totalCents: number;
+  /** Asked at checkout: the deposit, or the total when the policy is full payment. */
+  dueNowCents: number;
+}
+
+/** Totals an order: the shafts' lines, shipping (none for pickup), tax on everything, the deposit. */
+export function quoteOrder(shaftLines: readonly QuoteLine[][], fulfilment: "pickup" | "ship", book: PriceBook): OrderQuote {
+  const lines = shaftLines.flat();
+  const subtotalCents = lines.reduce((sum, l) => sum + l.totalCents, 0);
+  const shippingCents = fulfilment === "ship" ? book.shippingCents * Math.max(1, shaftLines.length) : 0;
+  const taxCents = Math.round(((subtotalCents + shippingCents) * book.taxRatePercent) / 100);
+  const totalCents = subtotalCents + shippingCents + taxCents;
+  const dueNowCents = book.depositPercent >= 100 ? totalCents : Math.round((totalCents * book.depositPercent) / 100);
+  return { currency: book.currency, lines, subtotalCents, shippingCents, taxCents, totalCents, dueNowCents };
+}
+
+/** The promised date: `workingDays` weekdays after `from`, as an ISO date. */
+export function promisedDate(from: Date, workingDays: number): string {
+  return formatISO(addBusinessDays(from, workingDays), { representation: "date" });
+}
+
+/** Formats cents for people, e.g. 123456 → "$1,234.56". */
+export function formatMoney(cents: number, currency = "USD"): string {
+  return new Intl.NumberFormat("en-US", { style: "currency", currency }).format(cents / 100);
+}

@@ -1,0 +1,38 @@
+import { ShopConfig } from "@/entities";
+import { getEm } from "@/lib/db/orm";
+import { defaultCatalogue, resolveSettings, type Catalogue, type ShopSettings } from "@/lib/driveline";
+import { defaultPriceBook, priceBookSchema, type PriceBook } from "@/lib/pricing/price-book";
+
+export interface ShopEngineering {
+  catalogue: Catalogue;
+  settings: ShopSettings;
+  /** The raw overrides, as stored (for screens that show what the shop changed). */
+  settingOverrides: Record<string, number>;
+  priceBook: PriceBook;
+}
+
+const CACHE_MS = 5_000;
+let cached: { at: number; value: ShopEngineering } | null = null;
+
+/**
+ * The shop's catalogue, engineering limits and price book, falling back to the built-in
+ * defaults. Cached for a few seconds: it is read on every evaluation and changes rarely.
+ */
+export async function getShopEngineering(): Promise<ShopEngineering> {
+  if (cached && Date.now() - cached.at < CACHE_MS) return cached.value;
+  const em = await getEm();
+  const row = await em.findOne(ShopConfig, { id: 1 });
+  const value: ShopEngineering = {
+    catalogue: row?.catalogue ?? defaultCatalogue,
+    settings: resolveSettings(row?.settings ?? {}),
+    settingOverrides: (row?.settings ?? {}) as Record<string, number>,
+    priceBook: row ? priceBookSchema.parse(row.priceBook) : defaultPriceBook,
+  };
+  cached = { at: Date.now(), value };
+  return value;
+}
+
+/** Forget the cached configuration (after an owner edits it, and in tests). */
+export function invalidateShopEngineering(): void {
+  cached = null;
+}
