@@ -1,4 +1,4 @@
-import { Entity, Index, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { Entity, Index, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import { User } from "./user.entity";
 
@@ -6,6 +6,8 @@ import { User } from "./user.entity";
 @Entity({ tableName: "audit_event" })
 @Index({ properties: ["subjectType", "subjectId"] })
 export class AuditEvent {
+  [OptionalProps]?: "at";
+
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
 

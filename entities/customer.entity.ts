@@ -1,4 +1,4 @@
-import { Entity, Index, OneToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { Entity, Index, OneToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import { User } from "./user.entity";
 
@@ -8,6 +8,8 @@ import { User } from "./user.entity";
  */
 @Entity({ tableName: "customer" })
 export class Customer {
+  [OptionalProps]?: "createdAt";
+
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
 

@@ -1,4 +1,4 @@
-import { Entity, Index, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { Entity, Index, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import { Customer } from "./customer.entity";
 import { User } from "./user.entity";
@@ -6,6 +6,8 @@ import { User } from "./user.entity";
 /** A saved shaft design (a draft until it is ordered; the order keeps its own frozen copy). */
 @Entity({ tableName: "design" })
 export class Design {
+  [OptionalProps]?: "createdAt" | "updatedAt";
+
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
 

@@ -1,4 +1,4 @@
-import { Entity, Enum, Index, PrimaryKey, Property } from "@mikro-orm/core";
+import { Entity, Enum, Index, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 
 /**
@@ -7,6 +7,8 @@ import { randomUUID } from "node:crypto";
  */
 @Entity({ tableName: "email_message" })
 export class EmailMessage {
+  [OptionalProps]?: "status" | "attempts" | "createdAt";
+
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
 

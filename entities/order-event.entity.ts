@@ -1,4 +1,4 @@
-import { Entity, Index, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { Entity, Index, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import { User } from "./user.entity";
@@ -8,6 +8,8 @@ export type OrderEventKind = "received" | "paid" | "payment_failed" | "step" | "
 /** One entry of an order's timeline, as the customer sees it. */
 @Entity({ tableName: "order_event" })
 export class OrderEvent {
+  [OptionalProps]?: "public" | "at";
+
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
 

@@ -1,4 +1,4 @@
-import { Collection, Entity, Enum, Index, ManyToOne, OneToMany, PrimaryKey, Property } from "@mikro-orm/core";
+import { Collection, Entity, Enum, Index, ManyToOne, OneToMany, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import { Customer } from "./customer.entity";
 import { User } from "./user.entity";
@@ -14,6 +14,8 @@ export type PaymentState = (typeof PAYMENT_STATES)[number];
 /** One customer order: one or more shafts, a price, a promised date, its payments and timeline. */
 @Entity({ tableName: "shop_order" })
 export class Order {
+  [OptionalProps]?: "status" | "paymentState" | "paidCents" | "refundedCents" | "createdAt" | "updatedAt";
+
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
 

@@ -1,4 +1,4 @@
-import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { Entity, Enum, Index, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import { User } from "./user.entity";
@@ -6,6 +6,8 @@ import { User } from "./user.entity";
 /** One request for money on an order (deposit, balance or full), through a hosted checkout. */
 @Entity({ tableName: "payment" })
 export class Payment {
+  [OptionalProps]?: "status" | "refundedCents" | "createdAt";
+
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
 

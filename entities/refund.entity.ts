@@ -1,4 +1,4 @@
-import { Entity, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { Entity, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import { Payment } from "./payment.entity";
 import { User } from "./user.entity";
@@ -6,6 +6,8 @@ import { User } from "./user.entity";
 /** Money given back on a payment, by an owner. */
 @Entity({ tableName: "refund" })
 export class Refund {
+  [OptionalProps]?: "createdAt";
+
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
 

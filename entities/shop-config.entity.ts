@@ -1,4 +1,4 @@
-import { Entity, PrimaryKey, Property } from "@mikro-orm/core";
+import { Entity, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import type { Catalogue, SettingKey } from "../lib/driveline";
 import type { PriceBook } from "../lib/pricing/price-book";
 
@@ -8,6 +8,8 @@ import type { PriceBook } from "../lib/pricing/price-book";
  */
 @Entity({ tableName: "shop_config" })
 export class ShopConfig {
+  [OptionalProps]?: "updatedAt" | "settings";
+
   @PrimaryKey({ type: "integer", autoincrement: false })
   id: number = 1;
 

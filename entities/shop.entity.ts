@@ -1,8 +1,10 @@
-import { Entity, PrimaryKey, Property } from "@mikro-orm/core";
+import { Entity, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 
 /** The shop that runs this Yokeline: its name and contact details for screens, e-mails and travellers. */
 @Entity({ tableName: "shop" })
 export class Shop {
+  [OptionalProps]?: "updatedAt" | "currency";
+
   @PrimaryKey({ type: "integer", autoincrement: false })
   id: number = 1;
 

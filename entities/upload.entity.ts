@@ -1,4 +1,4 @@
-import { Entity, Index, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { Entity, Index, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import { User } from "./user.entity";
@@ -6,6 +6,8 @@ import { User } from "./user.entity";
 /** A photo or measurement sheet attached to an order; the bytes live in storage, not here. */
 @Entity({ tableName: "upload" })
 export class Upload {
+  [OptionalProps]?: "createdAt";
+
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
 

@@ -1,8 +1,10 @@
-import { Entity, PrimaryKey, Property } from "@mikro-orm/core";
+import { Entity, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 
 /** A payment provider event, stored by its id so each one is applied exactly once. */
 @Entity({ tableName: "webhook_event" })
 export class WebhookEvent {
+  [OptionalProps]?: "receivedAt" | "deliveries";
+
   @PrimaryKey({ type: "text" })
   id!: string;
 
