@@ -13,7 +13,8 @@ export default async function setup() {
   assertLoopbackDatabase(url);
   const client = new Client({ connectionString: url });
   await client.connect();
-  await client.query("drop schema if exists public cascade; create schema public");
+  // pg-boss lives in its own schema, also created by the migrations.
+  await client.query("drop schema if exists pgboss cascade; drop schema if exists public cascade; create schema public");
   await client.end();
   migrateWithCli(url);
 }
