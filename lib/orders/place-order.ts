@@ -1,6 +1,6 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { Customer, Design, Order, OrderEvent, OrderShaft, User } from "@/entities";
-import type { CurrentUser } from "@/lib/auth/guard";
+import { AccessError, type CurrentUser } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/permissions";
 import { recordAudit } from "@/lib/audit";
 import { inTransaction } from "@/lib/db/orm";
@@ -47,7 +47,8 @@ async function orderCustomer(em: EntityManager, user: CurrentUser, customerId: s
     if (!chosen) throw new AppError("not_found", "No such customer.", { customerId: "Choose a customer." });
     return chosen;
   }
-  if (!can(user.role, "orders.own")) throw new AppError("invalid", "Choose the customer this order is for.", { customerId: "Required." });
+  if (can(user.role, "orders.desk")) throw new AppError("invalid", "Choose the customer this order is for.", { customerId: "Required." });
+  if (!can(user.role, "orders.own")) throw new AccessError(403);
   return (await em.findOne(Customer, { user: user.id })) ?? em.merge(await linkCustomerToUser(user));
 }
 

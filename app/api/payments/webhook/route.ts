@@ -1,0 +1,19 @@
+import { payments } from "@/lib/payments/stripe";
+import { WebhookSignatureError } from "@/lib/payments/port";
+import { applyPaymentEvent } from "@/lib/orders/payments";
+import { errorResponse, json } from "@/lib/http/route";
+
+// POST /api/payments/webhook — provider events; the signature is verified on the raw body
+export async function POST(req: Request) {
+  const raw = await req.text();
+  try {
+    const event = await payments().verifyWebhook(raw, req.headers.get("stripe-signature"));
+    const outcome = await applyPaymentEvent(event);
+    return json({ received: true, outcome });
+  } catch (error) {
+    if (error instanceof WebhookSignatureError) {
+      return json({ error: { code: "invalid", message: "The webhook signature does not verify." } }, 400);
+    }
+    return errorResponse(error);
+  }
+}
