@@ -1,6 +1,6 @@
 import { realpathSync } from "node:fs";
 import type { IncomingMessage, Server, ServerResponse } from "node:http";
-import type { AddressInfo } from "node:net";
+import type { AddressInfo, Server as NetServer } from "node:net";
 import { pathToFileURL } from "node:url";
 
 export const LOCALHOST = "127.0.0.1";
@@ -51,7 +51,7 @@ export function redirect(res: ServerResponse, status: 302 | 303, location: strin
 }
 
 /** Listens on 127.0.0.1 only; port 0 picks a free port. Resolves with the bound port. */
-export function listen(server: Server, port: number, host = LOCALHOST): Promise<number> {
+export function listen(server: NetServer, port: number, host = LOCALHOST): Promise<number> {
   return new Promise((resolve, reject) => {
     const onError = (err: Error) => reject(err);
     server.once("error", onError);
