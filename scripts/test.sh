@@ -32,6 +32,7 @@ export BETTER_AUTH_SECRET="test-secret-$(head -c 24 /dev/urandom | base64 | tr -
 export UPLOADS_DIR="$TMP_DIR/uploads"
 
 echo "▸ Type check"
+npx next typegen >/dev/null
 npx tsc --noEmit -p tsconfig.json
 
 echo "▸ Unit and integration tests (Vitest)"

@@ -2,15 +2,19 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { PackageOpen } from "lucide-react";
 import { requirePermission } from "@/lib/auth/guard";
+import { getEm } from "@/lib/db/orm";
+import { listOrders } from "@/lib/orders/queries";
+import { formatMoney } from "@/lib/pricing/price-book";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Alert } from "@/components/ui/alert";
+import { OrderStatusBadge, PaymentBadge } from "@/components/orders/status-badge";
 
 export const metadata: Metadata = { title: "My orders" };
 
 export default async function MyOrdersPage({ searchParams }: PageProps<"/orders">) {
   const user = await requirePermission("orders.own", "/orders");
-  const { welcome } = await searchParams;
+  const [{ welcome }, orders] = await Promise.all([searchParams, listOrders(await getEm(), user)]);
   return (
     <>
       <PageHeader
@@ -29,10 +33,26 @@ export default async function MyOrdersPage({ searchParams }: PageProps<"/orders"
           </Alert>
         </div>
       )}
-      <EmptyState icon={PackageOpen} title="No orders yet">
-        When you order a shaft it appears here with its timeline: received, paid, each step in the shop, ready and
-        shipped.
-      </EmptyState>
+      {orders.length === 0 ? (
+        <EmptyState icon={PackageOpen} title="No orders yet">
+          When you order a shaft it appears here with its timeline: received, paid, each step in the shop, ready and shipped.
+        </EmptyState>
+      ) : (
+        <ul className="space-y-3">
+          {orders.map((o) => (
+            <li key={o.id}>
+              <Link href={`/orders/${o.id}`} className="card flex flex-wrap items-center gap-x-6 gap-y-2 p-4 text-ink no-underline hover:border-steel-500">
+                <span className="font-mono font-semibold">{o.number}</span>
+                <span className="min-w-0 flex-1 truncate">{o.shafts.join(", ")}</span>
+                <OrderStatusBadge status={o.status} />
+                <PaymentBadge state={o.paymentState} />
+                <span className="tabular-nums">{formatMoney(o.totalCents, o.currency)}</span>
+                <span className="text-sm text-ink-muted">promised {o.promisedDate}</span>
+              </Link>
+            </li>
+          ))}
+        </ul>
+      )}
     </>
   );
 }

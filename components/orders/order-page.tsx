@@ -1,0 +1,105 @@
+import type { OrderView } from "@/lib/orders/queries";
+import { formatMoney } from "@/lib/pricing/price-book";
+import { Alert } from "@/components/ui/alert";
+import { OrderStatusBadge, PaymentBadge } from "./status-badge";
+import { OrderTimeline } from "./order-timeline";
+import { ShaftSummary, Totals } from "./shaft-summary";
+import { PayButton } from "./pay-button";
+import { PaymentConfirming } from "./payment-confirming";
+
+const KIND_LABEL = { deposit: "deposit", balance: "balance", full: "payment" } as const;
+
+/** The body of an order page, for the customer and (with `staffActions`) for the shop. */
+export function OrderPage({
+  order,
+  returnedFromCheckout,
+  cancelledCheckout,
+  files,
+  staffActions,
+}: {
+  order: OrderView;
+  returnedFromCheckout?: boolean;
+  cancelledCheckout?: boolean;
+  files?: React.ReactNode;
+  staffActions?: React.ReactNode;
+}) {
+  const lastFailure = order.payments.findLast((p) => p.status === "open" && p.failureMessage);
+  return (
+    <div className="space-y-6">
+      <div className="flex flex-wrap items-center gap-3">
+        <OrderStatusBadge status={order.status} />
+        <PaymentBadge state={order.paymentState} />
+        <span className="text-sm text-ink-muted">
+          Promised {order.promisedDate} · {order.fulfilment === "ship" ? "Shipping" : "Pickup at the shop"}
+        </span>
+        {order.late && <span className="rounded-full bg-fail-soft px-2.5 py-0.5 text-xs font-semibold text-fail">Late</span>}
+      </div>
+      {returnedFromCheckout && order.paymentState === "unpaid" && <PaymentConfirming />}
+      {returnedFromCheckout && order.paymentState !== "unpaid" && (
+        <Alert tone="success" title="Payment received">
+          Thank you. A receipt is on its way to {order.customerEmail}.
+        </Alert>
+      )}
+      {cancelledCheckout && order.paymentState === "unpaid" && <Alert tone="info">You left the payment page; nothing was charged.</Alert>}
+      {lastFailure && <Alert tone="error" title="The last card payment was declined">{lastFailure.failureMessage} Try another card.</Alert>}
+
+      <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
+        <div className="space-y-6">
+          <section aria-labelledby="timeline">
+            <h2 id="timeline" className="mb-3 text-lg font-semibold">
+              Timeline
+            </h2>
+            <div className="card p-5">
+              <OrderTimeline order={order} />
+            </div>
+          </section>
+          <section aria-labelledby="shafts" className="space-y-3">
+            <h2 id="shafts" className="text-lg font-semibold">
+              {order.shaftViews.length === 1 ? "Shaft" : "Shafts"}
+            </h2>
+            {order.shaftViews.map((s) => (
+              <ShaftSummary key={s.id} shaft={s} currency={order.currency} />
+            ))}
+          </section>
+          {files}
+        </div>
+        <aside className="space-y-4">
+          <section className="card space-y-4 p-5" aria-labelledby="money">
+            <h2 id="money" className="text-lg font-semibold">
+              Payment
+            </h2>
+            <Totals currency={order.currency} subtotalCents={order.subtotalCents} shippingCents={order.shippingCents} taxCents={order.taxCents} totalCents={order.totalCents}>
+              <div className="flex justify-between py-1">
+                <dt>Paid</dt>
+                <dd className="tabular-nums">{formatMoney(order.paidCents, order.currency)}</dd>
+              </div>
+              {order.refundedCents > 0 && (
+                <div className="flex justify-between py-1">
+                  <dt>Refunded</dt>
+                  <dd className="tabular-nums">−{formatMoney(order.refundedCents, order.currency)}</dd>
+                </div>
+              )}
+            </Totals>
+            {order.due && order.status !== "cancelled" && (
+              <div className="no-print">
+                <PayButton orderId={order.id} label={`Pay ${KIND_LABEL[order.due.kind]} of ${formatMoney(order.due.amountCents, order.currency)}`} />
+              </div>
+            )}
+            {order.payments.length > 0 && (
+              <ul className="divide-y divide-line text-sm">
+                {order.payments.map((p) => (
+                  <li key={p.id} className="flex justify-between gap-2 py-1.5">
+                    <span className="capitalize">{p.kind}</span>
+                    <span className="text-ink-muted">{p.status === "succeeded" ? `paid ${p.paidAt?.slice(0, 10)}` : p.status}</span>
+                    <span className="tabular-nums">{formatMoney(p.amountCents, order.currency)}</span>
+                  </li>
+                ))}
+              </ul>
+            )}
+          </section>
+          {staffActions}
+        </aside>
+      </div>
+    </div>
+  );
+}

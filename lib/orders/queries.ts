@@ -1,0 +1,177 @@
+import { Order, type OrderStatus, type PaymentState } from "@/entities";
+import type { EntityManager } from "@mikro-orm/postgresql";
+import type { CurrentUser } from "@/lib/auth/guard";
+import type { QuoteLine } from "@/lib/pricing/price-book";
+import { seesAllOrders } from "./access";
+import { nextPaymentKind, amountDue } from "./payments";
+
+export interface OrderRow {
+  id: string;
+  number: string;
+  customerName: string;
+  createdAt: string;
+  promisedDate: string;
+  status: OrderStatus;
+  paymentState: PaymentState;
+  totalCents: number;
+  paidCents: number;
+  currency: string;
+  shafts: string[];
+  channel: "online" | "counter";
+  late: boolean;
+}
+
+function toRow(o: Order, today: string): OrderRow {
+  return {
+    id: o.id,
+    number: o.number,
+    customerName: o.customer.name,
+    createdAt: o.createdAt.toISOString(),
+    promisedDate: o.promisedDate,
+    status: o.status,
+    paymentState: o.paymentState,
+    totalCents: o.totalCents,
+    paidCents: o.paidCents,
+    currency: o.currency,
+    shafts: o.shafts.isInitialized() ? o.shafts.getItems().map((s) => s.name) : [],
+    channel: o.channel,
+    late: !["shipped", "cancelled"].includes(o.status) && o.promisedDate < today,
+  };
+}
+
+/** The orders a user may list: a customer's own, newest first; staff see every order, the soonest promise first. */
+export async function listOrders(em: EntityManager, user: CurrentUser, filter: { open?: boolean } = {}): Promise<OrderRow[]> {
+  const all = seesAllOrders(user);
+  const where = {
+    ...(all ? {} : { customer: { user: user.id } }),
+    ...(filter.open ? { status: { $nin: ["shipped", "cancelled"] as OrderStatus[] } } : {}),
+  };
+  const orders = await em.find(Order, where, {
+    populate: ["customer", "shafts"],
+    orderBy: all ? { promisedDate: "asc", createdAt: "asc" } : { createdAt: "desc" },
+    limit: 200,
+  });
+  const today = new Date().toISOString().slice(0, 10);
+  return orders.map((o) => toRow(o, today));
+}
+
+export interface ShaftView {
+  id: string;
+  position: number;
+  name: string;
+  application: { description: string; use: string } | null;
+  overall: string;
+  priceLines: QuoteLine[];
+  priceCents: number;
+  facts: { label: string; value: string }[];
+  checks: { id: string; status: string; message: string }[];
+  cautions: string[];
+}
+
+export interface OrderView extends OrderRow {
+  customerEmail: string;
+  fulfilment: "pickup" | "ship";
+  shipTo: string | null;
+  notes: string | null;
+  subtotalCents: number;
+  taxCents: number;
+  shippingCents: number;
+  depositCents: number;
+  refundedCents: number;
+  shaftViews: ShaftView[];
+  payments: {
+    id: string;
+    kind: string;
+    amountCents: number;
+    status: string;
+    refundedCents: number;
+    createdAt: string;
+    paidAt: string | null;
+    failureMessage: string | null;
+    checkoutUrl: string;
+  }[];
+  events: { id: string; at: string; kind: string; label: string }[];
+  /** What the order asks for next, if anything. */
+  due: { kind: "deposit" | "balance" | "full"; amountCents: number } | null;
+}
+
+const fmt = (n: unknown, digits = 0, unit = "") => (typeof n === "number" && Number.isFinite(n) ? `${n.toFixed(digits)}${unit}` : "—");
+
+/** What a shaft view is built from: an ordered shaft, or a quoted design. */
+export interface ShaftSource {
+  id: string;
+  position: number;
+  name: string;
+  application?: { description: string; use: string } | null;
+  overall: string;
+  priceLines: QuoteLine[];
+  priceCents: number;
+  evaluation: unknown;
+}
+
+/** A shaft's key numbers, checks and price, as plain data for the screens. */
+export function shaftView(s: ShaftSource): ShaftView {
+  const r = s.evaluation as Record<string, any>; // an EvaluationReport (possibly a frozen older one)
+  return {
+    id: s.id,
+    position: s.position,
+    name: s.name,
+    application: s.application ?? null,
+    overall: s.overall,
+    priceLines: s.priceLines,
+    priceCents: s.priceCents,
+    facts: [
+      { label: "Installed length", value: fmt(r.lengthMm, 1, " mm") },
+      { label: "Cut length", value: fmt(r.cutLengthMm, 1, " mm") },
+      { label: "Tube", value: r.tube ? `${fmt(r.tube.odMm, 1)} × ${fmt(r.tube.wallMm, 2)} mm ${r.tube.materialId}` : "—" },
+      { label: "Working angles", value: Array.isArray(r.joints) ? r.joints.map((j: any) => fmt(j.workingAngleDeg, 2, "°")).join(" / ") : "—" },
+      { label: "Rear yoke index", value: fmt(r.phasing?.phaseIndexDeg, 1, "°") },
+      { label: "Critical speed", value: `${fmt(r.criticalSpeedRpm, 0, " rpm")} (service ${fmt((r.criticalSpeedRatio ?? NaN) * 100, 0, " %")})` },
+      { label: "Torsion safety factor", value: fmt(r.torsion?.safetyFactor, 2) },
+      { label: "Balance (per plane)", value: `${fmt(r.balance?.perPlaneGmm, 0, " g·mm")} at G ${fmt(r.balance?.gradeMmS, 1)}` },
+    ],
+    checks: Array.isArray(r.checks) ? r.checks.map((c: any) => ({ id: String(c.id), status: String(c.status), message: String(c.message) })) : [],
+    cautions: Array.isArray(r.cautions) ? r.cautions.map(String) : [],
+  };
+}
+
+/** Everything an order page shows, as plain data. Customers see only public timeline entries. */
+export function orderView(order: Order, user: CurrentUser): OrderView {
+  const staff = seesAllOrders(user);
+  const kind = nextPaymentKind(order);
+  return {
+    ...toRow(order, new Date().toISOString().slice(0, 10)),
+    customerEmail: order.customer.email,
+    fulfilment: order.fulfilment,
+    shipTo: order.shipTo ?? null,
+    notes: order.notes ?? null,
+    subtotalCents: order.subtotalCents,
+    taxCents: order.taxCents,
+    shippingCents: order.shippingCents,
+    depositCents: order.depositCents,
+    refundedCents: order.refundedCents,
+    shaftViews: order.shafts.getItems().map(shaftView),
+    payments: order.payments.getItems().map((p) => ({
+      id: p.id,
+      kind: p.kind,
+      amountCents: p.amountCents,
+      status: p.status,
+      refundedCents: p.refundedCents,
+      createdAt: p.createdAt.toISOString(),
+      paidAt: p.paidAt?.toISOString() ?? null,
+      failureMessage: p.failureMessage ?? null,
+      checkoutUrl: p.checkoutUrl,
+    })),
+    events: order.events
+      .getItems()
+      .filter((e) => staff || e.public)
+      .map((e) => ({ id: e.id, at: e.at.toISOString(), kind: e.kind, label: e.label })),
+    due: kind ? { kind, amountCents: amountDue(order, kind) } : null,
+  };
+}
+
+/** Loads everything an order page needs in one go. */
+export async function populateOrder(em: EntityManager, order: Order): Promise<Order> {
+  await em.populate(order, ["customer", "shafts", "payments", "events"]);
+  return order;
+}

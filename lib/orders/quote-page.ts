@@ -1,0 +1,47 @@
+import { Customer, Design } from "@/entities";
+import { getEm } from "@/lib/db/orm";
+import type { CurrentUser } from "@/lib/auth/guard";
+import { seesAllOrders } from "./access";
+import { shaftView, type ShaftView } from "./queries";
+import { quoteDesigns } from "./place-order";
+import { getShopEngineering } from "@/lib/shop/config";
+import { AppError } from "@/lib/http/errors";
+import type { OrderQuote } from "@/lib/pricing/price-book";
+
+export interface QuotePageData {
+  designIds: string[];
+  customer: { id: string; name: string; email: string };
+  shafts: ShaftView[];
+  pickup: OrderQuote;
+  ship: OrderQuote;
+  depositPercent: number;
+  leadTimeWorkingDays: number;
+  failing: string[];
+}
+
+/** Prices saved designs for the quote screen, exactly as placing the order will. */
+export async function quoteForDesigns(user: CurrentUser, designIds: string[], customerId?: string): Promise<QuotePageData> {
+  const em = await getEm();
+  const customer = seesAllOrders(user) && customerId
+    ? await em.findOne(Customer, { id: customerId })
+    : await em.findOne(Customer, { user: user.id });
+  if (!customer) throw new AppError("not_found", "No such customer.");
+  const designs = await em.find(Design, { id: { $in: designIds }, customer });
+  if (designs.length === 0 || designs.length !== new Set(designIds).size) throw new AppError("not_found", "That design is not yours or no longer exists.");
+  const shop = await getShopEngineering();
+  const ordered = designIds.map((id) => designs.find((d) => d.id === id)!);
+  const pickup = quoteDesigns(ordered, shop, "pickup");
+  const ship = quoteDesigns(ordered, shop, "ship");
+  return {
+    designIds,
+    customer: { id: customer.id, name: customer.name, email: customer.email },
+    shafts: pickup.shafts.map((q, i) =>
+      shaftView({ id: q.design.id, position: i + 1, name: q.design.name, application: q.design.application, overall: q.report.overall, priceLines: q.lines, priceCents: q.priceCents, evaluation: q.report }),
+    ),
+    pickup: pickup.quote,
+    ship: ship.quote,
+    depositPercent: shop.priceBook.depositPercent,
+    leadTimeWorkingDays: shop.priceBook.leadTimeWorkingDays,
+    failing: pickup.shafts.filter((s) => s.report.overall === "fail").map((s) => s.design.name),
+  };
+}
