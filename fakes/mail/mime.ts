@@ -36,6 +36,11 @@ function bytesToText(bytes: Buffer, charset = "utf-8"): string {
   }
 }
 
+// SMTP puts CRLF on the wire; give tests back the LF the app wrote.
+function normalizeNewlines(text: string): string {
+  return text.replace(/\r\n/g, "\n");
+}
+
 function decodeQuotedPrintable(input: string): Buffer {
   const soft = input.replace(/=\r?\n/g, "");
   const bytes: number[] = [];
@@ -54,16 +59,21 @@ function decodeQuotedPrintable(input: string): Buffer {
 
 /** RFC 2047: `=?UTF-8?Q?Caf=C3=A9?=` / `=?utf-8?B?...?=`; whitespace between words is dropped. */
 export function decodeEncodedWords(value: string): string {
-  const collapsed = value.replace(/(=\?[^?]+\?[BbQq]\?[^?]*\?=)\s+(?==\?[^?]+\?[BbQq]\?[^?]*\?=)/g, "$1");
-  const decoded = collapsed.replace(/=\?([^?*]+)(?:\*[^?]*)?\?([BbQq])\?([^?]*)\?=/g, (_m, charset: string, enc: string, text: string) => {
+  // Raw 8-bit (SMTPUTF8) header bytes arrive as latin1 chars; reread them as UTF-8 first.
+  let source = value;
+  if (/[\x80-\xff]/.test(source) && !/[^\x00-\xff]/.test(source)) {
+    try {
+      source = new TextDecoder("utf-8", { fatal: true }).decode(Buffer.from(source, "latin1"));
+    } catch {
+      // Not UTF-8: keep the latin1 reading.
+    }
+  }
+  const collapsed = source.replace(/(=\?[^?]+\?[BbQq]\?[^?]*\?=)\s+(?==\?[^?]+\?[BbQq]\?[^?]*\?=)/g, "$1");
+  return collapsed.replace(/=\?([^?*]+)(?:\*[^?]*)?\?([BbQq])\?([^?]*)\?=/g, (_m, charset: string, enc: string, text: string) => {
     const bytes =
       enc.toUpperCase() === "B" ? Buffer.from(text, "base64") : decodeQuotedPrintable(text.replace(/_/g, " "));
     return bytesToText(bytes, charset);
   });
-  // Raw 8-bit (SMTPUTF8) header bytes arrive as latin1 chars; reread them as UTF-8.
-  return /[\x80-\xff]/.test(decoded) && !/[^\x00-\xff]/.test(decoded)
-    ? bytesToText(Buffer.from(decoded, "latin1"))
-    : decoded;
 }
 
 function splitHeadersAndBody(raw: string): { head: string; body: string } {
@@ -86,6 +96,20 @@ function parseHeaders(head: string): Map<string, string> {
   return headers;
 }
 
+function percentDecode(value: string): Buffer {
+  const bytes: number[] = [];
+  for (let i = 0; i < value.length; i++) {
+    const hex = value.slice(i + 1, i + 3);
+    if (value[i] === "%" && /^[0-9A-Fa-f]{2}$/.test(hex)) {
+      bytes.push(parseInt(hex, 16));
+      i += 2;
+    } else {
+      bytes.push(value.charCodeAt(i) & 0xff);
+    }
+  }
+  return Buffer.from(bytes);
+}
+
 function parseParams(value: string): { value: string; params: Record<string, string> } {
   const [first = "", ...rest] = value.split(";");
   const params: Record<string, string> = {};
@@ -98,7 +122,7 @@ function parseParams(value: string): { value: string; params: Record<string, str
       // RFC 2231 `filename*=utf-8''na%C3%AFve.pdf`
       key = key.slice(0, -1);
       const m = /^([^']*)'[^']*'(.*)$/.exec(val);
-      if (m) val = bytesToText(Buffer.from(decodeURIComponent(m[2] ?? "").split("").map((c) => c.charCodeAt(0))), m[1] || "utf-8");
+      if (m) val = bytesToText(percentDecode(m[2] ?? ""), m[1] || "utf-8");
     }
     params[key] = decodeEncodedWords(val);
   }
@@ -198,9 +222,9 @@ export function parseMime(raw: Buffer | string): ParsedMail {
     const isAttachment = disposition.value === "attachment" || (filename !== null && disposition.value !== "inline");
     const bytes = decodeBody(part);
     if (!isAttachment && type === "text/plain" && result.text === null) {
-      result.text = bytesToText(bytes, params["charset"]);
+      result.text = normalizeNewlines(bytesToText(bytes, params["charset"]));
     } else if (!isAttachment && type === "text/html" && result.html === null) {
-      result.html = bytesToText(bytes, params["charset"]);
+      result.html = normalizeNewlines(bytesToText(bytes, params["charset"]));
     } else {
       result.attachments.push({
         filename,
