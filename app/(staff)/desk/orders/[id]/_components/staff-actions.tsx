@@ -1,0 +1,113 @@
+"use client";
+import { useState } from "react";
+import { useRouter } from "next/navigation";
+import { formatMoney } from "@/lib/pricing/price-book";
+import { refundPaymentAction } from "@/lib/actions/refund-payment";
+import { requestBalanceAction } from "@/lib/actions/request-balance";
+import { Alert } from "@/components/ui/alert";
+
+interface PaymentRow {
+  id: string;
+  kind: string;
+  amountCents: number;
+  refundedCents: number;
+  status: string;
+}
+
+/** What the counter and the owner can do to an order's money. */
+export function StaffActions({
+  orderId,
+  currency,
+  canRequestBalance,
+  canRefund,
+  payments,
+}: {
+  orderId: string;
+  currency: string;
+  canRequestBalance: boolean;
+  canRefund: boolean;
+  payments: PaymentRow[];
+}) {
+  const router = useRouter();
+  const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
+  const [busy, setBusy] = useState(false);
+  const refundable = payments.filter((p) => p.status === "succeeded" && p.amountCents > p.refundedCents);
+
+  return (
+    <section className="card no-print space-y-4 p-5" aria-labelledby="staff-actions">
+      <h2 id="staff-actions" className="text-lg font-semibold">
+        Shop actions
+      </h2>
+      {message && <Alert tone={message.tone}>{message.text}</Alert>}
+      {canRequestBalance && (
+        <button
+          type="button"
+          className="btn-quiet w-full"
+          disabled={busy}
+          onClick={async () => {
+            if (!window.confirm("E-mail the customer a link to pay the balance?")) return;
+            setBusy(true);
+            const res = await requestBalanceAction({ orderId });
+            setBusy(false);
+            setMessage(res.ok ? { tone: "success", text: `Balance of ${formatMoney(res.data.amountCents, currency)} requested; the customer has the link by e-mail.` } : { tone: "error", text: res.error.message });
+            router.refresh();
+          }}
+        >
+          Request the balance
+        </button>
+      )}
+      {canRefund && refundable.length > 0 && (
+        <form
+          className="space-y-3 border-t border-line pt-4"
+          onSubmit={async (e) => {
+            e.preventDefault();
+            const data = new FormData(e.currentTarget);
+            const amount = Math.round(Number(data.get("amount")) * 100);
+            const paymentId = String(data.get("paymentId"));
+            const reason = String(data.get("reason") ?? "");
+            if (!window.confirm(`Refund ${formatMoney(amount || 0, currency)}? This sends money back to the customer's card.`)) return;
+            setBusy(true);
+            const res = await refundPaymentAction({ paymentId, amountCents: amount, reason });
+            setBusy(false);
+            if (res.ok) {
+              setMessage({ tone: "success", text: `Refunded ${formatMoney(res.data.amountCents, currency)}.` });
+              e.currentTarget?.reset();
+            } else {
+              setMessage({ tone: "error", text: Object.values(res.error.fields ?? {})[0] ?? res.error.message });
+            }
+            router.refresh();
+          }}
+        >
+          <h3 className="font-semibold">Refund</h3>
+          <div>
+            <label htmlFor="refund-payment" className="field-label">
+              Payment
+            </label>
+            <select id="refund-payment" name="paymentId" className="field-input">
+              {refundable.map((p) => (
+                <option key={p.id} value={p.id}>
+                  {p.kind} — {formatMoney(p.amountCents - p.refundedCents, currency)} refundable
+                </option>
+              ))}
+            </select>
+          </div>
+          <div>
+            <label htmlFor="refund-amount" className="field-label">
+              Amount ({currency})
+            </label>
+            <input id="refund-amount" name="amount" type="number" min="0.01" step="0.01" required className="field-input" />
+          </div>
+          <div>
+            <label htmlFor="refund-reason" className="field-label">
+              Reason (the customer sees it)
+            </label>
+            <input id="refund-reason" name="reason" required minLength={3} className="field-input" />
+          </div>
+          <button type="submit" className="btn-quiet w-full" disabled={busy}>
+            Refund
+          </button>
+        </form>
+      )}
+    </section>
+  );
+}

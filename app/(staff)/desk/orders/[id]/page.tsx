@@ -1,0 +1,54 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { requirePermission } from "@/lib/auth/guard";
+import { can } from "@/lib/auth/permissions";
+import { getEm } from "@/lib/db/orm";
+import { loadOrderForUser } from "@/lib/orders/access";
+import { orderView, populateOrder } from "@/lib/orders/queries";
+import { AppError } from "@/lib/http/errors";
+import { PageHeader } from "@/components/ui/page-header";
+import { Alert } from "@/components/ui/alert";
+import { OrderPage } from "@/components/orders/order-page";
+import { StaffActions } from "./_components/staff-actions";
+
+export const metadata: Metadata = { title: "Order" };
+
+export default async function DeskOrderPage({ params, searchParams }: PageProps<"/desk/orders/[id]">) {
+  const { id } = await params;
+  const user = await requirePermission("orders.desk", `/desk/orders/${id}`);
+  const em = await getEm();
+  const order = await loadOrderForUser(em, user, id).catch((e: unknown) => {
+    if (e instanceof AppError && e.code === "not_found") notFound();
+    throw e;
+  });
+  await populateOrder(em, order);
+  const view = orderView(order, user);
+  const { placed } = await searchParams;
+  return (
+    <>
+      <PageHeader
+        title={`Order ${order.number}`}
+        description={`${order.customer.name} · ${order.customer.email}${order.customer.phone ? ` · ${order.customer.phone}` : ""} · ${order.channel === "counter" ? "phone order" : "online"}`}
+      />
+      {placed && (
+        <div className="mb-4">
+          <Alert tone="success" title="Order placed">
+            Take the payment now with the button under Payment, or send the customer the link from their order e-mail.
+          </Alert>
+        </div>
+      )}
+      <OrderPage
+        order={view}
+        staffActions={
+          <StaffActions
+            orderId={order.id}
+            currency={order.currency}
+            canRequestBalance={view.due?.kind === "balance"}
+            canRefund={can(user.role, "payments.refund")}
+            payments={view.payments}
+          />
+        }
+      />
+    </>
+  );
+}
