@@ -1,0 +1,65 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { Mail } from "lucide-react";
+import { requirePermission } from "@/lib/auth/guard";
+import { isDemo } from "@/lib/shop/shop";
+import { listOutbox } from "@/lib/mail/outbox-view";
+import { PageHeader } from "@/components/ui/page-header";
+import { EmptyState } from "@/components/ui/empty-state";
+import { MailStatus } from "./_components/mail-status";
+
+export const metadata: Metadata = { title: "Sent mail" };
+
+// Demo mode only: every e-mail the app has queued, sent or given up on, newest first.
+export default async function SentMailPage() {
+  await requirePermission("mail.outbox", "/overview/mail");
+  if (!isDemo()) notFound();
+  const messages = await listOutbox();
+  return (
+    <>
+      <PageHeader title="Sent mail" description="Every e-mail the app has written, newest first. Shown in demo mode only." />
+      {messages.length === 0 ? (
+        <EmptyState icon={Mail} title="No e-mail yet">
+          Placing an order or taking a payment sends the customer an e-mail; it will appear here.
+        </EmptyState>
+      ) : (
+        <div className="card overflow-x-auto">
+          <table className="w-full text-left text-sm">
+            <caption className="sr-only">E-mails written by the app, newest first</caption>
+            <thead className="border-b border-line bg-paper-sunk text-xs uppercase tracking-wide text-ink-muted">
+              <tr>
+                <th scope="col" className="px-4 py-2">Created</th>
+                <th scope="col" className="px-4 py-2">To</th>
+                <th scope="col" className="px-4 py-2">Subject</th>
+                <th scope="col" className="px-4 py-2">Template</th>
+                <th scope="col" className="px-4 py-2">Status</th>
+                <th scope="col" className="px-4 py-2">Last error</th>
+              </tr>
+            </thead>
+            <tbody className="divide-y divide-line">
+              {messages.map((m) => (
+                <tr key={m.id} className="align-top">
+                  <td className="whitespace-nowrap px-4 py-2">
+                    <time dateTime={m.createdAt}>{m.createdAt.slice(0, 16).replace("T", " ")} UTC</time>
+                  </td>
+                  <td className="px-4 py-2">{m.to}</td>
+                  <td className="px-4 py-2">
+                    <Link href={`/overview/mail/${m.id}`} className="font-medium underline underline-offset-2">
+                      {m.subject}
+                    </Link>
+                  </td>
+                  <td className="px-4 py-2 font-mono text-xs">{m.template}</td>
+                  <td className="whitespace-nowrap px-4 py-2">
+                    <MailStatus status={m.status} attempts={m.attempts} />
+                  </td>
+                  <td className="max-w-xs px-4 py-2 text-xs text-ink-muted">{m.lastError ?? "—"}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+    </>
+  );
+}
