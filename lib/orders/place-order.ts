@@ -12,8 +12,11 @@ import { linkCustomerToUser } from "@/lib/customers";
 import { afterCommit, notifyOrderReceived } from "./notify";
 import type { PlaceOrderBody } from "./schemas";
 
-export interface QuotedShaft {
-  design: Design;
+/** What a quote is made from: a saved design, or a design file sent as is. */
+export type QuoteSource = Pick<Design, "name" | "design"> & Partial<Pick<Design, "id" | "application">>;
+
+export interface QuotedShaft<S extends QuoteSource = QuoteSource> {
+  design: S;
   report: EvaluationReport;
   lines: QuoteLine[];
   priceCents: number;
@@ -23,7 +26,7 @@ export interface QuotedShaft {
  * Re-evaluates and prices saved designs with the shop's current catalogue, limits and price
  * book. The browser's own evaluation is never trusted for money or safety.
  */
-export function quoteDesigns(designs: Design[], shop: ShopEngineering, fulfilment: "pickup" | "ship"): { shafts: QuotedShaft[]; quote: OrderQuote } {
+export function quoteDesigns<S extends QuoteSource>(designs: S[], shop: ShopEngineering, fulfilment: "pickup" | "ship"): { shafts: QuotedShaft<S>[]; quote: OrderQuote } {
   const shafts = designs.map((design) => {
     const parsed = parseDesign(design.design, { catalogue: shop.catalogue });
     if (!parsed.ok) {

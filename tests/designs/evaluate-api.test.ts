@@ -42,3 +42,19 @@ describe("POST /api/designs/evaluate", () => {
     expect((await res.json()).error.message).toMatch(/not valid JSON/);
   });
 });
+
+describe("POST /api/designs/quote", () => {
+  dbTest("prices a design file with the shop's price book", async () => {
+    const { POST: quote } = await import("@/app/api/designs/quote/route");
+    const res = await quote(
+      new NextRequest("http://127.0.0.1/api/designs/quote", { method: "POST", body: JSON.stringify({ design: street, fulfilment: "ship" }) }),
+      { params: Promise.resolve({}) },
+    );
+    expect(res.status).toBe(200);
+    const body = await res.json();
+    expect(body.orderable).toBe(true);
+    expect(body.shippingCents).toBeGreaterThan(0);
+    expect(body.totalCents).toBe(body.subtotalCents + body.shippingCents + body.taxCents);
+    expect(body.lines.map((l: { code: string }) => l.code)).toContain("tube");
+  });
+});
