@@ -1,0 +1,22 @@
+#!/usr/bin/env bash
+# `npm run bench`: the engineering core's speed, then API latency against a production build
+# served from a throw-away database (stopped on exit).
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/pg.sh
+source scripts/env.sh
+source scripts/throwaway.sh
+
+pg_ensure_installed
+throwaway_up "${BENCH_PG_PORT:-54349}" yokeline_bench
+export APP_PORT="${BENCH_APP_PORT:-3200}" STRIPE_FAKE_PORT=12311 MAIL_FAKE_SMTP_PORT=12725 MAIL_FAKE_HTTP_PORT=12780
+yokeline_env_local
+export DATABASE_URL="$DB_BASE/yokeline_bench" BETTER_AUTH_SECRET="bench-$(head -c 24 /dev/urandom | base64 | tr -d '/+=')"
+export LOG_LEVEL=warn
+npx mikro-orm migration:up >/dev/null
+npx tsx scripts/seed.ts >/dev/null
+if scripts/needs-build.sh; then echo "Building…"; NODE_ENV=production npx next build >"$TMP_DIR/build.log" 2>&1 || { cat "$TMP_DIR/build.log"; exit 1; }; fi
+NODE_ENV=production setsid npx next start -H 127.0.0.1 -p "$APP_PORT" >"$TMP_DIR/app.log" 2>&1 &
+APP_PID=$!
+for _ in $(seq 1 60); do curl -sf "http://127.0.0.1:$APP_PORT/api/health" >/dev/null && break; sleep 0.5; done
+BENCH_BASE_URL="http://127.0.0.1:$APP_PORT" npx tsx bench/run.ts
