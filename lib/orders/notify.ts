@@ -1,26 +1,91 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { Order, Payment } from "@/entities";
+import { flushQueuedEmails, queueEmail, type EmailLine } from "@/lib/mail";
+import { formatMoney } from "@/lib/pricing/price-book";
+
+const appUrl = () => process.env.APP_URL ?? process.env.BETTER_AUTH_URL ?? "http://127.0.0.1:3000";
+const longDate = (iso: string) =>
+  new Date(`${iso}T12:00:00Z`).toLocaleDateString("en-US", { weekday: "long", day: "numeric", month: "long", year: "numeric", timeZone: "UTC" });
+
+async function shaftLines(em: EntityManager, order: Order): Promise<EmailLine[]> {
+  if (!order.shafts.isInitialized()) await em.populate(order, ["shafts"]);
+  return order.shafts.getItems().map((s) => {
+    const r = s.evaluation as { lengthMm?: number; tube?: { odMm?: number; wallMm?: number; materialId?: string } };
+    return {
+      description: `${s.position}. ${s.name}`,
+      detail: r.lengthMm && r.tube ? `${r.lengthMm.toFixed(1)} mm · tube ${r.tube.odMm?.toFixed(1)} × ${r.tube.wallMm?.toFixed(2)} mm ${r.tube.materialId}` : undefined,
+      amount: formatMoney(s.priceCents, order.currency),
+    };
+  });
+}
+
+const money = (order: Order, cents: number) => formatMoney(cents, order.currency);
 
 /**
  * The e-mails an order sends. Each writes an outbox row in the caller's transaction; delivery
- * happens afterwards, so a failed send never blocks the order.
+ * happens afterwards (afterCommit), so a failed send never blocks the order.
  */
 export async function notifyOrderReceived(em: EntityManager, order: Order): Promise<void> {
-  void em;
-  void order;
+  await queueEmail(em, {
+    template: "order-received",
+    to: order.customer.email,
+    orderId: order.id,
+    props: {
+      orderNumber: order.number,
+      customerName: order.customer.name,
+      lines: await shaftLines(em, order),
+      subtotal: money(order, order.subtotalCents),
+      tax: money(order, order.taxCents),
+      shipping: money(order, order.shippingCents),
+      total: money(order, order.totalCents),
+      paid: money(order, order.paidCents),
+      promisedDate: longDate(order.promisedDate),
+      fulfilment: order.fulfilment,
+      orderUrl: `${appUrl()}/orders/${order.id}`,
+    },
+  });
 }
 
 export async function notifyPaymentReceived(em: EntityManager, order: Order, payment: Payment): Promise<void> {
-  void em;
-  void order;
-  void payment;
+  await queueEmail(em, {
+    template: "payment-receipt",
+    to: order.customer.email,
+    orderId: order.id,
+    props: {
+      orderNumber: order.number,
+      customerName: order.customer.name,
+      paymentLabel: payment.kind === "deposit" ? "Deposit" : payment.kind === "balance" ? "Balance" : "Payment in full",
+      amountPaid: money(order, payment.amountCents),
+      paidOn: (payment.paidAt ?? new Date()).toLocaleDateString("en-US", { dateStyle: "long", timeZone: "UTC" }),
+      totalPaid: money(order, order.paidCents),
+      balanceRemaining: money(order, Math.max(0, order.totalCents - order.paidCents)),
+      lines: await shaftLines(em, order),
+      total: money(order, order.totalCents),
+      orderUrl: `${appUrl()}/orders/${order.id}`,
+    },
+  });
 }
 
 export async function notifyBalanceDue(em: EntityManager, order: Order, payment: Payment): Promise<void> {
-  void em;
-  void order;
-  void payment;
+  await queueEmail(em, {
+    template: "balance-due",
+    to: order.customer.email,
+    orderId: order.id,
+    props: {
+      orderNumber: order.number,
+      customerName: order.customer.name,
+      balanceDue: money(order, payment.amountCents),
+      total: money(order, order.totalCents),
+      paidSoFar: money(order, order.paidCents),
+      payUrl: payment.checkoutUrl,
+      promisedDate: longDate(order.promisedDate),
+      lines: await shaftLines(em, order),
+      orderUrl: `${appUrl()}/orders/${order.id}`,
+    },
+  });
 }
 
-/** After a transaction that queued e-mails commits: hand them to the delivery job. */
-export async function afterCommit(): Promise<void> {}
+/** After a transaction that queued e-mails commits: hand them to the delivery job (never throws). */
+export async function afterCommit(): Promise<void> {
+  await flushQueuedEmails();
+}

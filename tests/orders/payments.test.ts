@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect } from "vitest";
 import Stripe from "stripe";
-import { Order, OrderEvent, Payment, Refund, WebhookEvent } from "@/entities";
+import { EmailMessage, Order, OrderEvent, Payment, Refund, WebhookEvent } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 import { placeOrder } from "@/lib/orders/place-order";
 import { refundPayment, startCheckout, webhookDeliveries } from "@/lib/orders/payments";
@@ -49,6 +49,10 @@ describe("paying an order through the local Stripe fake", () => {
     expect(after.paymentState).toBe("deposit_paid");
     expect(after.paidCents).toBe(order.depositCents);
     expect(after.events.getItems().filter((e) => e.kind === "paid")).toHaveLength(1);
+    // One confirmation and one receipt in the outbox, though the event came twice.
+    const em = await getEm();
+    expect(await em.count(EmailMessage, { orderId: order.id, template: "order-received" })).toBe(1);
+    expect(await em.count(EmailMessage, { orderId: order.id, template: "payment-receipt" })).toBe(1);
 
     const events = (await (await fetch(`${harness.fake.url}/_fake/events?type=checkout.session.completed`)).json()) as {
       data: { id: string; event: { data: { object: { id: string } } } }[];
