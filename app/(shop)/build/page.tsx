@@ -1,19 +1,48 @@
 import type { Metadata } from "next";
-import { Ruler } from "lucide-react";
 import { requirePermission } from "@/lib/auth/guard";
 import { PageHeader } from "@/components/ui/page-header";
-import { EmptyState } from "@/components/ui/empty-state";
+import { Alert } from "@/components/ui/alert";
+import { getDraft, listDrafts, type DraftView } from "@/lib/designs/drafts";
+import { AppError } from "@/lib/http/errors";
+import { getShopEngineering } from "@/lib/shop/config";
+import { CustomerBuilder } from "./_components/customer-builder";
 
 export const metadata: Metadata = { title: "Design a shaft" };
 
-export default async function BuildPage() {
-  await requirePermission("orders.own", "/build");
+export default async function BuildPage({ searchParams }: { searchParams: Promise<{ draft?: string | string[] }> }) {
+  const user = await requirePermission("orders.own", "/build");
+  const { draft: draftParam } = await searchParams;
+  const draftId = typeof draftParam === "string" ? draftParam : undefined;
+  const [shop, drafts, draft] = await Promise.all([
+    getShopEngineering(),
+    listDrafts(user),
+    draftId
+      ? getDraft(user, draftId).catch((error: unknown) => {
+          if (error instanceof AppError && error.code === "not_found") return null;
+          throw error;
+        })
+      : Promise.resolve<DraftView | null>(null),
+  ]);
   return (
     <>
-      <PageHeader title="Design a shaft" description="Enter your measurements; the shaft is engineered as you type." />
-      <EmptyState icon={Ruler} title="The shaft builder is being set up">
-        Until it opens, phone the shop with your measurements and the counter will build the order with you.
-      </EmptyState>
+      <PageHeader
+        title="Design a shaft"
+        description="Enter what you measured. The shaft is engineered as you type, with the shop's own parts and limits."
+      />
+      {draftId && !draft && (
+        <div className="mb-4">
+          <Alert tone="warning" title="That saved design was not found.">
+            You are starting a new design instead.
+          </Alert>
+        </div>
+      )}
+      <CustomerBuilder
+        key={draft?.id ?? "new"}
+        catalogue={shop.catalogue}
+        settings={shop.settings}
+        initialDraft={draft}
+        drafts={drafts}
+      />
     </>
   );
 }
