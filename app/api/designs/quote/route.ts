@@ -14,5 +14,5 @@ export const POST = route("public", async ({ req }) => {
   const shop = await getShopEngineering();
   const { shafts, quote } = quoteDesigns([{ name: String(design.name ?? "Shaft"), design }], shop, fulfilment);
   const shaft = shafts[0]!;
-  return json({ overall: shaft.report.overall, lines: quote.lines, ...quote, orderable: shaft.report.overall !== "fail" });
+  return json({ ...quote, overall: shaft.report.overall, orderable: shaft.report.overall !== "fail" });
 });
