@@ -1,0 +1,12 @@
+export {
+  saveOrderUpload,
+  listOrderUploads,
+  findUpload,
+  sniffUploadType,
+  displayFilename,
+  toUploadView,
+  mayAttachFiles,
+  inlineDisposition,
+  type IncomingFile,
+} from "./uploads";
+export * from "./rules";
