@@ -354,9 +354,9 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
             ).map(([value, label]) => (
               <label
                 key={value}
-                className={`inline-flex cursor-pointer items-center gap-2 rounded-md border px-3 py-1.5 text-sm has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-brass-500 ${system === value ? "border-steel-700 bg-steel-700 text-white" : "border-line-strong bg-paper-raised"}`}
+                className={`inline-flex cursor-pointer items-center gap-2 rounded-md border px-3 py-1.5 text-sm ${system === value ? "border-steel-700 bg-steel-700 text-white" : "border-line-strong bg-paper-raised"}`}
               >
-                <input type="radio" name="units" value={value} checked={system === value} onChange={() => setSystem(value)} className="sr-only" />
+                <input type="radio" name="units" value={value} checked={system === value} onChange={() => setSystem(value)} className="size-4 accent-brass-500" />
                 {label}
               </label>
             ))}
