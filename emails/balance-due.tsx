@@ -27,8 +27,8 @@ export function BalanceDueEmail(p: BalanceDueProps) {
         Balance due on {p.orderNumber}
       </Heading>
       <Paragraph>
-        Hello {p.customerName}, the balance of <strong>{p.balanceDue}</strong> is due on order <strong>{p.orderNumber}</strong>. You
-        can pay it online in a minute:
+        Hello {p.customerName}, the balance of <strong>{p.balanceDue}</strong> is due on order{" "}
+        <strong>{p.orderNumber}</strong>. You can pay it online in a minute:
       </Paragraph>
       <ActionButton href={p.payUrl}>{`Pay ${p.balanceDue}`}</ActionButton>
       <Facts
@@ -42,7 +42,8 @@ export function BalanceDueEmail(p: BalanceDueProps) {
       <LineItems lines={p.lines} />
       <Paragraph>
         <span style={mutedText}>
-          If the button does not work, open <Link href={p.payUrl}>{p.payUrl}</Link>. Your order: <Link href={p.orderUrl}>{p.orderUrl}</Link>
+          If the button does not work, open <Link href={p.payUrl}>{p.payUrl}</Link>. Your order:{" "}
+          <Link href={p.orderUrl}>{p.orderUrl}</Link>
         </span>
       </Paragraph>
     </EmailLayout>

@@ -19,7 +19,8 @@ export interface OrderReceivedProps {
   orderUrl: string;
 }
 
-export const orderReceivedSubject = (p: Pick<OrderReceivedProps, "orderNumber">) => `We have your order ${p.orderNumber}`;
+export const orderReceivedSubject = (p: Pick<OrderReceivedProps, "orderNumber">) =>
+  `We have your order ${p.orderNumber}`;
 
 export function OrderReceivedEmail(p: OrderReceivedProps) {
   return (
@@ -28,8 +29,8 @@ export function OrderReceivedEmail(p: OrderReceivedProps) {
         Thank you, {p.customerName}
       </Heading>
       <Paragraph>
-        We have received order <strong>{p.orderNumber}</strong> and it is in the queue for the shop floor. We will e-mail you when your
-        shafts are {p.fulfilment === "ship" ? "ready to ship" : "ready to pick up"}.
+        We have received order <strong>{p.orderNumber}</strong> and it is in the queue for the shop floor. We
+        will e-mail you when your shafts are {p.fulfilment === "ship" ? "ready to ship" : "ready to pick up"}.
       </Paragraph>
       <Facts
         facts={[

@@ -15,18 +15,25 @@ export interface ShaftReadyProps {
   orderUrl: string;
 }
 
-export const shaftReadySubject = (p: Pick<ShaftReadyProps, "orderNumber">) => `Order ${p.orderNumber} is ready`;
+export const shaftReadySubject = (p: Pick<ShaftReadyProps, "orderNumber">) =>
+  `Order ${p.orderNumber} is ready`;
 
 export function ShaftReadyEmail(p: ShaftReadyProps) {
   const pickup = p.fulfilment === "pickup";
   return (
-    <EmailLayout shop={p.shop} preview={`Your shafts for order ${p.orderNumber} are built, balanced and ready.`}>
+    <EmailLayout
+      shop={p.shop}
+      preview={`Your shafts for order ${p.orderNumber} are built, balanced and ready.`}
+    >
       <Heading as="h1" style={heading}>
         Your order is ready
       </Heading>
       <Paragraph>
-        Good news, {p.customerName}: the shafts for order <strong>{p.orderNumber}</strong> are built, balanced and checked.{" "}
-        {pickup ? "You can pick them up at the counter during opening hours." : "We are packing them and will send tracking details when they ship."}
+        Good news, {p.customerName}: the shafts for order <strong>{p.orderNumber}</strong> are built, balanced
+        and checked.{" "}
+        {pickup
+          ? "You can pick them up at the counter during opening hours."
+          : "We are packing them and will send tracking details when they ship."}
       </Paragraph>
       <LineItems lines={p.lines} />
       {p.balanceDue && (

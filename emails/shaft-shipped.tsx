@@ -17,7 +17,8 @@ export interface ShaftShippedProps {
   orderUrl: string;
 }
 
-export const shaftShippedSubject = (p: Pick<ShaftShippedProps, "orderNumber">) => `Order ${p.orderNumber} has shipped`;
+export const shaftShippedSubject = (p: Pick<ShaftShippedProps, "orderNumber">) =>
+  `Order ${p.orderNumber} has shipped`;
 
 export function ShaftShippedEmail(p: ShaftShippedProps) {
   return (

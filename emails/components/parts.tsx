@@ -16,7 +16,13 @@ export interface EmailTotal {
   strong?: boolean;
 }
 
-const cell = { fontSize: "14px", lineHeight: "20px", color: colors.ink, padding: "8px 0", borderBottom: `1px solid ${colors.line}` };
+const cell = {
+  fontSize: "14px",
+  lineHeight: "20px",
+  color: colors.ink,
+  padding: "8px 0",
+  borderBottom: `1px solid ${colors.line}`,
+};
 
 export function LineItems({ lines, totals = [] }: { lines: EmailLine[]; totals?: EmailTotal[] }) {
   return (
@@ -32,13 +38,27 @@ export function LineItems({ lines, totals = [] }: { lines: EmailLine[]; totals?:
               </>
             )}
           </Column>
-          <Column style={{ ...cell, textAlign: "right", whiteSpace: "nowrap", verticalAlign: "top" }}>{line.amount}</Column>
+          <Column style={{ ...cell, textAlign: "right", whiteSpace: "nowrap", verticalAlign: "top" }}>
+            {line.amount}
+          </Column>
         </Row>
       ))}
       {totals.map((t) => (
         <Row key={t.label}>
-          <Column style={{ ...cell, borderBottom: "none", padding: "4px 0", fontWeight: t.strong ? 700 : 400 }}>{t.label}</Column>
-          <Column style={{ ...cell, borderBottom: "none", padding: "4px 0", textAlign: "right", fontWeight: t.strong ? 700 : 400 }}>
+          <Column
+            style={{ ...cell, borderBottom: "none", padding: "4px 0", fontWeight: t.strong ? 700 : 400 }}
+          >
+            {t.label}
+          </Column>
+          <Column
+            style={{
+              ...cell,
+              borderBottom: "none",
+              padding: "4px 0",
+              textAlign: "right",
+              fontWeight: t.strong ? 700 : 400,
+            }}
+          >
             {t.amount}
           </Column>
         </Row>
@@ -50,11 +70,17 @@ export function LineItems({ lines, totals = [] }: { lines: EmailLine[]; totals?:
 /** Key facts as a two-column list (order number, promised date, …). */
 export function Facts({ facts }: { facts: Array<[label: string, value: string]> }) {
   return (
-    <Section style={{ margin: "0 0 18px", backgroundColor: colors.paper, borderRadius: "6px", padding: "12px 16px" }}>
+    <Section
+      style={{ margin: "0 0 18px", backgroundColor: colors.paper, borderRadius: "6px", padding: "12px 16px" }}
+    >
       {facts.map(([label, value]) => (
         <Row key={label}>
-          <Column style={{ fontSize: "13px", color: colors.muted, padding: "3px 0", width: "45%" }}>{label}</Column>
-          <Column style={{ fontSize: "14px", color: colors.ink, padding: "3px 0", fontWeight: 600 }}>{value}</Column>
+          <Column style={{ fontSize: "13px", color: colors.muted, padding: "3px 0", width: "45%" }}>
+            {label}
+          </Column>
+          <Column style={{ fontSize: "14px", color: colors.ink, padding: "3px 0", fontWeight: 600 }}>
+            {value}
+          </Column>
         </Row>
       ))}
     </Section>
@@ -66,7 +92,15 @@ export function ActionButton({ href, children }: { href: string; children: React
     <Section style={{ margin: "6px 0 20px" }}>
       <Button
         href={href}
-        style={{ backgroundColor: colors.steel, color: "#ffffff", fontSize: "15px", fontWeight: 600, borderRadius: "6px", padding: "12px 22px", textDecoration: "none" }}
+        style={{
+          backgroundColor: colors.steel,
+          color: "#ffffff",
+          fontSize: "15px",
+          fontWeight: 600,
+          borderRadius: "6px",
+          padding: "12px 22px",
+          textDecoration: "none",
+        }}
       >
         {children}
       </Button>

@@ -33,8 +33,19 @@ export function mailRetryOptions(): Required<PgBoss.RetryOptions> {
 
 function queueOptions(): Record<string, PgBoss.Queue> {
   return {
-    [JOBS.mailDeliver]: { name: JOBS.mailDeliver, policy: "standard", expireInSeconds: 120, ...mailRetryOptions() },
-    [JOBS.mailSweep]: { name: JOBS.mailSweep, policy: "singleton", retryLimit: 0, expireInSeconds: 60, retentionMinutes: 60 },
+    [JOBS.mailDeliver]: {
+      name: JOBS.mailDeliver,
+      policy: "standard",
+      expireInSeconds: 120,
+      ...mailRetryOptions(),
+    },
+    [JOBS.mailSweep]: {
+      name: JOBS.mailSweep,
+      policy: "singleton",
+      retryLimit: 0,
+      expireInSeconds: 60,
+      retentionMinutes: 60,
+    },
   };
 }
 

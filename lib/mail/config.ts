@@ -12,10 +12,14 @@ const cache = new Map<string, MailTransport>();
  */
 export function getMailTransport(): MailTransport {
   const apiKey = process.env.RESEND_API_KEY;
-  const key = apiKey ? `resend|${apiKey}|${process.env.RESEND_BASE_URL ?? ""}` : `smtp|${process.env.SMTP_URL ?? DEFAULT_SMTP_URL}`;
+  const key = apiKey
+    ? `resend|${apiKey}|${process.env.RESEND_BASE_URL ?? ""}`
+    : `smtp|${process.env.SMTP_URL ?? DEFAULT_SMTP_URL}`;
   let transport = cache.get(key);
   if (!transport) {
-    transport = apiKey ? new ResendTransport(apiKey, process.env.RESEND_BASE_URL) : new SmtpTransport(process.env.SMTP_URL ?? DEFAULT_SMTP_URL);
+    transport = apiKey
+      ? new ResendTransport(apiKey, process.env.RESEND_BASE_URL)
+      : new SmtpTransport(process.env.SMTP_URL ?? DEFAULT_SMTP_URL);
     cache.set(key, transport);
   }
   return transport;
@@ -26,6 +30,8 @@ export function mailFrom(shop: { name: string; email: string }): string {
   const configured = process.env.MAIL_FROM?.trim();
   if (configured) return configured;
   const name = shop.name.replace(/["\\\r\n<>]/g, "").trim() || "Yokeline";
-  const address = /^[^\s@<>]+@[^\s@<>]+\.[^\s@<>]+$/.test(shop.email) ? shop.email : "no-reply@yokeline.example";
+  const address = /^[^\s@<>]+@[^\s@<>]+\.[^\s@<>]+$/.test(shop.email)
+    ? shop.email
+    : "no-reply@yokeline.example";
   return `"${name}" <${address}>`;
 }

@@ -40,7 +40,11 @@ function toRow(m: Omit<EmailMessage, "html" | "text">): OutboxRow {
 /** The newest outbox rows first, as plain objects for the owner's sent-mail page. */
 export async function listOutbox(limit = 200): Promise<OutboxRow[]> {
   const em = await getEm();
-  const rows = await em.find(EmailMessage, {}, { orderBy: { createdAt: "desc" }, limit, exclude: ["html", "text"] });
+  const rows = await em.find(
+    EmailMessage,
+    {},
+    { orderBy: { createdAt: "desc" }, limit, exclude: ["html", "text"] },
+  );
   return rows.map(toRow);
 }
 

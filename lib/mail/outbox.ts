@@ -11,7 +11,9 @@ const FALLBACK_SHOP: EmailShop = { name: "Yokeline shop", addressLines: "", phon
 
 async function shopFor(em: EntityManager): Promise<EmailShop> {
   const shop = await em.findOne(Shop, { id: 1 });
-  return shop ? { name: shop.name, addressLines: shop.addressLines, phone: shop.phone, email: shop.email } : FALLBACK_SHOP;
+  return shop
+    ? { name: shop.name, addressLines: shop.addressLines, phone: shop.phone, email: shop.email }
+    : FALLBACK_SHOP;
 }
 
 export interface QueueEmailInput<N extends TemplateName> {
@@ -28,7 +30,10 @@ export interface QueueEmailInput<N extends TemplateName> {
  * caused it, and rolled back with it. Nothing is sent here — after the commit call
  * `enqueueDelivery([row.id])` or `flushQueuedEmails()`; the mail.sweep job catches anything missed.
  */
-export async function queueEmail<N extends TemplateName>(em: EntityManager, input: QueueEmailInput<N>): Promise<EmailMessage> {
+export async function queueEmail<N extends TemplateName>(
+  em: EntityManager,
+  input: QueueEmailInput<N>,
+): Promise<EmailMessage> {
   const rendered = await renderEmail(input.template, input.props, await shopFor(em));
   const message = em.create(EmailMessage, {
     template: input.template,
@@ -71,10 +76,14 @@ export async function enqueueDelivery(messageIds: readonly string[]): Promise<nu
  * After a transaction that queued e-mails commits: enqueues delivery of every row still queued
  * (optionally only those older than `olderThanSeconds`, as the sweep does). Never throws.
  */
-export async function flushQueuedEmails(options: { olderThanSeconds?: number; limit?: number } = {}): Promise<number> {
+export async function flushQueuedEmails(
+  options: { olderThanSeconds?: number; limit?: number } = {},
+): Promise<number> {
   try {
     const em = await getEm();
-    const before = options.olderThanSeconds ? new Date(Date.now() - options.olderThanSeconds * 1000) : undefined;
+    const before = options.olderThanSeconds
+      ? new Date(Date.now() - options.olderThanSeconds * 1000)
+      : undefined;
     const rows = await em.find(
       EmailMessage,
       before ? { status: "queued", createdAt: { $lt: before } } : { status: "queued" },
@@ -94,7 +103,10 @@ export type DeliveryOutcome = "sent" | "skipped" | "missing";
  * On failure it records the error and attempt and rethrows (so pg-boss retries); on the final
  * attempt it marks the row "failed", which stays visible in the outbox. The order is never touched.
  */
-export async function deliverEmail(messageId: string, { finalAttempt }: { finalAttempt: boolean }): Promise<DeliveryOutcome> {
+export async function deliverEmail(
+  messageId: string,
+  { finalAttempt }: { finalAttempt: boolean },
+): Promise<DeliveryOutcome> {
   const em = await getEm();
   const message = await em.findOne(EmailMessage, { id: messageId });
   if (!message) {
@@ -127,7 +139,10 @@ export async function deliverEmail(messageId: string, { finalAttempt }: { finalA
     message.lastError = text.slice(0, 2000);
     if (finalAttempt) message.status = "failed";
     await em.flush();
-    logger.warn({ messageId, attempts: message.attempts, final: finalAttempt, err: error }, "e-mail delivery failed");
+    logger.warn(
+      { messageId, attempts: message.attempts, final: finalAttempt, err: error },
+      "e-mail delivery failed",
+    );
     throw error;
   }
 }

@@ -20,7 +20,10 @@ export class ResendTransport implements MailTransport {
     );
     if (error || !data) {
       const status = error && "statusCode" in error && error.statusCode ? ` (${error.statusCode})` : "";
-      throw new MailSendError(`Resend refused the message${status}: ${error?.message ?? "no id in the answer"}`, this.provider);
+      throw new MailSendError(
+        `Resend refused the message${status}: ${error?.message ?? "no id in the answer"}`,
+        this.provider,
+      );
     }
     return { provider: this.provider, id: data.id };
   }

@@ -19,7 +19,9 @@ export class SmtpTransport implements MailTransport {
       port: url.port ? Number(url.port) : secure ? 465 : 587,
       secure,
       ignoreTLS: LOOPBACK.has(url.hostname) || process.env.SMTP_IGNORE_TLS === "1",
-      auth: url.username ? { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) } : undefined,
+      auth: url.username
+        ? { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) }
+        : undefined,
       connectionTimeout: 10_000,
       greetingTimeout: 10_000,
       socketTimeout: 30_000,
@@ -38,7 +40,10 @@ export class SmtpTransport implements MailTransport {
       });
       return { provider: this.provider, id: String(info.messageId ?? "") };
     } catch (error) {
-      throw new MailSendError(`SMTP send failed: ${error instanceof Error ? error.message : String(error)}`, this.provider);
+      throw new MailSendError(
+        `SMTP send failed: ${error instanceof Error ? error.message : String(error)}`,
+        this.provider,
+      );
     }
   }
 }

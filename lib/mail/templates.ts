@@ -2,7 +2,11 @@ import { createElement, type ReactElement } from "react";
 import { render } from "@react-email/render";
 import type { EmailShop } from "@/emails/components/email-layout";
 import { OrderReceivedEmail, orderReceivedSubject, type OrderReceivedProps } from "@/emails/order-received";
-import { PaymentReceiptEmail, paymentReceiptSubject, type PaymentReceiptProps } from "@/emails/payment-receipt";
+import {
+  PaymentReceiptEmail,
+  paymentReceiptSubject,
+  type PaymentReceiptProps,
+} from "@/emails/payment-receipt";
 import { BalanceDueEmail, balanceDueSubject, type BalanceDueProps } from "@/emails/balance-due";
 import { ShaftReadyEmail, shaftReadySubject, type ShaftReadyProps } from "@/emails/shaft-ready";
 import { ShaftShippedEmail, shaftShippedSubject, type ShaftShippedProps } from "@/emails/shaft-shipped";
@@ -25,7 +29,10 @@ interface TemplateDefinition<P> {
 
 const TEMPLATES: { [N in TemplateName]: TemplateDefinition<TemplateProps[N]> } = {
   "order-received": { element: (p) => createElement(OrderReceivedEmail, p), subject: orderReceivedSubject },
-  "payment-receipt": { element: (p) => createElement(PaymentReceiptEmail, p), subject: paymentReceiptSubject },
+  "payment-receipt": {
+    element: (p) => createElement(PaymentReceiptEmail, p),
+    subject: paymentReceiptSubject,
+  },
   "balance-due": { element: (p) => createElement(BalanceDueEmail, p), subject: balanceDueSubject },
   "shaft-ready": { element: (p) => createElement(ShaftReadyEmail, p), subject: shaftReadySubject },
   "shaft-shipped": { element: (p) => createElement(ShaftShippedEmail, p), subject: shaftShippedSubject },
@@ -44,7 +51,11 @@ export interface RenderedEmail {
 }
 
 /** Renders one template to its subject, HTML and plain-text versions. */
-export async function renderEmail<N extends TemplateName>(template: N, props: TemplateProps[N], shop: EmailShop): Promise<RenderedEmail> {
+export async function renderEmail<N extends TemplateName>(
+  template: N,
+  props: TemplateProps[N],
+  shop: EmailShop,
+): Promise<RenderedEmail> {
   const definition = TEMPLATES[template] as TemplateDefinition<TemplateProps[N]>;
   const element = definition.element({ ...props, shop });
   const [html, text] = await Promise.all([render(element), render(element, { plainText: true })]);

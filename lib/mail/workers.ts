@@ -9,19 +9,30 @@ export const SWEEP_AFTER_SECONDS = 30;
 const registered = new WeakSet<PgBoss>();
 
 /** Registers the mail workers and the once-a-minute sweep on a started pg-boss (once per instance). */
-export async function registerMailWorkers(boss: PgBoss, options: { pollingIntervalSeconds?: number } = {}): Promise<void> {
+export async function registerMailWorkers(
+  boss: PgBoss,
+  options: { pollingIntervalSeconds?: number } = {},
+): Promise<void> {
   if (registered.has(boss)) return;
   registered.add(boss);
   const pollingIntervalSeconds = options.pollingIntervalSeconds ?? 2;
-  await boss.work<MailDeliverJob>(JOBS.mailDeliver, { includeMetadata: true, pollingIntervalSeconds }, async (jobs) => {
-    for (const job of jobs) {
-      await deliverEmail(job.data.messageId, { finalAttempt: job.retryCount >= job.retryLimit });
-    }
-  });
-  await boss.work(JOBS.mailSweep, { pollingIntervalSeconds: Math.max(pollingIntervalSeconds, 5) }, async () => {
-    const enqueued = await flushQueuedEmails({ olderThanSeconds: SWEEP_AFTER_SECONDS });
-    if (enqueued > 0) logger.info({ enqueued }, "mail sweep enqueued e-mails left queued");
-  });
+  await boss.work<MailDeliverJob>(
+    JOBS.mailDeliver,
+    { includeMetadata: true, pollingIntervalSeconds },
+    async (jobs) => {
+      for (const job of jobs) {
+        await deliverEmail(job.data.messageId, { finalAttempt: job.retryCount >= job.retryLimit });
+      }
+    },
+  );
+  await boss.work(
+    JOBS.mailSweep,
+    { pollingIntervalSeconds: Math.max(pollingIntervalSeconds, 5) },
+    async () => {
+      const enqueued = await flushQueuedEmails({ olderThanSeconds: SWEEP_AFTER_SECONDS });
+      if (enqueued > 0) logger.info({ enqueued }, "mail sweep enqueued e-mails left queued");
+    },
+  );
   await boss.schedule(JOBS.mailSweep, "* * * * *");
 }
 

@@ -4,7 +4,13 @@ import { LocalFileStorage } from "./local";
 import type { FileStorage } from "./port";
 
 export { LocalFileStorage } from "./local";
-export { assertStorageKey, InvalidStorageKeyError, STORAGE_KEY, type FileStorage, type StoredFile } from "./port";
+export {
+  assertStorageKey,
+  InvalidStorageKeyError,
+  STORAGE_KEY,
+  type FileStorage,
+  type StoredFile,
+} from "./port";
 
 const cache = new Map<string, FileStorage>();
 

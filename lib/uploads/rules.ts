@@ -2,7 +2,14 @@
 export const MAX_UPLOAD_BYTES = 10 * 1024 * 1024;
 
 /** Content types we accept, as sniffed from the bytes. */
-export const ALLOWED_UPLOAD_TYPES = ["image/jpeg", "image/png", "image/webp", "image/heic", "image/heif", "application/pdf"] as const;
+export const ALLOWED_UPLOAD_TYPES = [
+  "image/jpeg",
+  "image/png",
+  "image/webp",
+  "image/heic",
+  "image/heif",
+  "application/pdf",
+] as const;
 export type UploadContentType = (typeof ALLOWED_UPLOAD_TYPES)[number];
 
 export const UPLOAD_ACCEPT = "image/*,application/pdf";

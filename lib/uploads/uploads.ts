@@ -8,7 +8,14 @@ import { recordAudit } from "@/lib/audit";
 import { AppError } from "@/lib/http/errors";
 import { logger } from "@/lib/logger";
 import { getStorage, newStorageKey } from "@/lib/storage";
-import { ALLOWED_UPLOAD_TYPES, formatBytes, MAX_UPLOAD_BYTES, UPLOAD_SIZE_MESSAGE, UPLOAD_TYPE_MESSAGE, type UploadView } from "./rules";
+import {
+  ALLOWED_UPLOAD_TYPES,
+  formatBytes,
+  MAX_UPLOAD_BYTES,
+  UPLOAD_SIZE_MESSAGE,
+  UPLOAD_TYPE_MESSAGE,
+  type UploadView,
+} from "./rules";
 
 export interface IncomingFile {
   /** The name on the uploader's machine; only shown, never used as a path. */
@@ -19,13 +26,14 @@ export interface IncomingFile {
 /** A file name fit to show: no folders, no control characters, at most 200 characters. */
 export function displayFilename(raw: string): string {
   const base = raw.split(/[\\/]/).pop() ?? "";
-  // eslint-disable-next-line no-control-regex
   const clean = base.replace(/[\u0000-\u001f\u007f]/g, "").trim();
   return (clean || "file").slice(0, 200);
 }
 
 /** The content type sniffed from the bytes, if it is one we accept (never the browser's word). */
-export async function sniffUploadType(bytes: Uint8Array): Promise<(typeof ALLOWED_UPLOAD_TYPES)[number] | null> {
+export async function sniffUploadType(
+  bytes: Uint8Array,
+): Promise<(typeof ALLOWED_UPLOAD_TYPES)[number] | null> {
   const found = await fileTypeFromBuffer(bytes);
   const mime = found?.mime as string | undefined;
   return ALLOWED_UPLOAD_TYPES.find((t) => t === mime) ?? null;
@@ -50,11 +58,21 @@ export function toUploadView(upload: Upload): UploadView {
  * loadOrderForUser). Checks size (413) and the sniffed type (422 on "file"), stores the bytes
  * under a fresh key, then writes the Upload row, a timeline event and an audit entry together.
  */
-export async function saveOrderUpload(em: EntityManager, user: CurrentUser, order: Order, file: IncomingFile): Promise<UploadView> {
+export async function saveOrderUpload(
+  em: EntityManager,
+  user: CurrentUser,
+  order: Order,
+  file: IncomingFile,
+): Promise<UploadView> {
   if (file.bytes.byteLength > MAX_UPLOAD_BYTES) {
-    throw new AppError("too_large", `${UPLOAD_SIZE_MESSAGE} This one is ${formatBytes(file.bytes.byteLength)}.`, { file: UPLOAD_SIZE_MESSAGE });
+    throw new AppError(
+      "too_large",
+      `${UPLOAD_SIZE_MESSAGE} This one is ${formatBytes(file.bytes.byteLength)}.`,
+      { file: UPLOAD_SIZE_MESSAGE },
+    );
   }
-  if (file.bytes.byteLength === 0) throw new AppError("invalid", "The file is empty.", { file: "The file is empty." });
+  if (file.bytes.byteLength === 0)
+    throw new AppError("invalid", "The file is empty.", { file: "The file is empty." });
   const contentType = await sniffUploadType(file.bytes);
   if (!contentType) throw new AppError("invalid", UPLOAD_TYPE_MESSAGE, { file: UPLOAD_TYPE_MESSAGE });
 
@@ -75,10 +93,24 @@ export async function saveOrderUpload(em: EntityManager, user: CurrentUser, orde
         sha256,
         createdAt: new Date(),
       });
-      const label = contentType === "application/pdf" ? `File added: ${filename}` : `Photo added: ${filename}`;
-      tx.create(OrderEvent, { order: tx.getReference(Order, order.id), kind: "file", label, public: true, actor: tx.getReference(User, user.id), at: new Date() });
+      const label =
+        contentType === "application/pdf" ? `File added: ${filename}` : `Photo added: ${filename}`;
+      tx.create(OrderEvent, {
+        order: tx.getReference(Order, order.id),
+        kind: "file",
+        label,
+        public: true,
+        actor: tx.getReference(User, user.id),
+        at: new Date(),
+      });
       await recordAudit(
-        { actorId: user.id, action: "order.file.add", subjectType: "order", subjectId: order.id, details: { uploadId: row.id, filename, contentType, sizeBytes: row.sizeBytes, sha256 } },
+        {
+          actorId: user.id,
+          action: "order.file.add",
+          subjectType: "order",
+          subjectId: order.id,
+          details: { uploadId: row.id, filename, contentType, sizeBytes: row.sizeBytes, sha256 },
+        },
         tx,
       );
       return row;
@@ -86,14 +118,20 @@ export async function saveOrderUpload(em: EntityManager, user: CurrentUser, orde
     return { ...toUploadView(upload), uploadedBy: user.name };
   } catch (error) {
     // The row never made it: do not leave the bytes behind.
-    await storage.delete(storageKey).catch((err: unknown) => logger.warn({ err, storageKey }, "could not remove orphaned upload"));
+    await storage
+      .delete(storageKey)
+      .catch((err: unknown) => logger.warn({ err, storageKey }, "could not remove orphaned upload"));
     throw error;
   }
 }
 
 /** The files attached to an order, oldest first. */
 export async function listOrderUploads(em: EntityManager, order: Order): Promise<UploadView[]> {
-  const rows = await em.find(Upload, { order: order.id }, { orderBy: { createdAt: "asc" }, populate: ["uploadedBy"] });
+  const rows = await em.find(
+    Upload,
+    { order: order.id },
+    { orderBy: { createdAt: "asc" }, populate: ["uploadedBy"] },
+  );
   return rows.map(toUploadView);
 }
 
@@ -111,6 +149,9 @@ export function mayAttachFiles(user: CurrentUser): boolean {
 /** `Content-Disposition` for showing a file in the browser under its original name (RFC 6266 / 5987). */
 export function inlineDisposition(filename: string): string {
   const ascii = filename.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
-  const encoded = encodeURIComponent(filename).replace(/['()*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`);
+  const encoded = encodeURIComponent(filename).replace(
+    /['()*]/g,
+    (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`,
+  );
   return `inline; filename="${ascii}"; filename*=UTF-8''${encoded}`;
 }

@@ -1,7 +1,11 @@
 import type { TemplateName, TemplateProps } from "@/lib/mail";
 
 const lines = [
-  { description: "Rear driveshaft, 1350 series", detail: "1,382 mm · 3.5 in × 0.083 in DOM tube", amount: "$612.00" },
+  {
+    description: "Rear driveshaft, 1350 series",
+    detail: "1,382 mm · 3.5 in × 0.083 in DOM tube",
+    amount: "$612.00",
+  },
   { description: "Balancing to 4,500 rpm", amount: "$45.00" },
 ];
 

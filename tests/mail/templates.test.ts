@@ -2,24 +2,34 @@ import { describe, expect, test } from "vitest";
 import { renderEmail, TEMPLATE_NAMES } from "@/lib/mail";
 import { SAMPLE_PROPS } from "./sample-props";
 
-const shop = { name: "Tallgrass Driveline Works", addressLines: "400 Mill Road\nSpringfield", phone: "555-0100", email: "shop@tallgrass.example" };
+const shop = {
+  name: "Tallgrass Driveline Works",
+  addressLines: "400 Mill Road\nSpringfield",
+  phone: "555-0100",
+  email: "shop@tallgrass.example",
+};
 
 describe("e-mail templates", () => {
-  test.each(TEMPLATE_NAMES)("%s renders HTML and plain text with the order number and the shop", async (name) => {
-    const email = await renderEmail(name, SAMPLE_PROPS[name] as never, shop);
-    expect(email.subject).toContain("Y26-0042");
-    expect(email.html).toMatch(/^<!DOCTYPE html/i);
-    expect(email.html).toContain("Y26-0042");
-    expect(email.html).toContain("Tallgrass Driveline Works");
-    expect(email.html).toContain("400 Mill Road");
-    expect(email.text).toContain("Y26-0042");
-    expect(email.text).not.toMatch(/<[a-z]/i);
-    expect(email.text.toLowerCase()).toContain("dana ortiz");
-  });
+  test.each(TEMPLATE_NAMES)(
+    "%s renders HTML and plain text with the order number and the shop",
+    async (name) => {
+      const email = await renderEmail(name, SAMPLE_PROPS[name] as never, shop);
+      expect(email.subject).toContain("Y26-0042");
+      expect(email.html).toMatch(/^<!DOCTYPE html/i);
+      expect(email.html).toContain("Y26-0042");
+      expect(email.html).toContain("Tallgrass Driveline Works");
+      expect(email.html).toContain("400 Mill Road");
+      expect(email.text).toContain("Y26-0042");
+      expect(email.text).not.toMatch(/<[a-z]/i);
+      expect(email.text.toLowerCase()).toContain("dana ortiz");
+    },
+  );
 
   test("balance-due has a pay button to the payment link, in both versions", async () => {
     const email = await renderEmail("balance-due", SAMPLE_PROPS["balance-due"], shop);
-    expect(email.html).toMatch(/<a[^>]+href="http:\/\/127\.0\.0\.1:12111\/checkout\/cs_test_balance"[^>]*>[\s\S]*?Pay \$354\.78/);
+    expect(email.html).toMatch(
+      /<a[^>]+href="http:\/\/127\.0\.0\.1:12111\/checkout\/cs_test_balance"[^>]*>[\s\S]*?Pay \$354\.78/,
+    );
     expect(email.text).toContain("http://127.0.0.1:12111/checkout/cs_test_balance");
   });
 
@@ -31,7 +41,11 @@ describe("e-mail templates", () => {
   });
 
   test("props are escaped, not injected", async () => {
-    const email = await renderEmail("shaft-ready", { ...SAMPLE_PROPS["shaft-ready"], customerName: "<script>x</script>" }, shop);
+    const email = await renderEmail(
+      "shaft-ready",
+      { ...SAMPLE_PROPS["shaft-ready"], customerName: "<script>x</script>" },
+      shop,
+    );
     expect(email.html).not.toContain("<script>x</script>");
     expect(email.html).toContain("&lt;script&gt;");
   });

@@ -14,7 +14,9 @@ export default async function setup() {
   const client = new Client({ connectionString: url });
   await client.connect();
   // pg-boss lives in its own schema, also created by the migrations.
-  await client.query("drop schema if exists pgboss cascade; drop schema if exists public cascade; create schema public");
+  await client.query(
+    "drop schema if exists pgboss cascade; drop schema if exists public cascade; create schema public",
+  );
   await client.end();
   migrateWithCli(url);
 }

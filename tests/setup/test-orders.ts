@@ -6,15 +6,20 @@ import { Customer, Order, User } from "@/entities";
  * A minimal order for tests that need something to attach to: for the customer record of `userId`
  * (the one sign-up made, or a new one), or for a new customer without an account.
  */
-export async function createTestOrder(em: EntityManager, options: { userId?: string; email?: string } = {}): Promise<Order> {
+export async function createTestOrder(
+  em: EntityManager,
+  options: { userId?: string; email?: string } = {},
+): Promise<Order> {
   const suffix = randomUUID().slice(0, 8);
   const existing = options.userId ? await em.findOne(Customer, { user: options.userId }) : null;
-  const customer = existing ?? em.create(Customer, {
-    name: `Test customer ${suffix}`,
-    email: options.email ?? `customer-${suffix}@test.example`,
-    user: options.userId ? em.getReference(User, options.userId) : null,
-    createdAt: new Date(),
-  });
+  const customer =
+    existing ??
+    em.create(Customer, {
+      name: `Test customer ${suffix}`,
+      email: options.email ?? `customer-${suffix}@test.example`,
+      user: options.userId ? em.getReference(User, options.userId) : null,
+      createdAt: new Date(),
+    });
   const order = em.create(Order, {
     number: `T-${suffix}`,
     customer,

@@ -31,10 +31,15 @@ let counter = 0;
 
 async function signIn(role: Role): Promise<{ cookie: string; userId: string }> {
   const email = uniqueEmail(role);
-  if (role === "customer") await authRequest("/sign-up/email", { name: "Cust Omer", email, password: PASSWORD });
+  if (role === "customer")
+    await authRequest("/sign-up/email", { name: "Cust Omer", email, password: PASSWORD });
   else await createStaffUser({ name: `A ${role}`, email, role, password: PASSWORD }, null);
   counter += 1;
-  const res = await authRequest("/sign-in/email", { email, password: PASSWORD }, `198.51.100.${20 + counter}`);
+  const res = await authRequest(
+    "/sign-in/email",
+    { email, password: PASSWORD },
+    `198.51.100.${20 + counter}`,
+  );
   expect(res.status).toBe(200);
   const body = (await res.json()) as { user: { id: string } };
   return { cookie: sessionCookie(res), userId: body.user.id };
@@ -43,16 +48,24 @@ async function signIn(role: Role): Promise<{ cookie: string; userId: string }> {
 function upload(orderId: string, cookie: string, file: Blob, filename: string) {
   const form = new FormData();
   form.set("file", file, filename);
-  const req = new NextRequest(`${BASE}/api/orders/${orderId}/files`, { method: "POST", body: form, headers: { cookie } });
+  const req = new NextRequest(`${BASE}/api/orders/${orderId}/files`, {
+    method: "POST",
+    body: form,
+    headers: { cookie },
+  });
   return postFile(req, { params: Promise.resolve({ id: orderId }) });
 }
 
 function list(orderId: string, cookie: string) {
-  return listFiles(new NextRequest(`${BASE}/api/orders/${orderId}/files`, { headers: { cookie } }), { params: Promise.resolve({ id: orderId }) });
+  return listFiles(new NextRequest(`${BASE}/api/orders/${orderId}/files`, { headers: { cookie } }), {
+    params: Promise.resolve({ id: orderId }),
+  });
 }
 
 function download(fileId: string, cookie: string) {
-  return getFile(new NextRequest(`${BASE}/api/files/${fileId}`, { headers: { cookie } }), { params: Promise.resolve({ id: fileId }) });
+  return getFile(new NextRequest(`${BASE}/api/files/${fileId}`, { headers: { cookie } }), {
+    params: Promise.resolve({ id: fileId }),
+  });
 }
 
 let alice: { cookie: string; userId: string };
@@ -65,7 +78,12 @@ beforeAll(async () => {
   uploadsDir = await mkdtemp(path.join(tmpdir(), "yokeline-uploads-"));
   process.env.UPLOADS_DIR = uploadsDir;
   if (!hasDatabase) return;
-  [alice, bob, counterStaff, floor] = [await signIn("customer"), await signIn("customer"), await signIn("counter"), await signIn("floor")];
+  [alice, bob, counterStaff, floor] = [
+    await signIn("customer"),
+    await signIn("customer"),
+    await signIn("counter"),
+    await signIn("floor"),
+  ];
   aliceOrder = await createTestOrder(await getEm(), { userId: alice.userId });
 });
 
@@ -74,29 +92,65 @@ afterAll(async () => {
 });
 
 describe("order files", () => {
-  dbTest("a customer attaches a PNG to their order: 201, row, timeline event, audit entry, bytes served back", async () => {
-    const res = await upload(aliceOrder.id, alice.cookie, new Blob([PNG], { type: "application/octet-stream" }), "../../etc/propshaft photo.png");
-    expect(res.status).toBe(201);
-    const { data } = (await res.json()) as { data: { id: string; filename: string; contentType: string; kind: string; sizeBytes: number; url: string } };
-    expect(data).toMatchObject({ filename: "propshaft photo.png", contentType: "image/png", kind: "image", sizeBytes: PNG.length, url: `/api/files/${data.id}` });
+  dbTest(
+    "a customer attaches a PNG to their order: 201, row, timeline event, audit entry, bytes served back",
+    async () => {
+      const res = await upload(
+        aliceOrder.id,
+        alice.cookie,
+        new Blob([PNG], { type: "application/octet-stream" }),
+        "../../etc/propshaft photo.png",
+      );
+      expect(res.status).toBe(201);
+      const { data } = (await res.json()) as {
+        data: {
+          id: string;
+          filename: string;
+          contentType: string;
+          kind: string;
+          sizeBytes: number;
+          url: string;
+        };
+      };
+      expect(data).toMatchObject({
+        filename: "propshaft photo.png",
+        contentType: "image/png",
+        kind: "image",
+        sizeBytes: PNG.length,
+        url: `/api/files/${data.id}`,
+      });
 
-    const em = await getEm();
-    const row = await em.findOneOrFail(Upload, { id: data.id });
-    expect(row.sha256).toMatch(/^[0-9a-f]{64}$/);
-    expect(row.storageKey).not.toContain("photo");
-    expect(await em.count(OrderEvent, { order: aliceOrder.id, kind: "file", label: "Photo added: propshaft photo.png" })).toBe(1);
-    expect(await em.count(AuditEvent, { action: "order.file.add", subjectId: aliceOrder.id })).toBeGreaterThanOrEqual(1);
-    // Stored under the generated key inside UPLOADS_DIR, nowhere else.
-    expect((await readdir(path.join(uploadsDir, row.storageKey.slice(0, 2)))).sort()).toEqual([row.storageKey, `${row.storageKey}.json`]);
+      const em = await getEm();
+      const row = await em.findOneOrFail(Upload, { id: data.id });
+      expect(row.sha256).toMatch(/^[0-9a-f]{64}$/);
+      expect(row.storageKey).not.toContain("photo");
+      expect(
+        await em.count(OrderEvent, {
+          order: aliceOrder.id,
+          kind: "file",
+          label: "Photo added: propshaft photo.png",
+        }),
+      ).toBe(1);
+      expect(
+        await em.count(AuditEvent, { action: "order.file.add", subjectId: aliceOrder.id }),
+      ).toBeGreaterThanOrEqual(1);
+      // Stored under the generated key inside UPLOADS_DIR, nowhere else.
+      expect((await readdir(path.join(uploadsDir, row.storageKey.slice(0, 2)))).sort()).toEqual([
+        row.storageKey,
+        `${row.storageKey}.json`,
+      ]);
 
-    const file = await download(data.id, alice.cookie);
-    expect(file.status).toBe(200);
-    expect(file.headers.get("content-type")).toBe("image/png");
-    expect(file.headers.get("x-content-type-options")).toBe("nosniff");
-    expect(file.headers.get("cache-control")).toMatch(/^private/);
-    expect(file.headers.get("content-disposition")).toBe(`inline; filename="propshaft photo.png"; filename*=UTF-8''propshaft%20photo.png`);
-    expect(Buffer.from(await file.arrayBuffer()).equals(PNG)).toBe(true);
-  });
+      const file = await download(data.id, alice.cookie);
+      expect(file.status).toBe(200);
+      expect(file.headers.get("content-type")).toBe("image/png");
+      expect(file.headers.get("x-content-type-options")).toBe("nosniff");
+      expect(file.headers.get("cache-control")).toMatch(/^private/);
+      expect(file.headers.get("content-disposition")).toBe(
+        `inline; filename="propshaft photo.png"; filename*=UTF-8''propshaft%20photo.png`,
+      );
+      expect(Buffer.from(await file.arrayBuffer()).equals(PNG)).toBe(true);
+    },
+  );
 
   dbTest("a PDF measurement sheet is accepted and served as application/pdf", async () => {
     const res = await upload(aliceOrder.id, alice.cookie, new Blob([PDF], { type: "image/png" }), "Maße.pdf");
@@ -108,28 +162,48 @@ describe("order files", () => {
     expect(file.headers.get("content-disposition")).toContain("filename*=UTF-8''Ma%C3%9Fe.pdf");
   });
 
-  dbTest("a text file renamed .png (and claimed as image/png) is refused by sniffing: 422 on field file", async () => {
-    const res = await upload(aliceOrder.id, alice.cookie, new Blob(["just some text, not a picture\n"], { type: "image/png" }), "photo.png");
-    expect(res.status).toBe(422);
-    const body = (await res.json()) as { error: { code: string; message: string; fields: Record<string, string> } };
-    expect(body.error.code).toBe("invalid");
-    expect(body.error.fields.file).toBe("Only photos (JPEG, PNG, WebP, HEIC) and PDF files can be attached.");
-  });
+  dbTest(
+    "a text file renamed .png (and claimed as image/png) is refused by sniffing: 422 on field file",
+    async () => {
+      const res = await upload(
+        aliceOrder.id,
+        alice.cookie,
+        new Blob(["just some text, not a picture\n"], { type: "image/png" }),
+        "photo.png",
+      );
+      expect(res.status).toBe(422);
+      const body = (await res.json()) as {
+        error: { code: string; message: string; fields: Record<string, string> };
+      };
+      expect(body.error.code).toBe("invalid");
+      expect(body.error.fields.file).toBe(
+        "Only photos (JPEG, PNG, WebP, HEIC) and PDF files can be attached.",
+      );
+    },
+  );
 
   dbTest("a file over 10 MB is refused with 413 and a clear message", async () => {
     const big = Buffer.alloc(10 * 1024 * 1024 + 1);
     PNG.copy(big);
     const res = await upload(aliceOrder.id, alice.cookie, new Blob([big], { type: "image/png" }), "huge.png");
     expect(res.status).toBe(413);
-    const body = (await res.json()) as { error: { code: string; message: string; fields: Record<string, string> } };
+    const body = (await res.json()) as {
+      error: { code: string; message: string; fields: Record<string, string> };
+    };
     expect(body.error).toMatchObject({ code: "too_large", fields: { file: "Files can be at most 10 MB." } });
   });
 
   dbTest("a missing file field is a 422 naming file", async () => {
-    const req = new NextRequest(`${BASE}/api/orders/${aliceOrder.id}/files`, { method: "POST", body: new FormData(), headers: { cookie: alice.cookie } });
+    const req = new NextRequest(`${BASE}/api/orders/${aliceOrder.id}/files`, {
+      method: "POST",
+      body: new FormData(),
+      headers: { cookie: alice.cookie },
+    });
     const res = await postFile(req, { params: Promise.resolve({ id: aliceOrder.id }) });
     expect(res.status).toBe(422);
-    expect(((await res.json()) as { error: { fields: Record<string, string> } }).error.fields.file).toBeTruthy();
+    expect(
+      ((await res.json()) as { error: { fields: Record<string, string> } }).error.fields.file,
+    ).toBeTruthy();
   });
 
   dbTest("another customer can neither list, download nor attach to the order: 404", async () => {
@@ -151,7 +225,9 @@ describe("order files", () => {
     expect((await download(data[0]!.id, counterStaff.cookie)).status).toBe(200);
     expect((await download(data[0]!.id, floor.cookie)).status).toBe(200);
     expect((await list(aliceOrder.id, floor.cookie)).status).toBe(200);
-    expect((await upload(aliceOrder.id, counterStaff.cookie, new Blob([PNG]), "counter.png")).status).toBe(201);
+    expect((await upload(aliceOrder.id, counterStaff.cookie, new Blob([PNG]), "counter.png")).status).toBe(
+      201,
+    );
     expect((await upload(aliceOrder.id, floor.cookie, new Blob([PNG]), "floor.png")).status).toBe(403);
   });
 

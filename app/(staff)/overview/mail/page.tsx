@@ -18,39 +18,57 @@ export default async function SentMailPage() {
   const messages = await listOutbox();
   return (
     <>
-      <PageHeader title="Sent mail" description="Every e-mail the app has written, newest first. Shown in demo mode only." />
+      <PageHeader
+        title="Sent mail"
+        description="Every e-mail the app has written, newest first. Shown in demo mode only."
+      />
       {messages.length === 0 ? (
         <EmptyState icon={Mail} title="No e-mail yet">
           Placing an order or taking a payment sends the customer an e-mail; it will appear here.
         </EmptyState>
       ) : (
-        <div className="card overflow-x-auto">
+        <div className="overflow-x-auto card">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">E-mails written by the app, newest first</caption>
-            <thead className="border-b border-line bg-paper-sunk text-xs uppercase tracking-wide text-ink-muted">
+            <thead className="border-b border-line bg-paper-sunk text-xs tracking-wide text-ink-muted uppercase">
               <tr>
-                <th scope="col" className="px-4 py-2">Created</th>
-                <th scope="col" className="px-4 py-2">To</th>
-                <th scope="col" className="px-4 py-2">Subject</th>
-                <th scope="col" className="px-4 py-2">Template</th>
-                <th scope="col" className="px-4 py-2">Status</th>
-                <th scope="col" className="px-4 py-2">Last error</th>
+                <th scope="col" className="px-4 py-2">
+                  Created
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  To
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Subject
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Template
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Status
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Last error
+                </th>
               </tr>
             </thead>
             <tbody className="divide-y divide-line">
               {messages.map((m) => (
                 <tr key={m.id} className="align-top">
-                  <td className="whitespace-nowrap px-4 py-2">
+                  <td className="px-4 py-2 whitespace-nowrap">
                     <time dateTime={m.createdAt}>{m.createdAt.slice(0, 16).replace("T", " ")} UTC</time>
                   </td>
                   <td className="px-4 py-2">{m.to}</td>
                   <td className="px-4 py-2">
-                    <Link href={`/overview/mail/${m.id}`} className="font-medium underline underline-offset-2">
+                    <Link
+                      href={`/overview/mail/${m.id}`}
+                      className="font-medium underline underline-offset-2"
+                    >
                       {m.subject}
                     </Link>
                   </td>
                   <td className="px-4 py-2 font-mono text-xs">{m.template}</td>
-                  <td className="whitespace-nowrap px-4 py-2">
+                  <td className="px-4 py-2 whitespace-nowrap">
                     <MailStatus status={m.status} attempts={m.attempts} />
                   </td>
                   <td className="max-w-xs px-4 py-2 text-xs text-ink-muted">{m.lastError ?? "—"}</td>

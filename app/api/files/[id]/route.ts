@@ -13,7 +13,9 @@ export const GET = route<{ id: string }>({ permission: null }, async ({ params, 
   if (!upload) throw new AppError("not_found", "No such file.");
   // Not allowed to see the order → the same 404 as a file that does not exist.
   await loadOrderForUser(em, user!, upload.order.id).catch((error: unknown) => {
-    throw error instanceof AppError && error.code === "not_found" ? new AppError("not_found", "No such file.") : error;
+    throw error instanceof AppError && error.code === "not_found"
+      ? new AppError("not_found", "No such file.")
+      : error;
   });
   const stored = await getStorage().get(upload.storageKey);
   if (!stored) {

@@ -44,12 +44,17 @@ export default async function SentMailMessagePage({ params }: { params: Promise<
           </Alert>
         </div>
       )}
-      <div className="card overflow-hidden">
-        <iframe title={`E-mail: ${message.subject}`} srcDoc={message.html} sandbox="" className="h-[70vh] w-full bg-white" />
+      <div className="overflow-hidden card">
+        <iframe
+          title={`E-mail: ${message.subject}`}
+          srcDoc={message.html}
+          sandbox=""
+          className="h-[70vh] w-full bg-white"
+        />
       </div>
-      <details className="card mt-4 p-4">
+      <details className="mt-4 card p-4">
         <summary className="cursor-pointer font-medium">Plain-text version</summary>
-        <pre className="mt-3 whitespace-pre-wrap font-mono text-xs">{message.text}</pre>
+        <pre className="mt-3 font-mono text-xs whitespace-pre-wrap">{message.text}</pre>
       </details>
     </>
   );

@@ -2,7 +2,13 @@ import { getEm } from "@/lib/db/orm";
 import { AppError } from "@/lib/http/errors";
 import { json, route } from "@/lib/http/route";
 import { loadOrderForUser } from "@/lib/orders/access";
-import { listOrderUploads, mayAttachFiles, MAX_UPLOAD_BYTES, saveOrderUpload, UPLOAD_SIZE_MESSAGE } from "@/lib/uploads";
+import {
+  listOrderUploads,
+  mayAttachFiles,
+  MAX_UPLOAD_BYTES,
+  saveOrderUpload,
+  UPLOAD_SIZE_MESSAGE,
+} from "@/lib/uploads";
 
 /** Room for the multipart envelope around a file of the largest allowed size. */
 const MAX_BODY_BYTES = MAX_UPLOAD_BYTES + 64 * 1024;
@@ -22,19 +28,27 @@ export const POST = route<{ id: string }>({ permission: null }, async ({ req, pa
   }
   const em = await getEm();
   const order = await loadOrderForUser(em, user!, params.id);
-  if (!mayAttachFiles(user!)) throw new AppError("forbidden", "Only the customer and the counter can attach files to an order.");
+  if (!mayAttachFiles(user!))
+    throw new AppError("forbidden", "Only the customer and the counter can attach files to an order.");
 
   let form: FormData;
   try {
     form = await req.formData();
   } catch {
-    throw new AppError("invalid", "Send the file as multipart/form-data in the field “file”.", { file: "Choose a file to attach." });
+    throw new AppError("invalid", "Send the file as multipart/form-data in the field “file”.", {
+      file: "Choose a file to attach.",
+    });
   }
   const file = form.get("file");
-  if (!(file instanceof Blob)) throw new AppError("invalid", "Choose a file to attach.", { file: "Choose a file to attach." });
-  if (file.size > MAX_UPLOAD_BYTES) throw new AppError("too_large", UPLOAD_SIZE_MESSAGE, { file: UPLOAD_SIZE_MESSAGE });
+  if (!(file instanceof Blob))
+    throw new AppError("invalid", "Choose a file to attach.", { file: "Choose a file to attach." });
+  if (file.size > MAX_UPLOAD_BYTES)
+    throw new AppError("too_large", UPLOAD_SIZE_MESSAGE, { file: UPLOAD_SIZE_MESSAGE });
 
   const filename = file instanceof File ? file.name : "file";
-  const upload = await saveOrderUpload(em, user!, order, { filename, bytes: new Uint8Array(await file.arrayBuffer()) });
+  const upload = await saveOrderUpload(em, user!, order, {
+    filename,
+    bytes: new Uint8Array(await file.arrayBuffer()),
+  });
   return json({ data: upload }, 201);
 });
