@@ -7,6 +7,7 @@ import { ShaftSummary, Totals } from "./shaft-summary";
 import { PayButton } from "./pay-button";
 import { PaymentConfirming } from "./payment-confirming";
 
+const PAYMENT_STATUS: Record<string, string> = { open: "not paid yet", succeeded: "paid", failed: "failed", expired: "expired" };
 const KIND_LABEL = { deposit: "deposit", balance: "balance", full: "payment" } as const;
 
 /** The body of an order page, for the customer and (with `staffActions`) for the shop. */
@@ -90,7 +91,7 @@ export function OrderPage({
                 {order.payments.map((p) => (
                   <li key={p.id} className="flex justify-between gap-2 py-1.5">
                     <span className="capitalize">{p.kind}</span>
-                    <span className="text-ink-muted">{p.status === "succeeded" ? `paid ${p.paidAt?.slice(0, 10)}` : p.status}</span>
+                    <span className="text-ink-muted">{PAYMENT_STATUS[p.status] ?? p.status}{p.paidAt ? ` ${p.paidAt.slice(0, 10)}` : ""}</span>
                     <span className="tabular-nums">{formatMoney(p.amountCents, order.currency)}</span>
                   </li>
                 ))}

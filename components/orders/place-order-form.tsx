@@ -3,23 +3,21 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { placeOrderBodySchema, type PlaceOrderBody } from "@/lib/orders/schemas";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney, type OrderQuote } from "@/lib/pricing/price-book";
+import { Totals } from "./shaft-summary";
 import { Alert } from "@/components/ui/alert";
 
 interface Props {
   designIds: string[];
   customerId?: string;
-  currency: string;
-  dueNow: { pickup: number; ship: number };
-  total: { pickup: number; ship: number };
-  shippingCents: number;
+  quotes: { pickup: OrderQuote; ship: OrderQuote };
   depositPercent: number;
   /** Counter: give the checkout link to the customer instead of going there. */
   counter?: boolean;
 }
 
 /** Pickup or shipping, then place the order and go to the payment page. */
-export function PlaceOrderForm({ designIds, customerId, currency, dueNow, total, shippingCents, depositPercent, counter }: Props) {
+export function PlaceOrderForm({ designIds, customerId, quotes, depositPercent, counter }: Props) {
   const [error, setError] = useState<string | null>(null);
   const {
     register,
@@ -43,9 +41,11 @@ export function PlaceOrderForm({ designIds, customerId, currency, dueNow, total,
     window.location.assign(counter ? `/desk/orders/${body.id}?placed=1` : body.checkoutUrl);
   });
 
-  const due = dueNow[fulfilment];
+  const quote = quotes[fulfilment];
+  const { currency } = quote;
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-5">
+      <Totals currency={currency} subtotalCents={quote.subtotalCents} shippingCents={quote.shippingCents} taxCents={quote.taxCents} totalCents={quote.totalCents} />
       {error && <Alert tone="error">{error}</Alert>}
       <fieldset>
         <legend className="field-label">Pickup or shipping</legend>
@@ -61,7 +61,7 @@ export function PlaceOrderForm({ designIds, customerId, currency, dueNow, total,
             <input type="radio" value="ship" {...register("fulfilment")} className="mt-1" />
             <span>
               <span className="block font-medium">Ship it</span>
-              <span className="text-sm text-ink-muted">{formatMoney(shippingCents, currency)} per shaft, plus tax</span>
+              <span className="text-sm text-ink-muted">{formatMoney(quotes.ship.shippingCents / Math.max(1, designIds.length), currency)} per shaft, plus tax</span>
             </span>
           </label>
         </div>
@@ -95,7 +95,7 @@ export function PlaceOrderForm({ designIds, customerId, currency, dueNow, total,
       </div>
       <div className="rounded-md bg-paper-sunk p-3 text-sm">
         <p>
-          Total <strong className="tabular-nums">{formatMoney(total[fulfilment], currency)}</strong>.{" "}
+          Total <strong className="tabular-nums">{formatMoney(quote.totalCents, currency)}</strong>.{" "}
           {depositPercent >= 100
             ? "The shop asks for the full amount now."
             : `The shop asks for a ${depositPercent} % deposit now; the balance is due when the shaft passes final inspection.`}
@@ -105,8 +105,8 @@ export function PlaceOrderForm({ designIds, customerId, currency, dueNow, total,
         {isSubmitting
           ? "Placing the order…"
           : counter
-            ? `Place order (${formatMoney(due, currency)} due now)`
-            : `Place order and pay ${formatMoney(due, currency)}`}
+            ? `Place order (${formatMoney(quote.dueNowCents, currency)} due now)`
+            : `Place order and pay ${formatMoney(quote.dueNowCents, currency)}`}
       </button>
     </form>
   );

@@ -6,7 +6,7 @@ import { quoteForDesigns } from "@/lib/orders/quote-page";
 import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
 import { Alert } from "@/components/ui/alert";
-import { ShaftSummary, Totals } from "@/components/orders/shaft-summary";
+import { ShaftSummary } from "@/components/orders/shaft-summary";
 import { PlaceOrderForm } from "@/components/orders/place-order-form";
 
 export const metadata: Metadata = { title: "Your quote" };
@@ -41,13 +41,6 @@ export default async function QuotePage({ searchParams }: PageProps<"/orders/new
           <h2 id="order-box" className="text-lg font-semibold">
             Order
           </h2>
-          <Totals
-            currency={data.pickup.currency}
-            subtotalCents={data.pickup.subtotalCents}
-            shippingCents={data.pickup.shippingCents}
-            taxCents={data.pickup.taxCents}
-            totalCents={data.pickup.totalCents}
-          />
           {data.failing.length > 0 ? (
             <Alert tone="error" title="This shaft cannot be ordered yet">
               {data.failing.join(", ")} fails a check. Fix it in the shaft builder, or phone the shop.
@@ -55,10 +48,7 @@ export default async function QuotePage({ searchParams }: PageProps<"/orders/new
           ) : (
             <PlaceOrderForm
               designIds={data.designIds}
-              currency={data.pickup.currency}
-              dueNow={{ pickup: data.pickup.dueNowCents, ship: data.ship.dueNowCents }}
-              total={{ pickup: data.pickup.totalCents, ship: data.ship.totalCents }}
-              shippingCents={data.ship.shippingCents}
+              quotes={{ pickup: data.pickup, ship: data.ship }}
               depositPercent={data.depositPercent}
             />
           )}
