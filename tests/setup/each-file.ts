@@ -7,6 +7,10 @@ process.env.BETTER_AUTH_SECRET ??= "test-secret-that-is-long-enough-for-hmac-000
 process.env.BETTER_AUTH_URL ??= "http://127.0.0.1:3999";
 
 afterAll(async () => {
+  // Stop a pg-boss this file started (flushQueuedEmails/enqueueDelivery start one), then close the pools.
+  const b = globalThis as { yokelineBoss?: Promise<{ stop(options?: object): Promise<void> }> };
+  if (b.yokelineBoss) await (await b.yokelineBoss.catch(() => null))?.stop({ graceful: false });
+  b.yokelineBoss = undefined;
   // Close this file's pools so the worker can exit.
   const g = globalThis as { yokelineOrm?: Promise<{ close(force?: boolean): Promise<void> }> };
   if (g.yokelineOrm) await (await g.yokelineOrm).close(true);
