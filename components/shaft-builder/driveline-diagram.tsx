@@ -46,7 +46,7 @@ export function DrivelineView(props: ViewProps) {
   const minX = Math.min(...pts.map((q) => q.x)) - pad;
   const maxX = Math.max(...pts.map((q) => q.x)) + pad;
   const minY = Math.min(...pts.map((q) => q.y)) - pad * 1.3;
-  const maxY = Math.max(...pts.map((q) => q.y)) + pad * 1.1;
+  const maxY = Math.max(...pts.map((q) => q.y)) + pad * 1.5;
   const w = maxX - minX;
   const h = maxY - minY;
   const fs = w / 40;

@@ -75,7 +75,7 @@ export function defaultBuilderForm(): BuilderForm {
     speed: { topSpeedKmh: 200, tireDiameterMm: 711, axleRatio: 3.73, maxShaftRpm: null },
     tubeMode: "auto",
     tube: { materialId: "steel-dom", odMm: 88.9, wallMm: 2.108 },
-    extras: { balanceGradeMmS: 16 },
+    extras: {},
   };
 }
 

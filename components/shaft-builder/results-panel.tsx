@@ -238,7 +238,7 @@ export function ResultsPanel({ report, design, stale, system, catalogue, tubeCho
             Tubes that pass, lightest first
           </h3>
           <div className="mt-2 overflow-x-auto">
-            <table className="w-full min-w-[36rem] text-left text-sm" data-testid="tube-ranking">
+            <table className="w-full min-w-[36rem] text-left text-sm print:min-w-0" data-testid="tube-ranking">
               <thead className="text-ink-muted">
                 <tr>
                   <th scope="col" className="py-1 pr-2 font-medium">Tube</th>

@@ -1,6 +1,6 @@
 "use client";
 
-import { useDeferredValue, useMemo, useRef, useState } from "react";
+import { useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
 import { useRouter } from "next/navigation";
 import { Controller, useForm, useWatch, type Path, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -93,6 +93,8 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
   const [upload, setUpload] = useState<UploadState>({ kind: "idle" });
   const [quoting, setQuoting] = useState(false);
   const fileInput = useRef<HTMLInputElement>(null);
+  const [ready, setReady] = useState(false);
+  useEffect(() => setReady(true), []);
 
   const resolver = useMemo(() => zodResolver(builderFormSchema(catalogue)) as unknown as Resolver<BuilderForm>, [catalogue]);
   const { control, register, handleSubmit, reset, setValue, getValues, trigger, formState } = useForm<BuilderForm>({
@@ -341,7 +343,7 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
     );
 
   return (
-    <div className="space-y-6 pb-16 lg:pb-0 print:pb-0">
+    <div className="space-y-6 pb-16 lg:pb-0 print:pb-0" data-builder-ready={ready || undefined}>
       <div className="no-print card flex flex-wrap items-center justify-between gap-4 p-4">
         <fieldset>
           <legend className="field-label">Units</legend>
@@ -397,7 +399,7 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
       )}
       {upload.kind === "ok" && <Alert tone="success" title={`Loaded ${upload.fileName}.`}>Check the values, then save the draft.</Alert>}
 
-      <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)] lg:items-start">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)] lg:items-start print:block">
         <form className="no-print min-w-0 space-y-5" noValidate aria-label="Shaft design" onSubmit={handleSubmit(() => void save())}>
           <section className="card space-y-4 p-4" aria-labelledby="s-app">
             <h2 id="s-app" className="text-lg font-semibold">

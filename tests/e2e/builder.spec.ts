@@ -18,6 +18,7 @@ test.describe("shaft builder", () => {
     await signIn(page, ACCOUNTS.customer);
     await page.goto("/build");
     await expect(page.getByRole("heading", { name: "Design a shaft" })).toBeVisible();
+    await page.locator("[data-builder-ready]").waitFor();
   });
 
   test("designs in inches, switches units, fails and fixes critical speed, saves, reloads, downloads and re-uploads", async ({ page }) => {
@@ -55,6 +56,7 @@ test.describe("shaft builder", () => {
     await expect(page.getByTestId("save-status")).toContainText("Saved ✓");
     await expect(page).toHaveURL(/\/build\?draft=[0-9a-f-]{36}/);
     await page.reload();
+    await page.locator("[data-builder-ready]").waitFor();
     await expect(length(page)).toHaveValue("60.00");
     await expect(page.getByLabel("I want a specific tube")).toBeChecked();
     await expect(criticalSpeed(page)).toHaveAttribute("data-status", /^(pass|warn)$/);
