@@ -19,7 +19,10 @@ interface ViewProps {
 }
 
 type Pt = { x: number; y: number };
-const at = (p: Pt, deg: number, len: number): Pt => ({ x: p.x + len * Math.cos(deg * RAD), y: p.y + len * Math.sin(deg * RAD) });
+const at = (p: Pt, deg: number, len: number): Pt => ({
+  x: p.x + len * Math.cos(deg * RAD),
+  y: p.y + len * Math.sin(deg * RAD),
+});
 const fmtDeg = (d: number) => `${d.toFixed(1)}°`;
 
 function arcPath(c: Pt, r: number, fromDeg: number, toDeg: number): string {
@@ -58,29 +61,106 @@ export function DrivelineView(props: ViewProps) {
     `(positive ${sideWord} going rearward); front working angle ${props.frontWorkingDeg.toFixed(2)}°, rear working angle ${props.rearWorkingDeg.toFixed(2)}° (true 3-D angles).`;
 
   return (
-    <svg viewBox={`${minX} ${minY} ${w} ${h}`} role="img" aria-label={summary} className="h-auto w-full text-ink" data-testid={`diagram-${view}`}>
+    <svg
+      viewBox={`${minX} ${minY} ${w} ${h}`}
+      role="img"
+      aria-label={summary}
+      className="h-auto w-full text-ink"
+      data-testid={`diagram-${view}`}
+    >
       <title>{summary}</title>
       {/* level references through each joint */}
       {[j1, j2].map((j, i) => (
-        <line key={i} x1={j.x - L * 0.25} y1={j.y} x2={j.x + L * 0.25} y2={j.y} stroke="currentColor" strokeOpacity={0.35} strokeDasharray="6 5" vectorEffect="non-scaling-stroke" />
+        <line
+          key={i}
+          x1={j.x - L * 0.25}
+          y1={j.y}
+          x2={j.x + L * 0.25}
+          y2={j.y}
+          stroke="currentColor"
+          strokeOpacity={0.35}
+          strokeDasharray="6 5"
+          vectorEffect="non-scaling-stroke"
+        />
       ))}
       {/* transmission body and output */}
       <g transform={`rotate(${t} ${tStart.x} ${tStart.y})`}>
-        <rect x={tStart.x - stub * 0.2} y={tStart.y - L * 0.05} width={stub * 0.8} height={L * 0.1} rx={L * 0.012} className="fill-steel-100 stroke-steel-700" vectorEffect="non-scaling-stroke" strokeWidth={1.5} />
+        <rect
+          x={tStart.x - stub * 0.2}
+          y={tStart.y - L * 0.05}
+          width={stub * 0.8}
+          height={L * 0.1}
+          rx={L * 0.012}
+          className="fill-steel-100 stroke-steel-700"
+          vectorEffect="non-scaling-stroke"
+          strokeWidth={1.5}
+        />
       </g>
-      <line x1={tStart.x} y1={tStart.y} x2={j1.x} y2={j1.y} className="stroke-steel-700" strokeWidth={3} vectorEffect="non-scaling-stroke" />
+      <line
+        x1={tStart.x}
+        y1={tStart.y}
+        x2={j1.x}
+        y2={j1.y}
+        className="stroke-steel-700"
+        strokeWidth={3}
+        vectorEffect="non-scaling-stroke"
+      />
       {/* shaft */}
-      <line x1={j1.x} y1={j1.y} x2={j2.x} y2={j2.y} className="stroke-steel-500" strokeWidth={9} strokeLinecap="round" vectorEffect="non-scaling-stroke" />
+      <line
+        x1={j1.x}
+        y1={j1.y}
+        x2={j2.x}
+        y2={j2.y}
+        className="stroke-steel-500"
+        strokeWidth={9}
+        strokeLinecap="round"
+        vectorEffect="non-scaling-stroke"
+      />
       {/* pinion and axle */}
-      <line x1={j2.x} y1={j2.y} x2={pEnd.x} y2={pEnd.y} className="stroke-steel-700" strokeWidth={3} vectorEffect="non-scaling-stroke" />
-      <circle cx={pEnd.x} cy={pEnd.y} r={L * 0.06} className="fill-steel-100 stroke-steel-700" strokeWidth={1.5} vectorEffect="non-scaling-stroke" />
+      <line
+        x1={j2.x}
+        y1={j2.y}
+        x2={pEnd.x}
+        y2={pEnd.y}
+        className="stroke-steel-700"
+        strokeWidth={3}
+        vectorEffect="non-scaling-stroke"
+      />
+      <circle
+        cx={pEnd.x}
+        cy={pEnd.y}
+        r={L * 0.06}
+        className="fill-steel-100 stroke-steel-700"
+        strokeWidth={1.5}
+        vectorEffect="non-scaling-stroke"
+      />
       {/* joints */}
       {[j1, j2].map((j, i) => (
-        <circle key={i} cx={j.x} cy={j.y} r={L * 0.014} className="fill-paper-raised stroke-ink" strokeWidth={2} vectorEffect="non-scaling-stroke" />
+        <circle
+          key={i}
+          cx={j.x}
+          cy={j.y}
+          r={L * 0.014}
+          className="fill-paper-raised stroke-ink"
+          strokeWidth={2}
+          vectorEffect="non-scaling-stroke"
+        />
       ))}
       {/* working angles */}
-      <path d={arcPath(j1, r, t, d)} className="stroke-brass-600" fill="none" strokeWidth={2} vectorEffect="non-scaling-stroke" />
-      <path d={arcPath(j2, r, d, p)} className="stroke-brass-600" fill="none" strokeWidth={2} vectorEffect="non-scaling-stroke" />
+      <path
+        d={arcPath(j1, r, t, d)}
+        className="stroke-brass-600"
+        fill="none"
+        strokeWidth={2}
+        vectorEffect="non-scaling-stroke"
+      />
+      <path
+        d={arcPath(j2, r, d, p)}
+        className="stroke-brass-600"
+        fill="none"
+        strokeWidth={2}
+        vectorEffect="non-scaling-stroke"
+      />
       <g fontSize={fs} fill="currentColor">
         <text x={j1.x + r * 0.3} y={j1.y - fs * 1.6} className="fill-brass-700" fontWeight={600}>
           front joint {props.frontWorkingDeg.toFixed(2)}°

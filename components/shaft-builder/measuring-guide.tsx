@@ -1,9 +1,26 @@
 import { Ruler } from "lucide-react";
 
 /** What each measurement is and how to take it, with a small line drawing of our own. */
-export type GuideTopic = "length" | "transmission" | "driveshaft" | "pinion" | "offset" | "torque" | "speed" | "tire" | "rpm" | "ends" | "tube";
+export type GuideTopic =
+  | "length"
+  | "transmission"
+  | "driveshaft"
+  | "pinion"
+  | "offset"
+  | "torque"
+  | "speed"
+  | "tire"
+  | "rpm"
+  | "ends"
+  | "tube";
 
-const STROKE = { stroke: "currentColor", strokeWidth: 2, fill: "none", strokeLinecap: "round", strokeLinejoin: "round" } as const;
+const STROKE = {
+  stroke: "currentColor",
+  strokeWidth: 2,
+  fill: "none",
+  strokeLinecap: "round",
+  strokeLinejoin: "round",
+} as const;
 
 /** A vehicle-on-its-wheels outline shared by the drawings (front to the left). */
 function Ground() {
@@ -71,7 +88,16 @@ const DRAWINGS: Record<GuideTopic, React.ReactNode> = {
       <rect x="14" y="30" width="50" height="30" rx="3" {...STROKE} />
       <line x1="64" y1="45" x2="196" y2="62" {...STROKE} strokeWidth={6} className="text-steel-500" />
       <rect x="196" y="50" width="30" height="24" rx="3" {...STROKE} />
-      <line x1="4" y1="45" x2="236" y2="45" {...STROKE} strokeWidth={1} strokeDasharray="4 3" className="text-brass-600" />
+      <line
+        x1="4"
+        y1="45"
+        x2="236"
+        y2="45"
+        {...STROKE}
+        strokeWidth={1}
+        strokeDasharray="4 3"
+        className="text-brass-600"
+      />
       <text x="8" y="18" fontSize="11" fill="currentColor">
         top view, front at left
       </text>
@@ -126,7 +152,16 @@ const DRAWINGS: Record<GuideTopic, React.ReactNode> = {
       <line x1="90" y1="48" x2="220" y2="48" {...STROKE} strokeWidth={10} className="text-steel-500" />
       <path d="M90 36 L70 36 L62 28 M90 60 L70 60 L62 68" {...STROKE} />
       <circle cx="56" cy="48" r="9" {...STROKE} />
-      <line x1="56" y1="16" x2="56" y2="80" {...STROKE} strokeWidth={1} strokeDasharray="3 3" className="text-brass-600" />
+      <line
+        x1="56"
+        y1="16"
+        x2="56"
+        y2="80"
+        {...STROKE}
+        strokeWidth={1}
+        strokeDasharray="3 3"
+        className="text-brass-600"
+      />
     </>
   ),
   tube: (
@@ -155,10 +190,13 @@ const TEXT: Record<GuideTopic, { title: string; alt: string; body: React.ReactNo
     body: (
       <>
         <p>
-          Park on level ground with the vehicle&rsquo;s full weight on its wheels (ride height, not on a lift with the axle hanging).
-          Measure from the centre of the front joint&rsquo;s cross to the centre of the rear joint&rsquo;s cross.
+          Park on level ground with the vehicle&rsquo;s full weight on its wheels (ride height, not on a lift
+          with the axle hanging). Measure from the centre of the front joint&rsquo;s cross to the centre of
+          the rear joint&rsquo;s cross.
         </p>
-        <p>With a slip yoke, push the shaft in fully, then pull it out about 3/4 in (19 mm) before measuring.</p>
+        <p>
+          With a slip yoke, push the shaft in fully, then pull it out about 3/4 in (19 mm) before measuring.
+        </p>
       </>
     ),
   },
@@ -167,8 +205,9 @@ const TEXT: Record<GuideTopic, { title: string; alt: string; body: React.ReactNo
     alt: "An angle finder resting on the transmission output yoke, compared with a level line.",
     body: (
       <p>
-        Rest an angle finder on a machined face of the transmission output yoke (or the slip yoke), square to the shaft, and read the
-        side-view slope. Enter it as positive when the transmission tail points down toward the rear.
+        Rest an angle finder on a machined face of the transmission output yoke (or the slip yoke), square to
+        the shaft, and read the side-view slope. Enter it as positive when the transmission tail points down
+        toward the rear.
       </p>
     ),
   },
@@ -177,8 +216,9 @@ const TEXT: Record<GuideTopic, { title: string; alt: string; body: React.ReactNo
     alt: "An angle finder laid along the driveshaft tube, compared with a level line.",
     body: (
       <p>
-        Lay the angle finder along the tube, away from weld beads and balance weights. Positive when the shaft runs downhill toward the
-        rear. If there is no shaft yet, measure the height of each joint centre and the length between them.
+        Lay the angle finder along the tube, away from weld beads and balance weights. Positive when the shaft
+        runs downhill toward the rear. If there is no shaft yet, measure the height of each joint centre and
+        the length between them.
       </p>
     ),
   },
@@ -187,8 +227,8 @@ const TEXT: Record<GuideTopic, { title: string; alt: string; body: React.ReactNo
     alt: "An angle finder on the pinion yoke of the axle, compared with a level line.",
     body: (
       <p>
-        Rotate the pinion yoke so its ears point straight up and read the angle across the machined yoke face (or the flange face).
-        Positive when the pinion nose points up toward the front.
+        Rotate the pinion yoke so its ears point straight up and read the angle across the machined yoke face
+        (or the flange face). Positive when the pinion nose points up toward the front.
       </p>
     ),
   },
@@ -197,9 +237,9 @@ const TEXT: Record<GuideTopic, { title: string; alt: string; body: React.ReactNo
     alt: "Top view: the driveshaft runs at an angle from the transmission to an axle whose pinion sits to one side.",
     body: (
       <p>
-        Only for drivelines that run sideways as well, seen from above (offset transfer cases, offset pinions). Measure each
-        axis against the vehicle&rsquo;s centre line with a plumb line and a straight edge; positive when it turns to the right
-        going rearward.
+        Only for drivelines that run sideways as well, seen from above (offset transfer cases, offset
+        pinions). Measure each axis against the vehicle&rsquo;s centre line with a plumb line and a straight
+        edge; positive when it turns to the right going rearward.
       </p>
     ),
   },
@@ -208,35 +248,60 @@ const TEXT: Record<GuideTopic, { title: string; alt: string; body: React.ReactNo
     alt: "Engine, gearbox and the shaft leaving it, with an arrow for twist.",
     body: (
       <p>
-        The engine&rsquo;s peak torque as it is now (with any tuning), the first-gear ratio, the transfer-case low ratio (1 without one),
-        and the converter stall ratio (about 2 for an automatic, 1 for a manual). The shaft must carry their product.
+        The engine&rsquo;s peak torque as it is now (with any tuning), the first-gear ratio, the transfer-case
+        low ratio (1 without one), and the converter stall ratio (about 2 for an automatic, 1 for a manual).
+        The shaft must carry their product.
       </p>
     ),
   },
   speed: {
     title: "Top speed",
     alt: "A vehicle with an arrow for its speed.",
-    body: <p>The highest speed the vehicle will really be driven at. The axle ratio is on the axle tag or in the build sheet (e.g. 3.73).</p>,
+    body: (
+      <p>
+        The highest speed the vehicle will really be driven at. The axle ratio is on the axle tag or in the
+        build sheet (e.g. 3.73).
+      </p>
+    ),
   },
   tire: {
     title: "Tire diameter",
     alt: "A tire with its overall height measured from the ground to the top of the tread.",
-    body: <p>Measure the loaded tire from the ground to the top of the tread, or use the size from the sidewall.</p>,
+    body: (
+      <p>
+        Measure the loaded tire from the ground to the top of the tread, or use the size from the sidewall.
+      </p>
+    ),
   },
   rpm: {
     title: "Maximum shaft speed",
     alt: "A spinning shaft.",
-    body: <p>The highest speed the driveshaft will turn, in revolutions per minute (for machines, or when the gearing is unusual).</p>,
+    body: (
+      <p>
+        The highest speed the driveshaft will turn, in revolutions per minute (for machines, or when the
+        gearing is unusual).
+      </p>
+    ),
   },
   ends: {
     title: "End fittings",
     alt: "A weld yoke on the end of a tube, with the joint centre marked.",
-    body: <p>The yoke or flange welded to each end. If you are not sure, let the shop choose one that fits the tube and the torque.</p>,
+    body: (
+      <p>
+        The yoke or flange welded to each end. If you are not sure, let the shop choose one that fits the tube
+        and the torque.
+      </p>
+    ),
   },
   tube: {
     title: "Tube",
     alt: "A tube section showing the outside diameter and the wall.",
-    body: <p>Yokeline picks the lightest tube from the shop&rsquo;s stock that passes every check. Choose one yourself only if you must.</p>,
+    body: (
+      <p>
+        Yokeline picks the lightest tube from the shop&rsquo;s stock that passes every check. Choose one
+        yourself only if you must.
+      </p>
+    ),
   },
 };
 
@@ -250,7 +315,12 @@ export function MeasuringGuide({ topic }: { topic: GuideTopic }) {
         How to measure: {t.title.toLowerCase()}
       </summary>
       <div className="grid gap-3 px-3 pb-3 sm:grid-cols-[10rem_1fr]">
-        <svg viewBox="0 0 240 96" role="img" aria-label={t.alt} className="w-full max-w-[12rem] text-ink-soft">
+        <svg
+          viewBox="0 0 240 96"
+          role="img"
+          aria-label={t.alt}
+          className="w-full max-w-[12rem] text-ink-soft"
+        >
           <title>{t.alt}</title>
           {DRAWINGS[topic]}
         </svg>

@@ -81,7 +81,10 @@ export function defaultBuilderForm(): BuilderForm {
 
 const DESIGN_KEYS = new Set(["name", "lengthMm", "tube", "geometry", "torque", "speed", "ends"]);
 
-const angles = (a: AnglesModel, offset: boolean) => ({ verticalDeg: a.verticalDeg, horizontalDeg: offset ? a.horizontalDeg : 0 });
+const angles = (a: AnglesModel, offset: boolean) => ({
+  verticalDeg: a.verticalDeg,
+  horizontalDeg: offset ? a.horizontalDeg : 0,
+});
 
 /**
  * The design file (engineering contract, SI) the form describes. Not validated here: run
@@ -98,7 +101,9 @@ export function formToDesignFile(form: BuilderForm): Record<string, unknown> {
   const design: Record<string, unknown> = {
     name: form.name.trim() || null,
     lengthMm: form.lengthMm,
-    ...(form.tubeMode === "chosen" ? { tube: { materialId: form.tube.materialId, odMm: form.tube.odMm, wallMm: form.tube.wallMm } } : {}),
+    ...(form.tubeMode === "chosen"
+      ? { tube: { materialId: form.tube.materialId, odMm: form.tube.odMm, wallMm: form.tube.wallMm } }
+      : {}),
     geometry: {
       ...extraGeometry,
       transmission: angles(form.geometry.transmission, form.offset),
@@ -113,7 +118,13 @@ export function formToDesignFile(form: BuilderForm): Record<string, unknown> {
     },
     speed:
       form.speedMode === "rpm"
-        ? { ...extraSpeed, maxShaftRpm: form.speed.maxShaftRpm, topSpeedKmh: null, axleRatio: null, tireDiameterMm: null }
+        ? {
+            ...extraSpeed,
+            maxShaftRpm: form.speed.maxShaftRpm,
+            topSpeedKmh: null,
+            axleRatio: null,
+            tireDiameterMm: null,
+          }
         : {
             ...extraSpeed,
             maxShaftRpm: null,
@@ -135,7 +146,10 @@ const DEG = 180 / Math.PI;
  * joint centres gets the angles those centres imply; every field the form does not edit is
  * kept in `extras`.
  */
-export function designFileToForm(design: DesignFile, base: Pick<BuilderForm, "application"> = defaultBuilderForm()): BuilderForm {
+export function designFileToForm(
+  design: DesignFile,
+  base: Pick<BuilderForm, "application"> = defaultBuilderForm(),
+): BuilderForm {
   const g = design.geometry;
   let driveshaft = g.driveshaft;
   if (!driveshaft && g.frontJointCentreMm && g.rearJointCentreMm) {
@@ -151,7 +165,8 @@ export function designFileToForm(design: DesignFile, base: Pick<BuilderForm, "ap
   const { transmission: _t, driveshaft: _d, pinion: _p, ...geometryRest } = g;
   if (Object.values(geometryRest).some((v) => v != null)) extras.geometry = geometryRest;
   const s = design.speed;
-  if (s.maxEngineRpm != null || s.topGearRatio != null) extras.speed = { maxEngineRpm: s.maxEngineRpm ?? null, topGearRatio: s.topGearRatio ?? null };
+  if (s.maxEngineRpm != null || s.topGearRatio != null)
+    extras.speed = { maxEngineRpm: s.maxEngineRpm ?? null, topGearRatio: s.topGearRatio ?? null };
   const vehicle = s.topSpeedKmh != null && s.axleRatio != null && s.tireDiameterMm != null;
   const defaults = defaultBuilderForm();
   return {
@@ -218,7 +233,8 @@ export function builderFormSchema(catalogue: Catalogue) {
     .passthrough()
     .superRefine((value, ctx) => {
       const { issues } = validateBuilderForm(value as unknown as BuilderForm, catalogue);
-      for (const issue of issues) ctx.addIssue({ code: "custom", path: formPathOf(issue.path).split("."), message: issue.message });
+      for (const issue of issues)
+        ctx.addIssue({ code: "custom", path: formPathOf(issue.path).split("."), message: issue.message });
     });
 }
 

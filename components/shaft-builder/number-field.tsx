@@ -27,12 +27,30 @@ const plain = (v: SiNumber) => (v == null || Number.isNaN(v) ? "" : String(Numbe
  * A number input that shows the SI value in the chosen units, rounded for display, and
  * converts only what the user types (leaving, or switching units, never rewrites the value).
  */
-export function NumberField({ label, value, onChange, onBlur, quantity, system, unit, error, hint, name, children }: NumberFieldProps) {
+export function NumberField({
+  label,
+  value,
+  onChange,
+  onBlur,
+  quantity,
+  system,
+  unit,
+  error,
+  hint,
+  name,
+  children,
+}: NumberFieldProps) {
   const id = useId();
   const [text, setText] = useState<string | null>(null);
   const shown = text ?? (quantity ? formatInUnits(value, quantity, system) : plain(value));
   const unitText = quantity ? DISPLAY_UNITS[quantity][system].unit : unit;
-  const describedBy = [unitText ? `${id}-unit` : null, hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(" ");
+  const describedBy = [
+    unitText ? `${id}-unit` : null,
+    hint ? `${id}-hint` : null,
+    error ? `${id}-error` : null,
+  ]
+    .filter(Boolean)
+    .join(" ");
   return (
     <div>
       <label htmlFor={id} className="field-label">
@@ -61,7 +79,10 @@ export function NumberField({ label, value, onChange, onBlur, quantity, system, 
           }}
         />
         {unitText && (
-          <span id={`${id}-unit`} className="inline-flex min-w-12 items-center justify-center rounded-r-md border border-l-0 border-line-strong bg-paper-sunk px-2 text-sm text-ink-soft">
+          <span
+            id={`${id}-unit`}
+            className="inline-flex min-w-12 items-center justify-center rounded-r-md border border-l-0 border-line-strong bg-paper-sunk px-2 text-sm text-ink-soft"
+          >
             {unitText}
           </span>
         )}

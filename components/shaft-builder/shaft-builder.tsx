@@ -53,8 +53,12 @@ export interface ShaftBuilderProps {
   initialUnits?: UnitSystem;
 }
 
-type SaveState = { kind: "idle" } | { kind: "saving" } | { kind: "saved"; at: Date } | { kind: "error"; message: string };
-type UploadState = { kind: "idle" } | { kind: "ok"; fileName: string } | { kind: "error"; fileName: string; messages: string[] };
+type SaveState =
+  { kind: "idle" } | { kind: "saving" } | { kind: "saved"; at: Date } | { kind: "error"; message: string };
+type UploadState =
+  | { kind: "idle" }
+  | { kind: "ok"; fileName: string }
+  | { kind: "error"; fileName: string; messages: string[] };
 
 const USE_LABEL: Record<(typeof SHAFT_USES)[number], string> = {
   street: "Street",
@@ -66,16 +70,23 @@ const USE_LABEL: Record<(typeof SHAFT_USES)[number], string> = {
 
 const NAN = "\u0000NaN";
 /** A stable text key of the form values (NaN kept, so an unparseable entry stays invalid). */
-const keyOf = (v: unknown) => JSON.stringify(v, (_k, x) => (typeof x === "number" && Number.isNaN(x) ? NAN : x));
+const keyOf = (v: unknown) =>
+  JSON.stringify(v, (_k, x) => (typeof x === "number" && Number.isNaN(x) ? NAN : x));
 const fromKey = (key: string) => JSON.parse(key, (_k, x) => (x === NAN ? NaN : x)) as BuilderForm;
 
 const near = (a: number, b: number, tol = 0.01) => Math.abs(a - b) < tol;
-const nearest = (values: number[], to: SiNumber) => values.reduce((best, v) => (to != null && Math.abs(v - to) < Math.abs(best - to) ? v : best), values[0] ?? 0);
+const nearest = (values: number[], to: SiNumber) =>
+  values.reduce(
+    (best, v) => (to != null && Math.abs(v - to) < Math.abs(best - to) ? v : best),
+    values[0] ?? 0,
+  );
 
 function initialForm(draft: DraftView | null | undefined): BuilderForm {
   if (!draft) return defaultBuilderForm();
   const parsed = parseDesign(draft.design);
-  const form = parsed.ok ? designFileToForm(parsed.design, { application: draft.application }) : { ...defaultBuilderForm(), application: draft.application };
+  const form = parsed.ok
+    ? designFileToForm(parsed.design, { application: draft.application })
+    : { ...defaultBuilderForm(), application: draft.application };
   return { ...form, name: draft.name };
 }
 
@@ -84,7 +95,16 @@ function initialForm(draft: DraftView | null | undefined): BuilderForm {
  * core (in the browser, on every change), pictures, drafts, and design-file download/upload.
  * Used by the customer's /build page and by the counter for phone orders.
  */
-export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initialDrafts = [], quoteHref, customerId, draftHref = (id) => `?draft=${id}`, initialUnits = "imperial" }: ShaftBuilderProps) {
+export function ShaftBuilder({
+  catalogue,
+  settings,
+  initialDraft,
+  drafts: initialDrafts = [],
+  quoteHref,
+  customerId,
+  draftHref = (id) => `?draft=${id}`,
+  initialUnits = "imperial",
+}: ShaftBuilderProps) {
   const router = useRouter();
   const [system, setSystem] = useState<UnitSystem>(initialUnits);
   const [draftId, setDraftId] = useState<string | null>(initialDraft?.id ?? null);
@@ -96,12 +116,16 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
   const [ready, setReady] = useState(false);
   useEffect(() => setReady(true), []);
 
-  const resolver = useMemo(() => zodResolver(builderFormSchema(catalogue)) as unknown as Resolver<BuilderForm>, [catalogue]);
-  const { control, register, handleSubmit, reset, setValue, getValues, trigger, formState } = useForm<BuilderForm>({
-    defaultValues: initialForm(initialDraft),
-    resolver,
-    mode: "onTouched",
-  });
+  const resolver = useMemo(
+    () => zodResolver(builderFormSchema(catalogue)) as unknown as Resolver<BuilderForm>,
+    [catalogue],
+  );
+  const { control, register, handleSubmit, reset, setValue, getValues, trigger, formState } =
+    useForm<BuilderForm>({
+      defaultValues: initialForm(initialDraft),
+      resolver,
+      mode: "onTouched",
+    });
 
   // Live evaluation: the same core as the server, on every change (deferred while typing).
   const values = useWatch({ control }) as BuilderForm;
@@ -112,7 +136,15 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
   const evaluation = useMemo((): { design: DesignFile; report: EvaluationReport } | null => {
     if (!validation.design) return null;
     try {
-      return { design: validation.design, report: evaluateDesign(validation.design, { catalogue, settings, curves: { points: 181 }, alternatives: true }) };
+      return {
+        design: validation.design,
+        report: evaluateDesign(validation.design, {
+          catalogue,
+          settings,
+          curves: { points: 181 },
+          alternatives: true,
+        }),
+      };
     } catch (error) {
       if (error instanceof DesignInputError) return null;
       throw error;
@@ -126,7 +158,12 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
 
   const markChanged = () => saveState.kind === "saved" && setSaveState({ kind: "idle" });
 
-  const num = (name: Path<BuilderForm>, label: string, quantity: DisplayQuantity | null, opts: { unit?: string; hint?: string; guide?: GuideTopic; error?: string } = {}) => (
+  const num = (
+    name: Path<BuilderForm>,
+    label: string,
+    quantity: DisplayQuantity | null,
+    opts: { unit?: string; hint?: string; guide?: GuideTopic; error?: string } = {},
+  ) => (
     <Controller
       control={control}
       name={name}
@@ -167,27 +204,46 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
     }
     setSaveState({ kind: "saving" });
     try {
-      const body = { name: current.name, design: checked.design, application: current.application, ...(customerId ? { customerId } : {}) };
+      const body = {
+        name: current.name,
+        design: checked.design,
+        application: current.application,
+        ...(customerId ? { customerId } : {}),
+      };
       const res = await fetch(draftId ? `/api/designs/${draftId}` : "/api/designs", {
         method: draftId ? "PUT" : "POST",
         headers: { "content-type": "application/json" },
         body: JSON.stringify(body),
       });
-      const data = (await res.json().catch(() => null)) as (DraftView & { error?: { message: string } }) | null;
+      const data = (await res.json().catch(() => null)) as
+        (DraftView & { error?: { message: string } }) | null;
       if (!res.ok || !data?.id) {
-        setSaveState({ kind: "error", message: data?.error?.message ?? "The draft could not be saved. Try again." });
+        setSaveState({
+          kind: "error",
+          message: data?.error?.message ?? "The draft could not be saved. Try again.",
+        });
         return null;
       }
       setDraftId(data.id);
       setDrafts((list) => [
-        { id: data.id, name: data.name, lengthMm: data.design.lengthMm, use: data.application.use, customerId: data.customerId, updatedAt: data.updatedAt },
+        {
+          id: data.id,
+          name: data.name,
+          lengthMm: data.design.lengthMm,
+          use: data.application.use,
+          customerId: data.customerId,
+          updatedAt: data.updatedAt,
+        },
         ...list.filter((d) => d.id !== data.id),
       ]);
       window.history.replaceState(null, "", draftHref(data.id));
       setSaveState({ kind: "saved", at: new Date() });
       return data.id;
     } catch {
-      setSaveState({ kind: "error", message: "No connection to the shop. Your entries are still here; try again." });
+      setSaveState({
+        kind: "error",
+        message: "No connection to the shop. Your entries are still here; try again.",
+      });
       return null;
     }
   }
@@ -231,7 +287,11 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
     try {
       input = JSON.parse(await file.text());
     } catch {
-      setUpload({ kind: "error", fileName: file.name, messages: ["design: the file is not JSON (expected a Yokeline design file)"] });
+      setUpload({
+        kind: "error",
+        fileName: file.name,
+        messages: ["design: the file is not JSON (expected a Yokeline design file)"],
+      });
       return;
     }
     const parsed = parseDesign(input, { catalogue });
@@ -266,19 +326,32 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
   const materials = catalogue.materials.filter((m) => catalogue.tubes.some((t) => t.materialId === m.id));
   const ofMaterial = catalogue.tubes.filter((t) => t.materialId === values.tube?.materialId);
   const ods = [...new Set(ofMaterial.map((t) => t.odMm))].sort((a, b) => a - b);
-  const walls = ofMaterial.filter((t) => values.tube?.odMm != null && near(t.odMm, values.tube.odMm, 0.05)).map((t) => t.wallMm).sort((a, b) => a - b);
+  const walls = ofMaterial
+    .filter((t) => values.tube?.odMm != null && near(t.odMm, values.tube.odMm, 0.05))
+    .map((t) => t.wallMm)
+    .sort((a, b) => a - b);
   const currentOd = ods.find((o) => values.tube?.odMm != null && near(o, values.tube.odMm, 0.05));
   const currentWall = walls.find((w) => values.tube?.wallMm != null && near(w, values.tube.wallMm));
   const setMaterial = (materialId: string) => {
     const list = catalogue.tubes.filter((t) => t.materialId === materialId);
     const od = nearest([...new Set(list.map((t) => t.odMm))], getValues("tube.odMm"));
-    const wall = nearest(list.filter((t) => near(t.odMm, od, 0.05)).map((t) => t.wallMm), getValues("tube.wallMm"));
+    const wall = nearest(
+      list.filter((t) => near(t.odMm, od, 0.05)).map((t) => t.wallMm),
+      getValues("tube.wallMm"),
+    );
     setValue("tube", { materialId, odMm: od, wallMm: wall }, { shouldDirty: true });
     markChanged();
   };
   const setOd = (od: number) => {
-    const wall = nearest(ofMaterial.filter((t) => near(t.odMm, od, 0.05)).map((t) => t.wallMm), getValues("tube.wallMm"));
-    setValue("tube", { materialId: getValues("tube.materialId"), odMm: od, wallMm: wall }, { shouldDirty: true });
+    const wall = nearest(
+      ofMaterial.filter((t) => near(t.odMm, od, 0.05)).map((t) => t.wallMm),
+      getValues("tube.wallMm"),
+    );
+    setValue(
+      "tube",
+      { materialId: getValues("tube.materialId"), odMm: od, wallMm: wall },
+      { shouldDirty: true },
+    );
     markChanged();
   };
 
@@ -286,7 +359,10 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
     "lengthMm",
     "ends.front",
     "ends.rear",
-    ...["transmission", "driveshaft", "pinion"].flatMap((s) => [`geometry.${s}.verticalDeg`, `geometry.${s}.horizontalDeg`]),
+    ...["transmission", "driveshaft", "pinion"].flatMap((s) => [
+      `geometry.${s}.verticalDeg`,
+      `geometry.${s}.horizontalDeg`,
+    ]),
     "torque.engineTorqueNm",
     "torque.firstGearRatio",
     "torque.transferCaseLowRatio",
@@ -297,7 +373,9 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
     "speed.maxShaftRpm",
     ...(tubeMode === "chosen" ? ["tube.materialId", "tube.odMm", "tube.wallMm"] : []),
   ]);
-  const otherIssues = validation.issues.filter((i) => !shownPaths.has(i.path.startsWith("ends.") ? i.path.replace(/\.fittingId$/, "") : i.path));
+  const otherIssues = validation.issues.filter(
+    (i) => !shownPaths.has(i.path.startsWith("ends.") ? i.path.replace(/\.fittingId$/, "") : i.path),
+  );
 
   const endSelect = (end: "front" | "rear") => {
     const label = end === "front" ? "Front end fitting" : "Rear end fitting";
@@ -308,7 +386,13 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
         <label htmlFor={id} className="field-label">
           {label}
         </label>
-        <select id={id} className="field-input" aria-invalid={error ? true : undefined} aria-describedby={error ? `${id}-error` : undefined} {...register(`ends.${end}`, { onChange: markChanged })}>
+        <select
+          id={id}
+          className="field-input"
+          aria-invalid={error ? true : undefined}
+          aria-describedby={error ? `${id}-error` : undefined}
+          {...register(`ends.${end}`, { onChange: markChanged })}
+        >
           <option value="">Let the shop choose</option>
           {catalogue.endFittings.map((f) => (
             <option key={f.id} value={f.id}>
@@ -344,7 +428,7 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
 
   return (
     <div className="space-y-6 pb-16 lg:pb-0 print:pb-0" data-builder-ready={ready || undefined}>
-      <div className="no-print card flex flex-wrap items-center justify-between gap-4 p-4">
+      <div className="no-print flex flex-wrap items-center justify-between gap-4 card p-4">
         <fieldset>
           <legend className="field-label">Units</legend>
           <div className="flex flex-wrap gap-2" role="radiogroup" aria-label="Units">
@@ -358,14 +442,27 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
                 key={value}
                 className={`inline-flex cursor-pointer items-center gap-2 rounded-md border px-3 py-1.5 text-sm ${system === value ? "border-steel-700 bg-steel-700 text-white" : "border-line-strong bg-paper-raised"}`}
               >
-                <input type="radio" name="units" value={value} checked={system === value} onChange={() => setSystem(value)} className="size-4 accent-brass-500" />
+                <input
+                  type="radio"
+                  name="units"
+                  value={value}
+                  checked={system === value}
+                  onChange={() => setSystem(value)}
+                  className="size-4 accent-brass-500"
+                />
                 {label}
               </label>
             ))}
           </div>
         </fieldset>
         <div className="flex flex-wrap items-center gap-2">
-          <button type="button" className="btn-quiet" onClick={download} disabled={!validation.design} title={validation.design ? undefined : "Fix the highlighted fields first"}>
+          <button
+            type="button"
+            className="btn-quiet"
+            onClick={download}
+            disabled={!validation.design}
+            title={validation.design ? undefined : "Fix the highlighted fields first"}
+          >
             <Download className="size-4" aria-hidden="true" /> Download design file
           </button>
           <button type="button" className="btn-quiet" onClick={() => fileInput.current?.click()}>
@@ -397,11 +494,20 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
           </ul>
         </Alert>
       )}
-      {upload.kind === "ok" && <Alert tone="success" title={`Loaded ${upload.fileName}.`}>Check the values, then save the draft.</Alert>}
+      {upload.kind === "ok" && (
+        <Alert tone="success" title={`Loaded ${upload.fileName}.`}>
+          Check the values, then save the draft.
+        </Alert>
+      )}
 
       <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)] lg:items-start print:block">
-        <form className="no-print min-w-0 space-y-5" noValidate aria-label="Shaft design" onSubmit={handleSubmit(() => void save())}>
-          <section className="card space-y-4 p-4" aria-labelledby="s-app">
+        <form
+          className="no-print min-w-0 space-y-5"
+          noValidate
+          aria-label="Shaft design"
+          onSubmit={handleSubmit(() => void save())}
+        >
+          <section className="space-y-4 card p-4" aria-labelledby="s-app">
             <h2 id="s-app" className="text-lg font-semibold">
               1. What the shaft is for
             </h2>
@@ -409,14 +515,23 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
               <label htmlFor="design-name" className="field-label">
                 Design name
               </label>
-              <input id="design-name" className="field-input" aria-invalid={formState.errors.name ? true : undefined} {...register("name", { onChange: markChanged })} />
+              <input
+                id="design-name"
+                className="field-input"
+                aria-invalid={formState.errors.name ? true : undefined}
+                {...register("name", { onChange: markChanged })}
+              />
               {formState.errors.name && <p className="field-error">name: {formState.errors.name.message}</p>}
             </div>
             <div>
               <label htmlFor="app-use" className="field-label">
                 Use
               </label>
-              <select id="app-use" className="field-input" {...register("application.use", { onChange: markChanged })}>
+              <select
+                id="app-use"
+                className="field-input"
+                {...register("application.use", { onChange: markChanged })}
+              >
                 {SHAFT_USES.map((u) => (
                   <option key={u} value={u}>
                     {USE_LABEL[u]}
@@ -435,15 +550,20 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
                 placeholder="e.g. 1978 pickup, 4-speed automatic, rear shaft"
                 {...register("application.description", { onChange: markChanged })}
               />
-              {formState.errors.application?.description && <p className="field-error">{formState.errors.application.description.message}</p>}
+              {formState.errors.application?.description && (
+                <p className="field-error">{formState.errors.application.description.message}</p>
+              )}
             </div>
           </section>
 
-          <section className="card space-y-4 p-4" aria-labelledby="s-len">
+          <section className="space-y-4 card p-4" aria-labelledby="s-len">
             <h2 id="s-len" className="text-lg font-semibold">
               2. Length and ends
             </h2>
-            {num("lengthMm", "Installed length", "length", { hint: "Joint centre to joint centre, at ride height.", guide: "length" })}
+            {num("lengthMm", "Installed length", "length", {
+              hint: "Joint centre to joint centre, at ride height.",
+              guide: "length",
+            })}
             <div className="grid gap-4 sm:grid-cols-2">
               {endSelect("front")}
               {endSelect("rear")}
@@ -451,22 +571,39 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
             <MeasuringGuide topic="ends" />
           </section>
 
-          <section className="card space-y-4 p-4" aria-labelledby="s-ang">
+          <section className="space-y-4 card p-4" aria-labelledby="s-ang">
             <h2 id="s-ang" className="text-lg font-semibold">
               3. Angles, side view
             </h2>
-            <p className="text-sm text-ink-soft">Degrees, positive when the part points down toward the rear (the pinion: nose up toward the front).</p>
-            {num("geometry.transmission.verticalDeg", "Transmission angle", null, { unit: "°", guide: "transmission" })}
-            {num("geometry.driveshaft.verticalDeg", "Driveshaft angle", null, { unit: "°", guide: "driveshaft" })}
+            <p className="text-sm text-ink-soft">
+              Degrees, positive when the part points down toward the rear (the pinion: nose up toward the
+              front).
+            </p>
+            {num("geometry.transmission.verticalDeg", "Transmission angle", null, {
+              unit: "°",
+              guide: "transmission",
+            })}
+            {num("geometry.driveshaft.verticalDeg", "Driveshaft angle", null, {
+              unit: "°",
+              guide: "driveshaft",
+            })}
             {num("geometry.pinion.verticalDeg", "Pinion angle", null, { unit: "°", guide: "pinion" })}
             <label className="flex items-center gap-2 text-sm font-medium">
-              <input type="checkbox" className="size-4 accent-steel-700" {...register("offset", { onChange: markChanged })} />
+              <input
+                type="checkbox"
+                className="size-4 accent-steel-700"
+                {...register("offset", { onChange: markChanged })}
+              />
               My driveline is offset sideways
             </label>
             {offset && (
               <div className="space-y-4 border-l-2 border-brass-400 pl-3">
-                <p className="text-sm text-ink-soft">Top view, degrees, positive when the part turns to the right going rearward.</p>
-                {num("geometry.transmission.horizontalDeg", "Transmission angle, top view", null, { unit: "°" })}
+                <p className="text-sm text-ink-soft">
+                  Top view, degrees, positive when the part turns to the right going rearward.
+                </p>
+                {num("geometry.transmission.horizontalDeg", "Transmission angle, top view", null, {
+                  unit: "°",
+                })}
                 {num("geometry.driveshaft.horizontalDeg", "Driveshaft angle, top view", null, { unit: "°" })}
                 {num("geometry.pinion.horizontalDeg", "Pinion angle, top view", null, { unit: "°" })}
                 <MeasuringGuide topic="offset" />
@@ -474,36 +611,55 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
             )}
           </section>
 
-          <section className="card space-y-4 p-4" aria-labelledby="s-tq">
+          <section className="space-y-4 card p-4" aria-labelledby="s-tq">
             <h2 id="s-tq" className="text-lg font-semibold">
               4. Torque and gearing
             </h2>
             {num("torque.engineTorqueNm", "Engine peak torque", "torque")}
             <div className="grid gap-4 sm:grid-cols-3">
               {num("torque.firstGearRatio", "First gear ratio", null, { unit: ": 1" })}
-              {num("torque.transferCaseLowRatio", "Transfer-case low", null, { unit: ": 1", hint: "1 without one" })}
-              {num("torque.converterStallRatio", "Converter stall ratio", null, { unit: ": 1", hint: "1 for a manual" })}
+              {num("torque.transferCaseLowRatio", "Transfer-case low", null, {
+                unit: ": 1",
+                hint: "1 without one",
+              })}
+              {num("torque.converterStallRatio", "Converter stall ratio", null, {
+                unit: ": 1",
+                hint: "1 for a manual",
+              })}
             </div>
             {values.torque && validation.design && (
               <p className="text-sm text-ink-soft" data-testid="design-torque">
-                Torque at the shaft in first gear: <strong className="text-ink">{report ? withUnit(report.service.peakShaftTorqueNm, "torque", system, 0) : "—"}</strong>
+                Torque at the shaft in first gear:{" "}
+                <strong className="text-ink">
+                  {report ? withUnit(report.service.peakShaftTorqueNm, "torque", system, 0) : "—"}
+                </strong>
               </p>
             )}
             <MeasuringGuide topic="torque" />
           </section>
 
-          <section className="card space-y-4 p-4" aria-labelledby="s-sp">
+          <section className="space-y-4 card p-4" aria-labelledby="s-sp">
             <h2 id="s-sp" className="text-lg font-semibold">
               5. Shaft speed
             </h2>
             <fieldset className="space-y-1">
               <legend className="field-label">How fast does the shaft turn?</legend>
               <label className="flex items-center gap-2 text-sm">
-                <input type="radio" value="vehicle" className="size-4 accent-steel-700" {...register("speedMode", { onChange: markChanged })} />
+                <input
+                  type="radio"
+                  value="vehicle"
+                  className="size-4 accent-steel-700"
+                  {...register("speedMode", { onChange: markChanged })}
+                />
                 From top speed, tire size and axle ratio
               </label>
               <label className="flex items-center gap-2 text-sm">
-                <input type="radio" value="rpm" className="size-4 accent-steel-700" {...register("speedMode", { onChange: markChanged })} />
+                <input
+                  type="radio"
+                  value="rpm"
+                  className="size-4 accent-steel-700"
+                  {...register("speedMode", { onChange: markChanged })}
+                />
                 I know the maximum shaft rpm
               </label>
             </fieldset>
@@ -521,18 +677,28 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
             )}
           </section>
 
-          <section className="card space-y-4 p-4" aria-labelledby="s-tube">
+          <section className="space-y-4 card p-4" aria-labelledby="s-tube">
             <h2 id="s-tube" className="text-lg font-semibold">
               6. Tube
             </h2>
             <fieldset className="space-y-1">
               <legend className="sr-only">Tube</legend>
               <label className="flex items-center gap-2 text-sm">
-                <input type="radio" value="auto" className="size-4 accent-steel-700" {...register("tubeMode", { onChange: markChanged })} />
+                <input
+                  type="radio"
+                  value="auto"
+                  className="size-4 accent-steel-700"
+                  {...register("tubeMode", { onChange: markChanged })}
+                />
                 Let Yokeline pick (recommended)
               </label>
               <label className="flex items-center gap-2 text-sm">
-                <input type="radio" value="chosen" className="size-4 accent-steel-700" {...register("tubeMode", { onChange: markChanged })} />
+                <input
+                  type="radio"
+                  value="chosen"
+                  className="size-4 accent-steel-700"
+                  {...register("tubeMode", { onChange: markChanged })}
+                />
                 I want a specific tube
               </label>
             </fieldset>
@@ -542,8 +708,18 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
                   <label htmlFor="tube-material" className="field-label">
                     Tube material
                   </label>
-                  <select id="tube-material" className="field-input" value={values.tube?.materialId ?? ""} onChange={(e) => setMaterial(e.target.value)} aria-invalid={errs["tube.materialId"] ? true : undefined}>
-                    {!materials.some((m) => m.id === values.tube?.materialId) && <option value={values.tube?.materialId ?? ""}>{values.tube?.materialId} (from file)</option>}
+                  <select
+                    id="tube-material"
+                    className="field-input"
+                    value={values.tube?.materialId ?? ""}
+                    onChange={(e) => setMaterial(e.target.value)}
+                    aria-invalid={errs["tube.materialId"] ? true : undefined}
+                  >
+                    {!materials.some((m) => m.id === values.tube?.materialId) && (
+                      <option value={values.tube?.materialId ?? ""}>
+                        {values.tube?.materialId} (from file)
+                      </option>
+                    )}
                     {materials.map((m) => (
                       <option key={m.id} value={m.id}>
                         {m.name.split(" (")[0]}
@@ -556,8 +732,18 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
                   <label htmlFor="tube-od" className="field-label">
                     Outside diameter
                   </label>
-                  <select id="tube-od" className="field-input" value={currentOd != null ? String(currentOd) : "custom"} onChange={(e) => setOd(Number(e.target.value))}>
-                    {currentOd == null && <option value="custom">{values.tube?.odMm != null ? withUnit(values.tube.odMm, "diameter", system) : "—"} (from file)</option>}
+                  <select
+                    id="tube-od"
+                    className="field-input"
+                    value={currentOd != null ? String(currentOd) : "custom"}
+                    onChange={(e) => setOd(Number(e.target.value))}
+                  >
+                    {currentOd == null && (
+                      <option value="custom">
+                        {values.tube?.odMm != null ? withUnit(values.tube.odMm, "diameter", system) : "—"}{" "}
+                        (from file)
+                      </option>
+                    )}
                     {ods.map((od) => (
                       <option key={od} value={String(od)}>
                         {withUnit(od, "diameter", system)}
@@ -579,7 +765,12 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
                       markChanged();
                     }}
                   >
-                    {currentWall == null && <option value="custom">{values.tube?.wallMm != null ? withUnit(values.tube.wallMm, "diameter", system) : "—"} (from file)</option>}
+                    {currentWall == null && (
+                      <option value="custom">
+                        {values.tube?.wallMm != null ? withUnit(values.tube.wallMm, "diameter", system) : "—"}{" "}
+                        (from file)
+                      </option>
+                    )}
                     {walls.map((w) => (
                       <option key={w} value={String(w)}>
                         {withUnit(w, "diameter", system)}
@@ -603,7 +794,7 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
             </Alert>
           )}
 
-          <div className="card flex flex-wrap items-center gap-3 p-4">
+          <div className="flex flex-wrap items-center gap-3 card p-4">
             <button type="submit" className="btn-primary" disabled={saveState.kind === "saving"}>
               <Save className="size-4" aria-hidden="true" /> {draftId ? "Save draft" : "Save as draft"}
             </button>
@@ -611,7 +802,7 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
               {statusLine}
             </span>
             {draftId && (
-              <button type="button" className="btn-quiet ml-auto" onClick={newDesign}>
+              <button type="button" className="ml-auto btn-quiet" onClick={newDesign}>
                 Start a new design
               </button>
             )}
@@ -622,19 +813,31 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
               <FolderOpen className="size-5 text-steel-500" aria-hidden="true" /> Saved designs
             </h2>
             {drafts.length === 0 ? (
-              <p className="mt-2 text-sm text-ink-muted">No saved designs yet. Save this one to come back to it later.</p>
+              <p className="mt-2 text-sm text-ink-muted">
+                No saved designs yet. Save this one to come back to it later.
+              </p>
             ) : (
               <ul className="mt-2 divide-y divide-line" data-testid="draft-list">
                 {drafts.map((d) => (
                   <li key={d.id} className="flex flex-wrap items-center justify-between gap-2 py-2 text-sm">
                     <span>
                       <span className="font-medium">{d.name}</span>
-                      {d.id === draftId && <span className="ml-2 rounded bg-steel-50 px-1.5 py-0.5 text-xs text-steel-700">open</span>}
+                      {d.id === draftId && (
+                        <span className="ml-2 rounded bg-steel-50 px-1.5 py-0.5 text-xs text-steel-700">
+                          open
+                        </span>
+                      )}
                       <span className="block text-xs text-ink-muted">
-                        {d.lengthMm != null ? withUnit(d.lengthMm, "length", system) : ""} · {USE_LABEL[d.use]} · saved {new Date(d.updatedAt).toLocaleString()}
+                        {d.lengthMm != null ? withUnit(d.lengthMm, "length", system) : ""} ·{" "}
+                        {USE_LABEL[d.use]} · saved {new Date(d.updatedAt).toLocaleString()}
                       </span>
                     </span>
-                    <button type="button" className="btn-quiet px-3 py-1 text-xs" onClick={() => void loadDraft(d.id)} aria-label={`Open ${d.name}`}>
+                    <button
+                      type="button"
+                      className="btn-quiet px-3 py-1 text-xs"
+                      onClick={() => void loadDraft(d.id)}
+                      aria-label={`Open ${d.name}`}
+                    >
                       Open
                     </button>
                   </li>
@@ -659,8 +862,14 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
               tubeChosen={values.tubeMode === "chosen"}
               onUseTube={useTube}
               footer={
-                <div className="no-print card flex flex-wrap items-center gap-3 p-4">
-                  <button type="button" className="btn-accent" onClick={() => void getQuote()} disabled={quoteBlocked !== null || quoting} aria-describedby={quoteBlocked ? "quote-reason" : undefined}>
+                <div className="no-print flex flex-wrap items-center gap-3 card p-4">
+                  <button
+                    type="button"
+                    className="btn-accent"
+                    onClick={() => void getQuote()}
+                    disabled={quoteBlocked !== null || quoting}
+                    aria-describedby={quoteBlocked ? "quote-reason" : undefined}
+                  >
                     <Send className="size-4" aria-hidden="true" /> {quoting ? "Saving…" : "Get a quote"}
                   </button>
                   {quoteBlocked ? (
@@ -668,7 +877,9 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
                       {quoteBlocked}
                     </p>
                   ) : (
-                    <p className="text-sm text-ink-soft">Saves the draft and takes you to the price and delivery date.</p>
+                    <p className="text-sm text-ink-soft">
+                      Saves the draft and takes you to the price and delivery date.
+                    </p>
                   )}
                 </div>
               }
@@ -684,7 +895,7 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
       {report && (
         <a
           href="#results"
-          className="no-print fixed inset-x-3 bottom-3 z-30 flex items-center justify-between rounded-card border border-line bg-paper-raised px-4 py-2 text-sm shadow-card no-underline lg:hidden"
+          className="no-print fixed inset-x-3 bottom-3 z-30 flex items-center justify-between rounded-card border border-line bg-paper-raised px-4 py-2 text-sm no-underline shadow-card lg:hidden"
         >
           <span className="text-ink">
             {stale ? "Last valid: " : "Result: "}
@@ -698,17 +909,37 @@ export function ShaftBuilder({ catalogue, settings, initialDraft, drafts: initia
 }
 
 /** On paper only: the inputs the results were computed from. */
-function PrintedInputs({ form, system, catalogue }: { form: BuilderForm; system: UnitSystem; catalogue: Catalogue }) {
+function PrintedInputs({
+  form,
+  system,
+  catalogue,
+}: {
+  form: BuilderForm;
+  system: UnitSystem;
+  catalogue: Catalogue;
+}) {
   const g = form.geometry;
-  const n = (v: SiNumber, q: DisplayQuantity) => (v == null || Number.isNaN(v) ? "—" : withUnit(v, q, system));
+  const n = (v: SiNumber, q: DisplayQuantity) =>
+    v == null || Number.isNaN(v) ? "—" : withUnit(v, q, system);
   const d = (v: SiNumber) => (v == null || Number.isNaN(v) ? "—" : `${formatNumber(v, 1)}°`);
   const rows: [string, string][] = [
     ["Design", form.name],
-    ["Use", `${USE_LABEL[form.application.use]}${form.application.description ? ` — ${form.application.description}` : ""}`],
+    [
+      "Use",
+      `${USE_LABEL[form.application.use]}${form.application.description ? ` — ${form.application.description}` : ""}`,
+    ],
     ["Installed length", n(form.lengthMm, "length")],
-    ["Angles (side view)", `transmission ${d(g.transmission.verticalDeg)}, driveshaft ${d(g.driveshaft.verticalDeg)}, pinion ${d(g.pinion.verticalDeg)}`],
+    [
+      "Angles (side view)",
+      `transmission ${d(g.transmission.verticalDeg)}, driveshaft ${d(g.driveshaft.verticalDeg)}, pinion ${d(g.pinion.verticalDeg)}`,
+    ],
     ...(form.offset
-      ? ([["Angles (top view)", `transmission ${d(g.transmission.horizontalDeg)}, driveshaft ${d(g.driveshaft.horizontalDeg)}, pinion ${d(g.pinion.horizontalDeg)}`]] as [string, string][])
+      ? ([
+          [
+            "Angles (top view)",
+            `transmission ${d(g.transmission.horizontalDeg)}, driveshaft ${d(g.driveshaft.horizontalDeg)}, pinion ${d(g.pinion.horizontalDeg)}`,
+          ],
+        ] as [string, string][])
       : []),
     ["Engine torque", n(form.torque.engineTorqueNm, "torque")],
     [
@@ -717,7 +948,18 @@ function PrintedInputs({ form, system, catalogue }: { form: BuilderForm; system:
         ? `${form.speed.maxShaftRpm ?? "—"} rpm`
         : `${n(form.speed.topSpeedKmh, "speed")}, tire ${n(form.speed.tireDiameterMm, "length")}, axle ${form.speed.axleRatio ?? "—"}`,
     ],
-    ["Tube", form.tubeMode === "auto" ? "picked by Yokeline" : form.tube.odMm != null && form.tube.wallMm != null ? tubeLabel(catalogue, { materialId: form.tube.materialId, odMm: form.tube.odMm, wallMm: form.tube.wallMm }, system) : "—"],
+    [
+      "Tube",
+      form.tubeMode === "auto"
+        ? "picked by Yokeline"
+        : form.tube.odMm != null && form.tube.wallMm != null
+          ? tubeLabel(
+              catalogue,
+              { materialId: form.tube.materialId, odMm: form.tube.odMm, wallMm: form.tube.wallMm },
+              system,
+            )
+          : "—",
+    ],
   ];
   return (
     <dl className="hidden grid-cols-[10rem_1fr] gap-x-3 gap-y-1 text-sm print:grid">

@@ -102,9 +102,16 @@ async function loadDraft(em: EntityManager, user: CurrentUser, id: string): Prom
 }
 
 /** The customer a new draft belongs to: the caller's own, or (staff) the one named. */
-async function customerFor(em: EntityManager, user: CurrentUser, customerId: string | undefined): Promise<Customer> {
+async function customerFor(
+  em: EntityManager,
+  user: CurrentUser,
+  customerId: string | undefined,
+): Promise<Customer> {
   if (scopeOf(user) === "staff") {
-    if (!customerId) throw new AppError("invalid", "customerId: choose the customer this design is for.", { customerId: "Required." });
+    if (!customerId)
+      throw new AppError("invalid", "customerId: choose the customer this design is for.", {
+        customerId: "Required.",
+      });
     const customer = await em.findOne(Customer, { id: customerId });
     if (!customer) throw new AppError("not_found", "No such customer.");
     return customer;
@@ -113,10 +120,18 @@ async function customerFor(em: EntityManager, user: CurrentUser, customerId: str
 }
 
 /** The user's drafts, newest first (staff: every draft, or one customer's). */
-export async function listDrafts(user: CurrentUser, filter: { customerId?: string } = {}): Promise<DraftSummary[]> {
+export async function listDrafts(
+  user: CurrentUser,
+  filter: { customerId?: string } = {},
+): Promise<DraftSummary[]> {
   const scope = scopeOf(user);
   const em = await getEm();
-  const where = scope === "staff" ? (filter.customerId ? { customer: filter.customerId } : {}) : { customer: { user: user.id } };
+  const where =
+    scope === "staff"
+      ? filter.customerId
+        ? { customer: filter.customerId }
+        : {}
+      : { customer: { user: user.id } };
   const rows = await em.find(Design, where, { orderBy: { updatedAt: "desc" }, limit: 200 });
   return rows.map(toSummary);
 }
@@ -157,7 +172,8 @@ export async function updateDraft(user: CurrentUser, id: string, body: SaveDesig
   draft.name = body.name;
   draft.design = design as unknown as Record<string, unknown>;
   draft.application = body.application;
-  if (body.customerId && scopeOf(user) === "staff") draft.customer = await customerFor(em, user, body.customerId);
+  if (body.customerId && scopeOf(user) === "staff")
+    draft.customer = await customerFor(em, user, body.customerId);
   draft.updatedAt = new Date();
   await em.flush();
   return toView(draft);

@@ -12,7 +12,10 @@ export type ShaftUse = (typeof SHAFT_USES)[number];
 
 /** What the shaft goes in and how it is used (shared by the builder form and the API). */
 export const designApplicationSchema = z.object({
-  description: z.string({ error: "must be text" }).trim().max(2000, { error: "must be at most 2000 characters" }),
+  description: z
+    .string({ error: "must be text" })
+    .trim()
+    .max(2000, { error: "must be at most 2000 characters" }),
   use: z.enum(SHAFT_USES, { error: "must be street, towing, off-road, race or industrial" }),
 });
 export type DesignApplication = z.infer<typeof designApplicationSchema>;

@@ -63,15 +63,18 @@ describe("form ↔ design file", () => {
     expect(v.design?.tube).toBeUndefined();
   });
 
-  test.each(["street-truck", "compound-offset", "long-van-critical-speed-fail"])("%s: design file → form → design file loses nothing", (name) => {
-    const design = example(name);
-    const form = designFileToForm(design);
-    const again = parseDesign(formToDesignFile(form));
-    expect(again.ok).toBe(true);
-    if (!again.ok) return;
-    // Same JSON once nulls are dropped (how a download writes it).
-    expect(JSON.parse(designFileJson(again.design))).toEqual(JSON.parse(designFileJson(design)));
-  });
+  test.each(["street-truck", "compound-offset", "long-van-critical-speed-fail"])(
+    "%s: design file → form → design file loses nothing",
+    (name) => {
+      const design = example(name);
+      const form = designFileToForm(design);
+      const again = parseDesign(formToDesignFile(form));
+      expect(again.ok).toBe(true);
+      if (!again.ok) return;
+      // Same JSON once nulls are dropped (how a download writes it).
+      expect(JSON.parse(designFileJson(again.design))).toEqual(JSON.parse(designFileJson(design)));
+    },
+  );
 
   test("form → design file → form", () => {
     const form: BuilderForm = {
@@ -109,13 +112,16 @@ describe("form ↔ design file", () => {
     const v = validateBuilderForm(form, defaultCatalogue);
     expect(v.design).toBeNull();
     expect(v.fieldErrors.lengthMm).toBe("lengthMm: must be a positive number");
-    expect(v.fieldErrors["geometry.pinion.verticalDeg"]).toMatch(/^geometry\.pinion\.verticalDeg: must be an angle/);
+    expect(v.fieldErrors["geometry.pinion.verticalDeg"]).toMatch(
+      /^geometry\.pinion\.verticalDeg: must be an angle/,
+    );
   });
 
   test("an unknown end fitting is reported beside the fitting select", () => {
     const form = defaultBuilderForm();
     form.ends.front = "NOPE";
-    expect(validateBuilderForm(form, defaultCatalogue).fieldErrors["ends.front"]).toMatch(/^ends\.front\.fittingId: must be an end fitting/);
+    expect(validateBuilderForm(form, defaultCatalogue).fieldErrors["ends.front"]).toMatch(
+      /^ends\.front\.fittingId: must be an end fitting/,
+    );
   });
 });
-

@@ -12,7 +12,12 @@ import { dbTest } from "../setup/db";
 const PASSWORD = "a-long-password-1";
 const street = JSON.parse(readFileSync("examples/street-truck.json", "utf8"));
 const body = (over: Record<string, unknown> = {}) =>
-  JSON.stringify({ name: "Street truck rear", design: street, application: { description: "1979 pickup", use: "street" }, ...over });
+  JSON.stringify({
+    name: "Street truck rear",
+    design: street,
+    application: { description: "1979 pickup", use: "street" },
+    ...over,
+  });
 
 let ip = 10;
 async function signIn(email: string): Promise<string> {
@@ -39,7 +44,8 @@ function req(method: string, path: string, cookie: string | null, payload?: stri
   return new NextRequest(`http://127.0.0.1${path}`, { method, headers, body: payload });
 }
 const ctx = (id = "") => ({ params: Promise.resolve({ id }) });
-const create = (cookie: string | null, payload = body()) => createRoute(req("POST", "/api/designs", cookie, payload), ctx());
+const create = (cookie: string | null, payload = body()) =>
+  createRoute(req("POST", "/api/designs", cookie, payload), ctx());
 const getOne = (cookie: string, id: string) => getRoute(req("GET", `/api/designs/${id}`, cookie), ctx(id));
 const list = (cookie: string, query = "") => listRoute(req("GET", `/api/designs${query}`, cookie), ctx());
 
@@ -57,11 +63,29 @@ describe("/api/designs — saved drafts", () => {
 
     expect((await (await getOne(cookie, draft.id)).json()).design).toEqual(draft.design);
 
-    const put = await putRoute(req("PUT", `/api/designs/${draft.id}`, cookie, body({ name: "Renamed", design: { ...street, lengthMm: 1400 }, application: { description: "", use: "towing" } })), ctx(draft.id));
+    const put = await putRoute(
+      req(
+        "PUT",
+        `/api/designs/${draft.id}`,
+        cookie,
+        body({
+          name: "Renamed",
+          design: { ...street, lengthMm: 1400 },
+          application: { description: "", use: "towing" },
+        }),
+      ),
+      ctx(draft.id),
+    );
     expect(put.status).toBe(200);
-    expect(await put.json()).toMatchObject({ name: "Renamed", design: { lengthMm: 1400 }, application: { use: "towing" } });
+    expect(await put.json()).toMatchObject({
+      name: "Renamed",
+      design: { lengthMm: 1400 },
+      application: { use: "towing" },
+    });
 
-    expect((await deleteRoute(req("DELETE", `/api/designs/${draft.id}`, cookie), ctx(draft.id))).status).toBe(204);
+    expect((await deleteRoute(req("DELETE", `/api/designs/${draft.id}`, cookie), ctx(draft.id))).status).toBe(
+      204,
+    );
     expect((await getOne(cookie, draft.id)).status).toBe(404);
   });
 
@@ -70,18 +94,42 @@ describe("/api/designs — saved drafts", () => {
     const bob = await customer();
     const draft = await (await create(alice)).json();
     expect((await getOne(bob, draft.id)).status).toBe(404);
-    expect((await putRoute(req("PUT", `/api/designs/${draft.id}`, bob, body()), ctx(draft.id))).status).toBe(404);
-    expect((await deleteRoute(req("DELETE", `/api/designs/${draft.id}`, bob), ctx(draft.id))).status).toBe(404);
+    expect((await putRoute(req("PUT", `/api/designs/${draft.id}`, bob, body()), ctx(draft.id))).status).toBe(
+      404,
+    );
+    expect((await deleteRoute(req("DELETE", `/api/designs/${draft.id}`, bob), ctx(draft.id))).status).toBe(
+      404,
+    );
     expect((await (await list(bob)).json()).drafts).toEqual([]);
     expect((await getOne(alice, draft.id)).status).toBe(200);
     expect((await getOne(alice, "not-a-uuid")).status).toBe(404);
   });
 
   dbTest.each([
-    ["a bad length", { design: { ...street, lengthMm: -5 } }, "design.lengthMm", "lengthMm: must be a positive number"],
-    ["an unknown fitting", { design: { ...street, ends: { front: { fittingId: "NOPE" } } } }, "design.ends.front.fittingId", "must be an end fitting in the catalogue"],
-    ["no speed", { design: { ...street, speed: {} } }, "design.speed.maxShaftRpm", "must be a positive number"],
-    ["an unknown use", { application: { description: "", use: "space" } }, "application.use", "must be street"],
+    [
+      "a bad length",
+      { design: { ...street, lengthMm: -5 } },
+      "design.lengthMm",
+      "lengthMm: must be a positive number",
+    ],
+    [
+      "an unknown fitting",
+      { design: { ...street, ends: { front: { fittingId: "NOPE" } } } },
+      "design.ends.front.fittingId",
+      "must be an end fitting in the catalogue",
+    ],
+    [
+      "no speed",
+      { design: { ...street, speed: {} } },
+      "design.speed.maxShaftRpm",
+      "must be a positive number",
+    ],
+    [
+      "an unknown use",
+      { application: { description: "", use: "space" } },
+      "application.use",
+      "must be street",
+    ],
     ["an empty name", { name: "  " }, "name", "must not be empty"],
   ])("422 naming the field for %s", async (_what, over, field, message) => {
     const cookie = await customer();
@@ -103,7 +151,11 @@ describe("/api/designs — saved drafts", () => {
     const counter = await staff("counter");
     expect((await create(counter)).status).toBe(422); // which customer?
     const em = await getEm();
-    const phone = em.create(Customer, { name: "Phone Customer", email: uniqueEmail("phone"), createdAt: new Date() });
+    const phone = em.create(Customer, {
+      name: "Phone Customer",
+      email: uniqueEmail("phone"),
+      createdAt: new Date(),
+    });
     await em.persistAndFlush(phone);
     const res = await create(counter, body({ customerId: phone.id }));
     expect(res.status).toBe(201);

@@ -21,7 +21,9 @@ test.describe("shaft builder", () => {
     await page.locator("[data-builder-ready]").waitFor();
   });
 
-  test("designs in inches, switches units, fails and fixes critical speed, saves, reloads, downloads and re-uploads", async ({ page }) => {
+  test("designs in inches, switches units, fails and fixes critical speed, saves, reloads, downloads and re-uploads", async ({
+    page,
+  }) => {
     await expect(inches(page)).toBeChecked();
     await page.getByLabel("Design name").fill(`E2E shaft ${Date.now()}`);
 
@@ -62,7 +64,10 @@ test.describe("shaft builder", () => {
     await expect(criticalSpeed(page)).toHaveAttribute("data-status", /^(pass|warn)$/);
 
     // Download the design file: SI, the contract's fields.
-    const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Download design file" }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent("download"),
+      page.getByRole("button", { name: "Download design file" }).click(),
+    ]);
     const file = await download.path();
     const design = JSON.parse(readFileSync(file, "utf8"));
     expect(design.lengthMm).toBeCloseTo(1524, 6);

@@ -9,7 +9,11 @@ import { CustomerBuilder } from "./_components/customer-builder";
 
 export const metadata: Metadata = { title: "Design a shaft" };
 
-export default async function BuildPage({ searchParams }: { searchParams: Promise<{ draft?: string | string[] }> }) {
+export default async function BuildPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ draft?: string | string[] }>;
+}) {
   const user = await requirePermission("orders.own", "/build");
   const { draft: draftParam } = await searchParams;
   const draftId = typeof draftParam === "string" ? draftParam : undefined;

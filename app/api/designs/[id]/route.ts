@@ -5,7 +5,9 @@ import { json, parseJson, route } from "@/lib/http/route";
 type Params = { id: string };
 
 // GET /api/designs/[id] — one of my drafts (404 when it is not mine)
-export const GET = route<Params>({ permission: null }, async ({ params, user }) => json(await getDraft(user!, params.id)));
+export const GET = route<Params>({ permission: null }, async ({ params, user }) =>
+  json(await getDraft(user!, params.id)),
+);
 
 // PUT /api/designs/[id] — replace a draft's name, design and application
 export const PUT = route<Params>({ permission: null }, async ({ req, params, user }) => {
