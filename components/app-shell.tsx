@@ -1,14 +1,15 @@
 import Link from "next/link";
 import { Menu } from "lucide-react";
 import type { CurrentUser } from "@/lib/auth/guard";
-import { NAVIGATION, ROLE_LABEL } from "@/lib/navigation";
+import { navigationFor, ROLE_LABEL } from "@/lib/navigation";
+import { isDemo } from "@/lib/shop/shop";
 import { BrandMark } from "./brand-mark";
 import { NavLinks } from "./nav-links";
 import { SignOutButton } from "./sign-out-button";
 
 /** The frame of every signed-in screen: brand, the role's navigation, who is signed in. */
 export function AppShell({ user, shopName, children }: { user: CurrentUser; shopName: string; children: React.ReactNode }) {
-  const items = NAVIGATION[user.role];
+  const items = navigationFor(user.role, isDemo());
   return (
     <div className="flex min-h-dvh flex-col">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-white focus:px-3 focus:py-2">

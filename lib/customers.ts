@@ -1,5 +1,7 @@
 import { Customer, User } from "@/entities";
 import { getEm } from "@/lib/db/orm";
+import { recordAudit } from "@/lib/audit";
+import { AppError } from "@/lib/http/errors";
 
 /**
  * Gives a newly signed-up customer their customer record: the one the counter already keeps
@@ -42,4 +44,26 @@ export async function listCustomers(): Promise<CustomerRow[]> {
     company: c.company ?? null,
     hasAccount: c.user != null,
   }));
+}
+
+/** A customer the counter enters for a phone order (no sign-in of their own yet). */
+export async function createPhoneCustomer(
+  input: { name: string; email: string; phone?: string; company?: string; addressLines?: string },
+  actorId: string,
+): Promise<CustomerRow> {
+  const em = await getEm();
+  const email = input.email.toLowerCase();
+  if (await em.findOne(Customer, { email })) {
+    throw new AppError("conflict", "A customer with that e-mail already exists; pick them from the list.", { email: "Already a customer." });
+  }
+  const customer = em.create(Customer, {
+    name: input.name,
+    email,
+    phone: input.phone || null,
+    company: input.company || null,
+    addressLines: input.addressLines || null,
+  });
+  await recordAudit({ actorId, action: "customer.create", subjectType: "customer", subjectId: customer.id, details: { email } }, em);
+  await em.flush();
+  return { id: customer.id, name: customer.name, email, phone: customer.phone ?? null, company: customer.company ?? null, hasAccount: false };
 }

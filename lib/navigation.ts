@@ -35,3 +35,9 @@ export const ROLE_LABEL: Record<Role, string> = {
   floor: "Floor",
   owner: "Owner",
 };
+
+/** The links a role sees; the demo shop's owner also gets the page of sent e-mails. */
+export function navigationFor(role: Role, demo: boolean): NavItem[] {
+  const items = NAVIGATION[role];
+  return demo && role === "owner" ? [...items, { href: "/overview/mail", label: "Sent mail" }] : items;
+}

@@ -2,7 +2,7 @@ import { expect, test } from "@playwright/test";
 import { ACCOUNTS, signIn } from "./fixtures";
 
 const HOMES = [
-  { role: "owner", path: "/overview", heading: "Overview", nav: ["Overview", "Order desk", "Floor", "Catalogue & prices", "Staff"] },
+  { role: "owner", path: "/overview", heading: "Overview", nav: ["Overview", "Order desk", "Floor", "Catalogue & prices", "Staff", "Sent mail"] },
   { role: "counter", path: "/desk", heading: "Order desk", nav: ["Order desk", "New phone order", "Customers"] },
   { role: "floor", path: "/floor", heading: "Scan station", nav: ["Scan station", "Work queue"] },
   { role: "customer", path: "/orders", heading: "My orders", nav: ["My orders", "Design a shaft"] },

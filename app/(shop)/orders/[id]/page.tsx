@@ -7,6 +7,7 @@ import { orderView, populateOrder } from "@/lib/orders/queries";
 import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
 import { OrderPage } from "@/components/orders/order-page";
+import { OrderFilesSection } from "@/components/orders/order-files-section";
 
 export const metadata: Metadata = { title: "Order" };
 
@@ -23,7 +24,7 @@ export default async function CustomerOrderPage({ params, searchParams }: PagePr
   return (
     <>
       <PageHeader title={`Order ${order.number}`} description={`Placed ${order.createdAt.toISOString().slice(0, 10)}`} />
-      <OrderPage order={orderView(order, user)} returnedFromCheckout={Boolean(query.paid)} cancelledCheckout={Boolean(query.cancelled)} />
+      <OrderPage order={orderView(order, user)} returnedFromCheckout={Boolean(query.paid)} cancelledCheckout={Boolean(query.cancelled)} files={<OrderFilesSection em={em} order={order} user={user} />} />
     </>
   );
 }

@@ -9,6 +9,7 @@ import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
 import { Alert } from "@/components/ui/alert";
 import { OrderPage } from "@/components/orders/order-page";
+import { OrderFilesSection } from "@/components/orders/order-files-section";
 import { StaffActions } from "./_components/staff-actions";
 
 export const metadata: Metadata = { title: "Order" };
@@ -38,7 +39,7 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
         </div>
       )}
       <OrderPage
-        order={view}
+        order={view} files={<OrderFilesSection em={em} order={order} user={user} />}
         staffActions={
           <StaffActions
             orderId={order.id}
