@@ -1,19 +1,58 @@
 import type { Metadata } from "next";
-import { PhoneCall } from "lucide-react";
+import Link from "next/link";
+import { notFound } from "next/navigation";
 import { requirePermission } from "@/lib/auth/guard";
+import { getEm } from "@/lib/db/orm";
+import { Customer } from "@/entities";
+import { listCustomers } from "@/lib/customers";
+import { getDraft, listDrafts, type DraftView } from "@/lib/designs/drafts";
+import { getShopEngineering } from "@/lib/shop/config";
+import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
-import { EmptyState } from "@/components/ui/empty-state";
+import { CustomerPicker } from "./_components/customer-picker";
+import { CounterBuilder } from "./_components/counter-builder";
 
 export const metadata: Metadata = { title: "New phone order" };
 
-export default async function NewPhoneOrderPage() {
-  await requirePermission("orders.desk", "/desk/new");
+const UUID = /^[0-9a-f-]{36}$/i;
+
+export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/desk/new">) {
+  const user = await requirePermission("orders.desk", "/desk/new");
+  const { customer: customerParam, draft: draftParam } = await searchParams;
+  const customerId = typeof customerParam === "string" && UUID.test(customerParam) ? customerParam : null;
+
+  if (!customerId) {
+    return (
+      <>
+        <PageHeader title="New phone order" description="Who is the order for? Then enter their measurements with the same builder customers use online." />
+        <CustomerPicker customers={await listCustomers()} />
+      </>
+    );
+  }
+
+  const em = await getEm();
+  const customer = await em.findOne(Customer, { id: customerId });
+  if (!customer) notFound();
+  const draftId = typeof draftParam === "string" ? draftParam : undefined;
+  const [shop, drafts, draft] = await Promise.all([
+    getShopEngineering(),
+    listDrafts(user, { customerId }),
+    draftId
+      ? getDraft(user, draftId).catch((e: unknown) => (e instanceof AppError && e.code === "not_found" ? null : Promise.reject(e)))
+      : Promise.resolve<DraftView | null>(null),
+  ]);
   return (
     <>
-      <PageHeader title="New phone order" description="Enter a customer's measurements with the same shaft builder they use online." />
-      <EmptyState icon={PhoneCall} title="Phone orders open with the shaft builder">
-        The counter's order form arrives with the shaft builder.
-      </EmptyState>
+      <PageHeader
+        title={`Phone order for ${customer.name}`}
+        description={[customer.company, customer.email, customer.phone].filter(Boolean).join(" · ")}
+        actions={
+          <Link href="/desk/new" className="btn-quiet no-underline">
+            Change customer
+          </Link>
+        }
+      />
+      <CounterBuilder key={draft?.id ?? "new"} catalogue={shop.catalogue} settings={shop.settings} initialDraft={draft} drafts={drafts} customerId={customerId} />
     </>
   );
 }
