@@ -2,8 +2,15 @@ import { auth } from "@/lib/auth/server";
 
 const BASE = process.env.BETTER_AUTH_URL ?? "http://127.0.0.1:3999";
 
-/** Sends one request through the real auth handler, as a browser at `ip` would. */
-export async function authRequest(path: string, body: unknown, ip = "203.0.113.10", cookie?: string): Promise<Response> {
+let nextIp = Math.floor(Math.random() * 60_000);
+/** A fresh client address per call (198.18.0.0/15, the benchmarking range), so tests don't share a rate-limit bucket. */
+function freshIp(): string {
+  nextIp += 1;
+  return `198.18.${(nextIp >> 8) & 255}.${nextIp & 255}`;
+}
+
+/** Sends one request through the real auth handler, as a browser at `ip` would (a fresh one by default). */
+export async function authRequest(path: string, body: unknown, ip = freshIp(), cookie?: string): Promise<Response> {
   const headers = new Headers({ "content-type": "application/json", origin: BASE, "x-forwarded-for": ip });
   if (cookie) headers.set("cookie", cookie);
   return auth.handler(new Request(`${BASE}/api/auth${path}`, { method: "POST", headers, body: JSON.stringify(body) }));
