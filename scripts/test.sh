@@ -19,12 +19,17 @@ throwaway_up "$PG_PORT" yokeline_test yokeline_e2e
 export BETTER_AUTH_SECRET="test-secret-$(head -c 24 /dev/urandom | base64 | tr -d '/+=')"
 export UPLOADS_DIR="$TMP_DIR/uploads"
 
-echo "▸ Type check"
-npx next typegen >/dev/null
-npx tsc --noEmit -p tsconfig.json
+# `npm test -- --e2e [playwright args]` runs only the browser tests (for working on them).
+if [ "${1:-}" = "--e2e" ]; then
+  shift
+else
+  echo "▸ Type check"
+  npx next typegen >/dev/null
+  npx tsc --noEmit -p tsconfig.json
 
-echo "▸ Unit and integration tests (Vitest)"
-DATABASE_URL="$DB_BASE/yokeline_test" npx vitest run
+  echo "▸ Unit and integration tests (Vitest)"
+  DATABASE_URL="$DB_BASE/yokeline_test" npx vitest run
+fi
 
 echo "▸ Production build"
 export APP_PORT="${TEST_APP_PORT:-3100}" STRIPE_FAKE_PORT=12211 MAIL_FAKE_SMTP_PORT=12625 MAIL_FAKE_HTTP_PORT=12680
@@ -35,4 +40,4 @@ if scripts/needs-build.sh; then NODE_ENV=production npx next build >"$TMP_DIR/bu
 echo "▸ Browser tests (Playwright, Chromium)"
 npx mikro-orm migration:up >/dev/null
 npx tsx scripts/seed.ts
-npx playwright test
+npx playwright test "$@"

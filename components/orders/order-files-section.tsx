@@ -7,14 +7,5 @@ import { OrderFiles } from "@/components/order-files";
 /** Photos and measurement sheets on an order, with the upload control for those who may attach. */
 export async function OrderFilesSection({ em, order, user }: { em: EntityManager; order: Order; user: CurrentUser }) {
   const files = await listOrderUploads(em, order);
-  return (
-    <section aria-labelledby="files" className="space-y-3">
-      <h2 id="files" className="text-lg font-semibold">
-        Photos and measurement sheets
-      </h2>
-      <div className="card p-5">
-        <OrderFiles orderId={order.id} files={files} canUpload={mayAttachFiles(user)} />
-      </div>
-    </section>
-  );
+  return <OrderFiles orderId={order.id} files={files} canUpload={mayAttachFiles(user)} />;
 }
