@@ -17,12 +17,15 @@ export function OrderPage({
   cancelledCheckout,
   files,
   staffActions,
+  payVerb = "Pay",
 }: {
   order: OrderView;
   returnedFromCheckout?: boolean;
   cancelledCheckout?: boolean;
   files?: React.ReactNode;
   staffActions?: React.ReactNode;
+  /** "Pay" for the customer; the counter "Take"s the payment with the customer on the phone. */
+  payVerb?: string;
 }) {
   const lastFailure = order.payments.findLast((p) => p.status === "open" && p.failureMessage);
   return (
@@ -64,7 +67,7 @@ export function OrderPage({
           </section>
           {files}
         </div>
-        <aside className="space-y-4">
+        <aside className={`space-y-4 ${order.due ? "order-first lg:order-none" : ""}`}>
           <section className="card space-y-4 p-5" aria-labelledby="money">
             <h2 id="money" className="text-lg font-semibold">
               Payment
@@ -83,7 +86,7 @@ export function OrderPage({
             </Totals>
             {order.due && order.status !== "cancelled" && (
               <div className="no-print">
-                <PayButton orderId={order.id} label={`Pay ${KIND_LABEL[order.due.kind]} of ${formatMoney(order.due.amountCents, order.currency)}`} />
+                <PayButton orderId={order.id} label={`${payVerb} ${KIND_LABEL[order.due.kind]} of ${formatMoney(order.due.amountCents, order.currency)}`} />
               </div>
             )}
             {order.payments.length > 0 && (

@@ -39,7 +39,8 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
         </div>
       )}
       <OrderPage
-        order={view} files={<OrderFilesSection em={em} order={order} user={user} />}
+        order={view}
+        payVerb="Take" files={<OrderFilesSection em={em} order={order} user={user} />}
         staffActions={
           <StaffActions
             orderId={order.id}

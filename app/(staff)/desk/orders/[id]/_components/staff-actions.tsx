@@ -32,6 +32,7 @@ export function StaffActions({
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
   const refundable = payments.filter((p) => p.status === "succeeded" && p.amountCents > p.refundedCents);
+  if (!canRequestBalance && !(canRefund && refundable.length > 0) && !message) return null;
 
   return (
     <section className="card no-print space-y-4 p-5" aria-labelledby="staff-actions">
