@@ -291,7 +291,7 @@ export function ResultsPanel({
             <h3 id="tubes-h" className="font-semibold">
               Tubes that pass, lightest first
             </h3>
-            <div className="mt-2 overflow-x-auto">
+            <div className="relative mt-2 overflow-x-auto">
               <table
                 className="w-full min-w-[36rem] text-left text-sm print:min-w-0"
                 data-testid="tube-ranking"

@@ -30,7 +30,7 @@ export default async function OrderDeskPage() {
           Orders placed online and by phone are listed here, oldest promise date first.
         </EmptyState>
       ) : (
-        <div className="card overflow-x-auto">
+        <div className="card relative overflow-x-auto">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">Open orders</caption>
             <thead className="border-b border-line bg-paper-sunk text-xs tracking-wide text-ink-muted uppercase">

@@ -18,7 +18,7 @@ export default async function CustomersPage() {
           Customers appear here when they sign up online or the counter enters a phone order.
         </EmptyState>
       ) : (
-        <div className="card overflow-x-auto">
+        <div className="card relative overflow-x-auto">
           <table className="w-full text-left text-sm">
             <thead className="border-b border-line bg-paper-sunk text-xs uppercase tracking-wide text-ink-muted">
               <tr>

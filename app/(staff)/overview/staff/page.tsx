@@ -15,7 +15,7 @@ export default async function StaffPage() {
     <>
       <PageHeader title="Staff" description="Counter, floor and owner accounts. Customers create their own." />
       <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
-        <div className="card overflow-x-auto">
+        <div className="card relative overflow-x-auto">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">Staff accounts</caption>
             <thead className="border-b border-line bg-paper-sunk text-xs uppercase tracking-wide text-ink-muted">
