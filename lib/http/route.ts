@@ -12,7 +12,7 @@ type Access = { permission: Permission } | { permission: null } | "public";
 interface HandlerContext<P> {
   req: NextRequest;
   params: P;
-  /** The caller; null only on public routes. */
+  /** The caller; always null on public routes. */
   user: CurrentUser | null;
 }
 
@@ -26,10 +26,8 @@ export function route<P = Record<string, string>>(
 ) {
   return async (req: NextRequest, context: { params: Promise<P> }): Promise<Response> => {
     try {
-      const user =
-        access === "public"
-          ? await authorize(null, req.headers).catch(() => null)
-          : await authorize(access.permission, req.headers);
+      // Public routes never read the session: they answer the same to everyone.
+      const user = access === "public" ? null : await authorize(access.permission, req.headers);
       return await handler({ req, params: await (context?.params ?? ({} as P)), user });
     } catch (error) {
       return errorResponse(error);
