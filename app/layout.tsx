@@ -2,7 +2,12 @@ import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
 import "./globals.css";
 
-const sans = localFont({ src: "./fonts/inter-var.woff2", variable: "--font-sans", display: "swap", weight: "100 900" });
+const sans = localFont({
+  src: "./fonts/inter-var.woff2",
+  variable: "--font-sans",
+  display: "swap",
+  weight: "100 900",
+});
 const mono = localFont({
   src: "./fonts/jetbrains-mono-var.woff2",
   variable: "--font-mono",

@@ -11,10 +11,26 @@ export default async function HomePage() {
   const [user, shop] = await Promise.all([getCurrentUser(), getShop()]);
   if (user) redirect(ROLE_HOME[user.role]);
   const points = [
-    { Icon: Ruler, title: "Measure", text: "Length between joint centres and three angles, with a guide beside every field." },
-    { Icon: Gauge, title: "Engineered live", text: "Tube, critical speed, torsion, working angles and phasing, checked as you type." },
-    { Icon: ShieldCheck, title: "Built and checked", text: "Cut, welded and phased, balanced and inspected against the design's tolerances." },
-    { Icon: Truck, title: "Followed to your door", text: "See each step in the shop, then pickup or shipping." },
+    {
+      Icon: Ruler,
+      title: "Measure",
+      text: "Length between joint centres and three angles, with a guide beside every field.",
+    },
+    {
+      Icon: Gauge,
+      title: "Engineered live",
+      text: "Tube, critical speed, torsion, working angles and phasing, checked as you type.",
+    },
+    {
+      Icon: ShieldCheck,
+      title: "Built and checked",
+      text: "Cut, welded and phased, balanced and inspected against the design's tolerances.",
+    },
+    {
+      Icon: Truck,
+      title: "Followed to your door",
+      text: "See each step in the shop, then pickup or shipping.",
+    },
   ];
   return (
     <div className="min-h-dvh">
@@ -24,7 +40,10 @@ export default async function HomePage() {
           <span className="text-lg font-bold">Yokeline</span>
           <span className="text-sm text-steel-100">for {shop.name}</span>
           <nav aria-label="Account" className="ml-auto flex gap-2">
-            <Link href="/sign-in" className="btn border border-steel-500 text-white no-underline hover:bg-steel-700">
+            <Link
+              href="/sign-in"
+              className="btn border border-steel-500 text-white no-underline hover:bg-steel-700"
+            >
               Sign in
             </Link>
             <Link href="/sign-up" className="btn-accent no-underline">
@@ -34,10 +53,13 @@ export default async function HomePage() {
         </div>
       </header>
       <main id="main" className="mx-auto max-w-6xl px-4 py-12">
-        <h1 className="max-w-3xl text-4xl font-bold md:text-5xl">A driveshaft built for your vehicle, engineered before it is cut.</h1>
+        <h1 className="max-w-3xl text-4xl font-bold md:text-5xl">
+          A driveshaft built for your vehicle, engineered before it is cut.
+        </h1>
         <p className="mt-4 max-w-2xl text-lg text-ink-muted">
-          {shop.name} builds one-off propeller shafts for trucks, hot rods, off-road rigs, farm and industrial machines.
-          Enter your measurements, see whether the shaft is safe and what it costs, pay, and follow it through the shop.
+          {shop.name} builds one-off propeller shafts for trucks, hot rods, off-road rigs, farm and industrial
+          machines. Enter your measurements, see whether the shaft is safe and what it costs, pay, and follow
+          it through the shop.
         </p>
         <ul className="mt-10 grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
           {points.map(({ Icon, title, text }) => (

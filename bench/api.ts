@@ -26,7 +26,11 @@ export async function benchApi(baseUrl: string): Promise<void> {
   console.log(`\nAPI latency, 50 concurrent connections, 8 s each, against ${baseUrl}`);
   // Warm the server (JIT, connection pool) before measuring.
   for (let i = 0; i < 20; i++) {
-    await fetch(`${baseUrl}/api/designs/evaluate`, { method: "POST", body: JSON.stringify(design), headers: { "content-type": "application/json" } });
+    await fetch(`${baseUrl}/api/designs/evaluate`, {
+      method: "POST",
+      body: JSON.stringify(design),
+      headers: { "content-type": "application/json" },
+    });
   }
   await run("POST /api/designs/evaluate", `${baseUrl}/api/designs/evaluate`, design);
   await run("POST /api/designs/quote", `${baseUrl}/api/designs/quote`, { design, fulfilment: "ship" });

@@ -6,7 +6,9 @@ const TARGET_EVAL_US = 20;
 const TARGET_RANK_MS = 2;
 
 function loadExample(name: string): DesignFile {
-  const parsed = parseDesign(JSON.parse(readFileSync(new URL(`../examples/${name}`, import.meta.url), "utf8")));
+  const parsed = parseDesign(
+    JSON.parse(readFileSync(new URL(`../examples/${name}`, import.meta.url), "utf8")),
+  );
   if (!parsed.ok) throw new Error(parsed.issues.map((i) => i.message).join("\n"));
   return parsed.design;
 }
@@ -39,13 +41,27 @@ export async function benchDriveline(): Promise<void> {
   const { tube: _tube, ...noTube } = street;
   const pickUs = timeUs(() => evaluateDesign(noTube), 500, 15);
   const rankUs = timeUs(
-    () => rankTubes({ spanMm: street.lengthMm, maxShaftRpm: 5566, peakShaftTorqueNm: 3366, catalogue: defaultCatalogue }),
+    () =>
+      rankTubes({
+        spanMm: street.lengthMm,
+        maxShaftRpm: 5566,
+        peakShaftTorqueNm: 3366,
+        catalogue: defaultCatalogue,
+      }),
     500,
     15,
   );
   console.log("driveline core (one core)");
-  console.log(`  evaluateDesign, tube given:     ${(1e6 / evalUs).toFixed(0)} evals/s, median ${evalUs.toFixed(2)} µs/eval (target ≤ ${TARGET_EVAL_US} µs) ${mark(evalUs <= TARGET_EVAL_US)}`);
-  console.log(`  evaluateDesign, compound+slip:  ${(1e6 / compoundUs).toFixed(0)} evals/s, median ${compoundUs.toFixed(2)} µs/eval (target ≤ ${TARGET_EVAL_US} µs) ${mark(compoundUs <= TARGET_EVAL_US)}`);
-  console.log(`  evaluateDesign, tube picked:    median ${(pickUs / 1000).toFixed(3)} ms/eval (ranking included)`);
-  console.log(`  rankTubes, ${defaultCatalogue.tubes.length} tubes:            median ${(rankUs / 1000).toFixed(3)} ms (target ≤ ${TARGET_RANK_MS} ms) ${mark(rankUs / 1000 <= TARGET_RANK_MS)}`);
+  console.log(
+    `  evaluateDesign, tube given:     ${(1e6 / evalUs).toFixed(0)} evals/s, median ${evalUs.toFixed(2)} µs/eval (target ≤ ${TARGET_EVAL_US} µs) ${mark(evalUs <= TARGET_EVAL_US)}`,
+  );
+  console.log(
+    `  evaluateDesign, compound+slip:  ${(1e6 / compoundUs).toFixed(0)} evals/s, median ${compoundUs.toFixed(2)} µs/eval (target ≤ ${TARGET_EVAL_US} µs) ${mark(compoundUs <= TARGET_EVAL_US)}`,
+  );
+  console.log(
+    `  evaluateDesign, tube picked:    median ${(pickUs / 1000).toFixed(3)} ms/eval (ranking included)`,
+  );
+  console.log(
+    `  rankTubes, ${defaultCatalogue.tubes.length} tubes:            median ${(rankUs / 1000).toFixed(3)} ms (target ≤ ${TARGET_RANK_MS} ms) ${mark(rankUs / 1000 <= TARGET_RANK_MS)}`,
+  );
 }

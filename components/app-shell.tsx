@@ -8,11 +8,22 @@ import { NavLinks } from "./nav-links";
 import { SignOutButton } from "./sign-out-button";
 
 /** The frame of every signed-in screen: brand, the role's navigation, who is signed in. */
-export function AppShell({ user, shopName, children }: { user: CurrentUser; shopName: string; children: React.ReactNode }) {
+export function AppShell({
+  user,
+  shopName,
+  children,
+}: {
+  user: CurrentUser;
+  shopName: string;
+  children: React.ReactNode;
+}) {
   const items = navigationFor(user.role, isDemo());
   return (
     <div className="flex min-h-dvh flex-col">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-white focus:px-3 focus:py-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-50 focus:rounded focus:bg-white focus:px-3 focus:py-2"
+      >
         Skip to content
       </a>
       <header data-shell className="bg-ink text-white">
@@ -57,7 +68,8 @@ export function AppShell({ user, shopName, children }: { user: CurrentUser; shop
         {children}
       </main>
       <footer className="no-print border-t border-line py-4 text-center text-xs text-ink-muted">
-        Yokeline · engineering estimates for shop use; they do not replace a qualified engineer or local rules.
+        Yokeline · engineering estimates for shop use; they do not replace a qualified engineer or local
+        rules.
       </footer>
     </div>
   );

@@ -3,7 +3,8 @@ import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import { User } from "./user.entity";
 
-export type OrderEventKind = "received" | "paid" | "payment_failed" | "step" | "ready" | "shipped" | "refunded" | "note" | "file";
+export type OrderEventKind =
+  "received" | "paid" | "payment_failed" | "step" | "ready" | "shipped" | "refunded" | "note" | "file";
 
 /** One entry of an order's timeline, as the customer sees it. */
 @Entity({ tableName: "order_event" })

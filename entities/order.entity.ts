@@ -1,4 +1,14 @@
-import { Collection, Entity, Enum, Index, ManyToOne, OneToMany, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
+import {
+  Collection,
+  Entity,
+  Enum,
+  Index,
+  ManyToOne,
+  OneToMany,
+  OptionalProps,
+  PrimaryKey,
+  Property,
+} from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import { Customer } from "./customer.entity";
 import { User } from "./user.entity";
@@ -6,7 +16,14 @@ import { OrderShaft } from "./order-shaft.entity";
 import { Payment } from "./payment.entity";
 import { OrderEvent } from "./order-event.entity";
 
-export const ORDER_STATUSES = ["awaiting_payment", "received", "in_shop", "ready", "shipped", "cancelled"] as const;
+export const ORDER_STATUSES = [
+  "awaiting_payment",
+  "received",
+  "in_shop",
+  "ready",
+  "shipped",
+  "cancelled",
+] as const;
 export type OrderStatus = (typeof ORDER_STATUSES)[number];
 export const PAYMENT_STATES = ["unpaid", "deposit_paid", "paid", "partially_refunded", "refunded"] as const;
 export type PaymentState = (typeof PAYMENT_STATES)[number];

@@ -14,7 +14,8 @@ async function main(): Promise<void> {
     if (stopping) return;
     stopping = true;
     const results = await Promise.allSettled([stripe?.close(), mail?.close()]);
-    for (const r of results) if (r.status === "rejected") console.error("[fakes] error while stopping:", r.reason);
+    for (const r of results)
+      if (r.status === "rejected") console.error("[fakes] error while stopping:", r.reason);
     process.exit(code);
   };
   process.once("SIGINT", () => void stop(0));

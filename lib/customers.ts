@@ -7,7 +7,11 @@ import { AppError } from "@/lib/http/errors";
  * Gives a newly signed-up customer their customer record: the one the counter already keeps
  * under that e-mail (a phone customer who now signs up online), or a new one.
  */
-export async function linkCustomerToUser(user: { id: string; name: string; email: string }): Promise<Customer> {
+export async function linkCustomerToUser(user: {
+  id: string;
+  name: string;
+  email: string;
+}): Promise<Customer> {
   const em = await getEm();
   const email = user.email.toLowerCase();
   const existing = await em.findOne(Customer, { email, user: null });
@@ -54,7 +58,9 @@ export async function createPhoneCustomer(
   const em = await getEm();
   const email = input.email.toLowerCase();
   if (await em.findOne(Customer, { email })) {
-    throw new AppError("conflict", "A customer with that e-mail already exists; pick them from the list.", { email: "Already a customer." });
+    throw new AppError("conflict", "A customer with that e-mail already exists; pick them from the list.", {
+      email: "Already a customer.",
+    });
   }
   const customer = em.create(Customer, {
     name: input.name,
@@ -63,7 +69,23 @@ export async function createPhoneCustomer(
     company: input.company || null,
     addressLines: input.addressLines || null,
   });
-  await recordAudit({ actorId, action: "customer.create", subjectType: "customer", subjectId: customer.id, details: { email } }, em);
+  await recordAudit(
+    {
+      actorId,
+      action: "customer.create",
+      subjectType: "customer",
+      subjectId: customer.id,
+      details: { email },
+    },
+    em,
+  );
   await em.flush();
-  return { id: customer.id, name: customer.name, email, phone: customer.phone ?? null, company: customer.company ?? null, hasAccount: false };
+  return {
+    id: customer.id,
+    name: customer.name,
+    email,
+    phone: customer.phone ?? null,
+    company: customer.company ?? null,
+    hasAccount: false,
+  };
 }

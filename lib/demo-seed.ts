@@ -39,7 +39,10 @@ export async function seedDemoShop(): Promise<boolean> {
 
   const ctx = await auth.$context;
   for (const c of DEMO_CUSTOMERS) {
-    const user = await ctx.internalAdapter.createUser({ email: c.email, name: c.name, emailVerified: true, role: "customer" }, { method: "admin" });
+    const user = await ctx.internalAdapter.createUser(
+      { email: c.email, name: c.name, emailVerified: true, role: "customer" },
+      { method: "admin" },
+    );
     await ctx.internalAdapter.linkAccount({
       userId: user.id,
       providerId: "credential",

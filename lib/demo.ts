@@ -8,9 +8,19 @@ export const DEMO_STAFF = [
 ] as const;
 
 export const DEMO_CUSTOMERS = [
-  { name: "Rosa Castellanos", email: "rosa@customer.example", company: "Castellanos Hauling", phone: "555-0141" },
+  {
+    name: "Rosa Castellanos",
+    email: "rosa@customer.example",
+    company: "Castellanos Hauling",
+    phone: "555-0141",
+  },
   { name: "Wendell Ames", email: "wendell@customer.example", company: null, phone: "555-0178" },
-  { name: "Priya Natarajan", email: "priya@customer.example", company: "Prairie Fab & Off-Road", phone: "555-0115" },
+  {
+    name: "Priya Natarajan",
+    email: "priya@customer.example",
+    company: "Prairie Fab & Off-Road",
+    phone: "555-0115",
+  },
 ] as const;
 
 /** Customers the counter knows only by phone (no sign-in). */
@@ -20,7 +30,11 @@ export const DEMO_PHONE_CUSTOMERS = [
 
 export function demoAccounts() {
   return [
-    ...DEMO_STAFF.map((s) => ({ role: s.role[0]!.toUpperCase() + s.role.slice(1), email: s.email, password: DEMO_PASSWORD })),
+    ...DEMO_STAFF.map((s) => ({
+      role: s.role[0]!.toUpperCase() + s.role.slice(1),
+      email: s.email,
+      password: DEMO_PASSWORD,
+    })),
     { role: "Customer", email: DEMO_CUSTOMERS[0].email, password: DEMO_PASSWORD },
   ];
 }

@@ -5,7 +5,11 @@ import { seedDemoShop } from "@/lib/demo-seed";
 
 async function main() {
   const seeded = await seedDemoShop();
-  console.log(seeded ? "Seeded the demo shop (Tallgrass Driveline Works)." : "Demo shop already present; nothing seeded.");
+  console.log(
+    seeded
+      ? "Seeded the demo shop (Tallgrass Driveline Works)."
+      : "Demo shop already present; nothing seeded.",
+  );
   await (await getOrm()).close();
 }
 

@@ -7,7 +7,12 @@ import { ShaftSummary, Totals } from "./shaft-summary";
 import { PayButton } from "./pay-button";
 import { PaymentConfirming } from "./payment-confirming";
 
-const PAYMENT_STATUS: Record<string, string> = { open: "not paid yet", succeeded: "paid", failed: "failed", expired: "expired" };
+const PAYMENT_STATUS: Record<string, string> = {
+  open: "not paid yet",
+  succeeded: "paid",
+  failed: "failed",
+  expired: "expired",
+};
 const KIND_LABEL = { deposit: "deposit", balance: "balance", full: "payment" } as const;
 
 /** The body of an order page, for the customer and (with `staffActions`) for the shop. */
@@ -36,7 +41,11 @@ export function OrderPage({
         <span className="text-sm text-ink-muted">
           Promised {order.promisedDate} · {order.fulfilment === "ship" ? "Shipping" : "Pickup at the shop"}
         </span>
-        {order.late && <span className="rounded-full bg-fail-soft px-2.5 py-0.5 text-xs font-semibold text-fail">Late</span>}
+        {order.late && (
+          <span className="rounded-full bg-fail-soft px-2.5 py-0.5 text-xs font-semibold text-fail">
+            Late
+          </span>
+        )}
       </div>
       {returnedFromCheckout && order.paymentState === "unpaid" && <PaymentConfirming />}
       {returnedFromCheckout && order.paymentState !== "unpaid" && (
@@ -44,8 +53,14 @@ export function OrderPage({
           Thank you. A receipt is on its way to {order.customerEmail}.
         </Alert>
       )}
-      {cancelledCheckout && order.paymentState === "unpaid" && <Alert tone="info">You left the payment page; nothing was charged.</Alert>}
-      {lastFailure && <Alert tone="error" title="The last card payment was declined">{lastFailure.failureMessage} Try another card.</Alert>}
+      {cancelledCheckout && order.paymentState === "unpaid" && (
+        <Alert tone="info">You left the payment page; nothing was charged.</Alert>
+      )}
+      {lastFailure && (
+        <Alert tone="error" title="The last card payment was declined">
+          {lastFailure.failureMessage} Try another card.
+        </Alert>
+      )}
 
       <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
         <div className="space-y-6">
@@ -68,11 +83,17 @@ export function OrderPage({
           {files}
         </div>
         <aside className={`space-y-4 ${order.due ? "order-first lg:order-none" : ""}`}>
-          <section className="card space-y-4 p-5" aria-labelledby="money">
+          <section className="space-y-4 card p-5" aria-labelledby="money">
             <h2 id="money" className="text-lg font-semibold">
               Payment
             </h2>
-            <Totals currency={order.currency} subtotalCents={order.subtotalCents} shippingCents={order.shippingCents} taxCents={order.taxCents} totalCents={order.totalCents}>
+            <Totals
+              currency={order.currency}
+              subtotalCents={order.subtotalCents}
+              shippingCents={order.shippingCents}
+              taxCents={order.taxCents}
+              totalCents={order.totalCents}
+            >
               <div className="flex justify-between py-1">
                 <dt>Paid</dt>
                 <dd className="tabular-nums">{formatMoney(order.paidCents, order.currency)}</dd>
@@ -86,7 +107,10 @@ export function OrderPage({
             </Totals>
             {order.due && order.status !== "cancelled" && (
               <div className="no-print">
-                <PayButton orderId={order.id} label={`${payVerb} ${KIND_LABEL[order.due.kind]} of ${formatMoney(order.due.amountCents, order.currency)}`} />
+                <PayButton
+                  orderId={order.id}
+                  label={`${payVerb} ${KIND_LABEL[order.due.kind]} of ${formatMoney(order.due.amountCents, order.currency)}`}
+                />
               </div>
             )}
             {order.payments.length > 0 && (
@@ -94,7 +118,10 @@ export function OrderPage({
                 {order.payments.map((p) => (
                   <li key={p.id} className="flex justify-between gap-2 py-1.5">
                     <span className="capitalize">{p.kind}</span>
-                    <span className="text-ink-muted">{PAYMENT_STATUS[p.status] ?? p.status}{p.paidAt ? ` ${p.paidAt.slice(0, 10)}` : ""}</span>
+                    <span className="text-ink-muted">
+                      {PAYMENT_STATUS[p.status] ?? p.status}
+                      {p.paidAt ? ` ${p.paidAt.slice(0, 10)}` : ""}
+                    </span>
                     <span className="tabular-nums">{formatMoney(p.amountCents, order.currency)}</span>
                   </li>
                 ))}

@@ -1,4 +1,14 @@
-import { CircleCheck, CircleDot, CreditCard, FileImage, PackageCheck, RotateCcw, Truck, TriangleAlert, Wrench } from "lucide-react";
+import {
+  CircleCheck,
+  CircleDot,
+  CreditCard,
+  FileImage,
+  PackageCheck,
+  RotateCcw,
+  Truck,
+  TriangleAlert,
+  Wrench,
+} from "lucide-react";
 import type { OrderView } from "@/lib/orders/queries";
 
 const ICON = {
@@ -17,8 +27,10 @@ const ICON = {
 export function OrderTimeline({ order }: { order: OrderView }) {
   const upcoming = [
     !order.events.some((e) => e.kind === "paid") && "Paid",
-    !["in_shop", "ready", "shipped"].includes(order.status) && "In the shop: cut, weld and phase, balance, inspect",
-    !["ready", "shipped"].includes(order.status) && (order.fulfilment === "ship" ? "Ready to ship" : "Ready for pickup"),
+    !["in_shop", "ready", "shipped"].includes(order.status) &&
+      "In the shop: cut, weld and phase, balance, inspect",
+    !["ready", "shipped"].includes(order.status) &&
+      (order.fulfilment === "ship" ? "Ready to ship" : "Ready for pickup"),
     order.status !== "shipped" && (order.fulfilment === "ship" ? "Shipped" : "Picked up"),
   ].filter((x): x is string => Boolean(x));
   return (
@@ -32,7 +44,12 @@ export function OrderTimeline({ order }: { order: OrderView }) {
             </span>
             <p className="font-medium">{e.label}</p>
             <time dateTime={e.at} className="text-sm text-ink-muted">
-              {new Date(e.at).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" })} UTC
+              {new Date(e.at).toLocaleString("en-US", {
+                dateStyle: "medium",
+                timeStyle: "short",
+                timeZone: "UTC",
+              })}{" "}
+              UTC
             </time>
           </li>
         );
@@ -40,7 +57,10 @@ export function OrderTimeline({ order }: { order: OrderView }) {
       {order.status !== "cancelled" &&
         upcoming.map((label) => (
           <li key={label} className="relative text-ink-muted">
-            <span className="absolute -left-[2.05rem] flex size-7 items-center justify-center rounded-full bg-paper ring-2 ring-line" aria-hidden="true" />
+            <span
+              className="absolute -left-[2.05rem] flex size-7 items-center justify-center rounded-full bg-paper ring-2 ring-line"
+              aria-hidden="true"
+            />
             <p>
               {label} <span className="sr-only">(still to come)</span>
             </p>

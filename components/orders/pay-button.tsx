@@ -4,7 +4,10 @@ import { CreditCard } from "lucide-react";
 
 /** Opens the hosted checkout for the order's next payment. */
 export function PayButton({ orderId, label }: { orderId: string; label: string }) {
-  const [state, setState] = useState<{ pending: boolean; error: string | null }>({ pending: false, error: null });
+  const [state, setState] = useState<{ pending: boolean; error: string | null }>({
+    pending: false,
+    error: null,
+  });
   return (
     <div>
       <button
@@ -19,7 +22,10 @@ export function PayButton({ orderId, label }: { orderId: string; label: string }
             window.location.assign(body.checkoutUrl);
             return;
           }
-          setState({ pending: false, error: body?.error?.message ?? "Could not open the payment page. Try again." });
+          setState({
+            pending: false,
+            error: body?.error?.message ?? "Could not open the payment page. Try again.",
+          });
         }}
       >
         <CreditCard className="size-4" aria-hidden="true" />

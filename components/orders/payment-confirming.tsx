@@ -19,7 +19,10 @@ export function PaymentConfirming() {
     return () => clearTimeout(t);
   }, [tries, router]);
   return (
-    <div role="status" className="flex items-center gap-2 rounded-md border border-steel-100 bg-steel-50 p-3 text-sm text-steel-900">
+    <div
+      role="status"
+      className="flex items-center gap-2 rounded-md border border-steel-100 bg-steel-50 p-3 text-sm text-steel-900"
+    >
       <Loader2 className="size-4 animate-spin" aria-hidden="true" />
       {tries < 20
         ? "Thank you — we are confirming your payment with the bank…"

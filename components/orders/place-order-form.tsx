@@ -32,7 +32,11 @@ export function PlaceOrderForm({ designIds, customerId, quotes, depositPercent, 
 
   const onSubmit = handleSubmit(async (values) => {
     setError(null);
-    const res = await fetch("/api/orders", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(values) });
+    const res = await fetch("/api/orders", {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify(values),
+    });
     const body = await res.json().catch(() => null);
     if (!res.ok) {
       setError(body?.error?.message ?? "The order could not be placed. Nothing was charged.");
@@ -45,7 +49,13 @@ export function PlaceOrderForm({ designIds, customerId, quotes, depositPercent, 
   const { currency } = quote;
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-5">
-      <Totals currency={currency} subtotalCents={quote.subtotalCents} shippingCents={quote.shippingCents} taxCents={quote.taxCents} totalCents={quote.totalCents} />
+      <Totals
+        currency={currency}
+        subtotalCents={quote.subtotalCents}
+        shippingCents={quote.shippingCents}
+        taxCents={quote.taxCents}
+        totalCents={quote.totalCents}
+      />
       {error && <Alert tone="error">{error}</Alert>}
       <fieldset>
         <legend className="field-label">Pickup or shipping</legend>
@@ -61,7 +71,10 @@ export function PlaceOrderForm({ designIds, customerId, quotes, depositPercent, 
             <input type="radio" value="ship" {...register("fulfilment")} className="mt-1" />
             <span>
               <span className="block font-medium">Ship it</span>
-              <span className="text-sm text-ink-muted">{formatMoney(quotes.ship.shippingCents / Math.max(1, designIds.length), currency)} per shaft, plus tax</span>
+              <span className="text-sm text-ink-muted">
+                {formatMoney(quotes.ship.shippingCents / Math.max(1, designIds.length), currency)} per shaft,
+                plus tax
+              </span>
             </span>
           </label>
         </div>

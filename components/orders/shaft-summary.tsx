@@ -5,7 +5,15 @@ import { formatMoney } from "@/lib/pricing/price-book";
 import { CheckBadge } from "./status-badge";
 
 /** One ordered shaft: what it goes in, its key engineering numbers, its checks and its price lines. */
-export function ShaftSummary({ shaft, currency, showChecks = true }: { shaft: ShaftView; currency: string; showChecks?: boolean }) {
+export function ShaftSummary({
+  shaft,
+  currency,
+  showChecks = true,
+}: {
+  shaft: ShaftView;
+  currency: string;
+  showChecks?: boolean;
+}) {
   return (
     <article className="card p-5" aria-labelledby={`shaft-${shaft.id}`}>
       <div className="flex flex-wrap items-start justify-between gap-2">
@@ -52,7 +60,9 @@ export function ShaftSummary({ shaft, currency, showChecks = true }: { shaft: Sh
           {shaft.priceLines.map((l, i) => (
             <tr key={i}>
               <td className="py-1.5 pr-2">{l.label}</td>
-              <td className="py-1.5 text-right tabular-nums whitespace-nowrap">{formatMoney(l.totalCents, currency)}</td>
+              <td className="py-1.5 text-right whitespace-nowrap tabular-nums">
+                {formatMoney(l.totalCents, currency)}
+              </td>
             </tr>
           ))}
           <tr className="font-semibold">
@@ -66,7 +76,14 @@ export function ShaftSummary({ shaft, currency, showChecks = true }: { shaft: Sh
 }
 
 /** Subtotal, shipping, tax and total of an order or quote. */
-export function Totals({ currency, subtotalCents, shippingCents, taxCents, totalCents, children }: {
+export function Totals({
+  currency,
+  subtotalCents,
+  shippingCents,
+  taxCents,
+  totalCents,
+  children,
+}: {
   currency: string;
   subtotalCents: number;
   shippingCents: number;

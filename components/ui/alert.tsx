@@ -19,7 +19,10 @@ export function Alert({
 }) {
   const { box, Icon } = STYLES[tone];
   return (
-    <div role={tone === "error" ? "alert" : "status"} className={`flex gap-3 rounded-md border p-3 text-sm ${box}`}>
+    <div
+      role={tone === "error" ? "alert" : "status"}
+      className={`flex gap-3 rounded-md border p-3 text-sm ${box}`}
+    >
       <Icon className="mt-0.5 size-4 shrink-0" aria-hidden="true" />
       <div>
         {title && <p className="font-semibold">{title}</p>}

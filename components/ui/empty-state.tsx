@@ -13,7 +13,7 @@ export function EmptyState({
   action?: React.ReactNode;
 }) {
   return (
-    <div className="card flex flex-col items-center px-6 py-12 text-center">
+    <div className="flex flex-col items-center card px-6 py-12 text-center">
       <Icon className="size-10 text-steel-500" aria-hidden="true" />
       <h2 className="mt-3 text-lg font-semibold">{title}</h2>
       {children && <div className="mt-1 max-w-md text-sm text-ink-muted">{children}</div>}

@@ -10,7 +10,9 @@ interface FieldProps extends React.InputHTMLAttributes<HTMLInputElement> {
 export function Field({ label, error, hint, id, ...input }: FieldProps) {
   const autoId = useId();
   const inputId = id ?? autoId;
-  const describedBy = [hint ? `${inputId}-hint` : null, error ? `${inputId}-error` : null].filter(Boolean).join(" ");
+  const describedBy = [hint ? `${inputId}-hint` : null, error ? `${inputId}-error` : null]
+    .filter(Boolean)
+    .join(" ");
   return (
     <div>
       <label htmlFor={inputId} className="field-label">

@@ -22,9 +22,10 @@ function layout(title: string, body: string): string {
 export function renderInbox(messages: StoredMessage[]): string {
   const rows = messages
     .map(
-      (m) => `<tr><td>${escapeHtml(new Date(m.receivedAt).toLocaleString("en-GB"))}</td><td>${m.via}</td><td>${escapeHtml(
-        m.to.join(", "),
-      )}</td><td><a href="/messages/${m.id}/view">${escapeHtml(m.subject ?? "(no subject)")}</a></td></tr>`,
+      (m) =>
+        `<tr><td>${escapeHtml(new Date(m.receivedAt).toLocaleString("en-GB"))}</td><td>${m.via}</td><td>${escapeHtml(
+          m.to.join(", "),
+        )}</td><td><a href="/messages/${m.id}/view">${escapeHtml(m.subject ?? "(no subject)")}</a></td></tr>`,
     )
     .join("\n");
   return layout(

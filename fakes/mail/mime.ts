@@ -69,11 +69,16 @@ export function decodeEncodedWords(value: string): string {
     }
   }
   const collapsed = source.replace(/(=\?[^?]+\?[BbQq]\?[^?]*\?=)\s+(?==\?[^?]+\?[BbQq]\?[^?]*\?=)/g, "$1");
-  return collapsed.replace(/=\?([^?*]+)(?:\*[^?]*)?\?([BbQq])\?([^?]*)\?=/g, (_m, charset: string, enc: string, text: string) => {
-    const bytes =
-      enc.toUpperCase() === "B" ? Buffer.from(text, "base64") : decodeQuotedPrintable(text.replace(/_/g, " "));
-    return bytesToText(bytes, charset);
-  });
+  return collapsed.replace(
+    /=\?([^?*]+)(?:\*[^?]*)?\?([BbQq])\?([^?]*)\?=/g,
+    (_m, charset: string, enc: string, text: string) => {
+      const bytes =
+        enc.toUpperCase() === "B"
+          ? Buffer.from(text, "base64")
+          : decodeQuotedPrintable(text.replace(/_/g, " "));
+      return bytesToText(bytes, charset);
+    },
+  );
 }
 
 function splitHeadersAndBody(raw: string): { head: string; body: string } {
@@ -117,7 +122,10 @@ function parseParams(value: string): { value: string; params: Record<string, str
     const eq = item.indexOf("=");
     if (eq < 0) continue;
     let key = item.slice(0, eq).trim().toLowerCase();
-    let val = item.slice(eq + 1).trim().replace(/^"(.*)"$/, "$1");
+    let val = item
+      .slice(eq + 1)
+      .trim()
+      .replace(/^"(.*)"$/, "$1");
     if (key.endsWith("*")) {
       // RFC 2231 `filename*=utf-8''na%C3%AFve.pdf`
       key = key.slice(0, -1);
@@ -185,7 +193,8 @@ export function parseAddressList(value: string | null | undefined): string[] {
 }
 
 export function parseMime(raw: Buffer | string): ParsedMail {
-  const source = typeof raw === "string" ? Buffer.from(raw, "utf8").toString("latin1") : raw.toString("latin1");
+  const source =
+    typeof raw === "string" ? Buffer.from(raw, "utf8").toString("latin1") : raw.toString("latin1");
   const { head, body } = splitHeadersAndBody(source);
   const topHeaders = parseHeaders(head);
   const result: ParsedMail = {
@@ -209,7 +218,9 @@ export function parseMime(raw: Buffer | string): ParsedMail {
   result.messageId = result.headers["message-id"] ?? null;
 
   const visit = (part: Part, depth: number) => {
-    const { value: type, params } = parseParams(part.headers.get("content-type") ?? "text/plain; charset=us-ascii");
+    const { value: type, params } = parseParams(
+      part.headers.get("content-type") ?? "text/plain; charset=us-ascii",
+    );
     if (type.startsWith("multipart/") && params["boundary"] && depth < 10) {
       for (const chunk of splitMultipart(part.body, params["boundary"])) {
         const split = splitHeadersAndBody(chunk);
@@ -219,7 +230,8 @@ export function parseMime(raw: Buffer | string): ParsedMail {
     }
     const disposition = parseParams(part.headers.get("content-disposition") ?? "");
     const filename = disposition.params["filename"] ?? params["name"] ?? null;
-    const isAttachment = disposition.value === "attachment" || (filename !== null && disposition.value !== "inline");
+    const isAttachment =
+      disposition.value === "attachment" || (filename !== null && disposition.value !== "inline");
     const bytes = decodeBody(part);
     if (!isAttachment && type === "text/plain" && result.text === null) {
       result.text = normalizeNewlines(bytesToText(bytes, params["charset"]));

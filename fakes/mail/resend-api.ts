@@ -18,7 +18,8 @@ export class ResendError extends Error {
   }
 }
 
-const ADDRESS_FORMAT = "The email address needs to follow the `email@example.com` or `Name <email@example.com>` format.";
+const ADDRESS_FORMAT =
+  "The email address needs to follow the `email@example.com` or `Name <email@example.com>` format.";
 const EMAIL_RE = /^[^\s@<>]+@[^\s@<>]+\.[^\s@<>]+$/;
 
 export function authenticateResend(req: IncomingMessage): void {
@@ -31,7 +32,8 @@ export function authenticateResend(req: IncomingMessage): void {
       "Missing API key in the authorization header. Include the following header in the request: Authorization: Bearer YOUR_API_KEY",
     );
   }
-  if (!/^re_[A-Za-z0-9_-]+$/.test(match[1] ?? "")) throw new ResendError(403, "invalid_api_key", "API key is invalid");
+  if (!/^re_[A-Za-z0-9_-]+$/.test(match[1] ?? ""))
+    throw new ResendError(403, "invalid_api_key", "API key is invalid");
 }
 
 function validAddress(value: string): boolean {
@@ -49,7 +51,8 @@ function addressField(body: Record<string, unknown>, field: string, required: bo
   if (!list.every((v): v is string => typeof v === "string" && validAddress(v))) {
     throw new ResendError(422, "validation_error", `Invalid \`${field}\` field. ${ADDRESS_FORMAT}`);
   }
-  if (list.length > max) throw new ResendError(422, "validation_error", `Too many recipients in \`${field}\`: at most ${max}.`);
+  if (list.length > max)
+    throw new ResendError(422, "validation_error", `Too many recipients in \`${field}\`: at most ${max}.`);
   return list.flatMap((v) => parseAddressList(v));
 }
 
@@ -90,7 +93,10 @@ export function toMessage(body: unknown): NewMessage {
   const tags = Array.isArray(b["tags"])
     ? (b["tags"] as unknown[]).filter(
         (t): t is { name: string; value: string } =>
-          !!t && typeof t === "object" && typeof (t as { name?: unknown }).name === "string" && typeof (t as { value?: unknown }).value === "string",
+          !!t &&
+          typeof t === "object" &&
+          typeof (t as { name?: unknown }).name === "string" &&
+          typeof (t as { value?: unknown }).value === "string",
       )
     : [];
   const attachments = Array.isArray(b["attachments"])
@@ -99,7 +105,8 @@ export function toMessage(body: unknown): NewMessage {
         const content = typeof att["content"] === "string" ? att["content"] : "";
         return {
           filename: typeof att["filename"] === "string" ? att["filename"] : null,
-          contentType: typeof att["content_type"] === "string" ? att["content_type"] : "application/octet-stream",
+          contentType:
+            typeof att["content_type"] === "string" ? att["content_type"] : "application/octet-stream",
           size: Buffer.from(content, "base64").length,
           contentId: typeof att["content_id"] === "string" ? att["content_id"] : null,
         };
@@ -125,9 +132,17 @@ export function toMessage(body: unknown): NewMessage {
 
 export function injectedFailure(statusCode: number): ResendError {
   if (statusCode === 429) {
-    return new ResendError(429, "rate_limit_exceeded", "Too many requests. Failure injected by the local mail fake.");
+    return new ResendError(
+      429,
+      "rate_limit_exceeded",
+      "Too many requests. Failure injected by the local mail fake.",
+    );
   }
-  return new ResendError(statusCode, statusCode >= 500 ? "internal_server_error" : "application_error", "Failure injected by the local mail fake (fail-next).");
+  return new ResendError(
+    statusCode,
+    statusCode >= 500 ? "internal_server_error" : "application_error",
+    "Failure injected by the local mail fake (fail-next).",
+  );
 }
 
 interface IdempotencyEntry {
@@ -141,12 +156,17 @@ export class ResendIdempotency {
 
   run(key: string | null, payload: unknown, execute: () => unknown): unknown {
     if (!key) return execute();
-    if (key.length > 256) throw new ResendError(422, "validation_error", "The `Idempotency-Key` must be at most 256 characters.");
+    if (key.length > 256)
+      throw new ResendError(422, "validation_error", "The `Idempotency-Key` must be at most 256 characters.");
     const hash = createHash("sha256").update(JSON.stringify(payload)).digest("hex");
     const existing = this.entries.get(key);
     if (existing) {
       if (existing.hash !== hash) {
-        throw new ResendError(409, "invalid_idempotent_request", "Same idempotency key used with a different request payload.");
+        throw new ResendError(
+          409,
+          "invalid_idempotent_request",
+          "Same idempotency key used with a different request payload.",
+        );
       }
       return existing.response;
     }
@@ -182,4 +202,3 @@ export function resendEmailObject(message: StoredMessage): Record<string, unknow
 export function sendWith(store: MailStore, message: NewMessage): { id: string } {
   return { id: store.add(message).id };
 }
-

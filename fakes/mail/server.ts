@@ -65,7 +65,10 @@ function queryFrom(url: URL): MessageQuery {
 }
 
 export async function startMailFake(options: MailFakeOptions = {}): Promise<MailFake> {
-  const log = options.log === false ? () => {} : (options.log ?? ((line: string) => console.log(`[mail-fake] ${line}`)));
+  const log =
+    options.log === false
+      ? () => {}
+      : (options.log ?? ((line: string) => console.log(`[mail-fake] ${line}`)));
   const store = new MailStore();
   const idempotency = new ResendIdempotency();
   const smtp = await startSmtpCatcher(store, options.smtpPort ?? 0, log);
@@ -73,7 +76,8 @@ export async function startMailFake(options: MailFakeOptions = {}): Promise<Mail
   async function handleResend(req: IncomingMessage, res: ServerResponse, url: URL): Promise<void> {
     authenticateResend(req);
     const path = url.pathname.replace(/\/+$/, "");
-    const idempotencyKey = typeof req.headers["idempotency-key"] === "string" ? req.headers["idempotency-key"] : null;
+    const idempotencyKey =
+      typeof req.headers["idempotency-key"] === "string" ? req.headers["idempotency-key"] : null;
     if (req.method === "POST" && (path === "/emails" || path === "/emails/batch")) {
       const payload = parseJson(await readBody(req));
       const response = idempotency.run(idempotencyKey, { path, payload }, () => {
@@ -87,8 +91,10 @@ export async function startMailFake(options: MailFakeOptions = {}): Promise<Mail
           log(`resend: ${message.subject ?? "(no subject)"} → ${message.to.join(", ")}`);
           return { id: message.id };
         }
-        if (!Array.isArray(payload)) throw new ResendError(422, "validation_error", "The batch body must be an array of emails.");
-        if (payload.length > 100) throw new ResendError(422, "validation_error", "A batch can contain at most 100 emails.");
+        if (!Array.isArray(payload))
+          throw new ResendError(422, "validation_error", "The batch body must be an array of emails.");
+        if (payload.length > 100)
+          throw new ResendError(422, "validation_error", "A batch can contain at most 100 emails.");
         const messages = payload.map(toMessage); // validate all before storing any
         return { data: messages.map((m) => ({ id: store.add(m).id })) };
       });
@@ -102,7 +108,11 @@ export async function startMailFake(options: MailFakeOptions = {}): Promise<Mail
       sendJson(res, 200, resendEmailObject(message));
       return;
     }
-    throw new ResendError(404, "not_found", `The local Resend fake does not implement ${req.method} ${path}.`);
+    throw new ResendError(
+      404,
+      "not_found",
+      `The local Resend fake does not implement ${req.method} ${path}.`,
+    );
   }
 
   async function handle(req: IncomingMessage, res: ServerResponse): Promise<void> {
@@ -132,7 +142,8 @@ export async function startMailFake(options: MailFakeOptions = {}): Promise<Mail
         if (one[2] === "/view") return sendHtml(res, 200, renderMessage(message));
         if (one[2] === "/raw") {
           const raw = store.getRaw(message.id);
-          if (raw === undefined) return sendJson(res, 404, { error: "Only SMTP messages keep their raw source" });
+          if (raw === undefined)
+            return sendJson(res, 404, { error: "Only SMTP messages keep their raw source" });
           res.writeHead(200, { "Content-Type": "message/rfc822; charset=utf-8" });
           return void res.end(raw);
         }
@@ -140,7 +151,8 @@ export async function startMailFake(options: MailFakeOptions = {}): Promise<Mail
       }
       if (path === "/_fake/fail-next" && req.method === "POST") {
         const body = parseJson((await readBody(req)) || "{}") as Record<string, unknown>;
-        const count = typeof body["count"] === "number" && Number.isInteger(body["count"]) ? body["count"] : 1;
+        const count =
+          typeof body["count"] === "number" && Number.isInteger(body["count"]) ? body["count"] : 1;
         const via: MailVia | null = body["via"] === "smtp" || body["via"] === "resend" ? body["via"] : null;
         const statusCode = typeof body["statusCode"] === "number" ? body["statusCode"] : 500;
         store.failNext(count, via, statusCode);
@@ -157,9 +169,14 @@ export async function startMailFake(options: MailFakeOptions = {}): Promise<Mail
       sendJson(res, 404, { error: `Unknown endpoint ${req.method} ${path}` });
     } catch (err) {
       if (err instanceof ResendError) return sendJson(res, err.statusCode, err.toBody());
-      if (err instanceof BodyTooLargeError) return sendJson(res, 413, { statusCode: 413, name: "validation_error", message: err.message });
+      if (err instanceof BodyTooLargeError)
+        return sendJson(res, 413, { statusCode: 413, name: "validation_error", message: err.message });
       log(`internal error: ${err instanceof Error ? (err.stack ?? err.message) : String(err)}`);
-      sendJson(res, 500, { statusCode: 500, name: "internal_server_error", message: "The local mail fake hit an internal error." });
+      sendJson(res, 500, {
+        statusCode: 500,
+        name: "internal_server_error",
+        message: "The local mail fake hit an internal error.",
+      });
     }
   }
 

@@ -9,7 +9,11 @@ export interface SmtpCatcher {
 }
 
 /** Accepts any sender, recipient and credentials, and keeps every message. */
-export async function startSmtpCatcher(store: MailStore, port: number, log: (line: string) => void): Promise<SmtpCatcher> {
+export async function startSmtpCatcher(
+  store: MailStore,
+  port: number,
+  log: (line: string) => void,
+): Promise<SmtpCatcher> {
   const server = new SMTPServer({
     name: "mail-fake.localhost",
     banner: "Yokeline local SMTP catcher (development fake)",
@@ -27,12 +31,18 @@ export async function startSmtpCatcher(store: MailStore, port: number, log: (lin
       stream.on("error", (err) => callback(err));
       stream.on("end", () => {
         if (stream.sizeExceeded) {
-          callback(Object.assign(new Error("Message exceeds the fixed maximum message size"), { responseCode: 552 }));
+          callback(
+            Object.assign(new Error("Message exceeds the fixed maximum message size"), { responseCode: 552 }),
+          );
           return;
         }
         if (store.takeFailure("smtp")) {
           log("smtp: failing a message on purpose (fail-next)");
-          callback(Object.assign(new Error("4.3.0 Temporary failure injected by the mail fake"), { responseCode: 451 }));
+          callback(
+            Object.assign(new Error("4.3.0 Temporary failure injected by the mail fake"), {
+              responseCode: 451,
+            }),
+          );
           return;
         }
         const raw = Buffer.concat(chunks);
@@ -64,7 +74,9 @@ export async function startSmtpCatcher(store: MailStore, port: number, log: (lin
           log(`smtp: ${message.subject ?? "(no subject)"} → ${envelopeTo.join(", ")}`);
           callback(null, `Queued as ${message.id}`);
         } catch (err) {
-          callback(Object.assign(new Error(`Could not parse message: ${String(err)}`), { responseCode: 554 }));
+          callback(
+            Object.assign(new Error(`Could not parse message: ${String(err)}`), { responseCode: 554 }),
+          );
         }
       });
     },

@@ -41,10 +41,13 @@ export function matchesQuery(message: StoredMessage, query: MessageQuery): boole
   if (query.via && message.via !== query.via) return false;
   if (query.to) {
     const wanted = query.to.toLowerCase();
-    const all = [...message.to, ...message.cc, ...message.bcc, ...(message.envelope?.to ?? [])].map((a) => a.toLowerCase());
+    const all = [...message.to, ...message.cc, ...message.bcc, ...(message.envelope?.to ?? [])].map((a) =>
+      a.toLowerCase(),
+    );
     if (!all.includes(wanted)) return false;
   }
-  if (query.subject && !(message.subject ?? "").toLowerCase().includes(query.subject.toLowerCase())) return false;
+  if (query.subject && !(message.subject ?? "").toLowerCase().includes(query.subject.toLowerCase()))
+    return false;
   return true;
 }
 

@@ -10,7 +10,14 @@ export interface CardInput {
 
 export type CardOutcome =
   | { kind: "success"; brand: string; last4: string; expMonth: number; expYear: number }
-  | { kind: "declined"; code: "card_declined"; declineCode: string; message: string; brand: string; last4: string }
+  | {
+      kind: "declined";
+      code: "card_declined";
+      declineCode: string;
+      message: string;
+      brand: string;
+      last4: string;
+    }
   | { kind: "invalid"; field: "number" | "expiry" | "cvc"; code: string; message: string };
 
 interface TestCard {
@@ -21,7 +28,10 @@ interface TestCard {
 export const TEST_CARDS: Readonly<Record<string, TestCard>> = {
   "4242424242424242": { brand: "visa", result: "success" },
   "5555555555554444": { brand: "mastercard", result: "success" },
-  "4000000000000002": { brand: "visa", result: { declineCode: "generic_decline", message: "Your card was declined." } },
+  "4000000000000002": {
+    brand: "visa",
+    result: { declineCode: "generic_decline", message: "Your card was declined." },
+  },
   "4000000000009995": {
     brand: "visa",
     result: { declineCode: "insufficient_funds", message: "Your card has insufficient funds." },
@@ -56,7 +66,12 @@ function parseExpiry(raw: string, now: Date): { month: number; year: number } | 
 export function evaluateCard(input: CardInput, now = new Date()): CardOutcome {
   const number = input.number.replace(/[\s-]/g, "");
   if (!/^\d{12,19}$/.test(number) || !luhnValid(number)) {
-    return { kind: "invalid", field: "number", code: "invalid_number", message: "Your card number is invalid." };
+    return {
+      kind: "invalid",
+      field: "number",
+      code: "invalid_number",
+      message: "Your card number is invalid.",
+    };
   }
   const card = TEST_CARDS[number];
   if (!card) {
@@ -70,13 +85,28 @@ export function evaluateCard(input: CardInput, now = new Date()): CardOutcome {
   }
   const expiry = parseExpiry(input.expiry ?? "", now);
   if (expiry === "incomplete") {
-    return { kind: "invalid", field: "expiry", code: "invalid_expiry", message: "Your card's expiration date is incomplete." };
+    return {
+      kind: "invalid",
+      field: "expiry",
+      code: "invalid_expiry",
+      message: "Your card's expiration date is incomplete.",
+    };
   }
   if (expiry === "past") {
-    return { kind: "invalid", field: "expiry", code: "invalid_expiry_year", message: "Your card's expiration date is in the past." };
+    return {
+      kind: "invalid",
+      field: "expiry",
+      code: "invalid_expiry_year",
+      message: "Your card's expiration date is in the past.",
+    };
   }
   if (!/^\d{3,4}$/.test((input.cvc ?? "").trim())) {
-    return { kind: "invalid", field: "cvc", code: "incomplete_cvc", message: "Your card's security code is incomplete." };
+    return {
+      kind: "invalid",
+      field: "cvc",
+      code: "incomplete_cvc",
+      message: "Your card's security code is incomplete.",
+    };
   }
   const last4 = number.slice(-4);
   if (card.result === "success") {

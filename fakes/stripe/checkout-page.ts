@@ -54,9 +54,10 @@ function summary(stored: StoredSession): string {
   const { session, lineItems } = stored;
   const rows = lineItems
     .map(
-      (li) => `<tr><td>${escapeHtml(li.description)}</td><td class="num">${li.quantity}</td><td class="num">${escapeHtml(
-        formatAmount(li.amount_total, li.currency),
-      )}</td></tr>`,
+      (li) =>
+        `<tr><td>${escapeHtml(li.description)}</td><td class="num">${li.quantity}</td><td class="num">${escapeHtml(
+          formatAmount(li.amount_total, li.currency),
+        )}</td></tr>`,
     )
     .join("\n");
   return `<table>
@@ -76,7 +77,9 @@ export function renderCheckoutPage(stored: StoredSession, state: PageState = {})
   const total = formatAmount(session.amount_total, session.currency);
   if (session.status !== "open") {
     const done = session.status === "complete";
-    const next = done ? session.success_url.replaceAll("{CHECKOUT_SESSION_ID}", session.id) : session.cancel_url;
+    const next = done
+      ? session.success_url.replaceAll("{CHECKOUT_SESSION_ID}", session.id)
+      : session.cancel_url;
     return layout(
       done ? "Payment complete" : "Checkout expired",
       `<h1>${done ? "This payment is complete" : "This checkout session has expired"}</h1>
@@ -87,7 +90,8 @@ ${next ? `<a class="cancel" href="${escapeHtml(next)}">Return to the shop</a>` :
   }
 
   const err = state.error;
-  const invalid = (field: string) => (err?.field === field ? ` aria-invalid="true" aria-describedby="payment-error"` : "");
+  const invalid = (field: string) =>
+    err?.field === field ? ` aria-invalid="true" aria-describedby="payment-error"` : "";
   const values = state.values ?? {};
   const emailField = session.customer_email
     ? `<p class="hint">Paying as <strong>${escapeHtml(session.customer_email)}</strong></p>`
@@ -131,5 +135,8 @@ ${session.cancel_url ? `<a class="cancel" href="${escapeHtml(session.cancel_url)
 }
 
 export function renderNotFound(id: string): string {
-  return layout("Checkout not found", `<h1>Checkout session not found</h1><p>No session <code>${escapeHtml(id)}</code> exists on this fake.</p>`);
+  return layout(
+    "Checkout not found",
+    `<h1>Checkout session not found</h1><p>No session <code>${escapeHtml(id)}</code> exists on this fake.</p>`,
+  );
 }

@@ -45,21 +45,79 @@ export type PayResult =
 // Accepted and ignored: they change nothing the fake models. Params that would change
 // the totals (discounts, shipping, tax) are rejected instead of being silently dropped.
 const SESSION_PARAMS = new Set([
-  "mode", "line_items", "success_url", "cancel_url", "client_reference_id", "customer_email", "metadata",
-  "payment_intent_data", "expand", "expires_at", "locale", "payment_method_types", "submit_type", "currency",
-  "billing_address_collection", "phone_number_collection", "allow_promotion_codes", "custom_text",
-  "consent_collection", "customer_creation", "invoice_creation", "shipping_address_collection",
-  "tax_id_collection", "ui_mode", "payment_method_collection", "after_expiration", "custom_fields",
-  "payment_method_options", "automatic_tax",
+  "mode",
+  "line_items",
+  "success_url",
+  "cancel_url",
+  "client_reference_id",
+  "customer_email",
+  "metadata",
+  "payment_intent_data",
+  "expand",
+  "expires_at",
+  "locale",
+  "payment_method_types",
+  "submit_type",
+  "currency",
+  "billing_address_collection",
+  "phone_number_collection",
+  "allow_promotion_codes",
+  "custom_text",
+  "consent_collection",
+  "customer_creation",
+  "invoice_creation",
+  "shipping_address_collection",
+  "tax_id_collection",
+  "ui_mode",
+  "payment_method_collection",
+  "after_expiration",
+  "custom_fields",
+  "payment_method_options",
+  "automatic_tax",
 ]);
-const UNSUPPORTED_SESSION_PARAMS = ["discounts", "shipping_options", "customer", "subscription_data", "setup_intent_data"];
-const LINE_ITEM_PARAMS = new Set(["price_data", "quantity", "price", "adjustable_quantity", "tax_rates", "dynamic_tax_rates"]);
-const PRICE_DATA_PARAMS = new Set(["currency", "unit_amount", "unit_amount_decimal", "product_data", "product", "tax_behavior"]);
+const UNSUPPORTED_SESSION_PARAMS = [
+  "discounts",
+  "shipping_options",
+  "customer",
+  "subscription_data",
+  "setup_intent_data",
+];
+const LINE_ITEM_PARAMS = new Set([
+  "price_data",
+  "quantity",
+  "price",
+  "adjustable_quantity",
+  "tax_rates",
+  "dynamic_tax_rates",
+]);
+const PRICE_DATA_PARAMS = new Set([
+  "currency",
+  "unit_amount",
+  "unit_amount_decimal",
+  "product_data",
+  "product",
+  "tax_behavior",
+]);
 const PAYMENT_INTENT_DATA_PARAMS = new Set([
-  "metadata", "description", "receipt_email", "capture_method", "setup_future_usage", "statement_descriptor",
-  "statement_descriptor_suffix", "shipping", "transfer_group",
+  "metadata",
+  "description",
+  "receipt_email",
+  "capture_method",
+  "setup_future_usage",
+  "statement_descriptor",
+  "statement_descriptor_suffix",
+  "shipping",
+  "transfer_group",
 ]);
-const REFUND_PARAMS = new Set(["payment_intent", "charge", "amount", "reason", "metadata", "expand", "instructions_email"]);
+const REFUND_PARAMS = new Set([
+  "payment_intent",
+  "charge",
+  "amount",
+  "reason",
+  "metadata",
+  "expand",
+  "instructions_email",
+]);
 const EMAIL_RE = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 
 function checkUrl(value: string, param: string): string {
@@ -101,17 +159,23 @@ export class StripeFakeCore {
   createCheckoutSession(params: FormObject): CheckoutSession {
     for (const key of UNSUPPORTED_SESSION_PARAMS) {
       if (params[key] !== undefined) {
-        throw invalidRequest(`The local Stripe fake does not support \`${key}\` on Checkout Sessions.`, { param: key });
+        throw invalidRequest(`The local Stripe fake does not support \`${key}\` on Checkout Sessions.`, {
+          param: key,
+        });
       }
     }
     rejectUnknown(params, SESSION_PARAMS);
     const mode = requiredString(params, "mode");
-    if (mode !== "payment") throw invalidParam("mode", `The local Stripe fake only supports mode=payment, got ${mode}.`);
+    if (mode !== "payment")
+      throw invalidParam("mode", `The local Stripe fake only supports mode=payment, got ${mode}.`);
     const uiMode = optionalString(params, "ui_mode");
-    if (uiMode !== null && uiMode !== "hosted") throw invalidParam("ui_mode", "The local Stripe fake only supports ui_mode=hosted.");
+    if (uiMode !== null && uiMode !== "hosted")
+      throw invalidParam("ui_mode", "The local Stripe fake only supports ui_mode=hosted.");
     const automaticTax = optionalObject(params, "automatic_tax");
     if (automaticTax && automaticTax["enabled"] === "true") {
-      throw invalidRequest("The local Stripe fake does not compute tax (automatic_tax[enabled]=true).", { param: "automatic_tax[enabled]" });
+      throw invalidRequest("The local Stripe fake does not compute tax (automatic_tax[enabled]=true).", {
+        param: "automatic_tax[enabled]",
+      });
     }
 
     const successUrl = checkUrl(requiredString(params, "success_url"), "success_url");
@@ -131,7 +195,9 @@ export class StripeFakeCore {
     rejectUnknown(pid, PAYMENT_INTENT_DATA_PARAMS, "payment_intent_data");
     const captureMethod = optionalString(pid, "capture_method", "payment_intent_data[capture_method]");
     if (captureMethod !== null && captureMethod !== "automatic" && captureMethod !== "automatic_async") {
-      throw invalidRequest("The local Stripe fake only supports automatic capture.", { param: "payment_intent_data[capture_method]" });
+      throw invalidRequest("The local Stripe fake only supports automatic capture.", {
+        param: "payment_intent_data[capture_method]",
+      });
     }
     const receiptEmail = optionalString(pid, "receipt_email", "payment_intent_data[receipt_email]");
     const paymentIntentData = {
@@ -145,7 +211,10 @@ export class StripeFakeCore {
     const requestedExpiry = optionalInteger(params, "expires_at");
     if (requestedExpiry !== null) {
       if (requestedExpiry < now + 30 * 60 - 5 || requestedExpiry > now + 24 * 3600 + 5) {
-        throw invalidParam("expires_at", "The `expires_at` timestamp must be between 30 minutes and 24 hours from Checkout Session creation.");
+        throw invalidParam(
+          "expires_at",
+          "The `expires_at` timestamp must be between 30 minutes and 24 hours from Checkout Session creation.",
+        );
       }
       expiresAt = requestedExpiry;
     }
@@ -197,7 +266,8 @@ export class StripeFakeCore {
   private readLineItems(params: FormObject): LineItem[] {
     const raw = optionalArray(params, "line_items");
     if (!raw || raw.length === 0) throw missingParam("line_items");
-    if (raw.length > 100) throw invalidParam("line_items", "A Checkout Session can have at most 100 line items.");
+    if (raw.length > 100)
+      throw invalidParam("line_items", "A Checkout Session can have at most 100 line items.");
     const items = raw.map((entry, i) => this.readLineItem(entry, `line_items[${i}]`));
     const currency = items[0]?.currency;
     if (items.some((li) => li.currency !== currency)) {
@@ -216,19 +286,34 @@ export class StripeFakeCore {
     rejectUnknown(priceData, PRICE_DATA_PARAMS, `${param}[price_data]`);
     const currency = requiredString(priceData, "currency", `${param}[price_data][currency]`).toLowerCase();
     if (!isKnownCurrency(currency)) {
-      throw invalidParam(`${param}[price_data][currency]`, `Invalid currency: ${currency}.`, "parameter_invalid_string");
+      throw invalidParam(
+        `${param}[price_data][currency]`,
+        `Invalid currency: ${currency}.`,
+        "parameter_invalid_string",
+      );
     }
     let unitAmount = optionalInteger(priceData, "unit_amount", `${param}[price_data][unit_amount]`);
     if (unitAmount === null) {
-      const decimal = optionalString(priceData, "unit_amount_decimal", `${param}[price_data][unit_amount_decimal]`);
+      const decimal = optionalString(
+        priceData,
+        "unit_amount_decimal",
+        `${param}[price_data][unit_amount_decimal]`,
+      );
       if (decimal === null) throw missingParam(`${param}[price_data][unit_amount]`);
       if (!/^\d+$/.test(decimal)) {
-        throw invalidParam(`${param}[price_data][unit_amount_decimal]`, "The local Stripe fake only supports whole-number unit_amount_decimal.");
+        throw invalidParam(
+          `${param}[price_data][unit_amount_decimal]`,
+          "The local Stripe fake only supports whole-number unit_amount_decimal.",
+        );
       }
       unitAmount = Number(decimal);
     }
     if (unitAmount < 0) {
-      throw invalidParam(`${param}[price_data][unit_amount]`, "This value must be greater than or equal to 0.", "parameter_invalid_integer");
+      throw invalidParam(
+        `${param}[price_data][unit_amount]`,
+        "This value must be greater than or equal to 0.",
+        "parameter_invalid_integer",
+      );
     }
     const productData = optionalObject(priceData, "product_data", `${param}[price_data][product_data]`);
     const productId = optionalString(priceData, "product", `${param}[price_data][product]`);
@@ -238,7 +323,11 @@ export class StripeFakeCore {
     const quantity = optionalInteger(entry, "quantity", `${param}[quantity]`);
     if (quantity === null) throw missingParam(`${param}[quantity]`);
     if (quantity < 1 || quantity > 999_999) {
-      throw invalidParam(`${param}[quantity]`, "Quantity must be between 1 and 999999.", "parameter_invalid_integer");
+      throw invalidParam(
+        `${param}[quantity]`,
+        "Quantity must be between 1 and 999999.",
+        "parameter_invalid_integer",
+      );
     }
     const total = unitAmount * quantity;
     return {
@@ -283,12 +372,20 @@ export class StripeFakeCore {
     const status = optionalString(params, "status");
     const items = Object.values(this.state.sessions)
       .map((s) => s.session)
-      .filter((s) => (paymentIntent === null || s.payment_intent === paymentIntent) && (status === null || s.status === status));
+      .filter(
+        (s) =>
+          (paymentIntent === null || s.payment_intent === paymentIntent) &&
+          (status === null || s.status === status),
+      );
     return this.list(items, params, "/v1/checkout/sessions");
   }
 
   listLineItems(id: string, params: FormObject): unknown {
-    return this.list([...this.storedSession(id).lineItems].reverse(), params, `/v1/checkout/sessions/${id}/line_items`);
+    return this.list(
+      [...this.storedSession(id).lineItems].reverse(),
+      params,
+      `/v1/checkout/sessions/${id}/line_items`,
+    );
   }
 
   expireSession(id: string, ctx: RequestContext): CheckoutSession {
@@ -317,11 +414,14 @@ export class StripeFakeCore {
     const { session } = stored;
     if (session.status !== "open") {
       const message =
-        session.status === "complete" ? "This Checkout Session has already been paid." : "This Checkout Session has expired.";
+        session.status === "complete"
+          ? "This Checkout Session has already been paid."
+          : "This Checkout Session has expired.";
       return { outcome: "unavailable", message, session: clone(session) };
     }
     const result = evaluateCard(card);
-    if (result.kind === "invalid") return { outcome: "invalid", code: result.code, field: result.field, message: result.message };
+    if (result.kind === "invalid")
+      return { outcome: "invalid", code: result.code, field: result.field, message: result.message };
 
     const pi = this.paymentIntentFor(stored);
     const paymentMethod = newId("pm", 24);
@@ -339,7 +439,13 @@ export class StripeFakeCore {
       };
       this.persist();
       this.emit("payment_intent.payment_failed", pi, NO_REQUEST);
-      return { outcome: "declined", code: result.code, declineCode: result.declineCode, message: result.message, paymentIntent: clone(pi) };
+      return {
+        outcome: "declined",
+        code: result.code,
+        declineCode: result.declineCode,
+        message: result.message,
+        paymentIntent: clone(pi),
+      };
     }
 
     const charge: Charge = {
@@ -395,7 +501,14 @@ export class StripeFakeCore {
       payment_status: "paid",
       payment_intent: pi.id,
       url: null,
-      customer_details: { email: customerEmail, name: null, phone: null, address: null, tax_exempt: "none", tax_ids: [] },
+      customer_details: {
+        email: customerEmail,
+        name: null,
+        phone: null,
+        address: null,
+        tax_exempt: "none",
+        tax_ids: [],
+      },
     } satisfies Partial<CheckoutSession>);
     this.persist();
     this.emit("payment_intent.succeeded", pi, NO_REQUEST);
@@ -459,9 +572,12 @@ export class StripeFakeCore {
     const piId = optionalString(params, "payment_intent");
     const chargeId = optionalString(params, "charge");
     if (piId === null && chargeId === null) {
-      throw invalidRequest("One of the following params should be provided for this request: payment_intent or charge.", {
-        code: "parameter_missing",
-      });
+      throw invalidRequest(
+        "One of the following params should be provided for this request: payment_intent or charge.",
+        {
+          code: "parameter_missing",
+        },
+      );
     }
     let charge: Charge | undefined;
     if (piId !== null) {
@@ -475,7 +591,9 @@ export class StripeFakeCore {
         });
       }
       if (chargeId !== null && chargeId !== charge.id) {
-        throw invalidRequest(`The charge ${chargeId} does not belong to PaymentIntent ${piId}.`, { param: "charge" });
+        throw invalidRequest(`The charge ${chargeId} does not belong to PaymentIntent ${piId}.`, {
+          param: "charge",
+        });
       }
     } else if (chargeId !== null) {
       charge = this.state.charges[chargeId];
@@ -485,7 +603,9 @@ export class StripeFakeCore {
 
     const remaining = charge.amount - charge.amount_refunded;
     if (remaining <= 0) {
-      throw invalidRequest(`Charge ${charge.id} has already been refunded.`, { code: "charge_already_refunded" });
+      throw invalidRequest(`Charge ${charge.id} has already been refunded.`, {
+        code: "charge_already_refunded",
+      });
     }
     const requested = optionalInteger(params, "amount");
     if (requested !== null && requested <= 0) {
@@ -498,7 +618,11 @@ export class StripeFakeCore {
         { code: "amount_too_large", param: "amount" },
       );
     }
-    const reason = oneOf(optionalString(params, "reason"), ["duplicate", "fraudulent", "requested_by_customer"] as const, "reason");
+    const reason = oneOf(
+      optionalString(params, "reason"),
+      ["duplicate", "fraudulent", "requested_by_customer"] as const,
+      "reason",
+    );
     const refund: Refund = {
       id: newId("re_test", 24),
       object: "refund",
@@ -540,13 +664,21 @@ export class StripeFakeCore {
 
   // ---- Events --------------------------------------------------------------
 
-  emit(type: string, object: unknown, ctx: RequestContext, previousAttributes?: Record<string, unknown>): StoredEvent {
+  emit(
+    type: string,
+    object: unknown,
+    ctx: RequestContext,
+    previousAttributes?: Record<string, unknown>,
+  ): StoredEvent {
     const event: StripeEvent = {
       id: newId("evt_test", 24),
       object: "event",
       api_version: this.apiVersion,
       created: nowSeconds(),
-      data: { object: clone(object), ...(previousAttributes ? { previous_attributes: previousAttributes } : {}) },
+      data: {
+        object: clone(object),
+        ...(previousAttributes ? { previous_attributes: previousAttributes } : {}),
+      },
       livemode: false,
       pending_webhooks: this.config.webhookUrl ? 1 : 0,
       request: { id: ctx.requestId, idempotency_key: ctx.idempotencyKey },
@@ -574,9 +706,14 @@ export class StripeFakeCore {
   // ---- Helpers -------------------------------------------------------------
 
   /** Sorts newest first and applies limit/starting_after/ending_before like Stripe lists. */
-  private list(items: ReadonlyArray<{ id: string; created?: number }>, params: FormObject, url: string): unknown {
+  private list(
+    items: ReadonlyArray<{ id: string; created?: number }>,
+    params: FormObject,
+    url: string,
+  ): unknown {
     const limit = optionalInteger(params, "limit") ?? 10;
-    if (limit < 1 || limit > 100) throw invalidParam("limit", "This value must be between 1 and 100.", "parameter_invalid_integer");
+    if (limit < 1 || limit > 100)
+      throw invalidParam("limit", "This value must be between 1 and 100.", "parameter_invalid_integer");
     let sorted = [...items].reverse(); // insertion order is creation order
     const startingAfter = optionalString(params, "starting_after");
     const endingBefore = optionalString(params, "ending_before");
@@ -618,12 +755,18 @@ export class StripeFakeCore {
           const value = record[field];
           if (field === "line_items" && record["object"] === "checkout.session") {
             const stored = this.state.sessions[String(record["id"])];
-            record[field] = { object: "list", data: clone(stored?.lineItems ?? []), has_more: false, url: `/v1/checkout/sessions/${String(record["id"])}/line_items` };
+            record[field] = {
+              object: "list",
+              data: clone(stored?.lineItems ?? []),
+              has_more: false,
+              url: `/v1/checkout/sessions/${String(record["id"])}/line_items`,
+            };
             continue;
           }
           if (typeof value === "string") {
             const found = this.lookup(value);
-            if (found === undefined) throw invalidRequest(`This property cannot be expanded (${path}).`, { param: "expand" });
+            if (found === undefined)
+              throw invalidRequest(`This property cannot be expanded (${path}).`, { param: "expand" });
             record[field] = clone(found);
             next.push(record[field]);
           } else if (value && typeof value === "object") {

@@ -1,10 +1,6 @@
 /** An error answered in Stripe's shape, `{ error: { type, message, code?, param? } }`. */
 export type StripeErrorType =
-  | "invalid_request_error"
-  | "card_error"
-  | "idempotency_error"
-  | "api_error"
-  | "authentication_error";
+  "invalid_request_error" | "card_error" | "idempotency_error" | "api_error" | "authentication_error";
 
 export interface StripeErrorExtra {
   code?: string;

@@ -1,7 +1,10 @@
 /** Minor-unit digits per currency, as Intl knows them (JPY → 0, USD → 2). */
 export function currencyDigits(currency: string): number {
   try {
-    return new Intl.NumberFormat("en", { style: "currency", currency }).resolvedOptions().maximumFractionDigits ?? 2;
+    return (
+      new Intl.NumberFormat("en", { style: "currency", currency }).resolvedOptions().maximumFractionDigits ??
+      2
+    );
   } catch {
     return 2;
   }
@@ -11,7 +14,9 @@ export function formatAmount(amount: number, currency: string): string {
   const digits = currencyDigits(currency);
   const value = amount / 10 ** digits;
   try {
-    return new Intl.NumberFormat("en-US", { style: "currency", currency: currency.toUpperCase() }).format(value);
+    return new Intl.NumberFormat("en-US", { style: "currency", currency: currency.toUpperCase() }).format(
+      value,
+    );
   } catch {
     return `${value.toFixed(digits)} ${currency.toUpperCase()}`;
   }

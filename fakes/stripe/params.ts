@@ -10,7 +10,8 @@ export function isFormObject(value: FormValue | undefined): value is FormObject 
 export function optionalString(params: FormObject, key: string, param = key): string | null {
   const value = params[key];
   if (value === undefined || value === "") return null;
-  if (typeof value !== "string") throw invalidParam(param, `Invalid string: ${param}`, "parameter_invalid_string");
+  if (typeof value !== "string")
+    throw invalidParam(param, `Invalid string: ${param}`, "parameter_invalid_string");
   return value;
 }
 
@@ -43,10 +44,18 @@ export function optionalArray(params: FormObject, key: string, param = key): For
   return value;
 }
 
-export function oneOf<T extends string>(value: string | null, allowed: readonly T[], param: string): T | null {
+export function oneOf<T extends string>(
+  value: string | null,
+  allowed: readonly T[],
+  param: string,
+): T | null {
   if (value === null) return null;
   if (!(allowed as readonly string[]).includes(value)) {
-    throw invalidParam(param, `Invalid ${param}: must be one of ${allowed.join(", ")}`, "parameter_invalid_string");
+    throw invalidParam(
+      param,
+      `Invalid ${param}: must be one of ${allowed.join(", ")}`,
+      "parameter_invalid_string",
+    );
   }
   return value as T;
 }
@@ -70,8 +79,10 @@ export function readMetadata(params: FormObject, key = "metadata", param = key):
   for (const k of keys) {
     const v = raw[k];
     if (typeof v !== "string") throw invalidParam(`${param}[${k}]`, `Invalid string: ${param}[${k}]`);
-    if (k.length > 40) throw invalidParam(`${param}[${k}]`, "Metadata keys can be at most 40 characters long.");
-    if (v.length > 500) throw invalidParam(`${param}[${k}]`, "Metadata values can be at most 500 characters long.");
+    if (k.length > 40)
+      throw invalidParam(`${param}[${k}]`, "Metadata keys can be at most 40 characters long.");
+    if (v.length > 500)
+      throw invalidParam(`${param}[${k}]`, "Metadata values can be at most 500 characters long.");
     if (v !== "") out[k] = v;
   }
   return out;

@@ -91,10 +91,17 @@ function authenticate(req: IncomingMessage, requiredKey: string | undefined): st
     );
   }
   if (!TEST_KEY_RE.test(key) || (requiredKey !== undefined && key !== requiredKey)) {
-    const hint = key.startsWith("sk_live_") ? " The local Stripe fake only accepts test-mode keys (sk_test_...)." : "";
-    throw new StripeApiError(401, "invalid_request_error", `Invalid API Key provided: ${redactKey(key)}.${hint}`, {
-      code: "api_key_invalid",
-    });
+    const hint = key.startsWith("sk_live_")
+      ? " The local Stripe fake only accepts test-mode keys (sk_test_...)."
+      : "";
+    throw new StripeApiError(
+      401,
+      "invalid_request_error",
+      `Invalid API Key provided: ${redactKey(key)}.${hint}`,
+      {
+        code: "api_key_invalid",
+      },
+    );
   }
   return key;
 }
@@ -103,12 +110,21 @@ async function readJson(req: IncomingMessage): Promise<Record<string, unknown>> 
   const body = await readBody(req);
   if (body.trim() === "") return {};
   const parsed: unknown = JSON.parse(body);
-  if (!parsed || typeof parsed !== "object" || Array.isArray(parsed)) throw new Error("Expected a JSON object");
+  if (!parsed || typeof parsed !== "object" || Array.isArray(parsed))
+    throw new Error("Expected a JSON object");
   return parsed as Record<string, unknown>;
 }
 
 function applyConfigPatch(config: WebhookConfig, patch: Record<string, unknown>): void {
-  const { webhookUrl, webhookSecret, duplicateDelivery, duplicateDelayMs, retryDelaysMs, deliveryTimeoutMs, enabledEvents } = patch;
+  const {
+    webhookUrl,
+    webhookSecret,
+    duplicateDelivery,
+    duplicateDelayMs,
+    retryDelaysMs,
+    deliveryTimeoutMs,
+    enabledEvents,
+  } = patch;
   if (webhookUrl !== undefined) {
     if (webhookUrl !== null && (typeof webhookUrl !== "string" || !/^https?:\/\//.test(webhookUrl))) {
       throw new Error("webhookUrl must be an http(s) URL or null");
@@ -116,7 +132,8 @@ function applyConfigPatch(config: WebhookConfig, patch: Record<string, unknown>)
     config.webhookUrl = webhookUrl;
   }
   if (webhookSecret !== undefined) {
-    if (typeof webhookSecret !== "string" || webhookSecret === "") throw new Error("webhookSecret must be a non-empty string");
+    if (typeof webhookSecret !== "string" || webhookSecret === "")
+      throw new Error("webhookSecret must be a non-empty string");
     config.webhookSecret = webhookSecret;
   }
   if (duplicateDelivery !== undefined) {
@@ -129,11 +146,13 @@ function applyConfigPatch(config: WebhookConfig, patch: Record<string, unknown>)
     config.duplicateDelayMs = duplicateDelayMs;
   }
   if (deliveryTimeoutMs !== undefined) {
-    if (!nonNegative(deliveryTimeoutMs) || deliveryTimeoutMs === 0) throw new Error("deliveryTimeoutMs must be a positive number");
+    if (!nonNegative(deliveryTimeoutMs) || deliveryTimeoutMs === 0)
+      throw new Error("deliveryTimeoutMs must be a positive number");
     config.deliveryTimeoutMs = deliveryTimeoutMs;
   }
   if (retryDelaysMs !== undefined) {
-    if (!Array.isArray(retryDelaysMs) || !retryDelaysMs.every(nonNegative)) throw new Error("retryDelaysMs must be an array of numbers");
+    if (!Array.isArray(retryDelaysMs) || !retryDelaysMs.every(nonNegative))
+      throw new Error("retryDelaysMs must be an array of numbers");
     config.retryDelaysMs = retryDelaysMs;
   }
   if (enabledEvents !== undefined) {
@@ -145,7 +164,10 @@ function applyConfigPatch(config: WebhookConfig, patch: Record<string, unknown>)
 }
 
 export async function startStripeFake(options: StripeFakeOptions = {}): Promise<StripeFake> {
-  const log = options.log === false ? () => {} : (options.log ?? ((line: string) => console.log(`[stripe-fake] ${line}`)));
+  const log =
+    options.log === false
+      ? () => {}
+      : (options.log ?? ((line: string) => console.log(`[stripe-fake] ${line}`)));
   const config: WebhookConfig = {
     webhookUrl: options.webhookUrl ?? null,
     webhookSecret: options.webhookSecret ?? DEFAULT_WEBHOOK_SECRET,
@@ -164,31 +186,70 @@ export async function startStripeFake(options: StripeFakeOptions = {}): Promise<
   core = new StripeFakeCore(persistence.load(), config, dispatcher, () => publicUrl, API_VERSION, persist);
 
   const api: Route[] = [
-    { method: "POST", pattern: /^\/v1\/checkout\/sessions$/, handler: (_m, p) => core.expand(core.createCheckoutSession(p), readExpand(p)) },
+    {
+      method: "POST",
+      pattern: /^\/v1\/checkout\/sessions$/,
+      handler: (_m, p) => core.expand(core.createCheckoutSession(p), readExpand(p)),
+    },
     { method: "GET", pattern: /^\/v1\/checkout\/sessions$/, handler: (_m, p) => core.listSessions(p) },
-    { method: "GET", pattern: /^\/v1\/checkout\/sessions\/([^/]+)$/, handler: (m, p) => core.getSession(m[1] as string, readExpand(p)) },
-    { method: "GET", pattern: /^\/v1\/checkout\/sessions\/([^/]+)\/line_items$/, handler: (m, p) => core.listLineItems(m[1] as string, p) },
-    { method: "POST", pattern: /^\/v1\/checkout\/sessions\/([^/]+)\/expire$/, handler: (m, p, ctx) => core.expand(core.expireSession(m[1] as string, ctx), readExpand(p)) },
-    { method: "GET", pattern: /^\/v1\/payment_intents\/([^/]+)$/, handler: (m, p) => core.getPaymentIntent(m[1] as string, readExpand(p)) },
-    { method: "GET", pattern: /^\/v1\/charges\/([^/]+)$/, handler: (m, p) => core.getCharge(m[1] as string, readExpand(p)) },
-    { method: "POST", pattern: /^\/v1\/refunds$/, handler: (_m, p, ctx) => core.expand(core.createRefund(p, ctx), readExpand(p)) },
+    {
+      method: "GET",
+      pattern: /^\/v1\/checkout\/sessions\/([^/]+)$/,
+      handler: (m, p) => core.getSession(m[1] as string, readExpand(p)),
+    },
+    {
+      method: "GET",
+      pattern: /^\/v1\/checkout\/sessions\/([^/]+)\/line_items$/,
+      handler: (m, p) => core.listLineItems(m[1] as string, p),
+    },
+    {
+      method: "POST",
+      pattern: /^\/v1\/checkout\/sessions\/([^/]+)\/expire$/,
+      handler: (m, p, ctx) => core.expand(core.expireSession(m[1] as string, ctx), readExpand(p)),
+    },
+    {
+      method: "GET",
+      pattern: /^\/v1\/payment_intents\/([^/]+)$/,
+      handler: (m, p) => core.getPaymentIntent(m[1] as string, readExpand(p)),
+    },
+    {
+      method: "GET",
+      pattern: /^\/v1\/charges\/([^/]+)$/,
+      handler: (m, p) => core.getCharge(m[1] as string, readExpand(p)),
+    },
+    {
+      method: "POST",
+      pattern: /^\/v1\/refunds$/,
+      handler: (_m, p, ctx) => core.expand(core.createRefund(p, ctx), readExpand(p)),
+    },
     { method: "GET", pattern: /^\/v1\/refunds$/, handler: (_m, p) => core.listRefunds(p) },
-    { method: "GET", pattern: /^\/v1\/refunds\/([^/]+)$/, handler: (m, p) => core.getRefund(m[1] as string, readExpand(p)) },
+    {
+      method: "GET",
+      pattern: /^\/v1\/refunds\/([^/]+)$/,
+      handler: (m, p) => core.getRefund(m[1] as string, readExpand(p)),
+    },
     { method: "GET", pattern: /^\/v1\/events$/, handler: (_m, p) => core.listEvents(p) },
-    { method: "GET", pattern: /^\/v1\/events\/([^/]+)$/, handler: (m) => core.findEvent(m[1] as string).event },
+    {
+      method: "GET",
+      pattern: /^\/v1\/events\/([^/]+)$/,
+      handler: (m) => core.findEvent(m[1] as string).event,
+    },
   ];
 
   async function handleApi(req: IncomingMessage, res: ServerResponse, url: URL): Promise<void> {
     const requestId = newId("req", 14);
-    const stripeVersion = typeof req.headers["stripe-version"] === "string" ? req.headers["stripe-version"] : API_VERSION;
-    const idempotencyKey = typeof req.headers["idempotency-key"] === "string" ? req.headers["idempotency-key"] : null;
+    const stripeVersion =
+      typeof req.headers["stripe-version"] === "string" ? req.headers["stripe-version"] : API_VERSION;
+    const idempotencyKey =
+      typeof req.headers["idempotency-key"] === "string" ? req.headers["idempotency-key"] : null;
     const headers: Record<string, string> = { "Request-Id": requestId, "Stripe-Version": stripeVersion };
     if (idempotencyKey) headers["Idempotency-Key"] = idempotencyKey;
     const reply = (status: number, body: unknown, extra: Record<string, string> = {}) =>
       sendJson(res, status, body, { ...headers, ...extra });
     try {
       const apiKey = authenticate(req, options.apiKey);
-      const method = req.method === "POST" ? "POST" : req.method === "GET" || req.method === "HEAD" ? "GET" : null;
+      const method =
+        req.method === "POST" ? "POST" : req.method === "GET" || req.method === "HEAD" ? "GET" : null;
       const candidates = api.filter((r) => r.pattern.test(url.pathname));
       const route = candidates.find((r) => r.method === method);
       if (!route) {
@@ -198,7 +259,8 @@ export async function startStripeFake(options: StripeFakeOptions = {}): Promise<
           `Unrecognized request URL (${req.method}: ${url.pathname}). The local Stripe fake implements only the endpoints listed in fakes/README.md.`,
         );
       }
-      const params = method === "POST" ? parseStripeForm(await readBody(req)) : parseStripeForm(url.search.slice(1));
+      const params =
+        method === "POST" ? parseStripeForm(await readBody(req)) : parseStripeForm(url.search.slice(1));
       const match = route.pattern.exec(url.pathname) ?? [];
       const ctx: RequestContext = { requestId, idempotencyKey };
 
@@ -227,7 +289,13 @@ export async function startStripeFake(options: StripeFakeOptions = {}): Promise<
         }
         const body = route.handler(match, params, ctx);
         // Like Stripe, only requests that executed are saved; failed validation is not.
-        core.state.idempotency[recordKey] = { endpoint, paramsHash, status: 200, body, createdAt: Date.now() };
+        core.state.idempotency[recordKey] = {
+          endpoint,
+          paramsHash,
+          status: 200,
+          body,
+          createdAt: Date.now(),
+        };
         persist();
         reply(200, body);
         return;
@@ -235,14 +303,22 @@ export async function startStripeFake(options: StripeFakeOptions = {}): Promise<
       reply(200, route.handler(match, params, ctx));
     } catch (err) {
       if (err instanceof StripeApiError) {
-        reply(err.status, err.toBody(), err.status === 401 ? { "WWW-Authenticate": 'Basic realm="Stripe"' } : {});
+        reply(
+          err.status,
+          err.toBody(),
+          err.status === 401 ? { "WWW-Authenticate": 'Basic realm="Stripe"' } : {},
+        );
       } else if (err instanceof FormEncodingError) {
         reply(400, { error: { type: "invalid_request_error", message: err.message } });
       } else if (err instanceof BodyTooLargeError) {
         reply(413, { error: { type: "invalid_request_error", message: err.message } });
       } else {
-        log(`internal error on ${req.method} ${url.pathname}: ${err instanceof Error ? (err.stack ?? err.message) : String(err)}`);
-        reply(500, { error: { type: "api_error", message: "The local Stripe fake hit an internal error; see its log." } });
+        log(
+          `internal error on ${req.method} ${url.pathname}: ${err instanceof Error ? (err.stack ?? err.message) : String(err)}`,
+        );
+        reply(500, {
+          error: { type: "api_error", message: "The local Stripe fake hit an internal error; see its log." },
+        });
       }
     }
   }
@@ -268,10 +344,18 @@ export async function startStripeFake(options: StripeFakeOptions = {}): Promise<
         redirect(res, 303, result.redirectUrl);
         return;
       case "declined":
-        sendHtml(res, 402, renderCheckoutPage(stored, { error: { message: result.message, field: "number" }, values }));
+        sendHtml(
+          res,
+          402,
+          renderCheckoutPage(stored, { error: { message: result.message, field: "number" }, values }),
+        );
         return;
       case "invalid":
-        sendHtml(res, 400, renderCheckoutPage(stored, { error: { message: result.message, field: result.field }, values }));
+        sendHtml(
+          res,
+          400,
+          renderCheckoutPage(stored, { error: { message: result.message, field: result.field }, values }),
+        );
         return;
       case "unavailable":
         sendHtml(res, 409, renderCheckoutPage(stored));
@@ -295,7 +379,10 @@ export async function startStripeFake(options: StripeFakeOptions = {}): Promise<
       if (resend && isPost) {
         const stored = core.findEvent(resend[1] as string);
         const started = dispatcher.dispatch(stored, "resend");
-        if (!started) return sendJson(res, 409, { error: "No webhook URL is configured; POST /_fake/config { webhookUrl } first." });
+        if (!started)
+          return sendJson(res, 409, {
+            error: "No webhook URL is configured; POST /_fake/config { webhookUrl } first.",
+          });
         return sendJson(res, 202, { id: stored.event.id, resent: true });
       }
       const pay = /^\/_fake\/checkout\/([^/]+)\/pay$/.exec(path);
@@ -333,7 +420,8 @@ export async function startStripeFake(options: StripeFakeOptions = {}): Promise<
     const done = (p: Promise<void>) =>
       p.catch((err: unknown) => {
         log(`unhandled error: ${String(err)}`);
-        if (!res.headersSent) sendJson(res, 500, { error: { type: "api_error", message: "Internal fake error" } });
+        if (!res.headersSent)
+          sendJson(res, 500, { error: { type: "api_error", message: "Internal fake error" } });
       });
     if (url.pathname.startsWith("/v1/")) return void done(handleApi(req, res, url));
     if (url.pathname.startsWith("/_fake/")) return void done(handleControl(req, res, url));
@@ -347,7 +435,12 @@ export async function startStripeFake(options: StripeFakeOptions = {}): Promise<
         webhookUrl: config.webhookUrl,
       });
     }
-    sendJson(res, 404, { error: { type: "invalid_request_error", message: `Unrecognized request URL (${req.method}: ${url.pathname}).` } });
+    sendJson(res, 404, {
+      error: {
+        type: "invalid_request_error",
+        message: `Unrecognized request URL (${req.method}: ${url.pathname}).`,
+      },
+    });
   });
   // The SDK keeps sockets alive; headers timeouts stay default.
   const host = options.host ?? LOCALHOST;
@@ -399,7 +492,9 @@ export function stripeFakeOptionsFromEnv(env = process.env): StripeFakeOptions {
 
 async function main(): Promise<void> {
   const fake = await startStripeFake(stripeFakeOptionsFromEnv());
-  console.log(`[stripe-fake] listening on ${fake.url} (webhooks → ${fake.config.webhookUrl ?? "none configured"})`);
+  console.log(
+    `[stripe-fake] listening on ${fake.url} (webhooks → ${fake.config.webhookUrl ?? "none configured"})`,
+  );
   const stop = () => {
     void fake.close().then(() => process.exit(0));
   };

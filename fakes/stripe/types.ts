@@ -33,7 +33,14 @@ export interface CheckoutSession {
   created: number;
   currency: string;
   customer: null;
-  customer_details: { email: string | null; name: string | null; phone: null; address: null; tax_exempt: "none"; tax_ids: [] } | null;
+  customer_details: {
+    email: string | null;
+    name: string | null;
+    phone: null;
+    address: null;
+    tax_exempt: "none";
+    tax_ids: [];
+  } | null;
   customer_email: string | null;
   expires_at: number;
   livemode: false;
@@ -104,7 +111,14 @@ export interface Charge {
   payment_method: string;
   payment_method_details: {
     type: "card";
-    card: { brand: string; country: string; exp_month: number; exp_year: number; funding: string; last4: string };
+    card: {
+      brand: string;
+      country: string;
+      exp_month: number;
+      exp_year: number;
+      funding: string;
+      last4: string;
+    };
   };
   receipt_email: string | null;
   refunded: boolean;

@@ -15,7 +15,11 @@ export interface WebhookConfig {
 }
 
 /** Exactly Stripe's scheme: `t=<unix>,v1=<hex HMAC-SHA256 of "t.payload">`. */
-export function signPayload(payload: string, secret: string, timestamp = Math.floor(Date.now() / 1000)): string {
+export function signPayload(
+  payload: string,
+  secret: string,
+  timestamp = Math.floor(Date.now() / 1000),
+): string {
   const signature = createHmac("sha256", secret).update(`${timestamp}.${payload}`, "utf8").digest("hex");
   return `t=${timestamp},v1=${signature}`;
 }
@@ -54,7 +58,10 @@ export class WebhookDispatcher {
     const deadline = Date.now() + timeoutMs;
     while (this.inflight.size > 0) {
       if (Date.now() > deadline) return false;
-      await Promise.race([Promise.allSettled([...this.inflight]), this.sleep(Math.max(0, deadline - Date.now()))]);
+      await Promise.race([
+        Promise.allSettled([...this.inflight]),
+        this.sleep(Math.max(0, deadline - Date.now())),
+      ]);
     }
     return true;
   }
@@ -101,7 +108,11 @@ export class WebhookDispatcher {
     });
   }
 
-  private async deliverWithRetries(stored: StoredEvent, kind: DeliveryKind, initialDelayMs: number): Promise<void> {
+  private async deliverWithRetries(
+    stored: StoredEvent,
+    kind: DeliveryKind,
+    initialDelayMs: number,
+  ): Promise<void> {
     const generation = this.generation;
     if (initialDelayMs > 0) await this.sleep(initialDelayMs);
     const { retryDelaysMs } = this.getConfig();
@@ -140,7 +151,8 @@ export class WebhookDispatcher {
       await res.arrayBuffer().catch(() => undefined);
       if (!res.ok) error = `HTTP ${res.status}`;
     } catch (err) {
-      error = err instanceof Error ? (err.cause instanceof Error ? err.cause.message : err.message) : String(err);
+      error =
+        err instanceof Error ? (err.cause instanceof Error ? err.cause.message : err.message) : String(err);
     }
     const ok = error === null;
     stored.deliveries.push({
@@ -154,7 +166,8 @@ export class WebhookDispatcher {
       error,
     });
     this.onAttempt();
-    if (!ok) this.log(`webhook ${stored.event.id} (${stored.event.type}, ${kind}#${attempt}) failed: ${error}`);
+    if (!ok)
+      this.log(`webhook ${stored.event.id} (${stored.event.type}, ${kind}#${attempt}) failed: ${error}`);
     return ok;
   }
 }

@@ -37,7 +37,10 @@ export function defineAction<I, O>(
       return { ok: true, data: await run(parsed.data, user) };
     } catch (error) {
       if (error instanceof AccessError) {
-        return { ok: false, error: { code: error.status === 401 ? "unauthenticated" : "forbidden", message: error.message } };
+        return {
+          ok: false,
+          error: { code: error.status === 401 ? "unauthenticated" : "forbidden", message: error.message },
+        };
       }
       if (error instanceof AppError) {
         return { ok: false, error: { code: error.code, message: error.message, fields: error.fields } };

@@ -35,7 +35,10 @@ export const getCurrentUser = cache(async (): Promise<CurrentUser | null> => ses
  * The one access check. Every protected page, server action and route handler goes through it:
  * returns the user who holds `permission`, or throws AccessError(401 | 403).
  */
-export async function authorize(permission: Permission | null, requestHeaders?: Headers): Promise<CurrentUser> {
+export async function authorize(
+  permission: Permission | null,
+  requestHeaders?: Headers,
+): Promise<CurrentUser> {
   const user = requestHeaders ? await sessionUser(requestHeaders) : await getCurrentUser();
   if (!user) throw new AccessError(401);
   if (permission && !can(user.role, permission)) throw new AccessError(403);

@@ -7,7 +7,10 @@ import { recordAudit } from "@/lib/audit";
 import { linkCustomerToUser } from "@/lib/customers";
 
 const snake = <T extends string>(...names: T[]) =>
-  Object.fromEntries(names.map((n) => [n, n.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)])) as Record<T, string>;
+  Object.fromEntries(names.map((n) => [n, n.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)])) as Record<
+    T,
+    string
+  >;
 
 const globalForAuth = globalThis as unknown as { yokelineAuthPool?: Pool };
 const pool = (globalForAuth.yokelineAuthPool ??= new Pool({ connectionString: databaseUrl(), max: 5 }));

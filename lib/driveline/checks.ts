@@ -60,7 +60,14 @@ export function checkAtMost(rule: UpperBoundRule): Check {
     status = "pass";
     message = `${rule.what} ${v} is within the limit ${l} — ${rule.limit.source}`;
   }
-  return { id: rule.id, status, message, value: rule.value, limit: rule.limit.value, source: rule.limit.source };
+  return {
+    id: rule.id,
+    status,
+    message,
+    value: rule.value,
+    limit: rule.limit.value,
+    source: rule.limit.source,
+  };
 }
 
 interface LowerBoundRule {

@@ -17,7 +17,8 @@ export function criticalSpeedRpm(input: CriticalSpeedInput): number {
   const dIn = (input.odMm - 2 * input.wallMm) * 1e-3;
   const span = input.spanMm * 1e-3;
   const iOverA = (dOut * dOut + dIn * dIn) / 16; // m²
-  const omega = (Math.PI / span) ** 2 * Math.sqrt((input.elasticModulusGPa * 1e9 * iOverA) / input.densityKgM3);
+  const omega =
+    (Math.PI / span) ** 2 * Math.sqrt((input.elasticModulusGPa * 1e9 * iOverA) / input.densityKgM3);
   return (30 * omega) / Math.PI;
 }
 

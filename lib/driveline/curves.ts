@@ -18,7 +18,10 @@ export interface CurveSet {
 export function sampleChainCurves(chain: Chain, points = 181): CurveSet {
   const n = Math.max(2, Math.floor(points));
   const nJoints = chain.shafts.length - 1;
-  const positions = nJoints === 2 ? ["front", "rear"] : ["front", ...Array.from({ length: nJoints - 2 }, () => "centre"), "rear"];
+  const positions =
+    nJoints === 2
+      ? ["front", "rear"]
+      : ["front", ...Array.from({ length: nJoints - 2 }, () => "centre"), "rear"];
   const angleDeg: number[] = [];
   const joints = positions.map((position) => ({ position, speedRatio: [] as number[] }));
   const tubes: number[][] = Array.from({ length: nJoints - 1 }, () => []);
@@ -41,6 +44,9 @@ export function sampleChainCurves(chain: Chain, points = 181): CurveSet {
 export function sampleCurves(design: DesignFile, options?: { points?: number }): CurveSet {
   const u = designDirections(design);
   const shafts = [u.transmission, u.driveshaft, u.pinion];
-  const chain = design.phaseIndexDeg != null ? makeChain(shafts, [(design.phaseIndexDeg * Math.PI) / 180]) : makeChain(shafts);
+  const chain =
+    design.phaseIndexDeg != null
+      ? makeChain(shafts, [(design.phaseIndexDeg * Math.PI) / 180])
+      : makeChain(shafts);
   return sampleChainCurves(chain, options?.points);
 }

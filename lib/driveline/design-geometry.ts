@@ -16,7 +16,8 @@ export function designDirections(design: DesignFile): DesignDirections {
   const g = design.geometry;
   let driveshaft: Vec3;
   if (g.driveshaft) driveshaft = shaftDirection(g.driveshaft);
-  else if (g.frontJointCentreMm && g.rearJointCentreMm) driveshaft = normalise(sub(g.rearJointCentreMm, g.frontJointCentreMm));
+  else if (g.frontJointCentreMm && g.rearJointCentreMm)
+    driveshaft = normalise(sub(g.rearJointCentreMm, g.frontJointCentreMm));
   else throw new TypeError("geometry.driveshaft is required unless both joint centres are given");
   return { transmission: shaftDirection(g.transmission), driveshaft, pinion: shaftDirection(g.pinion) };
 }

@@ -10,7 +10,13 @@ import {
   equivalentAngleRad,
 } from "./cardan";
 import { defaultCatalogue } from "./catalogue/default";
-import { fittingFitsTube, fittingRatingNm, indexCatalogue, suggestFitting, type CatalogueIndex } from "./catalogue/lookup";
+import {
+  fittingFitsTube,
+  fittingRatingNm,
+  indexCatalogue,
+  suggestFitting,
+  type CatalogueIndex,
+} from "./catalogue/lookup";
 import type { Catalogue, EndFitting, Material } from "./catalogue/types";
 import { checkAtLeast, checkAtMost, checkOf, fmt, worstStatus, type Check } from "./checks";
 import { criticalSpeedRpm } from "./critical-speed";
@@ -97,7 +103,13 @@ function jointReport(
 const label = (p: string): string => p.charAt(0).toUpperCase() + p.slice(1);
 
 /** The per-joint angle rules: minimum, acceleration limit, the cross series' maximum. */
-function jointChecks(joints: readonly JointReport[], settings: ShopSettings, rpm: number, index: CatalogueIndex, prefix = ""): Check[] {
+function jointChecks(
+  joints: readonly JointReport[],
+  settings: ShopSettings,
+  rpm: number,
+  index: CatalogueIndex,
+  prefix = "",
+): Check[] {
   const out: Check[] = [];
   const accLimit = settings.maxJointAngularAccelerationRadS2;
   for (const j of joints) {
@@ -145,7 +157,11 @@ interface ResolvedTube {
   maxLengthMm: number | null;
 }
 
-function resolveMaterial(design: DesignFile, materialId: string, index: CatalogueIndex): ResolvedTube["material"] {
+function resolveMaterial(
+  design: DesignFile,
+  materialId: string,
+  index: CatalogueIndex,
+): ResolvedTube["material"] {
   const base = index.materials.get(materialId);
   const m = design.material;
   const elasticModulusGPa = m?.elasticModulusGPa ?? base?.elasticModulusGPa;
@@ -196,7 +212,11 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   const service = serviceSpeed(design.speed);
   if (!service) {
     throw new DesignInputError([
-      { path: "speed.maxShaftRpm", message: "speed.maxShaftRpm: must be a positive number unless topSpeedKmh, axleRatio and tireDiameterMm are all given" },
+      {
+        path: "speed.maxShaftRpm",
+        message:
+          "speed.maxShaftRpm: must be a positive number unless topSpeedKmh, axleRatio and tireDiameterMm are all given",
+      },
     ]);
   }
   const rpm = service.maxShaftRpm;
@@ -210,11 +230,17 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
     if (fittingId == null) return null;
     const f = index.fittings.get(fittingId);
     if (!f) {
-      throw new DesignInputError([{ path: `ends.${p}.fittingId`, message: `ends.${p}.fittingId: must be an end fitting in the catalogue (unknown "${fittingId}")` }]);
+      throw new DesignInputError([
+        {
+          path: `ends.${p}.fittingId`,
+          message: `ends.${p}.fittingId: must be an end fitting in the catalogue (unknown "${fittingId}")`,
+        },
+      ]);
     }
     return f;
   });
-  const seatAllowanceMm = (namedEnds[0]?.jointCentreToWeldSeatMm ?? 0) + (namedEnds[1]?.jointCentreToWeldSeatMm ?? 0);
+  const seatAllowanceMm =
+    (namedEnds[0]?.jointCentreToWeldSeatMm ?? 0) + (namedEnds[1]?.jointCentreToWeldSeatMm ?? 0);
 
   // Tube: given, or the lightest catalogue tube that passes.
   let selection: TubeSelection | null = null;
@@ -228,11 +254,21 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
       catalogue,
       settings,
     });
-  let tubeSpec: { id: string | null; materialId: string; odMm: number; wallMm: number; origin: TubeReport["origin"] };
+  let tubeSpec: {
+    id: string | null;
+    materialId: string;
+    odMm: number;
+    wallMm: number;
+    origin: TubeReport["origin"];
+  };
   if (design.tube) {
     tubeSpec = { id: null, ...design.tube, origin: "design" };
     for (const t of catalogue.tubes) {
-      if (t.materialId === design.tube.materialId && Math.abs(t.odMm - design.tube.odMm) < 0.05 && Math.abs(t.wallMm - design.tube.wallMm) < 0.01) {
+      if (
+        t.materialId === design.tube.materialId &&
+        Math.abs(t.odMm - design.tube.odMm) < 0.05 &&
+        Math.abs(t.wallMm - design.tube.wallMm) < 0.01
+      ) {
         tubeSpec.id = t.id;
         break;
       }
@@ -242,9 +278,26 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
     selection = rank();
     const pick = pickTube(selection);
     const fallback = catalogue.tubes[0];
-    if (pick) tubeSpec = { id: pick.tubeId, materialId: pick.materialId, odMm: pick.odMm, wallMm: pick.wallMm, origin: "catalogue" };
-    else if (fallback) tubeSpec = { id: fallback.id, materialId: fallback.materialId, odMm: fallback.odMm, wallMm: fallback.wallMm, origin: "catalogue" };
-    else throw new DesignInputError([{ path: "tube", message: "tube: is required (the catalogue has no tubes to choose from)" }]);
+    if (pick)
+      tubeSpec = {
+        id: pick.tubeId,
+        materialId: pick.materialId,
+        odMm: pick.odMm,
+        wallMm: pick.wallMm,
+        origin: "catalogue",
+      };
+    else if (fallback)
+      tubeSpec = {
+        id: fallback.id,
+        materialId: fallback.materialId,
+        odMm: fallback.odMm,
+        wallMm: fallback.wallMm,
+        origin: "catalogue",
+      };
+    else
+      throw new DesignInputError([
+        { path: "tube", message: "tube: is required (the catalogue has no tubes to choose from)" },
+      ]);
   }
   const material = resolveMaterial(design, tubeSpec.materialId, index);
   const catalogueTube = tubeSpec.id ? index.tubes.get(tubeSpec.id) : undefined;
@@ -257,7 +310,8 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   });
   const front = ends[0] ?? null;
   const rear = ends[1] ?? null;
-  const cutLengthMm = front && rear ? lengthMm - front.jointCentreToWeldSeatMm - rear.jointCentreToWeldSeatMm : null;
+  const cutLengthMm =
+    front && rear ? lengthMm - front.jointCentreToWeldSeatMm - rear.jointCentreToWeldSeatMm : null;
   const tubeLengthMm = cutLengthMm !== null && cutLengthMm > 0 ? cutLengthMm : lengthMm;
   const massKg = tubeMassKg(tubeSpec, tubeLengthMm, material.densityKgM3);
   const tube: TubeReport = {
@@ -290,13 +344,22 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
       equivalentAngleDeg: equivalentAngleRad(r.outputPeakToPeak) * DEG,
     };
   }
-  const maxAngleDeg = maxAngleForAccelerationRad(settings.maxJointAngularAccelerationRadS2.value, omega) * DEG;
-  const joints = chain.workingAngleRad.map((b, i) => jointReport(POSITIONS2[i]!, b, omega, maxAngleDeg, ends[i]?.jointSeriesId ?? null));
+  const maxAngleDeg =
+    maxAngleForAccelerationRad(settings.maxJointAngularAccelerationRadS2.value, omega) * DEG;
+  const joints = chain.workingAngleRad.map((b, i) =>
+    jointReport(POSITIONS2[i]!, b, omega, maxAngleDeg, ends[i]?.jointSeriesId ?? null),
+  );
   // The tube is driven by the front joint alone, so its acceleration does not depend on the index.
   const peakAngularAccelerationRadS2 = omega * omega * (response.tubePeakRatioDerivative[0] ?? 0);
 
   // Strength, stiffness, balance.
-  const nc = criticalSpeedRpm({ odMm: tube.odMm, wallMm: tube.wallMm, spanMm: lengthMm, elasticModulusGPa: tube.elasticModulusGPa, densityKgM3: tube.densityKgM3 });
+  const nc = criticalSpeedRpm({
+    odMm: tube.odMm,
+    wallMm: tube.wallMm,
+    spanMm: lengthMm,
+    elasticModulusGPa: tube.elasticModulusGPa,
+    densityKgM3: tube.densityKgM3,
+  });
   const criticalSpeedRatio = rpm / nc;
   const shearStressMPa = torsionShearStressMPa(tube, torqueNm);
   const safetyFactor = tube.shearYieldMPa / shearStressMPa;
@@ -396,7 +459,13 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   const report: EvaluationReport = {
     overall,
     designName: design.name ?? null,
-    service: { maxShaftRpm: rpm, peakShaftTorqueNm: torqueNm, governedBy: service.governedBy, vehicleRpm: service.vehicleRpm, engineRpm: service.engineRpm },
+    service: {
+      maxShaftRpm: rpm,
+      peakShaftTorqueNm: torqueNm,
+      governedBy: service.governedBy,
+      vehicleRpm: service.vehicleRpm,
+      engineRpm: service.engineRpm,
+    },
     lengthMm,
     joints,
     phasing: {
@@ -414,7 +483,13 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
     criticalSpeedRpm: nc,
     criticalSpeedRatio,
     torsion: { shearStressMPa, shearYieldMPa: tube.shearYieldMPa, safetyFactor },
-    balance: { gradeMmS: grade, speedRpm: rpm, rotorMassKg, permissibleUnbalanceGmm: uPer, perPlaneGmm: uPer / 2 },
+    balance: {
+      gradeMmS: grade,
+      speedRpm: rpm,
+      rotorMassKg,
+      permissibleUnbalanceGmm: uPer,
+      perPlaneGmm: uPer / 2,
+    },
     ends: { front, rear },
     cutLengthMm,
     slip,
@@ -423,7 +498,12 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
       runoutEndsMm: settings.runoutEndsMm.value,
       runoutCentreMm: settings.runoutCentreMm.value,
       phasingToleranceDeg: settings.phasingToleranceDeg.value,
-      sources: [settings.lengthToleranceMm.source, settings.runoutEndsMm.source, settings.runoutCentreMm.source, settings.phasingToleranceDeg.source],
+      sources: [
+        settings.lengthToleranceMm.source,
+        settings.runoutEndsMm.source,
+        settings.runoutCentreMm.source,
+        settings.phasingToleranceDeg.source,
+      ],
     },
     tubeSelection: selection,
     twoPiece,
@@ -432,7 +512,13 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   };
   if (options?.curves) {
     const points = typeof options.curves === "object" ? options.curves.points : 181;
-    return { ...report, curves: sampleChainCurves(design.phaseIndexDeg != null ? makeChain(shafts, [design.phaseIndexDeg * RAD]) : chain, points) };
+    return {
+      ...report,
+      curves: sampleChainCurves(
+        design.phaseIndexDeg != null ? makeChain(shafts, [design.phaseIndexDeg * RAD]) : chain,
+        points,
+      ),
+    };
   }
   return report;
 }
@@ -480,18 +566,34 @@ function endChecks(
         value: torqueNm,
         unit: " N·m",
         digits: 0,
-        limit: { value: e.torqueRatingNm, source: `${CATALOGUE_SOURCE}${e.origin === "suggested" ? "; fitting suggested by Yokeline" : ""}` },
+        limit: {
+          value: e.torqueRatingNm,
+          source: `${CATALOGUE_SOURCE}${e.origin === "suggested" ? "; fitting suggested by Yokeline" : ""}`,
+        },
       }),
     );
   });
   return out;
 }
 
-function lengthChecks(lengthMm: number, cutLengthMm: number | null, tubeLengthMm: number, maxLengthMm: number | null, tube: TubeReport): Check[] {
+function lengthChecks(
+  lengthMm: number,
+  cutLengthMm: number | null,
+  tubeLengthMm: number,
+  maxLengthMm: number | null,
+  tube: TubeReport,
+): Check[] {
   const out: Check[] = [];
   if (cutLengthMm !== null && cutLengthMm <= 0) {
     out.push(
-      checkOf("cut-length", "fail", `Cut length ${fmt(cutLengthMm, 1)} mm: the end fittings are longer than the ${fmt(lengthMm, 1)} mm installed length — ${CATALOGUE_SOURCE} (joint centre to weld seat)`, CATALOGUE_SOURCE, cutLengthMm, 0),
+      checkOf(
+        "cut-length",
+        "fail",
+        `Cut length ${fmt(cutLengthMm, 1)} mm: the end fittings are longer than the ${fmt(lengthMm, 1)} mm installed length — ${CATALOGUE_SOURCE} (joint centre to weld seat)`,
+        CATALOGUE_SOURCE,
+        cutLengthMm,
+        0,
+      ),
     );
   }
   if (maxLengthMm !== null) {
@@ -590,9 +692,16 @@ function proposeTwoPiece(
   const chain = makeChain([u.transmission, u1, u2, u.pinion]);
   const response = chainResponse(chain);
   const omega = rpmToRadS(rpm);
-  const selection = rankTubes({ spanMm: Math.max(front, rear), maxShaftRpm: rpm, peakShaftTorqueNm: torqueNm, catalogue, settings });
+  const selection = rankTubes({
+    spanMm: Math.max(front, rear),
+    maxShaftRpm: rpm,
+    peakShaftTorqueNm: torqueNm,
+    catalogue,
+    settings,
+  });
   const pick = pickTube(selection);
-  const maxAngleDeg = maxAngleForAccelerationRad(settings.maxJointAngularAccelerationRadS2.value, omega) * DEG;
+  const maxAngleDeg =
+    maxAngleForAccelerationRad(settings.maxJointAngularAccelerationRadS2.value, omega) * DEG;
   const positions = ["front", "centre", "rear"] as const;
   const joints = chain.workingAngleRad.map((b, i) => jointReport(positions[i]!, b, omega, maxAngleDeg, null));
   const checks: Check[] = jointChecks(joints, settings, rpm, index, "Two-piece: ");
@@ -600,10 +709,18 @@ function proposeTwoPiece(
   const material = pick ? index.materials.get(pick.materialId) : undefined;
   if (pick && material) {
     const fitting = suggestFitting(catalogue, index, pick.odMm, material.weldFamily, torqueNm);
-    for (const [position, spanMm] of [["front", front], ["rear", rear]] as const) {
+    for (const [position, spanMm] of [
+      ["front", front],
+      ["rear", rear],
+    ] as const) {
       const cut = fitting ? spanMm - 2 * fitting.jointCentreToWeldSeatMm : null;
       const tubeLengthMm = cut !== null && cut > 0 ? cut : spanMm;
-      const nc = criticalSpeedRpm({ ...pick, spanMm, elasticModulusGPa: material.elasticModulusGPa, densityKgM3: material.densityKgM3 });
+      const nc = criticalSpeedRpm({
+        ...pick,
+        spanMm,
+        elasticModulusGPa: material.elasticModulusGPa,
+        densityKgM3: material.densityKgM3,
+      });
       const tube: TubeCandidate = {
         ...pick,
         tubeLengthMm,
@@ -611,7 +728,9 @@ function proposeTwoPiece(
         criticalSpeedRpm: nc,
         criticalSpeedRatio: rpm / nc,
         speedHeadroomPct: ((nc * settings.maxCriticalSpeedRatio.value) / rpm - 1) * 100,
-        priceCents: Math.round(((index.tubes.get(pick.tubeId)?.pricePerMetreCents ?? 0) * tubeLengthMm) / 1000),
+        priceCents: Math.round(
+          ((index.tubes.get(pick.tubeId)?.pricePerMetreCents ?? 0) * tubeLengthMm) / 1000,
+        ),
       };
       pieces.push({ position, spanMm, tube, cutLengthMm: cut });
       checks.push(
@@ -648,7 +767,14 @@ function proposeTwoPiece(
   }
   const eq = equivalentAngleRad(response.outputPeakToPeak) * DEG;
   checks.push(
-    checkAtMost({ id: "two-piece.equivalent-angle", what: "Two-piece equivalent angle", value: eq, unit: "°", limit: settings.maxEquivalentAngleDeg, overStatus: "warn" }),
+    checkAtMost({
+      id: "two-piece.equivalent-angle",
+      what: "Two-piece equivalent angle",
+      value: eq,
+      unit: "°",
+      limit: settings.maxEquivalentAngleDeg,
+      overStatus: "warn",
+    }),
   );
   const overall = worstStatus(checks.map((c) => c.status));
   return {
@@ -683,4 +809,3 @@ export function parseAndEvaluate(
     throw error;
   }
 }
-

@@ -25,10 +25,23 @@ export type {
 } from "./report";
 export { SAFETY_CAUTION, DISCLAIMER, DEMO_CATALOGUE_NOTE } from "./report";
 export type { Check, CheckStatus } from "./checks";
-export { rankTubes, type RankTubesInput, type TubeSelection, type TubeCandidate, type RejectedTube } from "./tube-selection";
+export {
+  rankTubes,
+  type RankTubesInput,
+  type TubeSelection,
+  type TubeCandidate,
+  type RejectedTube,
+} from "./tube-selection";
 export { sampleCurves, sampleChainCurves, type CurveSet } from "./curves";
 export { defaultCatalogue } from "./catalogue/default";
-export type { Catalogue, Material, TubeSize, EndFitting, EndFittingKind, JointSeries } from "./catalogue/types";
+export type {
+  Catalogue,
+  Material,
+  TubeSize,
+  EndFitting,
+  EndFittingKind,
+  JointSeries,
+} from "./catalogue/types";
 export { defaultSettings, resolveSettings, type ShopSettings, type Limit, type SettingKey } from "./settings";
 export * from "./units";
 export { shaftDirection, angleBetweenRad, phaseIndexRad, type Vec3, type ShaftAngles } from "./geometry";
@@ -41,7 +54,14 @@ export {
   cardanMaxAngularDeviationRad,
   equivalentAngleRad,
 } from "./cardan";
-export { makeChain, chainResponse, chainSpeedRatiosAt, chainShaftAnglesRad, bestPhaseIndicesRad, type Chain } from "./phasing";
+export {
+  makeChain,
+  chainResponse,
+  chainSpeedRatiosAt,
+  chainShaftAnglesRad,
+  bestPhaseIndicesRad,
+  type Chain,
+} from "./phasing";
 export { criticalSpeedRpm, criticalSpeedHandbookRpm, spanForCriticalSpeedMm } from "./critical-speed";
 export { torsionShearStressMPa, shearYieldFromTensileMPa } from "./torsion";
 export { serviceSpeed, shaftRpmAtRoadSpeed, designShaftTorqueNm } from "./speed";

@@ -159,14 +159,26 @@ export function chainResponse(chain: Chain): ChainResponse {
   for (let i = 0; i < nJoints; i++) {
     const j = joints[i]!;
     const o = i * STRIDE;
-    K[o] = j.w.x; K[o + 1] = j.w.y; K[o + 2] = j.w.z;
-    K[o + 3] = j.v.x; K[o + 4] = j.v.y; K[o + 5] = j.v.z;
-    K[o + 6] = j.b.x; K[o + 7] = j.b.y; K[o + 8] = j.b.z;
-    K[o + 9] = j.cosBeta; K[o + 10] = j.sin2Beta;
+    K[o] = j.w.x;
+    K[o + 1] = j.w.y;
+    K[o + 2] = j.w.z;
+    K[o + 3] = j.v.x;
+    K[o + 4] = j.v.y;
+    K[o + 5] = j.v.z;
+    K[o + 6] = j.b.x;
+    K[o + 7] = j.b.y;
+    K[o + 8] = j.b.z;
+    K[o + 9] = j.cosBeta;
+    K[o + 10] = j.sin2Beta;
     K[o + 11] = i < nTubes ? Math.cos(chain.phaseIndexRad[i]!) : 1;
     K[o + 12] = i < nTubes ? Math.sin(chain.phaseIndexRad[i]!) : 0;
   }
-  const w0x = K[0]!, w0y = K[1]!, w0z = K[2]!, v0x = K[3]!, v0y = K[4]!, v0z = K[5]!;
+  const w0x = K[0]!,
+    w0y = K[1]!,
+    w0z = K[2]!,
+    v0x = K[3]!,
+    v0y = K[4]!,
+    v0z = K[5]!;
   for (let k = 0; k < SAMPLES_PER_HALF_TURN; k++) {
     const ct = COS_TABLE[k]!;
     const st = SIN_TABLE[k]!;
@@ -190,7 +202,9 @@ export function chainResponse(chain: Chain): ChainResponse {
       if (i === nTubes) break;
       scratchDerivative[i]![k] = deriv < 0 ? -deriv : deriv;
       // Arm on the output shaft: b × e, normalised; then turned by the phase index about b.
-      const bx = K[o + 6]!, by = K[o + 7]!, bz = K[o + 8]!;
+      const bx = K[o + 6]!,
+        by = K[o + 7]!,
+        bz = K[o + 8]!;
       let fx = by * ez - bz * ey;
       let fy = bz * ex - bx * ez;
       let fz = bx * ey - by * ex;
@@ -273,7 +287,11 @@ export function chainShaftAnglesRad(chain: Chain, thetaRad: number): number[] {
     if (i < joints.length - 1) {
       const d = chain.phaseIndexRad[i]!;
       const g = cross(b, f);
-      e = { x: Math.cos(d) * f.x + Math.sin(d) * g.x, y: Math.cos(d) * f.y + Math.sin(d) * g.y, z: Math.cos(d) * f.z + Math.sin(d) * g.z };
+      e = {
+        x: Math.cos(d) * f.x + Math.sin(d) * g.x,
+        y: Math.cos(d) * f.y + Math.sin(d) * g.y,
+        z: Math.cos(d) * f.z + Math.sin(d) * g.z,
+      };
     }
   }
   return angles;
@@ -313,4 +331,3 @@ export function phasingResult(chain: Chain, response: ChainResponse): PhasingRes
     outputMinSpeedRatio: response.outputMinRatio,
   };
 }
-

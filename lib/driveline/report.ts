@@ -48,7 +48,11 @@ export interface PhasingReport {
   readonly inPhaseOutputSpeedVariationPct: number;
   readonly toleranceDeg: number;
   /** Present when the design gives phaseIndexDeg. */
-  readonly asSpecified?: { readonly phaseIndexDeg: number; readonly outputSpeedVariationPct: number; readonly equivalentAngleDeg: number };
+  readonly asSpecified?: {
+    readonly phaseIndexDeg: number;
+    readonly outputSpeedVariationPct: number;
+    readonly equivalentAngleDeg: number;
+  };
 }
 
 export interface EndReport {
@@ -135,7 +139,11 @@ export interface EvaluationReport {
   readonly tube: TubeReport;
   readonly criticalSpeedRpm: number;
   readonly criticalSpeedRatio: number;
-  readonly torsion: { readonly shearStressMPa: number; readonly shearYieldMPa: number; readonly safetyFactor: number };
+  readonly torsion: {
+    readonly shearStressMPa: number;
+    readonly shearYieldMPa: number;
+    readonly safetyFactor: number;
+  };
   readonly balance: {
     readonly gradeMmS: number;
     readonly speedRpm: number;

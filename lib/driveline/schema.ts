@@ -18,7 +18,8 @@ const angleDeg = (maxAbs: number) =>
     .min(-maxAbs, { error: `must be an angle in degrees between −${maxAbs} and ${maxAbs}` })
     .max(maxAbs, { error: `must be an angle in degrees between −${maxAbs} and ${maxAbs}` });
 const object = <T extends z.ZodRawShape>(shape: T) => z.object(shape, { error: "must be an object" });
-const id = () => z.string({ error: "must be a non-empty text id" }).min(1, { error: "must be a non-empty text id" });
+const id = () =>
+  z.string({ error: "must be a non-empty text id" }).min(1, { error: "must be a non-empty text id" });
 
 /** Largest projected shaft angle accepted; beyond it the shop measurement is suspect. */
 export const MAX_PROJECTED_ANGLE_DEG = 40;
@@ -41,7 +42,12 @@ const tubeSchema = object({
 }).check((ctx) => {
   const t = ctx.value;
   if (t.wallMm * 2 >= t.odMm) {
-    ctx.issues.push({ code: "custom", input: t.wallMm, path: ["wallMm"], message: "must be less than half of odMm" });
+    ctx.issues.push({
+      code: "custom",
+      input: t.wallMm,
+      path: ["wallMm"],
+      message: "must be less than half of odMm",
+    });
   }
 });
 
@@ -60,9 +66,15 @@ const slipSchema = object({
   /** Total spline travel from fully collapsed to fully out. */
   travelMm: positive(),
   /** Lengthening from ride height at full suspension droop (default 0). */
-  droopExtensionMm: z.number({ error: "must be a number ≥ 0" }).min(0, { error: "must be a number ≥ 0" }).nullish(),
+  droopExtensionMm: z
+    .number({ error: "must be a number ≥ 0" })
+    .min(0, { error: "must be a number ≥ 0" })
+    .nullish(),
   /** Shortening from ride height at full bump (default 0). */
-  bumpCompressionMm: z.number({ error: "must be a number ≥ 0" }).min(0, { error: "must be a number ≥ 0" }).nullish(),
+  bumpCompressionMm: z
+    .number({ error: "must be a number ≥ 0" })
+    .min(0, { error: "must be a number ≥ 0" })
+    .nullish(),
 });
 
 /** The design file (contract: /shared/spec/design-file.md). Unknown fields are ignored. */
@@ -109,7 +121,10 @@ export const designFileSchema = object({
   const g = d.geometry;
   if (g && !g.driveshaft) {
     if (!g.frontJointCentreMm || !g.rearJointCentreMm) {
-      add(["geometry", "driveshaft"], "is required unless frontJointCentreMm and rearJointCentreMm are both given");
+      add(
+        ["geometry", "driveshaft"],
+        "is required unless frontJointCentreMm and rearJointCentreMm are both given",
+      );
     } else if (!(g.rearJointCentreMm.x > g.frontJointCentreMm.x)) {
       add(["geometry", "rearJointCentreMm", "x"], "must be rearward of frontJointCentreMm (larger x)");
     }
@@ -119,11 +134,17 @@ export const designFileSchema = object({
     const vehicle = s.topSpeedKmh != null && s.axleRatio != null && s.tireDiameterMm != null;
     const engine = s.maxEngineRpm != null && s.topGearRatio != null;
     if (s.maxShaftRpm == null && !vehicle && !engine) {
-      add(["speed", "maxShaftRpm"], `${POSITIVE} unless topSpeedKmh, axleRatio and tireDiameterMm are all given`);
+      add(
+        ["speed", "maxShaftRpm"],
+        `${POSITIVE} unless topSpeedKmh, axleRatio and tireDiameterMm are all given`,
+      );
     }
   }
   if (d.slip && d.lengthMm != null && d.slip.collapsedLengthMm > d.lengthMm) {
-    add(["slip", "collapsedLengthMm"], "must not exceed lengthMm (the slip cannot be shorter than collapsed)");
+    add(
+      ["slip", "collapsedLengthMm"],
+      "must not exceed lengthMm (the slip cannot be shorter than collapsed)",
+    );
   }
 });
 
@@ -165,7 +186,8 @@ function toIssues(error: z.ZodError): FieldIssue[] {
 function catalogueIssues(design: DesignFile, catalogue: Catalogue): FieldIssue[] {
   const issues: FieldIssue[] = [];
   const m = design.material;
-  const complete = m != null && m.elasticModulusGPa != null && m.densityKgM3 != null && m.shearYieldMPa != null;
+  const complete =
+    m != null && m.elasticModulusGPa != null && m.densityKgM3 != null && m.shearYieldMPa != null;
   if (design.tube && !complete && !catalogue.materials.some((x) => x.id === design.tube!.materialId)) {
     const known = catalogue.materials.map((x) => x.id).join(", ");
     issues.push({
@@ -177,7 +199,10 @@ function catalogueIssues(design: DesignFile, catalogue: Catalogue): FieldIssue[]
     const fittingId = design.ends?.[end]?.fittingId;
     if (fittingId != null && !catalogue.endFittings.some((f) => f.id === fittingId)) {
       const path = `ends.${end}.fittingId`;
-      issues.push({ path, message: `${path}: must be an end fitting in the catalogue (unknown "${fittingId}")` });
+      issues.push({
+        path,
+        message: `${path}: must be an end fitting in the catalogue (unknown "${fittingId}")`,
+      });
     }
   }
   return issues;
@@ -194,7 +219,10 @@ export function parseDesign(input: unknown, options?: { catalogue?: Catalogue })
   return issues.length ? { ok: false, issues } : { ok: true, design: result.data };
 }
 
-const limitSchema = object({ value: z.number({ error: NUMBER }), source: z.string({ error: "must be text" }).min(1) });
+const limitSchema = object({
+  value: z.number({ error: NUMBER }),
+  source: z.string({ error: "must be text" }).min(1),
+});
 
 /** A shop's settings file: any subset of the limits, each a number or { value, source }. */
 export const shopSettingsSchema = z.partialRecord(
@@ -214,7 +242,10 @@ const materialEntrySchema = object({
 });
 
 const cents = () =>
-  z.number({ error: "must be a whole number of cents" }).int({ error: "must be a whole number of cents" }).min(0, { error: "must be a whole number of cents" });
+  z
+    .number({ error: "must be a whole number of cents" })
+    .int({ error: "must be a whole number of cents" })
+    .min(0, { error: "must be a whole number of cents" });
 
 /** A shop catalogue (same shape as `defaultCatalogue`). */
 export const catalogueSchema = object({
@@ -223,17 +254,28 @@ export const catalogueSchema = object({
   demo: z.boolean({ error: "must be true or false" }),
   materials: z.array(materialEntrySchema, { error: "must be a list" }),
   tubes: z.array(
-    object({ id: id(), materialId: id(), odMm: positive(), wallMm: positive(), maxLengthMm: positive(), pricePerMetreCents: cents() }),
+    object({
+      id: id(),
+      materialId: id(),
+      odMm: positive(),
+      wallMm: positive(),
+      maxLengthMm: positive(),
+      pricePerMetreCents: cents(),
+    }),
     { error: "must be a list" },
   ),
   endFittings: z.array(
     object({
       id: id(),
       name: z.string({ error: "must be text" }),
-      kind: z.enum(["weld-yoke", "slip-yoke-assembly", "flange-yoke"], { error: "must be weld-yoke, slip-yoke-assembly or flange-yoke" }),
+      kind: z.enum(["weld-yoke", "slip-yoke-assembly", "flange-yoke"], {
+        error: "must be weld-yoke, slip-yoke-assembly or flange-yoke",
+      }),
       jointSeriesId: id(),
       tubeOdMm: positive(),
-      weldFamily: z.enum(["steel", "aluminium", "composite"], { error: "must be steel, aluminium or composite" }),
+      weldFamily: z.enum(["steel", "aluminium", "composite"], {
+        error: "must be steel, aluminium or composite",
+      }),
       jointCentreToWeldSeatMm: positive(),
       massKg: positive(),
       torqueRatingNm: positive(),
@@ -242,7 +284,14 @@ export const catalogueSchema = object({
     { error: "must be a list" },
   ),
   jointSeries: z.array(
-    object({ id: id(), name: z.string({ error: "must be text" }), torqueRatingNm: positive(), maxWorkingAngleDeg: positive(), massKg: positive(), priceCents: cents() }),
+    object({
+      id: id(),
+      name: z.string({ error: "must be text" }),
+      torqueRatingNm: positive(),
+      maxWorkingAngleDeg: positive(),
+      massKg: positive(),
+      priceCents: cents(),
+    }),
     { error: "must be a list" },
   ),
 }) satisfies z.ZodType<Catalogue>;

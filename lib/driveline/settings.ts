@@ -43,7 +43,9 @@ export type ShopSettings = { readonly [K in SettingKey]: Limit };
  * Defaults overlaid with a shop's overrides. A bare number keeps the key but its source
  * becomes "shop setting"; an object may name its own source.
  */
-export function resolveSettings(overrides?: Partial<Record<SettingKey, number | Limit>> | null): ShopSettings {
+export function resolveSettings(
+  overrides?: Partial<Record<SettingKey, number | Limit>> | null,
+): ShopSettings {
   if (!overrides) return defaultSettings;
   const out: Record<string, Limit> = { ...defaultSettings };
   for (const [key, v] of Object.entries(overrides)) {

@@ -37,7 +37,8 @@ export function serviceSpeed(speed: SpeedInput): ServiceSpeed | null {
     speed.maxEngineRpm != null && speed.topGearRatio != null ? speed.maxEngineRpm / speed.topGearRatio : null;
   let best: ServiceSpeed | null = null;
   const consider = (rpm: number | null | undefined, governedBy: ServiceSpeed["governedBy"]): void => {
-    if (rpm != null && (best === null || rpm > best.maxShaftRpm)) best = { maxShaftRpm: rpm, governedBy, vehicleRpm, engineRpm };
+    if (rpm != null && (best === null || rpm > best.maxShaftRpm))
+      best = { maxShaftRpm: rpm, governedBy, vehicleRpm, engineRpm };
   };
   consider(speed.maxShaftRpm, "maxShaftRpm");
   consider(vehicleRpm, "vehicle");
@@ -54,5 +55,7 @@ export interface TorqueInput {
 
 /** Design torque at the shaft = engine × first gear × transfer-case low × converter stall (each default 1). */
 export function designShaftTorqueNm(t: TorqueInput): number {
-  return t.engineTorqueNm * (t.firstGearRatio ?? 1) * (t.transferCaseLowRatio ?? 1) * (t.converterStallRatio ?? 1);
+  return (
+    t.engineTorqueNm * (t.firstGearRatio ?? 1) * (t.transferCaseLowRatio ?? 1) * (t.converterStallRatio ?? 1)
+  );
 }

@@ -91,23 +91,39 @@ export function rankTubes(input: RankTubesInput): TubeSelection {
       continue;
     }
     const tubeLengthMm = input.tubeLengthMm ?? input.spanMm;
-    const nc = criticalSpeedRpm({ ...tube, spanMm: input.spanMm, elasticModulusGPa: material.elasticModulusGPa, densityKgM3: material.densityKgM3 });
+    const nc = criticalSpeedRpm({
+      ...tube,
+      spanMm: input.spanMm,
+      elasticModulusGPa: material.elasticModulusGPa,
+      densityKgM3: material.densityKgM3,
+    });
     const ratio = input.maxShaftRpm / nc;
     const shear = torsionShearStressMPa(tube, input.peakShaftTorqueNm);
     const sf = material.shearYieldMPa / shear;
     const reasons: string[] = [];
     if (ratio > maxRatio) {
-      reasons.push(`critical-speed ratio ${ratio.toFixed(3)} above ${maxRatio} (${settings.maxCriticalSpeedRatio.source})`);
+      reasons.push(
+        `critical-speed ratio ${ratio.toFixed(3)} above ${maxRatio} (${settings.maxCriticalSpeedRatio.source})`,
+      );
     } else anyPassesCriticalSpeed = true;
-    if (sf < minSf) reasons.push(`torsion safety factor ${sf.toFixed(2)} below ${minSf} (${settings.minTorsionSafetyFactor.source})`);
-    if (tubeLengthMm > tube.maxLengthMm) reasons.push(`needs ${round1(tubeLengthMm)} mm, stock is ${round1(tube.maxLengthMm)} mm`);
+    if (sf < minSf)
+      reasons.push(
+        `torsion safety factor ${sf.toFixed(2)} below ${minSf} (${settings.minTorsionSafetyFactor.source})`,
+      );
+    if (tubeLengthMm > tube.maxLengthMm)
+      reasons.push(`needs ${round1(tubeLengthMm)} mm, stock is ${round1(tube.maxLengthMm)} mm`);
     for (const f of fixedFittings) {
       if (!fittingFitsTube(f, tube.odMm, material.weldFamily)) {
         reasons.push(`does not fit end fitting ${f.id} (takes ${round1(f.tubeOdMm)} mm OD, ${f.weldFamily})`);
       }
     }
-    if (fixedFittings.length === 0 && !suggestFitting(catalogue, index, tube.odMm, material.weldFamily, input.peakShaftTorqueNm)) {
-      reasons.push(`no end fitting in the catalogue takes this tube at ${Math.round(input.peakShaftTorqueNm)} N·m`);
+    if (
+      fixedFittings.length === 0 &&
+      !suggestFitting(catalogue, index, tube.odMm, material.weldFamily, input.peakShaftTorqueNm)
+    ) {
+      reasons.push(
+        `no end fitting in the catalogue takes this tube at ${Math.round(input.peakShaftTorqueNm)} N·m`,
+      );
     }
     const candidate: TubeCandidate = {
       tubeId: tube.id,

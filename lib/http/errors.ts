@@ -9,7 +9,8 @@ export class AppError extends Error {
   }
 }
 
-export type ErrorCode = "unauthenticated" | "forbidden" | "not_found" | "conflict" | "invalid" | "too_large" | "rate_limited";
+export type ErrorCode =
+  "unauthenticated" | "forbidden" | "not_found" | "conflict" | "invalid" | "too_large" | "rate_limited";
 
 /** The one map from error code to HTTP status. */
 export const STATUS_OF: Record<ErrorCode, number> = {

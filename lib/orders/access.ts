@@ -13,7 +13,11 @@ export function seesAllOrders(user: CurrentUser): boolean {
  * Loads an order the user may see: staff see any, a customer only their own. Anything else is
  * "not found" (404), so a customer cannot even learn that another customer's order exists.
  */
-export async function loadOrderForUser(em: EntityManager, user: CurrentUser, orderId: string): Promise<Order> {
+export async function loadOrderForUser(
+  em: EntityManager,
+  user: CurrentUser,
+  orderId: string,
+): Promise<Order> {
   const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(orderId);
   const order = uuid
     ? await em.findOne(

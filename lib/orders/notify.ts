@@ -5,15 +5,27 @@ import { formatMoney } from "@/lib/pricing/price-book";
 
 const appUrl = () => process.env.APP_URL ?? process.env.BETTER_AUTH_URL ?? "http://127.0.0.1:3000";
 const longDate = (iso: string) =>
-  new Date(`${iso}T12:00:00Z`).toLocaleDateString("en-US", { weekday: "long", day: "numeric", month: "long", year: "numeric", timeZone: "UTC" });
+  new Date(`${iso}T12:00:00Z`).toLocaleDateString("en-US", {
+    weekday: "long",
+    day: "numeric",
+    month: "long",
+    year: "numeric",
+    timeZone: "UTC",
+  });
 
 async function shaftLines(em: EntityManager, order: Order): Promise<EmailLine[]> {
   if (!order.shafts.isInitialized()) await em.populate(order, ["shafts"]);
   return order.shafts.getItems().map((s) => {
-    const r = s.evaluation as { lengthMm?: number; tube?: { odMm?: number; wallMm?: number; materialId?: string } };
+    const r = s.evaluation as {
+      lengthMm?: number;
+      tube?: { odMm?: number; wallMm?: number; materialId?: string };
+    };
     return {
       description: `${s.position}. ${s.name}`,
-      detail: r.lengthMm && r.tube ? `${r.lengthMm.toFixed(1)} mm · tube ${r.tube.odMm?.toFixed(1)} × ${r.tube.wallMm?.toFixed(2)} mm ${r.tube.materialId}` : undefined,
+      detail:
+        r.lengthMm && r.tube
+          ? `${r.lengthMm.toFixed(1)} mm · tube ${r.tube.odMm?.toFixed(1)} × ${r.tube.wallMm?.toFixed(2)} mm ${r.tube.materialId}`
+          : undefined,
       amount: formatMoney(s.priceCents, order.currency),
     };
   });
@@ -46,7 +58,11 @@ export async function notifyOrderReceived(em: EntityManager, order: Order): Prom
   });
 }
 
-export async function notifyPaymentReceived(em: EntityManager, order: Order, payment: Payment): Promise<void> {
+export async function notifyPaymentReceived(
+  em: EntityManager,
+  order: Order,
+  payment: Payment,
+): Promise<void> {
   await queueEmail(em, {
     template: "payment-receipt",
     to: order.customer.email,
@@ -54,9 +70,13 @@ export async function notifyPaymentReceived(em: EntityManager, order: Order, pay
     props: {
       orderNumber: order.number,
       customerName: order.customer.name,
-      paymentLabel: payment.kind === "deposit" ? "Deposit" : payment.kind === "balance" ? "Balance" : "Payment in full",
+      paymentLabel:
+        payment.kind === "deposit" ? "Deposit" : payment.kind === "balance" ? "Balance" : "Payment in full",
       amountPaid: money(order, payment.amountCents),
-      paidOn: (payment.paidAt ?? new Date()).toLocaleDateString("en-US", { dateStyle: "long", timeZone: "UTC" }),
+      paidOn: (payment.paidAt ?? new Date()).toLocaleDateString("en-US", {
+        dateStyle: "long",
+        timeZone: "UTC",
+      }),
       totalPaid: money(order, order.paidCents),
       balanceRemaining: money(order, Math.max(0, order.totalCents - order.paidCents)),
       lines: await shaftLines(em, order),

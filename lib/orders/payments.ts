@@ -32,7 +32,11 @@ export function nextPaymentKind(order: Order): Payment["kind"] | null {
  * Opens (or reuses) a hosted checkout for the order's next payment and returns its address.
  * The provider call carries an idempotency key, so a retried request never charges twice.
  */
-export async function startCheckout(orderId: string, requestedBy: CurrentUser | null, kind?: Payment["kind"]): Promise<Payment> {
+export async function startCheckout(
+  orderId: string,
+  requestedBy: CurrentUser | null,
+  kind?: Payment["kind"],
+): Promise<Payment> {
   const em = await getEm();
   const order = await em.findOneOrFail(Order, { id: orderId }, { populate: ["customer"] });
   const want = kind ?? nextPaymentKind(order);
@@ -40,7 +44,11 @@ export async function startCheckout(orderId: string, requestedBy: CurrentUser | 
   const amountCents = amountDue(order, want);
   if (amountCents <= 0) throw new AppError("conflict", "Nothing is owed on this order for that payment.");
 
-  const open = await em.findOne(Payment, { order, kind: want, status: "open", amountCents }, { orderBy: { createdAt: "desc" } });
+  const open = await em.findOne(
+    Payment,
+    { order, kind: want, status: "open", amountCents },
+    { orderBy: { createdAt: "desc" } },
+  );
   if (open) return open;
 
   const paymentId = randomUUID();
@@ -78,8 +86,22 @@ export async function requestBalance(orderId: string, by: CurrentUser | null): P
   const payment = await startCheckout(orderId, by, "balance");
   await inTransaction(async (em) => {
     const order = await em.findOneOrFail(Order, { id: orderId }, { populate: ["customer"] });
-    em.create(OrderEvent, { order, kind: "note", label: `Balance of ${formatMoney(payment.amountCents, order.currency)} requested`, at: new Date() });
-    await recordAudit({ actorId: by?.id ?? null, action: "payment.request-balance", subjectType: "order", subjectId: order.id, details: { amountCents: payment.amountCents } }, em);
+    em.create(OrderEvent, {
+      order,
+      kind: "note",
+      label: `Balance of ${formatMoney(payment.amountCents, order.currency)} requested`,
+      at: new Date(),
+    });
+    await recordAudit(
+      {
+        actorId: by?.id ?? null,
+        action: "payment.request-balance",
+        subjectType: "order",
+        subjectId: order.id,
+        details: { amountCents: payment.amountCents },
+      },
+      em,
+    );
     await notifyBalanceDue(em, order, em.merge(payment));
   });
   await afterCommit();
@@ -87,7 +109,8 @@ export async function requestBalance(orderId: string, by: CurrentUser | null): P
 }
 
 function refreshPaymentState(order: Order): void {
-  if (order.refundedCents > 0) order.paymentState = order.refundedCents >= order.paidCents ? "refunded" : "partially_refunded";
+  if (order.refundedCents > 0)
+    order.paymentState = order.refundedCents >= order.paidCents ? "refunded" : "partially_refunded";
   else if (order.paidCents >= order.totalCents) order.paymentState = "paid";
   else order.paymentState = order.paidCents > 0 ? "deposit_paid" : "unpaid";
 }
@@ -113,7 +136,11 @@ export async function applyPaymentEvent(event: PaymentEvent): Promise<ApplyOutco
     if (!(await firstDelivery(em, event))) return "duplicate";
     switch (event.type) {
       case "checkout.session.completed": {
-        const payment = await em.findOne(Payment, { checkoutSessionId: event.sessionId }, { populate: ["order", "order.customer"], lockMode: LockMode.PESSIMISTIC_WRITE });
+        const payment = await em.findOne(
+          Payment,
+          { checkoutSessionId: event.sessionId },
+          { populate: ["order", "order.customer"], lockMode: LockMode.PESSIMISTIC_WRITE },
+        );
         if (!payment || !event.paid || payment.status === "succeeded") return "ignored";
         const order = payment.order;
         payment.status = "succeeded";
@@ -123,17 +150,39 @@ export async function applyPaymentEvent(event: PaymentEvent): Promise<ApplyOutco
         order.paidCents += payment.amountCents;
         if (order.status === "awaiting_payment") order.status = "received";
         refreshPaymentState(order);
-        const what = payment.kind === "deposit" ? "Deposit" : payment.kind === "balance" ? "Balance" : "Payment";
-        em.create(OrderEvent, { order, kind: "paid", label: `${what} of ${formatMoney(payment.amountCents, order.currency)} received`, at: new Date() });
-        await recordAudit({ actorId: null, action: "payment.succeeded", subjectType: "order", subjectId: order.id, details: { paymentId: payment.id, amountCents: payment.amountCents, event: event.id } }, em);
+        const what =
+          payment.kind === "deposit" ? "Deposit" : payment.kind === "balance" ? "Balance" : "Payment";
+        em.create(OrderEvent, {
+          order,
+          kind: "paid",
+          label: `${what} of ${formatMoney(payment.amountCents, order.currency)} received`,
+          at: new Date(),
+        });
+        await recordAudit(
+          {
+            actorId: null,
+            action: "payment.succeeded",
+            subjectType: "order",
+            subjectId: order.id,
+            details: { paymentId: payment.id, amountCents: payment.amountCents, event: event.id },
+          },
+          em,
+        );
         await notifyPaymentReceived(em, order, payment);
         return "applied";
       }
       case "payment_intent.payment_failed": {
-        const payment = event.paymentId ? await em.findOne(Payment, { id: event.paymentId }, { populate: ["order"] }) : null;
+        const payment = event.paymentId
+          ? await em.findOne(Payment, { id: event.paymentId }, { populate: ["order"] })
+          : null;
         if (!payment) return "ignored";
         payment.failureMessage = event.message;
-        em.create(OrderEvent, { order: payment.order, kind: "payment_failed", label: `Card payment declined: ${event.message}`, at: new Date() });
+        em.create(OrderEvent, {
+          order: payment.order,
+          kind: "payment_failed",
+          label: `Card payment declined: ${event.message}`,
+          at: new Date(),
+        });
         return "applied";
       }
       case "checkout.session.expired": {
@@ -144,7 +193,11 @@ export async function applyPaymentEvent(event: PaymentEvent): Promise<ApplyOutco
       }
       case "charge.refunded": {
         const payment = event.paymentIntentId
-          ? await em.findOne(Payment, { paymentIntentId: event.paymentIntentId }, { populate: ["order"], lockMode: LockMode.PESSIMISTIC_WRITE })
+          ? await em.findOne(
+              Payment,
+              { paymentIntentId: event.paymentIntentId },
+              { populate: ["order"], lockMode: LockMode.PESSIMISTIC_WRITE },
+            )
           : null;
         if (!payment) return "ignored";
         const missing = event.amountRefundedCents - payment.refundedCents;
@@ -175,20 +228,37 @@ function applyRefund(em: EntityManager, payment: Payment, amountCents: number, r
   payment.refundedCents += amountCents;
   order.refundedCents += amountCents;
   refreshPaymentState(order);
-  em.create(OrderEvent, { order, kind: "refunded", label: `Refund of ${formatMoney(amountCents, order.currency)}: ${reason}`, at: new Date() });
+  em.create(OrderEvent, {
+    order,
+    kind: "refunded",
+    label: `Refund of ${formatMoney(amountCents, order.currency)}: ${reason}`,
+    at: new Date(),
+  });
 }
 
 /** An owner refunds part or all of a payment; recorded with who did it and why. */
-export async function refundPayment(user: CurrentUser, input: { paymentId: string; amountCents: number; reason: string }): Promise<Refund> {
+export async function refundPayment(
+  user: CurrentUser,
+  input: { paymentId: string; amountCents: number; reason: string },
+): Promise<Refund> {
   return inTransaction(async (em) => {
-    const payment = await em.findOne(Payment, { id: input.paymentId }, { populate: ["order"], lockMode: LockMode.PESSIMISTIC_WRITE });
+    const payment = await em.findOne(
+      Payment,
+      { id: input.paymentId },
+      { populate: ["order"], lockMode: LockMode.PESSIMISTIC_WRITE },
+    );
     if (!payment) throw new AppError("not_found", "No such payment.");
-    if (payment.status !== "succeeded" || !payment.paymentIntentId) throw new AppError("conflict", "Only a completed payment can be refunded.");
+    if (payment.status !== "succeeded" || !payment.paymentIntentId)
+      throw new AppError("conflict", "Only a completed payment can be refunded.");
     const refundable = payment.amountCents - payment.refundedCents;
     if (input.amountCents > refundable) {
-      throw new AppError("invalid", `At most ${formatMoney(refundable, payment.currency)} can be refunded on this payment.`, {
-        amountCents: `At most ${formatMoney(refundable, payment.currency)}.`,
-      });
+      throw new AppError(
+        "invalid",
+        `At most ${formatMoney(refundable, payment.currency)} can be refunded on this payment.`,
+        {
+          amountCents: `At most ${formatMoney(refundable, payment.currency)}.`,
+        },
+      );
     }
     const result = await payments().refund({
       paymentIntentId: payment.paymentIntentId,
@@ -206,7 +276,18 @@ export async function refundPayment(user: CurrentUser, input: { paymentId: strin
     });
     applyRefund(em, payment, result.amountCents, input.reason);
     await recordAudit(
-      { actorId: user.id, action: "payment.refund", subjectType: "order", subjectId: payment.order.id, details: { paymentId: payment.id, amountCents: result.amountCents, reason: input.reason, providerRefundId: result.id } },
+      {
+        actorId: user.id,
+        action: "payment.refund",
+        subjectType: "order",
+        subjectId: payment.order.id,
+        details: {
+          paymentId: payment.id,
+          amountCents: result.amountCents,
+          reason: input.reason,
+          providerRefundId: result.id,
+        },
+      },
       em,
     );
     return refund;

@@ -6,7 +6,13 @@ import { recordAudit } from "@/lib/audit";
 import { inTransaction } from "@/lib/db/orm";
 import { evaluateDesign, parseDesign, type EvaluationReport } from "@/lib/driveline";
 import { AppError } from "@/lib/http/errors";
-import { promisedDate, quoteOrder, quoteShaft, type OrderQuote, type QuoteLine } from "@/lib/pricing/price-book";
+import {
+  promisedDate,
+  quoteOrder,
+  quoteShaft,
+  type OrderQuote,
+  type QuoteLine,
+} from "@/lib/pricing/price-book";
 import { getShopEngineering, type ShopEngineering } from "@/lib/shop/config";
 import { linkCustomerToUser } from "@/lib/customers";
 import { afterCommit, notifyOrderReceived } from "./notify";
@@ -26,43 +32,67 @@ export interface QuotedShaft<S extends QuoteSource = QuoteSource> {
  * Re-evaluates and prices saved designs with the shop's current catalogue, limits and price
  * book. The browser's own evaluation is never trusted for money or safety.
  */
-export function quoteDesigns<S extends QuoteSource>(designs: S[], shop: ShopEngineering, fulfilment: "pickup" | "ship"): { shafts: QuotedShaft<S>[]; quote: OrderQuote } {
+export function quoteDesigns<S extends QuoteSource>(
+  designs: S[],
+  shop: ShopEngineering,
+  fulfilment: "pickup" | "ship",
+): { shafts: QuotedShaft<S>[]; quote: OrderQuote } {
   const shafts = designs.map((design) => {
     const parsed = parseDesign(design.design, { catalogue: shop.catalogue });
     if (!parsed.ok) {
-      throw new AppError("invalid", `"${design.name}" has fields to fix: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
+      throw new AppError(
+        "invalid",
+        `"${design.name}" has fields to fix: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`,
+      );
     }
     const report = evaluateDesign(parsed.design, { catalogue: shop.catalogue, settings: shop.settings });
     const tubePrice = shop.catalogue.tubes.find((t) => t.id === report.tube.tubeId)?.pricePerMetreCents;
     if (tubePrice === undefined) {
-      throw new AppError("invalid", `"${design.name}" uses a tube the shop does not stock; the counter will price it by phone.`);
+      throw new AppError(
+        "invalid",
+        `"${design.name}" uses a tube the shop does not stock; the counter will price it by phone.`,
+      );
     }
     const lines = quoteShaft(report, shop.priceBook, tubePrice, shop.catalogue.jointSeries);
     return { design, report, lines, priceCents: lines.reduce((s, l) => s + l.totalCents, 0) };
   });
-  return { shafts, quote: quoteOrder(shafts.map((s) => s.lines), fulfilment, shop.priceBook) };
+  return {
+    shafts,
+    quote: quoteOrder(
+      shafts.map((s) => s.lines),
+      fulfilment,
+      shop.priceBook,
+    ),
+  };
 }
 
 /** The customer an order is for: the caller's own record, or (counter) the one they chose. */
-async function orderCustomer(em: EntityManager, user: CurrentUser, customerId: string | undefined): Promise<Customer> {
+async function orderCustomer(
+  em: EntityManager,
+  user: CurrentUser,
+  customerId: string | undefined,
+): Promise<Customer> {
   if (customerId && can(user.role, "orders.desk")) {
     const chosen = await em.findOne(Customer, { id: customerId });
     if (!chosen) throw new AppError("not_found", "No such customer.", { customerId: "Choose a customer." });
     return chosen;
   }
-  if (can(user.role, "orders.desk")) throw new AppError("invalid", "Choose the customer this order is for.", { customerId: "Required." });
+  if (can(user.role, "orders.desk"))
+    throw new AppError("invalid", "Choose the customer this order is for.", { customerId: "Required." });
   if (!can(user.role, "orders.own")) throw new AccessError(403);
   return (await em.findOne(Customer, { user: user.id })) ?? em.merge(await linkCustomerToUser(user));
 }
 
 async function nextOrderNumber(em: EntityManager, at: Date): Promise<string> {
   const prefix = `Y${String(at.getUTCFullYear()).slice(2)}-`;
-  const rows = await em.getConnection().execute<{ n: number }[]>(
-    `select coalesce(max(substring(number from ${prefix.length + 1})::int), 0) + 1 as n from shop_order where number like ?`,
-    [`${prefix}%`],
-    "all",
-    em.getTransactionContext(),
-  );
+  const rows = await em
+    .getConnection()
+    .execute<{ n: number }[]>(
+      `select coalesce(max(substring(number from ${prefix.length + 1})::int), 0) + 1 as n from shop_order where number like ?`,
+      [`${prefix}%`],
+      "all",
+      em.getTransactionContext(),
+    );
   return `${prefix}${String(rows[0]?.n ?? 1).padStart(4, "0")}`;
 }
 
@@ -74,10 +104,13 @@ export async function placeOrder(user: CurrentUser, body: PlaceOrderBody): Promi
   const shop = await getShopEngineering();
   const order = await inTransaction(async (em) => {
     // Orders are numbered in sequence; one placement at a time keeps the numbers unique.
-    await em.getConnection().execute("select pg_advisory_xact_lock(7301)", [], "all", em.getTransactionContext());
+    await em
+      .getConnection()
+      .execute("select pg_advisory_xact_lock(7301)", [], "all", em.getTransactionContext());
     const customer = await orderCustomer(em, user, body.customerId);
     const designs = await em.find(Design, { id: { $in: body.designIds }, customer });
-    if (designs.length !== new Set(body.designIds).size) throw new AppError("not_found", "One of those designs is not yours or no longer exists.");
+    if (designs.length !== new Set(body.designIds).size)
+      throw new AppError("not_found", "One of those designs is not yours or no longer exists.");
     const ordered = body.designIds.map((id) => designs.find((d) => d.id === id)!);
 
     const { shafts, quote } = quoteDesigns(ordered, shop, body.fulfilment);
@@ -131,7 +164,13 @@ export async function placeOrder(user: CurrentUser, body: PlaceOrderBody): Promi
       at: now,
     });
     await recordAudit(
-      { actorId: user.id, action: "order.place", subjectType: "order", subjectId: order.id, details: { number: order.number, totalCents: order.totalCents } },
+      {
+        actorId: user.id,
+        action: "order.place",
+        subjectType: "order",
+        subjectId: order.id,
+        details: { number: order.number, totalCents: order.totalCents },
+      },
       em,
     );
     await notifyOrderReceived(em, order);

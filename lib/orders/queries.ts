@@ -40,7 +40,11 @@ function toRow(o: Order, today: string): OrderRow {
 }
 
 /** The orders a user may list: a customer's own, newest first; staff see every order, the soonest promise first. */
-export async function listOrders(em: EntityManager, user: CurrentUser, filter: { open?: boolean } = {}): Promise<OrderRow[]> {
+export async function listOrders(
+  em: EntityManager,
+  user: CurrentUser,
+  filter: { open?: boolean } = {},
+): Promise<OrderRow[]> {
   const all = seesAllOrders(user);
   const where = {
     ...(all ? {} : { customer: { user: user.id } }),
@@ -95,7 +99,8 @@ export interface OrderView extends OrderRow {
   due: { kind: "deposit" | "balance" | "full"; amountCents: number } | null;
 }
 
-const fmt = (n: unknown, digits = 0, unit = "") => (typeof n === "number" && Number.isFinite(n) ? `${n.toFixed(digits)}${unit}` : "—");
+const fmt = (n: unknown, digits = 0, unit = "") =>
+  typeof n === "number" && Number.isFinite(n) ? `${n.toFixed(digits)}${unit}` : "—";
 
 /** What a shaft view is built from: an ordered shaft, or a quoted design. */
 export interface ShaftSource {
@@ -123,14 +128,30 @@ export function shaftView(s: ShaftSource): ShaftView {
     facts: [
       { label: "Installed length", value: fmt(r.lengthMm, 1, " mm") },
       { label: "Cut length", value: fmt(r.cutLengthMm, 1, " mm") },
-      { label: "Tube", value: r.tube ? `${fmt(r.tube.odMm, 1)} × ${fmt(r.tube.wallMm, 2)} mm ${r.tube.materialId}` : "—" },
-      { label: "Working angles", value: Array.isArray(r.joints) ? r.joints.map((j: any) => fmt(j.workingAngleDeg, 2, "°")).join(" / ") : "—" },
+      {
+        label: "Tube",
+        value: r.tube ? `${fmt(r.tube.odMm, 1)} × ${fmt(r.tube.wallMm, 2)} mm ${r.tube.materialId}` : "—",
+      },
+      {
+        label: "Working angles",
+        value: Array.isArray(r.joints)
+          ? r.joints.map((j: any) => fmt(j.workingAngleDeg, 2, "°")).join(" / ")
+          : "—",
+      },
       { label: "Rear yoke index", value: fmt(r.phasing?.phaseIndexDeg, 1, "°") },
-      { label: "Critical speed", value: `${fmt(r.criticalSpeedRpm, 0, " rpm")} (service ${fmt((r.criticalSpeedRatio ?? NaN) * 100, 0, " %")})` },
+      {
+        label: "Critical speed",
+        value: `${fmt(r.criticalSpeedRpm, 0, " rpm")} (service ${fmt((r.criticalSpeedRatio ?? NaN) * 100, 0, " %")})`,
+      },
       { label: "Torsion safety factor", value: fmt(r.torsion?.safetyFactor, 2) },
-      { label: "Balance (per plane)", value: `${fmt(r.balance?.perPlaneGmm, 0, " g·mm")} at G ${fmt(r.balance?.gradeMmS, 1)}` },
+      {
+        label: "Balance (per plane)",
+        value: `${fmt(r.balance?.perPlaneGmm, 0, " g·mm")} at G ${fmt(r.balance?.gradeMmS, 1)}`,
+      },
     ],
-    checks: Array.isArray(r.checks) ? r.checks.map((c: any) => ({ id: String(c.id), status: String(c.status), message: String(c.message) })) : [],
+    checks: Array.isArray(r.checks)
+      ? r.checks.map((c: any) => ({ id: String(c.id), status: String(c.status), message: String(c.message) }))
+      : [],
     cautions: Array.isArray(r.cautions) ? r.cautions.map(String) : [],
   };
 }

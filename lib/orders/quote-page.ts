@@ -20,14 +20,20 @@ export interface QuotePageData {
 }
 
 /** Prices saved designs for the quote screen, exactly as placing the order will. */
-export async function quoteForDesigns(user: CurrentUser, designIds: string[], customerId?: string): Promise<QuotePageData> {
+export async function quoteForDesigns(
+  user: CurrentUser,
+  designIds: string[],
+  customerId?: string,
+): Promise<QuotePageData> {
   const em = await getEm();
-  const customer = seesAllOrders(user) && customerId
-    ? await em.findOne(Customer, { id: customerId })
-    : await em.findOne(Customer, { user: user.id });
+  const customer =
+    seesAllOrders(user) && customerId
+      ? await em.findOne(Customer, { id: customerId })
+      : await em.findOne(Customer, { user: user.id });
   if (!customer) throw new AppError("not_found", "No such customer.");
   const designs = await em.find(Design, { id: { $in: designIds }, customer });
-  if (designs.length === 0 || designs.length !== new Set(designIds).size) throw new AppError("not_found", "That design is not yours or no longer exists.");
+  if (designs.length === 0 || designs.length !== new Set(designIds).size)
+    throw new AppError("not_found", "That design is not yours or no longer exists.");
   const shop = await getShopEngineering();
   const ordered = designIds.map((id) => designs.find((d) => d.id === id)!);
   const pickup = quoteDesigns(ordered, shop, "pickup");
@@ -36,7 +42,16 @@ export async function quoteForDesigns(user: CurrentUser, designIds: string[], cu
     designIds,
     customer: { id: customer.id, name: customer.name, email: customer.email },
     shafts: pickup.shafts.map((q, i) =>
-      shaftView({ id: q.design.id, position: i + 1, name: q.design.name, application: q.design.application, overall: q.report.overall, priceLines: q.lines, priceCents: q.priceCents, evaluation: q.report }),
+      shaftView({
+        id: q.design.id,
+        position: i + 1,
+        name: q.design.name,
+        application: q.design.application,
+        overall: q.report.overall,
+        priceLines: q.lines,
+        priceCents: q.priceCents,
+        evaluation: q.report,
+      }),
     ),
     pickup: pickup.quote,
     ship: ship.quote,

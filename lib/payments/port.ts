@@ -1,7 +1,12 @@
 /** What Yokeline needs from a payment provider. The app calls this, never an SDK directly. */
 export interface PaymentsPort {
   createCheckout(input: CheckoutInput): Promise<{ id: string; url: string }>;
-  refund(input: { paymentIntentId: string; amountCents: number; idempotencyKey: string; reason: string }): Promise<{
+  refund(input: {
+    paymentIntentId: string;
+    amountCents: number;
+    idempotencyKey: string;
+    reason: string;
+  }): Promise<{
     id: string;
     amountCents: number;
   }>;
@@ -24,10 +29,31 @@ export interface CheckoutInput {
 
 /** The provider events Yokeline acts on, reduced to what it reads. */
 export type PaymentEvent =
-  | { id: string; type: "checkout.session.completed"; sessionId: string; paymentIntentId: string | null; amountCents: number; paid: boolean; raw: unknown }
+  | {
+      id: string;
+      type: "checkout.session.completed";
+      sessionId: string;
+      paymentIntentId: string | null;
+      amountCents: number;
+      paid: boolean;
+      raw: unknown;
+    }
   | { id: string; type: "checkout.session.expired"; sessionId: string; raw: unknown }
-  | { id: string; type: "payment_intent.payment_failed"; paymentId: string | null; message: string; raw: unknown }
-  | { id: string; type: "charge.refunded"; paymentIntentId: string | null; refundIds: string[]; amountRefundedCents: number; raw: unknown }
+  | {
+      id: string;
+      type: "payment_intent.payment_failed";
+      paymentId: string | null;
+      message: string;
+      raw: unknown;
+    }
+  | {
+      id: string;
+      type: "charge.refunded";
+      paymentIntentId: string | null;
+      refundIds: string[];
+      amountRefundedCents: number;
+      raw: unknown;
+    }
   | { id: string; type: "other"; providerType: string; raw: unknown };
 
 export class WebhookSignatureError extends Error {}

@@ -16,10 +16,18 @@ export function stripeClient(env = process.env): Stripe {
         protocol: (env.STRIPE_API_PROTOCOL ?? "http") as "http" | "https",
       }
     : {};
-  return new Stripe(key, { ...local, maxNetworkRetries: local.host ? 0 : 2, telemetry: false, timeout: 20_000 });
+  return new Stripe(key, {
+    ...local,
+    maxNetworkRetries: local.host ? 0 : 2,
+    telemetry: false,
+    timeout: 20_000,
+  });
 }
 
-export function createStripePayments(stripe: Stripe = stripeClient(), webhookSecret = process.env.STRIPE_WEBHOOK_SECRET): PaymentsPort {
+export function createStripePayments(
+  stripe: Stripe = stripeClient(),
+  webhookSecret = process.env.STRIPE_WEBHOOK_SECRET,
+): PaymentsPort {
   return {
     async createCheckout(input: CheckoutInput) {
       const session = await stripe.checkout.sessions.create(
@@ -74,7 +82,15 @@ function toPaymentEvent(event: Stripe.Event): PaymentEvent {
     case "checkout.session.completed": {
       const s = event.data.object;
       const pi = typeof s.payment_intent === "string" ? s.payment_intent : (s.payment_intent?.id ?? null);
-      return { id: event.id, type: event.type, sessionId: s.id, paymentIntentId: pi, amountCents: s.amount_total ?? 0, paid: s.payment_status === "paid", raw: event };
+      return {
+        id: event.id,
+        type: event.type,
+        sessionId: s.id,
+        paymentIntentId: pi,
+        amountCents: s.amount_total ?? 0,
+        paid: s.payment_status === "paid",
+        raw: event,
+      };
     }
     case "checkout.session.expired":
       return { id: event.id, type: event.type, sessionId: event.data.object.id, raw: event };

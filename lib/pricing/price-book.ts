@@ -43,7 +43,14 @@ export interface QuoteLine {
 
 /** The parts of an evaluation report that pricing reads (kept narrow so frozen copies stay priceable). */
 export interface PricedShaft {
-  tube: { tubeId?: string | null; odMm: number; wallMm: number; materialId: string; tubeLengthMm: number; priceCents?: number | null };
+  tube: {
+    tubeId?: string | null;
+    odMm: number;
+    wallMm: number;
+    materialId: string;
+    tubeLengthMm: number;
+    priceCents?: number | null;
+  };
   ends: {
     front: { name: string; priceCents: number; jointSeriesId: string } | null;
     rear: { name: string; priceCents: number; jointSeriesId: string } | null;
@@ -107,13 +114,18 @@ export interface OrderQuote {
 }
 
 /** Totals an order: the shafts' lines, shipping (none for pickup), tax on everything, the deposit. */
-export function quoteOrder(shaftLines: readonly QuoteLine[][], fulfilment: "pickup" | "ship", book: PriceBook): OrderQuote {
+export function quoteOrder(
+  shaftLines: readonly QuoteLine[][],
+  fulfilment: "pickup" | "ship",
+  book: PriceBook,
+): OrderQuote {
   const lines = shaftLines.flat();
   const subtotalCents = lines.reduce((sum, l) => sum + l.totalCents, 0);
   const shippingCents = fulfilment === "ship" ? book.shippingCents * Math.max(1, shaftLines.length) : 0;
   const taxCents = Math.round(((subtotalCents + shippingCents) * book.taxRatePercent) / 100);
   const totalCents = subtotalCents + shippingCents + taxCents;
-  const dueNowCents = book.depositPercent >= 100 ? totalCents : Math.round((totalCents * book.depositPercent) / 100);
+  const dueNowCents =
+    book.depositPercent >= 100 ? totalCents : Math.round((totalCents * book.depositPercent) / 100);
   return { currency: book.currency, lines, subtotalCents, shippingCents, taxCents, totalCents, dueNowCents };
 }
 

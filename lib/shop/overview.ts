@@ -23,7 +23,10 @@ export async function overviewFigures(): Promise<OverviewFigures> {
       at: e.at.toISOString(),
       actor: e.actor?.name ?? "system",
       action: e.action,
-      subject: typeof e.details?.email === "string" ? `${e.subjectType} ${e.details.email}` : `${e.subjectType} ${e.subjectId.slice(0, 8)}`,
+      subject:
+        typeof e.details?.email === "string"
+          ? `${e.subjectType} ${e.details.email}`
+          : `${e.subjectType} ${e.subjectId.slice(0, 8)}`,
     })),
   };
 }

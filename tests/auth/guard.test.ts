@@ -20,7 +20,14 @@ async function signedInAs(role: Role): Promise<Headers> {
   return new Headers({ cookie: sessionCookie(res) });
 }
 
-const STAFF_PERMISSIONS: Permission[] = ["orders.desk", "floor.scan", "shop.overview", "shop.manage", "staff.manage", "payments.refund"];
+const STAFF_PERMISSIONS: Permission[] = [
+  "orders.desk",
+  "floor.scan",
+  "shop.overview",
+  "shop.manage",
+  "staff.manage",
+  "payments.refund",
+];
 
 describe("the one access guard", () => {
   dbTest("no session → 401", async () => {

@@ -5,7 +5,11 @@ import { dbTest } from "../setup/db";
 describe("sign-in rate limit", () => {
   dbTest("repeated bad passwords from one client are refused with 429", async () => {
     const email = uniqueEmail("target");
-    await authRequest("/sign-up/email", { name: "Target", email, password: "the-right-password" }, "192.0.2.50");
+    await authRequest(
+      "/sign-up/email",
+      { name: "Target", email, password: "the-right-password" },
+      "192.0.2.50",
+    );
     const ip = "192.0.2.77";
     const statuses: number[] = [];
     for (let i = 0; i < 12; i += 1) {
@@ -18,7 +22,11 @@ describe("sign-in rate limit", () => {
     const right = await authRequest("/sign-in/email", { email, password: "the-right-password" }, ip);
     expect(right.status).toBe(429);
     // …while another client is unaffected.
-    const other = await authRequest("/sign-in/email", { email, password: "the-right-password" }, "192.0.2.78");
+    const other = await authRequest(
+      "/sign-in/email",
+      { email, password: "the-right-password" },
+      "192.0.2.78",
+    );
     expect(other.status).toBe(200);
   });
 });

@@ -8,7 +8,11 @@ import { dbTest } from "../setup/db";
 describe("sign-up", () => {
   dbTest("creates a customer, their customer record and an audit entry", async () => {
     const email = uniqueEmail("signup");
-    const res = await authRequest("/sign-up/email", { name: "Ada Test", email, password: "a-long-password-1" });
+    const res = await authRequest("/sign-up/email", {
+      name: "Ada Test",
+      email,
+      password: "a-long-password-1",
+    });
     expect(res.status).toBe(200);
 
     const em = await getEm();
@@ -25,7 +29,12 @@ describe("sign-up", () => {
 
   dbTest("cannot choose its own role", async () => {
     const email = uniqueEmail("sneaky");
-    const res = await authRequest("/sign-up/email", { name: "Sneaky", email, password: "a-long-password-1", role: "owner" });
+    const res = await authRequest("/sign-up/email", {
+      name: "Sneaky",
+      email,
+      password: "a-long-password-1",
+      role: "owner",
+    });
     const em = await getEm();
     const user = await em.findOne(User, { email });
     // Either refused outright or created as a customer: never an owner.
@@ -34,7 +43,11 @@ describe("sign-up", () => {
   });
 
   dbTest("refuses a short password and names the problem", async () => {
-    const res = await authRequest("/sign-up/email", { name: "Short", email: uniqueEmail("short"), password: "short" });
+    const res = await authRequest("/sign-up/email", {
+      name: "Short",
+      email: uniqueEmail("short"),
+      password: "short",
+    });
     expect(res.status).toBe(400);
     expect(((await res.json()) as { message: string }).message).toMatch(/password/i);
   });

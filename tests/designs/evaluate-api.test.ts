@@ -6,9 +6,16 @@ import { dbTest } from "../setup/db";
 
 const street = JSON.parse(readFileSync("examples/street-truck.json", "utf8"));
 const call = (body: string) =>
-  POST(new NextRequest("http://127.0.0.1/api/designs/evaluate", { method: "POST", body, headers: { "content-type": "application/json" } }), {
-    params: Promise.resolve({}),
-  });
+  POST(
+    new NextRequest("http://127.0.0.1/api/designs/evaluate", {
+      method: "POST",
+      body,
+      headers: { "content-type": "application/json" },
+    }),
+    {
+      params: Promise.resolve({}),
+    },
+  );
 
 describe("POST /api/designs/evaluate", () => {
   dbTest("answers the report for a valid design file", async () => {
@@ -32,7 +39,9 @@ describe("POST /api/designs/evaluate", () => {
     expect(res.status).toBe(422);
     const body = await res.json();
     expect(body.error.code).toBe("invalid");
-    expect(Object.keys(body.error.fields)).toEqual(expect.arrayContaining(["lengthMm", "torque.engineTorqueNm"]));
+    expect(Object.keys(body.error.fields)).toEqual(
+      expect.arrayContaining(["lengthMm", "torque.engineTorqueNm"]),
+    );
     expect(body.error.message).toContain("torque.engineTorqueNm:");
   });
 
@@ -47,7 +56,10 @@ describe("POST /api/designs/quote", () => {
   dbTest("prices a design file with the shop's price book", async () => {
     const { POST: quote } = await import("@/app/api/designs/quote/route");
     const res = await quote(
-      new NextRequest("http://127.0.0.1/api/designs/quote", { method: "POST", body: JSON.stringify({ design: street, fulfilment: "ship" }) }),
+      new NextRequest("http://127.0.0.1/api/designs/quote", {
+        method: "POST",
+        body: JSON.stringify({ design: street, fulfilment: "ship" }),
+      }),
       { params: Promise.resolve({}) },
     );
     expect(res.status).toBe(200);

@@ -47,16 +47,21 @@ describe("single Cardan joint", () => {
 
   it("numerical derivative of the output angle equals the speed ratio, and of the ratio the acceleration", () => {
     fc.assert(
-      fc.property(fc.double({ min: 0.5, max: 40, noNaN: true }), fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }), (betaDeg, theta) => {
-        const beta = betaDeg * RAD;
-        const h = 1e-5;
-        const dPhi = (cardanOutputAngleRad(theta + h, beta) - cardanOutputAngleRad(theta - h, beta)) / (2 * h);
-        expect(dPhi).toBeCloseTo(cardanSpeedRatio(theta, beta), 6);
-        const omega = 300;
-        const dRatio = (cardanSpeedRatio(theta + h, beta) - cardanSpeedRatio(theta - h, beta)) / (2 * h);
-        const alpha = cardanAngularAccelerationRadS2(theta, beta, omega);
-        expect(Math.abs(omega * omega * dRatio - alpha)).toBeLessThan(1e-4 * Math.max(1, Math.abs(alpha)));
-      }),
+      fc.property(
+        fc.double({ min: 0.5, max: 40, noNaN: true }),
+        fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }),
+        (betaDeg, theta) => {
+          const beta = betaDeg * RAD;
+          const h = 1e-5;
+          const dPhi =
+            (cardanOutputAngleRad(theta + h, beta) - cardanOutputAngleRad(theta - h, beta)) / (2 * h);
+          expect(dPhi).toBeCloseTo(cardanSpeedRatio(theta, beta), 6);
+          const omega = 300;
+          const dRatio = (cardanSpeedRatio(theta + h, beta) - cardanSpeedRatio(theta - h, beta)) / (2 * h);
+          const alpha = cardanAngularAccelerationRadS2(theta, beta, omega);
+          expect(Math.abs(omega * omega * dRatio - alpha)).toBeLessThan(1e-4 * Math.max(1, Math.abs(alpha)));
+        },
+      ),
       { numRuns: 200 },
     );
   });
@@ -66,10 +71,14 @@ describe("single Cardan joint", () => {
     for (const deg of [1, 3, 10, 30]) {
       const beta = deg * RAD;
       let peak = 0;
-      for (let i = 0; i <= 20000; i++) peak = Math.max(peak, Math.abs(cardanAngularAccelerationRadS2((i / 20000) * Math.PI, beta, omega)));
+      for (let i = 0; i <= 20000; i++)
+        peak = Math.max(peak, Math.abs(cardanAngularAccelerationRadS2((i / 20000) * Math.PI, beta, omega)));
       expect(cardanPeakAngularAccelerationRadS2(beta, omega) / peak).toBeCloseTo(1, 6);
     }
-    expect(cardanPeakAngularAccelerationRadS2(1 * RAD, omega) / (omega * omega * (1 * RAD) ** 2)).toBeCloseTo(1, 3);
+    expect(cardanPeakAngularAccelerationRadS2(1 * RAD, omega) / (omega * omega * (1 * RAD) ** 2)).toBeCloseTo(
+      1,
+      3,
+    );
   });
 
   it("equivalent angle inverts the single-joint peak-to-peak tan β·sin β exactly", () => {

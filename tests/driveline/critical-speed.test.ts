@@ -1,7 +1,13 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { lusolve, multiply, dot as mdot, zeros, type Matrix } from "mathjs";
-import { criticalSpeedHandbookRpm, criticalSpeedRpm, inToMm, KGM3_PER_LBIN3, spanForCriticalSpeedMm } from "@/lib/driveline";
+import {
+  criticalSpeedHandbookRpm,
+  criticalSpeedRpm,
+  inToMm,
+  KGM3_PER_LBIN3,
+  spanForCriticalSpeedMm,
+} from "@/lib/driveline";
 
 const TUBE_35_083 = { odMm: inToMm(3.5), wallMm: inToMm(0.083) };
 
@@ -55,14 +61,24 @@ function feFirstOmega(EI: number, rhoA: number, spanM: number, elements: number)
 
 describe("critical speed", () => {
   it("3.5 × 0.083 in steel, 60 in span, E 200 GPa, ρ 7850 → 6287 rpm (engineering reference §5 check value)", () => {
-    const nc = criticalSpeedRpm({ ...TUBE_35_083, spanMm: inToMm(60), elasticModulusGPa: 200, densityKgM3: 7850 });
+    const nc = criticalSpeedRpm({
+      ...TUBE_35_083,
+      spanMm: inToMm(60),
+      elasticModulusGPa: 200,
+      densityKgM3: 7850,
+    });
     expect(nc).toBeGreaterThan(6286.5);
     expect(nc).toBeLessThan(6287.5);
   });
 
   it("same tube with E = 29.0 Msi, 0.284 lb/in³ → 6282 rpm (reference §5)", () => {
     const eGPa = 29.0e6 * 0.006894757293168361; // psi → MPa → ×1e-3 GPa below
-    const nc = criticalSpeedRpm({ ...TUBE_35_083, spanMm: inToMm(60), elasticModulusGPa: eGPa / 1000, densityKgM3: 0.284 * KGM3_PER_LBIN3 });
+    const nc = criticalSpeedRpm({
+      ...TUBE_35_083,
+      spanMm: inToMm(60),
+      elasticModulusGPa: eGPa / 1000,
+      densityKgM3: 0.284 * KGM3_PER_LBIN3,
+    });
     expect(Math.round(nc)).toBe(6282);
   });
 
@@ -76,7 +92,12 @@ describe("critical speed", () => {
     const span = inToMm(60) / 1000;
     const omega = feFirstOmega(E * I, rho * A, span, 12);
     const feRpm = (omega * 30) / Math.PI;
-    const nc = criticalSpeedRpm({ ...TUBE_35_083, spanMm: span * 1000, elasticModulusGPa: 200, densityKgM3: rho });
+    const nc = criticalSpeedRpm({
+      ...TUBE_35_083,
+      spanMm: span * 1000,
+      elasticModulusGPa: 200,
+      densityKgM3: rho,
+    });
     // Consistent-mass FE converges from above; 12 elements are within 1e-5 of the exact mode.
     expect(feRpm / nc).toBeGreaterThanOrEqual(1 - 1e-9);
     expect(feRpm / nc - 1).toBeLessThan(1e-4);
@@ -86,20 +107,29 @@ describe("critical speed", () => {
     const odIn = 3.5;
     const idIn = 3.5 - 2 * 0.083;
     const hb = criticalSpeedHandbookRpm(odIn, idIn, 60);
-    const nc = criticalSpeedRpm({ ...TUBE_35_083, spanMm: inToMm(60), elasticModulusGPa: 200, densityKgM3: 7850 });
+    const nc = criticalSpeedRpm({
+      ...TUBE_35_083,
+      spanMm: inToMm(60),
+      elasticModulusGPa: 200,
+      densityKgM3: 7850,
+    });
     expect(Math.abs(hb / nc - 1)).toBeLessThan(0.02);
   });
 
   it("a longer span always has a lower critical speed, falling with L²", () => {
     fc.assert(
-      fc.property(fc.double({ min: 200, max: 3000, noNaN: true }), fc.double({ min: 1.01, max: 3, noNaN: true }), (span, k) => {
-        const base = { ...TUBE_35_083, elasticModulusGPa: 200, densityKgM3: 7850 };
-        const a = criticalSpeedRpm({ ...base, spanMm: span });
-        const b = criticalSpeedRpm({ ...base, spanMm: span * k });
-        expect(b).toBeLessThan(a);
-        expect(a / b).toBeCloseTo(k * k, 9);
-        expect(spanForCriticalSpeedMm(base, a)).toBeCloseTo(span, 6);
-      }),
+      fc.property(
+        fc.double({ min: 200, max: 3000, noNaN: true }),
+        fc.double({ min: 1.01, max: 3, noNaN: true }),
+        (span, k) => {
+          const base = { ...TUBE_35_083, elasticModulusGPa: 200, densityKgM3: 7850 };
+          const a = criticalSpeedRpm({ ...base, spanMm: span });
+          const b = criticalSpeedRpm({ ...base, spanMm: span * k });
+          expect(b).toBeLessThan(a);
+          expect(a / b).toBeCloseTo(k * k, 9);
+          expect(spanForCriticalSpeedMm(base, a)).toBeCloseTo(span, 6);
+        },
+      ),
     );
   });
 });

@@ -43,7 +43,7 @@ describe("evaluateDesign", () => {
     expect(r.phasing.phaseIndexDeg).toBe(0);
     expect(r.phasing.outputSpeedVariationPct).toBeLessThan(1e-9);
     expect(r.phasing.equivalentAngleDeg).toBeLessThan(1e-6);
-    expect(r.service.maxShaftRpm).toBeCloseTo((((200 * 1000) / 60 / (Math.PI * 0.711)) * 3.73), 6);
+    expect(r.service.maxShaftRpm).toBeCloseTo(((200 * 1000) / 60 / (Math.PI * 0.711)) * 3.73, 6);
     expect(r.service.peakShaftTorqueNm).toBeCloseTo(3366, 9);
     expect(r.criticalSpeedRatio).toBeCloseTo(r.service.maxShaftRpm / r.criticalSpeedRpm, 12);
     expect(r.torsion.safetyFactor).toBeGreaterThan(1.5);
@@ -105,8 +105,10 @@ describe("evaluateDesign", () => {
     const sel = r.tubeSelection!;
     expect(r.tube.origin).toBe("catalogue");
     expect(sel.byMass.length).toBeGreaterThan(0);
-    for (let i = 1; i < sel.byMass.length; i++) expect(sel.byMass[i]!.massKg).toBeGreaterThanOrEqual(sel.byMass[i - 1]!.massKg);
-    for (let i = 1; i < sel.byCost.length; i++) expect(sel.byCost[i]!.priceCents).toBeGreaterThanOrEqual(sel.byCost[i - 1]!.priceCents);
+    for (let i = 1; i < sel.byMass.length; i++)
+      expect(sel.byMass[i]!.massKg).toBeGreaterThanOrEqual(sel.byMass[i - 1]!.massKg);
+    for (let i = 1; i < sel.byCost.length; i++)
+      expect(sel.byCost[i]!.priceCents).toBeGreaterThanOrEqual(sel.byCost[i - 1]!.priceCents);
     expect(sel.byMass.length + sel.rejected.length).toBe(defaultCatalogue.tubes.length);
     for (const t of sel.rejected) expect(t.reasons.length).toBeGreaterThan(0);
     for (const t of sel.byMass) {
@@ -145,18 +147,36 @@ describe("evaluateDesign", () => {
     const design = fc.record({
       lengthMm: positive(100, 4000),
       tube: fc.option(
-        fc.record({ materialId: fc.constantFrom("steel-dom", "chromoly-4130", "aluminium-6061-t6"), odMm: positive(40, 130), wallMm: positive(1, 6) }),
+        fc.record({
+          materialId: fc.constantFrom("steel-dom", "chromoly-4130", "aluminium-6061-t6"),
+          odMm: positive(40, 130),
+          wallMm: positive(1, 6),
+        }),
         { nil: null },
       ),
       geometry: fc.record({ transmission: shaft, driveshaft: shaft, pinion: shaft }),
-      torque: fc.record({ engineTorqueNm: positive(10, 3000), firstGearRatio: fc.option(positive(0.5, 6), { nil: null }), converterStallRatio: fc.option(positive(1, 3)) }),
+      torque: fc.record({
+        engineTorqueNm: positive(10, 3000),
+        firstGearRatio: fc.option(positive(0.5, 6), { nil: null }),
+        converterStallRatio: fc.option(positive(1, 3)),
+      }),
       speed: fc.oneof(
         fc.record({ maxShaftRpm: positive(100, 12000) }),
-        fc.record({ topSpeedKmh: positive(20, 400), axleRatio: positive(2, 6), tireDiameterMm: positive(400, 1100) }),
+        fc.record({
+          topSpeedKmh: positive(20, 400),
+          axleRatio: positive(2, 6),
+          tireDiameterMm: positive(400, 1100),
+        }),
       ),
       balanceGradeMmS: fc.option(positive(1, 40)),
       phaseIndexDeg: fc.option(fc.double({ min: -89.9, max: 90, noNaN: true })),
-      slip: fc.option(fc.record({ collapsedLengthMm: positive(50, 100), travelMm: positive(20, 150), droopExtensionMm: positive(0, 80) })),
+      slip: fc.option(
+        fc.record({
+          collapsedLengthMm: positive(50, 100),
+          travelMm: positive(20, 150),
+          droopExtensionMm: positive(0, 80),
+        }),
+      ),
     });
     fc.assert(
       fc.property(design, (input) => {

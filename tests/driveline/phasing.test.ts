@@ -27,7 +27,8 @@ function rotate(v: Vec3, a: Vec3, g: number): Vec3 {
 const angleArb = fc.double({ min: -12, max: 12, noNaN: true });
 const shaftArb = fc.record({ verticalDeg: angleArb, horizontalDeg: angleArb }).map(shaftDirection);
 
-const variation = (shafts: Vec3[], phases?: number[]): number => chainResponse(makeChain(shafts, phases)).outputPeakToPeak;
+const variation = (shafts: Vec3[], phases?: number[]): number =>
+  chainResponse(makeChain(shafts, phases)).outputPeakToPeak;
 
 /** Unwrapped shaft angles over a small step, for numerical derivatives. */
 function unwrapDiff(a: number, b: number): number {
@@ -51,22 +52,28 @@ describe("two-joint phasing", () => {
 
   it("compound offset: indexing by the angle between the joint planes cancels; the opposite sign is worse", () => {
     fc.assert(
-      fc.property(shaftArb, shaftArb, fc.double({ min: 5, max: 85, noNaN: true }), fc.boolean(), (t, d, planeDeg, negative) => {
-        fc.pre(angleBetweenRad(t, d) > 1 * RAD);
-        const g = (negative ? -1 : 1) * planeDeg * RAD;
-        // Pinion: the transmission axis turned about the driveshaft → equal angles, rear plane turned by g.
-        const p = rotate(t, d, g);
-        const best = phaseIndexRad(t, d, p);
-        expect(Math.abs(best - g)).toBeLessThan(1e-9); // the index is the plane angle, with its sign
-        expect(variation([t, d, p], [best])).toBeLessThan(1e-9);
-        const opposite = variation([t, d, p], [-best]);
-        const inPhase = variation([t, d, p], [0]);
-        expect(inPhase).toBeGreaterThan(1e-6);
-        // Indexing the wrong way is worse than the right way, and (below 45°, where −g is
-        // further from g than 0 is, modulo the half turn) worse than not indexing at all.
-        expect(opposite).toBeGreaterThan(1e-6);
-        if (planeDeg < 44) expect(opposite).toBeGreaterThan(inPhase);
-      }),
+      fc.property(
+        shaftArb,
+        shaftArb,
+        fc.double({ min: 5, max: 85, noNaN: true }),
+        fc.boolean(),
+        (t, d, planeDeg, negative) => {
+          fc.pre(angleBetweenRad(t, d) > 1 * RAD);
+          const g = (negative ? -1 : 1) * planeDeg * RAD;
+          // Pinion: the transmission axis turned about the driveshaft → equal angles, rear plane turned by g.
+          const p = rotate(t, d, g);
+          const best = phaseIndexRad(t, d, p);
+          expect(Math.abs(best - g)).toBeLessThan(1e-9); // the index is the plane angle, with its sign
+          expect(variation([t, d, p], [best])).toBeLessThan(1e-9);
+          const opposite = variation([t, d, p], [-best]);
+          const inPhase = variation([t, d, p], [0]);
+          expect(inPhase).toBeGreaterThan(1e-6);
+          // Indexing the wrong way is worse than the right way, and (below 45°, where −g is
+          // further from g than 0 is, modulo the half turn) worse than not indexing at all.
+          expect(opposite).toBeGreaterThan(1e-6);
+          if (planeDeg < 44) expect(opposite).toBeGreaterThan(inPhase);
+        },
+      ),
       { numRuns: 150 },
     );
   });
@@ -99,22 +106,34 @@ describe("two-joint phasing", () => {
 
   it("numerical derivative of the geometric composition equals the speed ratios (3-D, 2 and 3 joints)", () => {
     fc.assert(
-      fc.property(fc.array(shaftArb, { minLength: 3, maxLength: 4 }), fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }), fc.double({ min: -1.5, max: 1.5, noNaN: true }), (shafts, theta, phase) => {
-        const chain = makeChain(shafts, Array.from({ length: shafts.length - 2 }, (_, i) => phase * (i + 1) * 0.5));
-        const h = 1e-6;
-        const a0 = chainShaftAnglesRad(chain, theta - h);
-        const a1 = chainShaftAnglesRad(chain, theta + h);
-        const ratios = chainSpeedRatiosAt(chain, theta).shafts;
-        for (let j = 1; j < shafts.length; j++) {
-          expect(unwrapDiff(a0[j]!, a1[j]!) / (2 * h)).toBeCloseTo(ratios[j]!, 5);
-        }
-      }),
+      fc.property(
+        fc.array(shaftArb, { minLength: 3, maxLength: 4 }),
+        fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }),
+        fc.double({ min: -1.5, max: 1.5, noNaN: true }),
+        (shafts, theta, phase) => {
+          const chain = makeChain(
+            shafts,
+            Array.from({ length: shafts.length - 2 }, (_, i) => phase * (i + 1) * 0.5),
+          );
+          const h = 1e-6;
+          const a0 = chainShaftAnglesRad(chain, theta - h);
+          const a1 = chainShaftAnglesRad(chain, theta + h);
+          const ratios = chainSpeedRatiosAt(chain, theta).shafts;
+          for (let j = 1; j < shafts.length; j++) {
+            expect(unwrapDiff(a0[j]!, a1[j]!) / (2 * h)).toBeCloseTo(ratios[j]!, 5);
+          }
+        },
+      ),
       { numRuns: 150 },
     );
   });
 
   it("peak tube acceleration from the chain matches a numerical second derivative of its position", () => {
-    const shafts = [shaftDirection({ verticalDeg: 2, horizontalDeg: 0 }), shaftDirection({ verticalDeg: 9, horizontalDeg: 4 }), shaftDirection({ verticalDeg: 1, horizontalDeg: 1 })];
+    const shafts = [
+      shaftDirection({ verticalDeg: 2, horizontalDeg: 0 }),
+      shaftDirection({ verticalDeg: 9, horizontalDeg: 4 }),
+      shaftDirection({ verticalDeg: 1, horizontalDeg: 1 }),
+    ];
     const chain = makeChain(shafts);
     const h = 1e-3;
     let peak = 0;
@@ -129,18 +148,24 @@ describe("two-joint phasing", () => {
 
   it("the 2° sampling with refined extremes agrees with a 0.05° sweep", () => {
     fc.assert(
-      fc.property(shaftArb, shaftArb, shaftArb, fc.double({ min: -1.5, max: 1.5, noNaN: true }), (t, d, p, phase) => {
-        const chain = makeChain([t, d, p], [phase]);
-        let lo = Infinity;
-        let hi = -Infinity;
-        for (let i = 0; i < 3600; i++) {
-          const out = chainSpeedRatiosAt(chain, (i / 3600) * Math.PI).shafts[2]!;
-          lo = Math.min(lo, out);
-          hi = Math.max(hi, out);
-        }
-        const v = chainResponse(chain).outputPeakToPeak;
-        expect(Math.abs(v - (hi - lo))).toBeLessThan(1e-4 * Math.max(hi - lo, 1e-6) + 1e-9);
-      }),
+      fc.property(
+        shaftArb,
+        shaftArb,
+        shaftArb,
+        fc.double({ min: -1.5, max: 1.5, noNaN: true }),
+        (t, d, p, phase) => {
+          const chain = makeChain([t, d, p], [phase]);
+          let lo = Infinity;
+          let hi = -Infinity;
+          for (let i = 0; i < 3600; i++) {
+            const out = chainSpeedRatiosAt(chain, (i / 3600) * Math.PI).shafts[2]!;
+            lo = Math.min(lo, out);
+            hi = Math.max(hi, out);
+          }
+          const v = chainResponse(chain).outputPeakToPeak;
+          expect(Math.abs(v - (hi - lo))).toBeLessThan(1e-4 * Math.max(hi - lo, 1e-6) + 1e-9);
+        },
+      ),
       { numRuns: 40 },
     );
   });

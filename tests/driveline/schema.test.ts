@@ -20,7 +20,11 @@ describe("design schema", () => {
     ["torque.engineTorqueNm", "550", "torque.engineTorqueNm: must be a positive number"],
     ["lengthMm", 0, "lengthMm: must be a positive number"],
     ["tube.odMm", null, "tube.odMm: must be a positive number"],
-    ["geometry.pinion.verticalDeg", 95, "geometry.pinion.verticalDeg: must be an angle in degrees between −40 and 40"],
+    [
+      "geometry.pinion.verticalDeg",
+      95,
+      "geometry.pinion.verticalDeg: must be an angle in degrees between −40 and 40",
+    ],
     ["tube.wallMm", 50, "tube.wallMm: must be less than half of odMm"],
   ])("%s = %j → a message naming the field", (path, value, expected) => {
     const d = example();
@@ -59,7 +63,9 @@ describe("design schema", () => {
     d.material = { elasticModulusGPa: 105, densityKgM3: 4480, shearYieldMPa: 400 };
     expect(parseDesign(d).ok).toBe(true);
     d.ends.rear.fittingId = "NOPE";
-    expect(messages(d)).toEqual(['ends.rear.fittingId: must be an end fitting in the catalogue (unknown "NOPE")']);
+    expect(messages(d)).toEqual([
+      'ends.rear.fittingId: must be an end fitting in the catalogue (unknown "NOPE")',
+    ]);
   });
 
   it("non-objects and nulls give one clear line, never a raw zod dump", () => {

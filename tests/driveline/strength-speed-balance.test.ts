@@ -51,14 +51,26 @@ describe("shaft speed and torque", () => {
   });
 
   it("uses the larger of maxShaftRpm, the vehicle and the engine figures", () => {
-    expect(serviceSpeed({ maxShaftRpm: 4000, topSpeedKmh: 200, axleRatio: 3.73, tireDiameterMm: 711 })?.governedBy).toBe("vehicle");
-    expect(serviceSpeed({ maxShaftRpm: 9000, topSpeedKmh: 200, axleRatio: 3.73, tireDiameterMm: 711 })?.maxShaftRpm).toBe(9000);
+    expect(
+      serviceSpeed({ maxShaftRpm: 4000, topSpeedKmh: 200, axleRatio: 3.73, tireDiameterMm: 711 })?.governedBy,
+    ).toBe("vehicle");
+    expect(
+      serviceSpeed({ maxShaftRpm: 9000, topSpeedKmh: 200, axleRatio: 3.73, tireDiameterMm: 711 })
+        ?.maxShaftRpm,
+    ).toBe(9000);
     expect(serviceSpeed({ maxEngineRpm: 6000, topGearRatio: 0.8 })?.maxShaftRpm).toBe(7500);
     expect(serviceSpeed({ topSpeedKmh: 200 })).toBeNull();
   });
 
   it("design torque = engine × first gear × transfer low × converter stall, ratios default to 1", () => {
-    expect(designShaftTorqueNm({ engineTorqueNm: 550, firstGearRatio: 3.06, transferCaseLowRatio: 1, converterStallRatio: 2 })).toBeCloseTo(3366, 9);
+    expect(
+      designShaftTorqueNm({
+        engineTorqueNm: 550,
+        firstGearRatio: 3.06,
+        transferCaseLowRatio: 1,
+        converterStallRatio: 2,
+      }),
+    ).toBeCloseTo(3366, 9);
     expect(designShaftTorqueNm({ engineTorqueNm: 550, firstGearRatio: null })).toBe(550);
   });
 });

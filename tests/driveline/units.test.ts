@@ -1,6 +1,16 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { KG_PER_LB, KMH_PER_MPH, MM_PER_INCH, MPA_PER_PSI, NM_PER_LBFT, UNIT_CONVERSIONS, roundTripCustomary, roundTripSi, type Quantity } from "@/lib/driveline";
+import {
+  KG_PER_LB,
+  KMH_PER_MPH,
+  MM_PER_INCH,
+  MPA_PER_PSI,
+  NM_PER_LBFT,
+  UNIT_CONVERSIONS,
+  roundTripCustomary,
+  roundTripSi,
+  type Quantity,
+} from "@/lib/driveline";
 
 describe("units", () => {
   it("uses the exact definitions (NIST SP 811 Appendix B)", () => {

@@ -1,7 +1,16 @@
 import { expect, test } from "@playwright/test";
 import { ACCOUNTS, signIn } from "./fixtures";
 
-const STAFF_PAGES = ["/desk", "/desk/new", "/desk/customers", "/floor", "/floor/queue", "/overview", "/overview/catalogue", "/overview/staff"];
+const STAFF_PAGES = [
+  "/desk",
+  "/desk/new",
+  "/desk/customers",
+  "/floor",
+  "/floor/queue",
+  "/overview",
+  "/overview/catalogue",
+  "/overview/staff",
+];
 
 test("an anonymous visitor is sent to sign-in, and comes back after", async ({ page }) => {
   await page.goto("/desk/customers");

@@ -3,7 +3,10 @@ import { expect, test, type Page } from "@playwright/test";
 // The issue's acceptance journey, end to end in Chromium, against the local Stripe and mail fakes.
 const MAIL = `http://127.0.0.1:${process.env.MAIL_FAKE_HTTP_PORT ?? 12680}`;
 // A 1×1 PNG (the smallest valid image; demo data).
-const PNG = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==", "base64");
+const PNG = Buffer.from(
+  "iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==",
+  "base64",
+);
 
 async function typeInto(page: Page, label: string, value: string) {
   const field = page.getByLabel(label, { exact: true });
@@ -22,7 +25,9 @@ async function mailTo(email: string, subject: RegExp): Promise<{ subject: string
   throw new Error(`no e-mail to ${email} matching ${subject}`);
 }
 
-test("a new customer designs a shaft, fixes it, uploads a photo, pays a deposit and sees the order paid", async ({ page }) => {
+test("a new customer designs a shaft, fixes it, uploads a photo, pays a deposit and sees the order paid", async ({
+  page,
+}) => {
   test.setTimeout(120_000);
   const email = `journey-${Date.now()}@customer.example`;
 
@@ -75,11 +80,17 @@ test("a new customer designs a shaft, fixes it, uploads a photo, pays a deposit 
   await expect(page).toHaveURL(/\/orders\/[0-9a-f-]{36}\?paid=cs_/);
   await expect(page.getByText("Payment received")).toBeVisible({ timeout: 30_000 });
   await expect(page.getByText("Deposit paid").first()).toBeVisible();
-  await expect(page.getByRole("list", { name: "Order timeline" })).toContainText(/Deposit of \$[\d,.]+ received/);
-  const orderNumber = (await page.getByRole("heading", { level: 1 }).textContent())!.replace("Order ", "").trim();
+  await expect(page.getByRole("list", { name: "Order timeline" })).toContainText(
+    /Deposit of \$[\d,.]+ received/,
+  );
+  const orderNumber = (await page.getByRole("heading", { level: 1 }).textContent())!
+    .replace("Order ", "")
+    .trim();
 
   // Attach a photo of the old shaft.
-  await page.getByLabel("Attach a photo or measurement sheet").setInputFiles({ name: "old-shaft.png", mimeType: "image/png", buffer: PNG });
+  await page
+    .getByLabel("Attach a photo or measurement sheet")
+    .setInputFiles({ name: "old-shaft.png", mimeType: "image/png", buffer: PNG });
   await expect(page.getByRole("link", { name: /old-shaft\.png/ }).first()).toBeVisible();
 
   // The confirmation and the receipt arrived in the local mail fake.

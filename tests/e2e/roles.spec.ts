@@ -2,14 +2,26 @@ import { expect, test } from "@playwright/test";
 import { ACCOUNTS, signIn } from "./fixtures";
 
 const HOMES = [
-  { role: "owner", path: "/overview", heading: "Overview", nav: ["Overview", "Order desk", "Floor", "Catalogue & prices", "Staff", "Sent mail"] },
-  { role: "counter", path: "/desk", heading: "Order desk", nav: ["Order desk", "New phone order", "Customers"] },
+  {
+    role: "owner",
+    path: "/overview",
+    heading: "Overview",
+    nav: ["Overview", "Order desk", "Floor", "Catalogue & prices", "Staff", "Sent mail"],
+  },
+  {
+    role: "counter",
+    path: "/desk",
+    heading: "Order desk",
+    nav: ["Order desk", "New phone order", "Customers"],
+  },
   { role: "floor", path: "/floor", heading: "Scan station", nav: ["Scan station", "Work queue"] },
   { role: "customer", path: "/orders", heading: "My orders", nav: ["My orders", "Design a shaft"] },
 ] as const;
 
 for (const home of HOMES) {
-  test(`${home.role} signs in, lands on their home with their navigation, and signs out`, async ({ page }) => {
+  test(`${home.role} signs in, lands on their home with their navigation, and signs out`, async ({
+    page,
+  }) => {
     await signIn(page, ACCOUNTS[home.role]);
     await expect(page).toHaveURL(home.path);
     await expect(page.getByRole("heading", { level: 1, name: home.heading })).toBeVisible();

@@ -16,7 +16,10 @@ describe("Stripe form decoding", () => {
       "line_items[0][price_data][unit_amount]=100&line_items[0][price_data][product_data][name]=Yoke%20%26%20tube" +
       "&line_items[1][quantity]=2&metadata[orderId]=o_1&expand[]=payment_intent&expand[]=line_items";
     expect(parseStripeForm(body)).toEqual({
-      line_items: [{ price_data: { unit_amount: "100", product_data: { name: "Yoke & tube" } } }, { quantity: "2" }],
+      line_items: [
+        { price_data: { unit_amount: "100", product_data: { name: "Yoke & tube" } } },
+        { quantity: "2" },
+      ],
       metadata: { orderId: "o_1" },
       expand: ["payment_intent", "line_items"],
     });
@@ -28,7 +31,7 @@ describe("MIME reading", () => {
   it("decodes quoted-printable, base64 and encoded-word headers", () => {
     const raw = [
       "From: =?UTF-8?Q?Jos=C3=A9?= <jose@shop.test>",
-      "To: a@shop.test, \"Last, First\" <b@shop.test>",
+      'To: a@shop.test, "Last, First" <b@shop.test>',
       "Subject: =?UTF-8?B?w5xiZXIgdW5z?=",
       'Content-Type: multipart/alternative; boundary="b1"',
       "",
@@ -61,10 +64,21 @@ describe("Stripe fake persistence", () => {
     const stateFile = path.join(dir, "state.json");
     const first = await startStripeFake({ port: 0, stateFile, log: false });
     const client = (port: number) =>
-      new Stripe("sk_test_persist", { host: "127.0.0.1", port, protocol: "http", maxNetworkRetries: 0, telemetry: false });
+      new Stripe("sk_test_persist", {
+        host: "127.0.0.1",
+        port,
+        protocol: "http",
+        maxNetworkRetries: 0,
+        telemetry: false,
+      });
     const session = await client(first.port).checkout.sessions.create({
       mode: "payment",
-      line_items: [{ price_data: { currency: "eur", unit_amount: 9_900, product_data: { name: "Slip yoke" } }, quantity: 1 }],
+      line_items: [
+        {
+          price_data: { currency: "eur", unit_amount: 9_900, product_data: { name: "Slip yoke" } },
+          quantity: 1,
+        },
+      ],
       success_url: "http://localhost:3000/ok?s={CHECKOUT_SESSION_ID}",
     });
     await first.close();

@@ -18,7 +18,12 @@ async function failNext(body: Record<string, unknown>): Promise<void> {
 }
 
 function transport() {
-  return nodemailer.createTransport({ host: "127.0.0.1", port: fake.smtpPort, secure: false, ignoreTLS: true });
+  return nodemailer.createTransport({
+    host: "127.0.0.1",
+    port: fake.smtpPort,
+    secure: false,
+    ignoreTLS: true,
+  });
 }
 
 beforeAll(async () => {
@@ -54,7 +59,9 @@ describe("SMTP catcher", () => {
     expect(msg?.subject).toBe("Order #1042 confirmed — café ✓");
     expect(msg?.text?.trim()).toBe("Your driveshaft order is confirmed.\nBalance: 1.5 m, 3 ½ in tube.");
     expect(msg?.html).toBe("<p>Your <strong>driveshaft</strong> order is confirmed.</p>");
-    expect(msg?.attachments).toEqual([{ filename: "quote.txt", contentType: "text/plain", size: 10, contentId: null }]);
+    expect(msg?.attachments).toEqual([
+      { filename: "quote.txt", contentType: "text/plain", size: 10, contentId: null },
+    ]);
     expect(await messages("?to=audit@yokeline.test")).toHaveLength(1);
     expect(await messages("?to=nobody@shop.test")).toEqual([]);
   });
@@ -67,7 +74,12 @@ describe("SMTP catcher", () => {
     expect((err as { responseCode?: number }).responseCode).toBe(451);
     expect(await messages()).toEqual([]);
 
-    await transport().sendMail({ from: "a@yokeline.test", to: "b@shop.test", subject: "Retry me", text: "x" });
+    await transport().sendMail({
+      from: "a@yokeline.test",
+      to: "b@shop.test",
+      subject: "Retry me",
+      text: "x",
+    });
     expect(await messages("?to=b@shop.test")).toHaveLength(1);
   });
 });
@@ -101,15 +113,30 @@ describe("Resend fake", () => {
   });
 
   it("answers errors in Resend's shape", async () => {
-    const missing = await resend().emails.send({ from: "a@yokeline.test", to: "b@shop.test", subject: "", text: "x" });
+    const missing = await resend().emails.send({
+      from: "a@yokeline.test",
+      to: "b@shop.test",
+      subject: "",
+      text: "x",
+    });
     expect(missing.data).toBeNull();
     expect(missing.error).toMatchObject({ statusCode: 422, name: "missing_required_field" });
 
-    const badFrom = await resend().emails.send({ from: "not-an-address", to: "b@shop.test", subject: "s", text: "x" });
+    const badFrom = await resend().emails.send({
+      from: "not-an-address",
+      to: "b@shop.test",
+      subject: "s",
+      text: "x",
+    });
     expect(badFrom.error).toMatchObject({ statusCode: 422, name: "validation_error" });
 
     const badKey = new Resend("wrong_key", { baseUrl: fake.httpUrl });
-    const denied = await badKey.emails.send({ from: "a@yokeline.test", to: "b@shop.test", subject: "s", text: "x" });
+    const denied = await badKey.emails.send({
+      from: "a@yokeline.test",
+      to: "b@shop.test",
+      subject: "s",
+      text: "x",
+    });
     expect(denied.error).toMatchObject({ statusCode: 403, name: "invalid_api_key" });
     expect(await messages()).toEqual([]);
   });
@@ -119,7 +146,10 @@ describe("Resend fake", () => {
     const first = await resend().emails.send(payload, { idempotencyKey: "welcome/42" });
     const second = await resend().emails.send(payload, { idempotencyKey: "welcome/42" });
     expect(second.data?.id).toBe(first.data?.id);
-    const conflict = await resend().emails.send({ ...payload, subject: "Other" }, { idempotencyKey: "welcome/42" });
+    const conflict = await resend().emails.send(
+      { ...payload, subject: "Other" },
+      { idempotencyKey: "welcome/42" },
+    );
     expect(conflict.error).toMatchObject({ statusCode: 409, name: "invalid_idempotent_request" });
     expect(await messages()).toHaveLength(1);
   });
@@ -139,7 +169,12 @@ describe("Resend fake", () => {
 
 describe("mailbox API", () => {
   it("lists newest first across both channels and can be cleared", async () => {
-    await transport().sendMail({ from: "a@yokeline.test", to: "same@shop.test", subject: "first", text: "1" });
+    await transport().sendMail({
+      from: "a@yokeline.test",
+      to: "same@shop.test",
+      subject: "first",
+      text: "1",
+    });
     await new Resend("re_test_x", { baseUrl: fake.httpUrl }).emails.send({
       from: "a@yokeline.test",
       to: "same@shop.test",
@@ -153,7 +188,16 @@ describe("mailbox API", () => {
     ]);
 
     const waited = fetch(`${fake.httpUrl}/messages?to=late@shop.test&wait=3000`);
-    setTimeout(() => void transport().sendMail({ from: "a@yokeline.test", to: "late@shop.test", subject: "late", text: "x" }), 100);
+    setTimeout(
+      () =>
+        void transport().sendMail({
+          from: "a@yokeline.test",
+          to: "late@shop.test",
+          subject: "late",
+          text: "x",
+        }),
+      100,
+    );
     const body = (await (await waited).json()) as { data: StoredMessage[] };
     expect(body.data.map((m) => m.subject)).toEqual(["late"]);
 

@@ -32,7 +32,11 @@ function startReceiver() {
           req.headers["stripe-signature"] ?? "",
           SECRET,
         );
-        received.push({ id: event.id, type: event.type, object: event.data.object as unknown as Record<string, unknown> });
+        received.push({
+          id: event.id,
+          type: event.type,
+          object: event.data.object as unknown as Record<string, unknown>,
+        });
         res.writeHead(200).end("ok");
       } catch (err) {
         rejected.push(String(err));
@@ -53,7 +57,9 @@ function startReceiver() {
     },
     listen: () =>
       new Promise<string>((resolve) =>
-        server.listen(0, "127.0.0.1", () => resolve(`http://127.0.0.1:${(server.address() as AddressInfo).port}/webhooks/stripe`)),
+        server.listen(0, "127.0.0.1", () =>
+          resolve(`http://127.0.0.1:${(server.address() as AddressInfo).port}/webhooks/stripe`),
+        ),
       ),
     close: () => new Promise<void>((resolve) => server.close(() => resolve())),
   };
@@ -63,7 +69,10 @@ const receiver = startReceiver();
 let fake: StripeFake;
 let stripe: Stripe;
 
-async function control(path: string, body?: unknown): Promise<{ status: number; json: Record<string, unknown> }> {
+async function control(
+  path: string,
+  body?: unknown,
+): Promise<{ status: number; json: Record<string, unknown> }> {
   const res = await fetch(`${fake.url}${path}`, {
     method: body === undefined ? "GET" : "POST",
     headers: { "Content-Type": "application/json" },
@@ -76,8 +85,18 @@ function sessionParams(orderId = "order_123"): Stripe.Checkout.SessionCreatePara
   return {
     mode: "payment",
     line_items: [
-      { price_data: { currency: "usd", unit_amount: 45_000, product_data: { name: "Two-piece steel driveshaft" } }, quantity: 1 },
-      { price_data: { currency: "usd", unit_amount: 2_500, product_data: { name: "U-joint kit" } }, quantity: 2 },
+      {
+        price_data: {
+          currency: "usd",
+          unit_amount: 45_000,
+          product_data: { name: "Two-piece steel driveshaft" },
+        },
+        quantity: 1,
+      },
+      {
+        price_data: { currency: "usd", unit_amount: 2_500, product_data: { name: "U-joint kit" } },
+        quantity: 2,
+      },
     ],
     success_url: "http://localhost:3000/checkout/success?session_id={CHECKOUT_SESSION_ID}",
     cancel_url: "http://localhost:3000/checkout/cancelled",
@@ -129,7 +148,9 @@ beforeEach(async () => {
 
 describe("Stripe fake: checkout sessions", () => {
   it("creates a session like Stripe and replays the same idempotency key", async () => {
-    const session = await stripe.checkout.sessions.create(sessionParams(), { idempotencyKey: "order_123-checkout" });
+    const session = await stripe.checkout.sessions.create(sessionParams(), {
+      idempotencyKey: "order_123-checkout",
+    });
     expect(session.id).toMatch(/^cs_test_/);
     expect(session.object).toBe("checkout.session");
     expect(session.url).toBe(`${fake.url}/pay/${session.id}`);
@@ -141,7 +162,9 @@ describe("Stripe fake: checkout sessions", () => {
     expect(session.metadata).toEqual({ orderId: "order_123" });
     expect(session.client_reference_id).toBe("order_123");
 
-    const replay = await stripe.checkout.sessions.create(sessionParams(), { idempotencyKey: "order_123-checkout" });
+    const replay = await stripe.checkout.sessions.create(sessionParams(), {
+      idempotencyKey: "order_123-checkout",
+    });
     expect(replay.id).toBe(session.id);
     expect(replay.lastResponse.headers["idempotent-replayed"]).toBe("true");
 
@@ -160,7 +183,9 @@ describe("Stripe fake: checkout sessions", () => {
 
   it("rejects bad parameters with typed invalid_request_errors", async () => {
     const { success_url: _omit, ...noSuccessUrl } = sessionParams();
-    const err = await stripe.checkout.sessions.create(noSuccessUrl as Stripe.Checkout.SessionCreateParams).catch((e: unknown) => e);
+    const err = await stripe.checkout.sessions
+      .create(noSuccessUrl as Stripe.Checkout.SessionCreateParams)
+      .catch((e: unknown) => e);
     expect(err).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
     expect((err as Stripe.errors.StripeError).param).toBe("success_url");
     expect((err as Stripe.errors.StripeError).code).toBe("parameter_missing");
@@ -178,7 +203,9 @@ describe("Stripe fake: checkout sessions", () => {
     expect(expired.url).toBeNull();
     const pay = await control(`/_fake/checkout/${session.id}/pay`, { card: "4242424242424242" });
     expect(pay.status).toBe(409);
-    await expect(stripe.checkout.sessions.expire(session.id)).rejects.toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
+    await expect(stripe.checkout.sessions.expire(session.id)).rejects.toBeInstanceOf(
+      Stripe.errors.StripeInvalidRequestError,
+    );
   });
 
   it("answers a bad or missing key with an authentication error", async () => {
@@ -189,7 +216,9 @@ describe("Stripe fake: checkout sessions", () => {
       maxNetworkRetries: 0,
       telemetry: false,
     });
-    await expect(bad.checkout.sessions.create(sessionParams())).rejects.toBeInstanceOf(Stripe.errors.StripeAuthenticationError);
+    await expect(bad.checkout.sessions.create(sessionParams())).rejects.toBeInstanceOf(
+      Stripe.errors.StripeAuthenticationError,
+    );
     const res = await fetch(`${fake.url}/v1/checkout/sessions`, { method: "POST" });
     expect(res.status).toBe(401);
     const body = (await res.json()) as { error: { type: string; message: string } };
@@ -205,7 +234,9 @@ describe("Stripe fake: paying and webhooks", () => {
     expect(pay.json["outcome"]).toBe("succeeded");
     expect(pay.json["redirectUrl"]).toBe(`http://localhost:3000/checkout/success?session_id=${session.id}`);
 
-    const paid = await stripe.checkout.sessions.retrieve(session.id, { expand: ["payment_intent.latest_charge"] });
+    const paid = await stripe.checkout.sessions.retrieve(session.id, {
+      expand: ["payment_intent.latest_charge"],
+    });
     expect(paid.status).toBe("complete");
     expect(paid.payment_status).toBe("paid");
     const pi = paid.payment_intent as Stripe.PaymentIntent;
@@ -230,7 +261,9 @@ describe("Stripe fake: paying and webhooks", () => {
 
     await fake.idle();
     const events = await control("/_fake/events?type=checkout.session.completed");
-    const [entry] = events.json["data"] as Array<{ deliveries: Array<{ kind: string; status: string; httpStatus: number }> }>;
+    const [entry] = events.json["data"] as Array<{
+      deliveries: Array<{ kind: string; status: string; httpStatus: number }>;
+    }>;
     expect(entry?.deliveries.map((d) => [d.kind, d.status, d.httpStatus]).sort()).toEqual([
       ["duplicate", "succeeded", 200],
       ["initial", "succeeded", 200],
@@ -249,7 +282,9 @@ describe("Stripe fake: paying and webhooks", () => {
     expect(still.payment_status).toBe("unpaid");
     expect(still.payment_intent).toBeNull();
 
-    const failed = await waitFor(() => receiver.received.find((r) => r.type === "payment_intent.payment_failed"));
+    const failed = await waitFor(() =>
+      receiver.received.find((r) => r.type === "payment_intent.payment_failed"),
+    );
     expect(failed.object["metadata"]).toEqual({ orderId: "order_declined" });
     expect((failed.object["last_payment_error"] as { code: string }).code).toBe("card_declined");
 
@@ -274,11 +309,16 @@ describe("Stripe fake: paying and webhooks", () => {
       await control(`/_fake/checkout/${session.id}/pay`, { card: "4242424242424242" });
       await fake.idle();
       const events = await control("/_fake/events?type=checkout.session.completed");
-      const [entry] = events.json["data"] as Array<{ id: string; deliveries: Array<{ attempt: number; status: string }> }>;
+      const [entry] = events.json["data"] as Array<{
+        id: string;
+        deliveries: Array<{ attempt: number; status: string }>;
+      }>;
       const received = receiver.received.filter((r) => r.type === "checkout.session.completed");
       expect(received.map((r) => r.id)).toEqual([entry?.id]);
       // payment_intent.succeeded may have taken the injected 500; look across both events.
-      const all = (await control("/_fake/events")).json["data"] as Array<{ deliveries: Array<{ status: string }> }>;
+      const all = (await control("/_fake/events")).json["data"] as Array<{
+        deliveries: Array<{ status: string }>;
+      }>;
       const statuses = all.flatMap((e) => e.deliveries.map((d) => d.status));
       expect(statuses.filter((s) => s === "failed")).toHaveLength(1);
       expect(all.every((e) => e.deliveries.at(-1)?.status === "succeeded")).toBe(true);
@@ -319,7 +359,9 @@ describe("Stripe fake: hosted checkout page", () => {
 
     const ok = await post({ cardNumber: "4242 4242 4242 4242", expiry: "12/34", cvc: "123" });
     expect(ok.status).toBe(303);
-    expect(ok.headers.get("location")).toBe(`http://localhost:3000/checkout/success?session_id=${session.id}`);
+    expect(ok.headers.get("location")).toBe(
+      `http://localhost:3000/checkout/success?session_id=${session.id}`,
+    );
     expect((await stripe.checkout.sessions.retrieve(session.id)).payment_status).toBe("paid");
   });
 });
@@ -330,22 +372,32 @@ describe("Stripe fake: refunds", () => {
     await control(`/_fake/checkout/${session.id}/pay`, { card: "4242424242424242" });
     const pi = (await stripe.checkout.sessions.retrieve(session.id)).payment_intent as string;
 
-    const partial = await stripe.refunds.create({ payment_intent: pi, amount: 10_000 }, { idempotencyKey: "refund-1" });
+    const partial = await stripe.refunds.create(
+      { payment_intent: pi, amount: 10_000 },
+      { idempotencyKey: "refund-1" },
+    );
     expect(partial.id).toMatch(/^re_test_/);
     expect(partial.amount).toBe(10_000);
     expect(partial.status).toBe("succeeded");
-    const again = await stripe.refunds.create({ payment_intent: pi, amount: 10_000 }, { idempotencyKey: "refund-1" });
+    const again = await stripe.refunds.create(
+      { payment_intent: pi, amount: 10_000 },
+      { idempotencyKey: "refund-1" },
+    );
     expect(again.id).toBe(partial.id);
 
     const over = await stripe.refunds.create({ payment_intent: pi, amount: 40_001 }).catch((e: unknown) => e);
     expect(over).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
     expect((over as Stripe.errors.StripeError).code).toBe("amount_too_large");
-    expect((over as Stripe.errors.StripeError).message).toMatch(/greater than unrefunded amount on charge \(\$400\.00\)/);
+    expect((over as Stripe.errors.StripeError).message).toMatch(
+      /greater than unrefunded amount on charge \(\$400\.00\)/,
+    );
 
     const rest = await stripe.refunds.create({ payment_intent: pi });
     expect(rest.amount).toBe(40_000);
     expect((await stripe.refunds.retrieve(rest.id)).amount).toBe(40_000);
-    await expect(stripe.refunds.create({ payment_intent: pi })).rejects.toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
+    await expect(stripe.refunds.create({ payment_intent: pi })).rejects.toBeInstanceOf(
+      Stripe.errors.StripeInvalidRequestError,
+    );
 
     const refunded = await waitFor(() => {
       const got = receiver.received.filter((r) => r.type === "charge.refunded");

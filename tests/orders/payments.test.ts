@@ -29,37 +29,42 @@ async function reload(orderId: string) {
 }
 
 describe("paying an order through the local Stripe fake", () => {
-  dbTest("a deposit paid with the success card marks the order paid once, though the webhook arrives twice", async () => {
-    const { user, order } = await placedOrder();
-    expect(order.status).toBe("awaiting_payment");
-    expect(order.depositCents).toBe(Math.round(order.totalCents / 2)); // demo policy: 50 % deposit
+  dbTest(
+    "a deposit paid with the success card marks the order paid once, though the webhook arrives twice",
+    async () => {
+      const { user, order } = await placedOrder();
+      expect(order.status).toBe("awaiting_payment");
+      expect(order.depositCents).toBe(Math.round(order.totalCents / 2)); // demo policy: 50 % deposit
 
-    const payment = await startCheckout(order.id, user);
-    expect(payment.kind).toBe("deposit");
-    expect(payment.checkoutUrl).toContain(`/pay/${payment.checkoutSessionId}`);
-    // Asking again reuses the open checkout rather than opening a second one.
-    expect((await startCheckout(order.id, user)).id).toBe(payment.id);
+      const payment = await startCheckout(order.id, user);
+      expect(payment.kind).toBe("deposit");
+      expect(payment.checkoutUrl).toContain(`/pay/${payment.checkoutSessionId}`);
+      // Asking again reuses the open checkout rather than opening a second one.
+      expect((await startCheckout(order.id, user)).id).toBe(payment.id);
 
-    const paid = await payWithCard(harness.fake, payment.checkoutSessionId, "4242424242424242");
-    expect(paid.status).toBe(200);
-    expect(await harness.fake.idle(10_000)).toBe(true);
+      const paid = await payWithCard(harness.fake, payment.checkoutSessionId, "4242424242424242");
+      expect(paid.status).toBe(200);
+      expect(await harness.fake.idle(10_000)).toBe(true);
 
-    const after = await reload(order.id);
-    expect(after.status).toBe("received");
-    expect(after.paymentState).toBe("deposit_paid");
-    expect(after.paidCents).toBe(order.depositCents);
-    expect(after.events.getItems().filter((e) => e.kind === "paid")).toHaveLength(1);
-    // One confirmation and one receipt in the outbox, though the event came twice.
-    const em = await getEm();
-    expect(await em.count(EmailMessage, { orderId: order.id, template: "order-received" })).toBe(1);
-    expect(await em.count(EmailMessage, { orderId: order.id, template: "payment-receipt" })).toBe(1);
+      const after = await reload(order.id);
+      expect(after.status).toBe("received");
+      expect(after.paymentState).toBe("deposit_paid");
+      expect(after.paidCents).toBe(order.depositCents);
+      expect(after.events.getItems().filter((e) => e.kind === "paid")).toHaveLength(1);
+      // One confirmation and one receipt in the outbox, though the event came twice.
+      const em = await getEm();
+      expect(await em.count(EmailMessage, { orderId: order.id, template: "order-received" })).toBe(1);
+      expect(await em.count(EmailMessage, { orderId: order.id, template: "payment-receipt" })).toBe(1);
 
-    const events = (await (await fetch(`${harness.fake.url}/_fake/events?type=checkout.session.completed`)).json()) as {
-      data: { id: string; event: { data: { object: { id: string } } } }[];
-    };
-    const completed = events.data.find((e) => e.event.data.object.id === payment.checkoutSessionId)!;
-    expect(await webhookDeliveries(completed.id)).toBeGreaterThanOrEqual(2); // delivered twice, applied once
-  });
+      const events = (await (
+        await fetch(`${harness.fake.url}/_fake/events?type=checkout.session.completed`)
+      ).json()) as {
+        data: { id: string; event: { data: { object: { id: string } } } }[];
+      };
+      const completed = events.data.find((e) => e.event.data.object.id === payment.checkoutSessionId)!;
+      expect(await webhookDeliveries(completed.id)).toBeGreaterThanOrEqual(2); // delivered twice, applied once
+    },
+  );
 
   dbTest("a declined card leaves the order unpaid and says why", async () => {
     const { user, order } = await placedOrder();
@@ -88,12 +93,24 @@ describe("paying an order through the local Stripe fake", () => {
       id: "evt_tampered_1",
       object: "event",
       type: "checkout.session.completed",
-      data: { object: { id: "cs_forged", object: "checkout.session", payment_status: "paid", amount_total: 1 } },
+      data: {
+        object: { id: "cs_forged", object: "checkout.session", payment_status: "paid", amount_total: 1 },
+      },
     });
     const good = Stripe.webhooks.generateTestHeaderString({ payload, secret: "whsec_test_harness" });
     const forged = good.replace(/v1=([0-9a-f])/, (_, c: string) => `v1=${c === "0" ? "1" : "0"}`);
-    for (const signature of [forged, "", Stripe.webhooks.generateTestHeaderString({ payload, secret: "whsec_wrong" })]) {
-      const res = await webhookPost(new Request("http://x/api/payments/webhook", { method: "POST", body: payload, headers: { "stripe-signature": signature } }));
+    for (const signature of [
+      forged,
+      "",
+      Stripe.webhooks.generateTestHeaderString({ payload, secret: "whsec_wrong" }),
+    ]) {
+      const res = await webhookPost(
+        new Request("http://x/api/payments/webhook", {
+          method: "POST",
+          body: payload,
+          headers: { "stripe-signature": signature },
+        }),
+      );
       expect(res.status).toBe(400);
     }
     const em = await getEm();
@@ -101,53 +118,78 @@ describe("paying an order through the local Stripe fake", () => {
     expect((await reload(order.id)).paymentState).toBe("unpaid");
   });
 
-  dbTest("an owner refunds part of a payment; more than was paid is refused; the provider's echo is not counted twice", async () => {
-    const { user, order } = await placedOrder();
-    const payment = await startCheckout(order.id, user);
-    await payWithCard(harness.fake, payment.checkoutSessionId, "4242424242424242");
-    await harness.fake.idle(10_000);
-    const owner = await createStaffUser({ name: "Owner T", email: uniqueEmail("owner"), role: "owner", password: "a-long-password-1" }, null);
-    const ownerUser = { id: owner.id, name: owner.name, email: owner.email, role: "owner" as const };
+  dbTest(
+    "an owner refunds part of a payment; more than was paid is refused; the provider's echo is not counted twice",
+    async () => {
+      const { user, order } = await placedOrder();
+      const payment = await startCheckout(order.id, user);
+      await payWithCard(harness.fake, payment.checkoutSessionId, "4242424242424242");
+      await harness.fake.idle(10_000);
+      const owner = await createStaffUser(
+        { name: "Owner T", email: uniqueEmail("owner"), role: "owner", password: "a-long-password-1" },
+        null,
+      );
+      const ownerUser = { id: owner.id, name: owner.name, email: owner.email, role: "owner" as const };
 
-    await expect(refundPayment(ownerUser, { paymentId: payment.id, amountCents: payment.amountCents + 1, reason: "too much" })).rejects.toMatchObject({ code: "invalid" });
-    const refund = await refundPayment(ownerUser, { paymentId: payment.id, amountCents: 1000, reason: "Customer supplied own yokes" });
-    expect(refund.amountCents).toBe(1000);
-    await harness.fake.idle(10_000); // charge.refunded comes back from the provider
+      await expect(
+        refundPayment(ownerUser, {
+          paymentId: payment.id,
+          amountCents: payment.amountCents + 1,
+          reason: "too much",
+        }),
+      ).rejects.toMatchObject({ code: "invalid" });
+      const refund = await refundPayment(ownerUser, {
+        paymentId: payment.id,
+        amountCents: 1000,
+        reason: "Customer supplied own yokes",
+      });
+      expect(refund.amountCents).toBe(1000);
+      await harness.fake.idle(10_000); // charge.refunded comes back from the provider
 
-    const em = await getEm();
-    const after = await em.findOneOrFail(Payment, { id: payment.id }, { populate: ["order"] });
-    expect(after.refundedCents).toBe(1000);
-    expect(after.order.refundedCents).toBe(1000);
-    expect(after.order.paymentState).toBe("partially_refunded");
-    expect(await em.count(Refund, { payment: payment.id })).toBe(1);
-    expect(await em.count(OrderEvent, { order: order.id, kind: "refunded" })).toBe(1);
-  });
+      const em = await getEm();
+      const after = await em.findOneOrFail(Payment, { id: payment.id }, { populate: ["order"] });
+      expect(after.refundedCents).toBe(1000);
+      expect(after.order.refundedCents).toBe(1000);
+      expect(after.order.paymentState).toBe("partially_refunded");
+      expect(await em.count(Refund, { payment: payment.id })).toBe(1);
+      expect(await em.count(OrderEvent, { order: order.id, kind: "refunded" })).toBe(1);
+    },
+  );
 });
 
 describe("placing an order", () => {
   dbTest("a design that fails a check cannot be ordered", async () => {
     const { user, customer } = await newCustomer();
     const design = await saveDesign(customer, user.id, failingVan, "Long van");
-    await expect(placeOrder(user, { designIds: [design.id], fulfilment: "pickup" })).rejects.toMatchObject({ code: "invalid" });
+    await expect(placeOrder(user, { designIds: [design.id], fulfilment: "pickup" })).rejects.toMatchObject({
+      code: "invalid",
+    });
   });
 
   dbTest("a customer cannot order another customer's design", async () => {
     const a = await newCustomer();
     const b = await newCustomer();
     const design = await saveDesign(a.customer, a.user.id);
-    await expect(placeOrder(b.user, { designIds: [design.id], fulfilment: "pickup" })).rejects.toMatchObject({ code: "not_found" });
+    await expect(placeOrder(b.user, { designIds: [design.id], fulfilment: "pickup" })).rejects.toMatchObject({
+      code: "not_found",
+    });
   });
 
-  dbTest("freezes each shaft's design, evaluation and price, numbers the order, and sets the promised date", async () => {
-    const { order } = await placedOrder();
-    const em = await getEm();
-    const loaded = await em.findOneOrFail(Order, { id: order.id }, { populate: ["shafts"] });
-    const shaft = loaded.shafts.getItems()[0]!;
-    expect(shaft.evaluation).toHaveProperty("criticalSpeedRpm");
-    expect(shaft.priceLines.map((l) => l.code)).toEqual(expect.arrayContaining(["tube", "fitting", "joint", "labour", "balance"]));
-    expect(loaded.subtotalCents).toBe(shaft.priceCents);
-    expect(loaded.totalCents).toBe(loaded.subtotalCents + loaded.taxCents + loaded.shippingCents);
-    expect(loaded.number).toMatch(/^Y\d{2}-\d{4}$/);
-    expect(loaded.promisedDate > new Date().toISOString().slice(0, 10)).toBe(true);
-  });
+  dbTest(
+    "freezes each shaft's design, evaluation and price, numbers the order, and sets the promised date",
+    async () => {
+      const { order } = await placedOrder();
+      const em = await getEm();
+      const loaded = await em.findOneOrFail(Order, { id: order.id }, { populate: ["shafts"] });
+      const shaft = loaded.shafts.getItems()[0]!;
+      expect(shaft.evaluation).toHaveProperty("criticalSpeedRpm");
+      expect(shaft.priceLines.map((l) => l.code)).toEqual(
+        expect.arrayContaining(["tube", "fitting", "joint", "labour", "balance"]),
+      );
+      expect(loaded.subtotalCents).toBe(shaft.priceCents);
+      expect(loaded.totalCents).toBe(loaded.subtotalCents + loaded.taxCents + loaded.shippingCents);
+      expect(loaded.number).toMatch(/^Y\d{2}-\d{4}$/);
+      expect(loaded.promisedDate > new Date().toISOString().slice(0, 10)).toBe(true);
+    },
+  );
 });

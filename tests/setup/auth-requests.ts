@@ -10,10 +10,17 @@ function freshIp(): string {
 }
 
 /** Sends one request through the real auth handler, as a browser at `ip` would (a fresh one by default). */
-export async function authRequest(path: string, body: unknown, ip = freshIp(), cookie?: string): Promise<Response> {
+export async function authRequest(
+  path: string,
+  body: unknown,
+  ip = freshIp(),
+  cookie?: string,
+): Promise<Response> {
   const headers = new Headers({ "content-type": "application/json", origin: BASE, "x-forwarded-for": ip });
   if (cookie) headers.set("cookie", cookie);
-  return auth.handler(new Request(`${BASE}/api/auth${path}`, { method: "POST", headers, body: JSON.stringify(body) }));
+  return auth.handler(
+    new Request(`${BASE}/api/auth${path}`, { method: "POST", headers, body: JSON.stringify(body) }),
+  );
 }
 
 /** The session cookie a response sets, ready for a Cookie header. */

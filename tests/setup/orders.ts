@@ -8,8 +8,13 @@ import { startStripeFake, type StripeFake } from "@/fakes/stripe/server";
 import { POST as webhookPost } from "@/app/api/payments/webhook/route";
 import { authRequest, uniqueEmail } from "./auth-requests";
 
-export const streetTruck = JSON.parse(readFileSync("examples/street-truck.json", "utf8")) as Record<string, unknown>;
-export const failingVan = JSON.parse(readFileSync("examples/long-van-critical-speed-fail.json", "utf8")) as Record<string, unknown>;
+export const streetTruck = JSON.parse(readFileSync("examples/street-truck.json", "utf8")) as Record<
+  string,
+  unknown
+>;
+export const failingVan = JSON.parse(
+  readFileSync("examples/long-van-critical-speed-fail.json", "utf8"),
+) as Record<string, unknown>;
 
 /** A new customer with an account, as sign-up makes them. */
 export async function newCustomer(): Promise<{ user: CurrentUser; customer: Customer }> {
@@ -21,9 +26,20 @@ export async function newCustomer(): Promise<{ user: CurrentUser; customer: Cust
   return { user: { id: user.id, name: user.name, email: user.email, role: "customer" }, customer };
 }
 
-export async function saveDesign(customer: Customer, createdBy: string, design: Record<string, unknown> = streetTruck, name = "Test shaft"): Promise<Design> {
+export async function saveDesign(
+  customer: Customer,
+  createdBy: string,
+  design: Record<string, unknown> = streetTruck,
+  name = "Test shaft",
+): Promise<Design> {
   const em = await getEm();
-  const row = em.create(Design, { name, design, customer: em.getReference(Customer, customer.id), createdBy: em.getReference(User, createdBy), application: { description: "Test truck", use: "street" } });
+  const row = em.create(Design, {
+    name,
+    design,
+    customer: em.getReference(Customer, customer.id),
+    createdBy: em.getReference(User, createdBy),
+    application: { description: "Test truck", use: "street" },
+  });
   await em.flush();
   return row;
 }
@@ -32,14 +48,19 @@ export async function saveDesign(customer: Customer, createdBy: string, design: 
  * Starts the Stripe fake with its webhooks delivered to the app's real webhook handler (through a
  * small local HTTP bridge), and points the payments port at it.
  */
-export async function startPaymentsHarness(options: { duplicateDelivery?: boolean } = {}): Promise<{ fake: StripeFake; close(): Promise<void> }> {
+export async function startPaymentsHarness(
+  options: { duplicateDelivery?: boolean } = {},
+): Promise<{ fake: StripeFake; close(): Promise<void> }> {
   const bridge: Server = createServer(async (req, res) => {
     const chunks: Buffer[] = [];
     for await (const c of req) chunks.push(c as Buffer);
     const response = await webhookPost(
       new Request("http://127.0.0.1/api/payments/webhook", {
         method: "POST",
-        headers: { "content-type": "application/json", "stripe-signature": String(req.headers["stripe-signature"] ?? "") },
+        headers: {
+          "content-type": "application/json",
+          "stripe-signature": String(req.headers["stripe-signature"] ?? ""),
+        },
         body: Buffer.concat(chunks).toString("utf8"),
       }),
     );
@@ -73,7 +94,11 @@ export async function startPaymentsHarness(options: { duplicateDelivery?: boolea
 }
 
 /** Pays a checkout session through the fake's control endpoint (same effects as its page). */
-export async function payWithCard(fake: StripeFake, sessionId: string, card: string): Promise<{ status: number; body: unknown }> {
+export async function payWithCard(
+  fake: StripeFake,
+  sessionId: string,
+  card: string,
+): Promise<{ status: number; body: unknown }> {
   const res = await fetch(`${fake.url}/_fake/checkout/${sessionId}/pay`, {
     method: "POST",
     headers: { "content-type": "application/json" },

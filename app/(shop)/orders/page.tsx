@@ -35,13 +35,17 @@ export default async function MyOrdersPage({ searchParams }: PageProps<"/orders"
       )}
       {orders.length === 0 ? (
         <EmptyState icon={PackageOpen} title="No orders yet">
-          When you order a shaft it appears here with its timeline: received, paid, each step in the shop, ready and shipped.
+          When you order a shaft it appears here with its timeline: received, paid, each step in the shop,
+          ready and shipped.
         </EmptyState>
       ) : (
         <ul className="space-y-3">
           {orders.map((o) => (
             <li key={o.id}>
-              <Link href={`/orders/${o.id}`} className="card flex flex-wrap items-center gap-x-6 gap-y-2 p-4 text-ink no-underline hover:border-steel-500">
+              <Link
+                href={`/orders/${o.id}`}
+                className="flex flex-wrap items-center gap-x-6 gap-y-2 card p-4 text-ink no-underline hover:border-steel-500"
+              >
                 <span className="font-mono font-semibold">{o.number}</span>
                 <span className="min-w-0 flex-1 truncate">{o.shafts.join(", ")}</span>
                 <OrderStatusBadge status={o.status} />

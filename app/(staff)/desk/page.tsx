@@ -30,18 +30,32 @@ export default async function OrderDeskPage() {
           Orders placed online and by phone are listed here, oldest promise date first.
         </EmptyState>
       ) : (
-        <div className="card relative overflow-x-auto">
+        <div className="relative overflow-x-auto card">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">Open orders</caption>
             <thead className="border-b border-line bg-paper-sunk text-xs tracking-wide text-ink-muted uppercase">
               <tr>
-                <th scope="col" className="px-4 py-2">Order</th>
-                <th scope="col" className="px-4 py-2">Customer</th>
-                <th scope="col" className="px-4 py-2">Shafts</th>
-                <th scope="col" className="px-4 py-2">Status</th>
-                <th scope="col" className="px-4 py-2">Payment</th>
-                <th scope="col" className="px-4 py-2 text-right">Total</th>
-                <th scope="col" className="px-4 py-2">Promised</th>
+                <th scope="col" className="px-4 py-2">
+                  Order
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Customer
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Shafts
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Status
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Payment
+                </th>
+                <th scope="col" className="px-4 py-2 text-right">
+                  Total
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Promised
+                </th>
               </tr>
             </thead>
             <tbody className="divide-y divide-line">
@@ -52,9 +66,15 @@ export default async function OrderDeskPage() {
                   </td>
                   <td className="px-4 py-2">{o.customerName}</td>
                   <td className="px-4 py-2">{o.shafts.join(", ")}</td>
-                  <td className="px-4 py-2"><OrderStatusBadge status={o.status} /></td>
-                  <td className="px-4 py-2"><PaymentBadge state={o.paymentState} /></td>
-                  <td className="px-4 py-2 text-right tabular-nums">{formatMoney(o.totalCents, o.currency)}</td>
+                  <td className="px-4 py-2">
+                    <OrderStatusBadge status={o.status} />
+                  </td>
+                  <td className="px-4 py-2">
+                    <PaymentBadge state={o.paymentState} />
+                  </td>
+                  <td className="px-4 py-2 text-right tabular-nums">
+                    {formatMoney(o.totalCents, o.currency)}
+                  </td>
                   <td className="px-4 py-2 whitespace-nowrap">
                     {o.promisedDate} {o.late && <span className="font-semibold text-fail">late</span>}
                   </td>

@@ -35,12 +35,12 @@ export default async function OverviewPage() {
         {figures.recent.length === 0 ? (
           <EmptyState icon={History} title="Nothing recorded yet" />
         ) : (
-          <ol className="card divide-y divide-line">
+          <ol className="divide-y divide-line card">
             {figures.recent.map((e) => (
               <li key={e.id} className="flex flex-wrap justify-between gap-2 px-4 py-2 text-sm">
                 <span>
-                  <span className="font-medium">{e.actor}</span> · <span className="font-mono text-xs">{e.action}</span> ·{" "}
-                  {e.subject}
+                  <span className="font-medium">{e.actor}</span> ·{" "}
+                  <span className="font-mono text-xs">{e.action}</span> · {e.subject}
                 </span>
                 <time dateTime={e.at} className="text-ink-muted">
                   {e.at.slice(0, 16).replace("T", " ")} UTC

@@ -13,7 +13,11 @@ export async function GET() {
     return json({
       status: "ok",
       version: APP_VERSION,
-      database: { ok: true, roundTripMs: Math.round((performance.now() - started) * 100) / 100, now: rows[0]?.now },
+      database: {
+        ok: true,
+        roundTripMs: Math.round((performance.now() - started) * 100) / 100,
+        now: rows[0]?.now,
+      },
     });
   } catch {
     return json({ status: "degraded", version: APP_VERSION, database: { ok: false } }, 503);

@@ -44,7 +44,10 @@ export const defaultMaterials: readonly Material[] = [
 ];
 
 /** OD (in) → walls (in) stocked, per material. */
-const TUBE_STOCK: Record<string, { code: string; centsPerKg: number; maxLengthMm: number; sizes: [number, number[]][] }> = {
+const TUBE_STOCK: Record<
+  string,
+  { code: string; centsPerKg: number; maxLengthMm: number; sizes: [number, number[]][] }
+> = {
   "steel-dom": {
     code: "DOM",
     centsPerKg: 800,
@@ -110,15 +113,53 @@ function buildTubes(): TubeSize[] {
 }
 
 export const defaultJointSeries: readonly JointSeries[] = [
-  { id: "YL-X28", name: "YL-X28 cross, 28 mm caps", torqueRatingNm: 1100, maxWorkingAngleDeg: 20, massKg: 0.55, priceCents: 4500 },
-  { id: "YL-X30", name: "YL-X30 cross, 30 mm caps", torqueRatingNm: 1700, maxWorkingAngleDeg: 20, massKg: 0.7, priceCents: 5900 },
-  { id: "YL-X35", name: "YL-X35 cross, 35 mm caps", torqueRatingNm: 2700, maxWorkingAngleDeg: 18, massKg: 1.0, priceCents: 8900 },
-  { id: "YL-X41", name: "YL-X41 cross, 41 mm caps", torqueRatingNm: 4200, maxWorkingAngleDeg: 18, massKg: 1.5, priceCents: 14500 },
-  { id: "YL-X48", name: "YL-X48 cross, 48 mm caps", torqueRatingNm: 6500, maxWorkingAngleDeg: 15, massKg: 2.3, priceCents: 24000 },
+  {
+    id: "YL-X28",
+    name: "YL-X28 cross, 28 mm caps",
+    torqueRatingNm: 1100,
+    maxWorkingAngleDeg: 20,
+    massKg: 0.55,
+    priceCents: 4500,
+  },
+  {
+    id: "YL-X30",
+    name: "YL-X30 cross, 30 mm caps",
+    torqueRatingNm: 1700,
+    maxWorkingAngleDeg: 20,
+    massKg: 0.7,
+    priceCents: 5900,
+  },
+  {
+    id: "YL-X35",
+    name: "YL-X35 cross, 35 mm caps",
+    torqueRatingNm: 2700,
+    maxWorkingAngleDeg: 18,
+    massKg: 1.0,
+    priceCents: 8900,
+  },
+  {
+    id: "YL-X41",
+    name: "YL-X41 cross, 41 mm caps",
+    torqueRatingNm: 4200,
+    maxWorkingAngleDeg: 18,
+    massKg: 1.5,
+    priceCents: 14500,
+  },
+  {
+    id: "YL-X48",
+    name: "YL-X48 cross, 48 mm caps",
+    torqueRatingNm: 6500,
+    maxWorkingAngleDeg: 15,
+    massKg: 2.3,
+    priceCents: 24000,
+  },
 ];
 
 /** Per series: joint centre to weld seat (mm), weld-yoke mass (kg), tube ODs (in) taken. */
-const FITTING_SERIES: Record<string, { seatMm: number; massKg: number; priceCents: number; odsIn: number[] }> = {
+const FITTING_SERIES: Record<
+  string,
+  { seatMm: number; massKg: number; priceCents: number; odsIn: number[] }
+> = {
   "YL-X28": { seatMm: 46, massKg: 0.9, priceCents: 3900, odsIn: [2.0, 2.5, 3.0] },
   "YL-X30": { seatMm: 51, massKg: 1.1, priceCents: 4600, odsIn: [2.5, 3.0, 3.25, 3.5] },
   "YL-X35": { seatMm: 58, massKg: 1.5, priceCents: 6200, odsIn: [3.0, 3.25, 3.5, 4.0] },

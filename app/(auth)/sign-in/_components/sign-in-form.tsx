@@ -44,7 +44,10 @@ export function SignInForm({
       className="space-y-4"
       onSubmit={(e) => {
         const data = new FormData(e.currentTarget);
-        const parsed = signInBodySchema.safeParse({ email: data.get("email"), password: data.get("password") });
+        const parsed = signInBodySchema.safeParse({
+          email: data.get("email"),
+          password: data.get("password"),
+        });
         if (!parsed.success) {
           e.preventDefault();
           setErrors(Object.fromEntries(zodIssues(parsed.error).map((i) => [i.path, i.message])));
@@ -56,13 +59,29 @@ export function SignInForm({
     >
       {formError && <Alert tone="error">{formError}</Alert>}
       {next && <input type="hidden" name="next" value={next} />}
-      <Field label="E-mail" name="email" type="email" autoComplete="email" defaultValue={email} error={errors.email} />
-      <Field label="Password" name="password" type="password" autoComplete="current-password" error={errors.password} />
+      <Field
+        label="E-mail"
+        name="email"
+        type="email"
+        autoComplete="email"
+        defaultValue={email}
+        error={errors.email}
+      />
+      <Field
+        label="Password"
+        name="password"
+        type="password"
+        autoComplete="current-password"
+        error={errors.password}
+      />
       <button type="submit" className="btn-primary w-full" disabled={submitting}>
         {submitting ? "Signing in…" : "Sign in"}
       </button>
       {demoAccounts.length > 0 && (
-        <section aria-labelledby="demo-accounts" className="rounded-md border border-dashed border-line-strong p-3">
+        <section
+          aria-labelledby="demo-accounts"
+          className="rounded-md border border-dashed border-line-strong p-3"
+        >
           <h2 id="demo-accounts" className="text-sm font-semibold">
             Demo accounts
           </h2>

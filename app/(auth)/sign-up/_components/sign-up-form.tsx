@@ -33,7 +33,13 @@ export function SignUpForm() {
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       {formError && <Alert tone="error">{formError}</Alert>}
       <Field label="Your name" autoComplete="name" {...register("name")} error={errors.name?.message} />
-      <Field label="E-mail" type="email" autoComplete="email" {...register("email")} error={errors.email?.message} />
+      <Field
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        {...register("email")}
+        error={errors.email?.message}
+      />
       <Field
         label="Password"
         type="password"

@@ -23,8 +23,16 @@ export default async function CustomerOrderPage({ params, searchParams }: PagePr
   const query = await searchParams;
   return (
     <>
-      <PageHeader title={`Order ${order.number}`} description={`Placed ${order.createdAt.toISOString().slice(0, 10)}`} />
-      <OrderPage order={orderView(order, user)} returnedFromCheckout={Boolean(query.paid)} cancelledCheckout={Boolean(query.cancelled)} files={<OrderFilesSection em={em} order={order} user={user} />} />
+      <PageHeader
+        title={`Order ${order.number}`}
+        description={`Placed ${order.createdAt.toISOString().slice(0, 10)}`}
+      />
+      <OrderPage
+        order={orderView(order, user)}
+        returnedFromCheckout={Boolean(query.paid)}
+        cancelledCheckout={Boolean(query.cancelled)}
+        files={<OrderFilesSection em={em} order={order} user={user} />}
+      />
     </>
   );
 }

@@ -14,7 +14,9 @@ export const metadata: Metadata = { title: "Your quote" };
 export default async function QuotePage({ searchParams }: PageProps<"/orders/new">) {
   const user = await requirePermission("orders.own", "/orders/new");
   const { design } = await searchParams;
-  const designIds = (Array.isArray(design) ? design : design ? [design] : []).filter((id) => /^[0-9a-f-]{36}$/i.test(id));
+  const designIds = (Array.isArray(design) ? design : design ? [design] : []).filter((id) =>
+    /^[0-9a-f-]{36}$/i.test(id),
+  );
   if (designIds.length === 0) notFound();
   const data = await quoteForDesigns(user, designIds).catch((e: unknown) => {
     if (e instanceof AppError && e.code === "not_found") notFound();
@@ -37,7 +39,7 @@ export default async function QuotePage({ searchParams }: PageProps<"/orders/new
             <ShaftSummary key={s.id} shaft={s} currency={data.pickup.currency} />
           ))}
         </div>
-        <aside className="card h-fit space-y-5 p-5" aria-labelledby="order-box">
+        <aside className="h-fit space-y-5 card p-5" aria-labelledby="order-box">
           <h2 id="order-box" className="text-lg font-semibold">
             Order
           </h2>
@@ -53,8 +55,8 @@ export default async function QuotePage({ searchParams }: PageProps<"/orders/new
             />
           )}
           <p className="text-xs text-ink-muted">
-            Engineering results are estimates for the shop's use and do not replace a qualified engineer or the rules
-            that apply where the vehicle runs.
+            Engineering results are estimates for the shop's use and do not replace a qualified engineer or
+            the rules that apply where the vehicle runs.
           </p>
         </aside>
       </div>

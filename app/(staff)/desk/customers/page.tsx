@@ -12,21 +12,34 @@ export default async function CustomersPage() {
   const customers = await listCustomers();
   return (
     <>
-      <PageHeader title="Customers" description="People and businesses the shop builds for, online and by phone." />
+      <PageHeader
+        title="Customers"
+        description="People and businesses the shop builds for, online and by phone."
+      />
       {customers.length === 0 ? (
         <EmptyState icon={Users} title="No customers yet">
           Customers appear here when they sign up online or the counter enters a phone order.
         </EmptyState>
       ) : (
-        <div className="card relative overflow-x-auto">
+        <div className="relative overflow-x-auto card">
           <table className="w-full text-left text-sm">
-            <thead className="border-b border-line bg-paper-sunk text-xs uppercase tracking-wide text-ink-muted">
+            <thead className="border-b border-line bg-paper-sunk text-xs tracking-wide text-ink-muted uppercase">
               <tr>
-                <th scope="col" className="px-4 py-2">Name</th>
-                <th scope="col" className="px-4 py-2">Company</th>
-                <th scope="col" className="px-4 py-2">E-mail</th>
-                <th scope="col" className="px-4 py-2">Phone</th>
-                <th scope="col" className="px-4 py-2">Orders online</th>
+                <th scope="col" className="px-4 py-2">
+                  Name
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Company
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  E-mail
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Phone
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Orders online
+                </th>
               </tr>
             </thead>
             <tbody className="divide-y divide-line">

@@ -24,7 +24,10 @@ export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/de
   if (!customerId) {
     return (
       <>
-        <PageHeader title="New phone order" description="Who is the order for? Then enter their measurements with the same builder customers use online." />
+        <PageHeader
+          title="New phone order"
+          description="Who is the order for? Then enter their measurements with the same builder customers use online."
+        />
         <CustomerPicker customers={await listCustomers()} />
       </>
     );
@@ -38,7 +41,9 @@ export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/de
     getShopEngineering(),
     listDrafts(user, { customerId }),
     draftId
-      ? getDraft(user, draftId).catch((e: unknown) => (e instanceof AppError && e.code === "not_found" ? null : Promise.reject(e)))
+      ? getDraft(user, draftId).catch((e: unknown) =>
+          e instanceof AppError && e.code === "not_found" ? null : Promise.reject(e),
+        )
       : Promise.resolve<DraftView | null>(null),
   ]);
   return (
@@ -52,7 +57,14 @@ export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/de
           </Link>
         }
       />
-      <CounterBuilder key={draft?.id ?? "new"} catalogue={shop.catalogue} settings={shop.settings} initialDraft={draft} drafts={drafts} customerId={customerId} />
+      <CounterBuilder
+        key={draft?.id ?? "new"}
+        catalogue={shop.catalogue}
+        settings={shop.settings}
+        initialDraft={draft}
+        drafts={drafts}
+        customerId={customerId}
+      />
     </>
   );
 }

@@ -10,7 +10,10 @@ export default async function WorkQueuePage() {
   await requirePermission("floor.scan", "/floor/queue");
   return (
     <>
-      <PageHeader title="Work queue" description="Shafts in the shop by next step: cut, weld and phase, balance, inspect, ship." />
+      <PageHeader
+        title="Work queue"
+        description="Shafts in the shop by next step: cut, weld and phase, balance, inspect, ship."
+      />
       <EmptyState icon={Wrench} title="Nothing in the shop yet">
         Paid orders join this queue with their travellers.
       </EmptyState>

@@ -27,7 +27,7 @@ export default async function SentMailPage() {
           Placing an order or taking a payment sends the customer an e-mail; it will appear here.
         </EmptyState>
       ) : (
-        <div className="card relative overflow-x-auto">
+        <div className="relative overflow-x-auto card">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">E-mails written by the app, newest first</caption>
             <thead className="border-b border-line bg-paper-sunk text-xs tracking-wide text-ink-muted uppercase">

@@ -13,17 +13,28 @@ export default async function StaffPage() {
   const staff = await listStaff();
   return (
     <>
-      <PageHeader title="Staff" description="Counter, floor and owner accounts. Customers create their own." />
+      <PageHeader
+        title="Staff"
+        description="Counter, floor and owner accounts. Customers create their own."
+      />
       <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
-        <div className="card relative overflow-x-auto">
+        <div className="relative overflow-x-auto card">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">Staff accounts</caption>
-            <thead className="border-b border-line bg-paper-sunk text-xs uppercase tracking-wide text-ink-muted">
+            <thead className="border-b border-line bg-paper-sunk text-xs tracking-wide text-ink-muted uppercase">
               <tr>
-                <th scope="col" className="px-4 py-2">Name</th>
-                <th scope="col" className="px-4 py-2">Role</th>
-                <th scope="col" className="px-4 py-2">E-mail</th>
-                <th scope="col" className="px-4 py-2">Since</th>
+                <th scope="col" className="px-4 py-2">
+                  Name
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Role
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  E-mail
+                </th>
+                <th scope="col" className="px-4 py-2">
+                  Since
+                </th>
               </tr>
             </thead>
             <tbody className="divide-y divide-line">

@@ -24,6 +24,10 @@ export const POST = route("public", async ({ req }) => {
       Object.fromEntries(parsed.issues.map((i) => [i.path, i.message])),
     );
   }
-  const report = evaluateDesign(parsed.design, { catalogue: shop.catalogue, settings: shop.settings, curves });
+  const report = evaluateDesign(parsed.design, {
+    catalogue: shop.catalogue,
+    settings: shop.settings,
+    curves,
+  });
   return json(report);
 });

@@ -12,7 +12,11 @@ const quoteDesignBodySchema = z.object({
 export const POST = route("public", async ({ req }) => {
   const { design, fulfilment } = await parseJson(req, quoteDesignBodySchema);
   const shop = await getShopEngineering();
-  const { shafts, quote } = quoteDesigns([{ name: String(design.name ?? "Shaft"), design }], shop, fulfilment);
+  const { shafts, quote } = quoteDesigns(
+    [{ name: String(design.name ?? "Shaft"), design }],
+    shop,
+    fulfilment,
+  );
   const shaft = shafts[0]!;
   return json({ ...quote, overall: shaft.report.overall, orderable: shaft.report.overall !== "fail" });
 });

@@ -21,7 +21,9 @@ export function CustomerPicker({ customers }: { customers: CustomerRow[] }) {
     formState: { errors, isSubmitting },
   } = useForm<CreateCustomerBody>({ resolver: zodResolver(createCustomerBodySchema) });
   const q = query.trim().toLowerCase();
-  const shown = customers.filter((c) => !q || [c.name, c.email, c.company ?? "", c.phone ?? ""].some((v) => v.toLowerCase().includes(q)));
+  const shown = customers.filter(
+    (c) => !q || [c.name, c.email, c.company ?? "", c.phone ?? ""].some((v) => v.toLowerCase().includes(q)),
+  );
   const choose = (id: string) => router.push(`/desk/new?customer=${id}`);
 
   return (
@@ -30,10 +32,16 @@ export function CustomerPicker({ customers }: { customers: CustomerRow[] }) {
         <h2 id="existing" className="text-lg font-semibold">
           An existing customer
         </h2>
-        <label htmlFor="customer-search" className="field-label mt-3">
+        <label htmlFor="customer-search" className="mt-3 field-label">
           Search by name, company, e-mail or phone
         </label>
-        <input id="customer-search" type="search" className="field-input" value={query} onChange={(e) => setQuery(e.target.value)} />
+        <input
+          id="customer-search"
+          type="search"
+          className="field-input"
+          value={query}
+          onChange={(e) => setQuery(e.target.value)}
+        />
         <ul className="mt-3 max-h-96 divide-y divide-line overflow-y-auto" aria-label="Customers">
           {shown.map((c) => (
             <li key={c.id} className="flex items-center justify-between gap-3 py-2">
@@ -43,12 +51,19 @@ export function CustomerPicker({ customers }: { customers: CustomerRow[] }) {
                   {[c.company, c.email, c.phone].filter(Boolean).join(" · ")}
                 </span>
               </span>
-              <button type="button" className="btn-quiet px-3 py-1.5" onClick={() => choose(c.id)} aria-label={`Start an order for ${c.name}`}>
+              <button
+                type="button"
+                className="btn-quiet px-3 py-1.5"
+                onClick={() => choose(c.id)}
+                aria-label={`Start an order for ${c.name}`}
+              >
                 Choose
               </button>
             </li>
           ))}
-          {shown.length === 0 && <li className="py-3 text-sm text-ink-muted">No customer matches “{query}”.</li>}
+          {shown.length === 0 && (
+            <li className="py-3 text-sm text-ink-muted">No customer matches “{query}”.</li>
+          )}
         </ul>
       </section>
       <section className="card p-5" aria-labelledby="new-customer">
@@ -62,13 +77,20 @@ export function CustomerPicker({ customers }: { customers: CustomerRow[] }) {
             setError(null);
             const res = await createCustomerAction(values);
             if (res.ok) return choose(res.data.id);
-            for (const [field, message] of Object.entries(res.error.fields ?? {})) setFieldError(field as keyof CreateCustomerBody, { message });
+            for (const [field, message] of Object.entries(res.error.fields ?? {}))
+              setFieldError(field as keyof CreateCustomerBody, { message });
             setError(res.error.message);
           })}
         >
           {error && <Alert tone="error">{error}</Alert>}
           <Field label="Name" {...register("name")} error={errors.name?.message} />
-          <Field label="E-mail" type="email" hint="Receipts and order updates go here." {...register("email")} error={errors.email?.message} />
+          <Field
+            label="E-mail"
+            type="email"
+            hint="Receipts and order updates go here."
+            {...register("email")}
+            error={errors.email?.message}
+          />
           <Field label="Phone" type="tel" {...register("phone")} error={errors.phone?.message} />
           <Field label="Company (optional)" {...register("company")} error={errors.company?.message} />
           <button type="submit" className="btn-primary" disabled={isSubmitting}>

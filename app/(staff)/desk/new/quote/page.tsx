@@ -14,7 +14,9 @@ export const metadata: Metadata = { title: "Phone order quote" };
 export default async function CounterQuotePage({ searchParams }: PageProps<"/desk/new/quote">) {
   const user = await requirePermission("orders.desk", "/desk/new/quote");
   const { design, customer } = await searchParams;
-  const designIds = (Array.isArray(design) ? design : design ? [design] : []).filter((id) => /^[0-9a-f-]{36}$/i.test(id));
+  const designIds = (Array.isArray(design) ? design : design ? [design] : []).filter((id) =>
+    /^[0-9a-f-]{36}$/i.test(id),
+  );
   if (designIds.length === 0 || typeof customer !== "string") notFound();
   const data = await quoteForDesigns(user, designIds, customer).catch((e: unknown) => {
     if (e instanceof AppError && e.code === "not_found") notFound();
@@ -26,7 +28,10 @@ export default async function CounterQuotePage({ searchParams }: PageProps<"/des
         title={`Quote for ${data.customer.name}`}
         description={`Read the price to the customer; placing the order e-mails them the confirmation at ${data.customer.email}.`}
         actions={
-          <Link href={`/desk/new?customer=${data.customer.id}&draft=${designIds[0]}`} className="btn-quiet no-underline">
+          <Link
+            href={`/desk/new?customer=${data.customer.id}&draft=${designIds[0]}`}
+            className="btn-quiet no-underline"
+          >
             Back to the design
           </Link>
         }
@@ -37,7 +42,7 @@ export default async function CounterQuotePage({ searchParams }: PageProps<"/des
             <ShaftSummary key={s.id} shaft={s} currency={data.pickup.currency} />
           ))}
         </div>
-        <aside className="card h-fit space-y-5 p-5" aria-labelledby="order-box">
+        <aside className="h-fit space-y-5 card p-5" aria-labelledby="order-box">
           <h2 id="order-box" className="text-lg font-semibold">
             Order
           </h2>
@@ -46,7 +51,13 @@ export default async function CounterQuotePage({ searchParams }: PageProps<"/des
               {data.failing.join(", ")} fails a check. Change the design before ordering.
             </Alert>
           ) : (
-            <PlaceOrderForm designIds={data.designIds} customerId={data.customer.id} quotes={{ pickup: data.pickup, ship: data.ship }} depositPercent={data.depositPercent} counter />
+            <PlaceOrderForm
+              designIds={data.designIds}
+              customerId={data.customer.id}
+              quotes={{ pickup: data.pickup, ship: data.ship }}
+              depositPercent={data.depositPercent}
+              counter
+            />
           )}
         </aside>
       </div>

@@ -34,13 +34,15 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
       {placed && (
         <div className="mb-4">
           <Alert tone="success" title="Order placed">
-            Take the payment now with the button under Payment, or send the customer the link from their order e-mail.
+            Take the payment now with the button under Payment, or send the customer the link from their order
+            e-mail.
           </Alert>
         </div>
       )}
       <OrderPage
         order={view}
-        payVerb="Take" files={<OrderFilesSection em={em} order={order} user={user} />}
+        payVerb="Take"
+        files={<OrderFilesSection em={em} order={order} user={user} />}
         staffActions={
           <StaffActions
             orderId={order.id}

@@ -15,7 +15,10 @@ export function CreateStaffForm() {
     reset,
     setError,
     formState: { errors, isSubmitting },
-  } = useForm<CreateStaffBody>({ resolver: zodResolver(createStaffBodySchema), defaultValues: { role: "counter" } });
+  } = useForm<CreateStaffBody>({
+    resolver: zodResolver(createStaffBodySchema),
+    defaultValues: { role: "counter" },
+  });
 
   const onSubmit = handleSubmit(async (values) => {
     setResult(null);
@@ -40,14 +43,26 @@ export function CreateStaffForm() {
         <label htmlFor="staff-role" className="field-label">
           Role
         </label>
-        <select id="staff-role" className="field-input" {...register("role")} aria-invalid={errors.role ? true : undefined}>
+        <select
+          id="staff-role"
+          className="field-input"
+          {...register("role")}
+          aria-invalid={errors.role ? true : undefined}
+        >
           <option value="counter">Counter — orders and payments</option>
           <option value="floor">Floor — scans travellers, records measurements</option>
           <option value="owner">Owner — everything</option>
         </select>
         {errors.role && <p className="field-error">{errors.role.message}</p>}
       </div>
-      <Field label="First password" type="password" autoComplete="new-password" hint="At least 10 characters." {...register("password")} error={errors.password?.message} />
+      <Field
+        label="First password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters."
+        {...register("password")}
+        error={errors.password?.message}
+      />
       <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
         {isSubmitting ? "Adding…" : "Add staff member"}
       </button>

@@ -35,7 +35,7 @@ export function StaffActions({
   if (!canRequestBalance && !(canRefund && refundable.length > 0) && !message) return null;
 
   return (
-    <section className="card no-print space-y-4 p-5" aria-labelledby="staff-actions">
+    <section className="no-print space-y-4 card p-5" aria-labelledby="staff-actions">
       <h2 id="staff-actions" className="text-lg font-semibold">
         Shop actions
       </h2>
@@ -50,7 +50,14 @@ export function StaffActions({
             setBusy(true);
             const res = await requestBalanceAction({ orderId });
             setBusy(false);
-            setMessage(res.ok ? { tone: "success", text: `Balance of ${formatMoney(res.data.amountCents, currency)} requested; the customer has the link by e-mail.` } : { tone: "error", text: res.error.message });
+            setMessage(
+              res.ok
+                ? {
+                    tone: "success",
+                    text: `Balance of ${formatMoney(res.data.amountCents, currency)} requested; the customer has the link by e-mail.`,
+                  }
+                : { tone: "error", text: res.error.message },
+            );
             router.refresh();
           }}
         >
@@ -66,15 +73,26 @@ export function StaffActions({
             const amount = Math.round(Number(data.get("amount")) * 100);
             const paymentId = String(data.get("paymentId"));
             const reason = String(data.get("reason") ?? "");
-            if (!window.confirm(`Refund ${formatMoney(amount || 0, currency)}? This sends money back to the customer's card.`)) return;
+            if (
+              !window.confirm(
+                `Refund ${formatMoney(amount || 0, currency)}? This sends money back to the customer's card.`,
+              )
+            )
+              return;
             setBusy(true);
             const res = await refundPaymentAction({ paymentId, amountCents: amount, reason });
             setBusy(false);
             if (res.ok) {
-              setMessage({ tone: "success", text: `Refunded ${formatMoney(res.data.amountCents, currency)}.` });
+              setMessage({
+                tone: "success",
+                text: `Refunded ${formatMoney(res.data.amountCents, currency)}.`,
+              });
               e.currentTarget?.reset();
             } else {
-              setMessage({ tone: "error", text: Object.values(res.error.fields ?? {})[0] ?? res.error.message });
+              setMessage({
+                tone: "error",
+                text: Object.values(res.error.fields ?? {})[0] ?? res.error.message,
+              });
             }
             router.refresh();
           }}
@@ -96,7 +114,15 @@ export function StaffActions({
             <label htmlFor="refund-amount" className="field-label">
               Amount ({currency})
             </label>
-            <input id="refund-amount" name="amount" type="number" min="0.01" step="0.01" required className="field-input" />
+            <input
+              id="refund-amount"
+              name="amount"
+              type="number"
+              min="0.01"
+              step="0.01"
+              required
+              className="field-input"
+            />
           </div>
           <div>
             <label htmlFor="refund-reason" className="field-label">
