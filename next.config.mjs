@@ -1,5 +1,5 @@
 /** @type {import('next').NextConfig} */
-export default {
+const nextConfig = {
   // MikroORM keys entities by class name, so server code must keep its class names.
   experimental: { serverMinification: false, authInterrupts: true },
   serverExternalPackages: [
@@ -17,3 +17,5 @@ export default {
   poweredByHeader: false,
   typedRoutes: false,
 };
+
+export default nextConfig;

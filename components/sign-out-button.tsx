@@ -13,6 +13,8 @@ export function SignOutButton() {
       onClick={async () => {
         setPending(true);
         await authClient.signOut();
+        // A full page load, so every server component reads the new session.
+        // eslint-disable-next-line @next/next/no-location-assign-relative-destination
         window.location.assign("/sign-in?signed-out=1");
       }}
     >

@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # `npm test`: every test, against a throw-away PostgreSQL cluster and the project's own fakes.
-#  1. type check and formatting;  2. Vitest (unit + integration, real PostgreSQL);  3. production build;
+#  1. type check, lint and formatting;  2. Vitest (unit + integration, real PostgreSQL);  3. production build;
 #  4. Playwright in Debian's Chromium against `next start`.
 # Everything it starts is stopped on exit, pass or fail.
 set -euo pipefail
@@ -26,6 +26,8 @@ else
   echo "▸ Type check"
   npx next typegen >/dev/null
   npx tsc --noEmit -p tsconfig.json
+  echo "▸ Lint (ESLint, Next's rules)"
+  npx eslint . --max-warnings 0
   echo "▸ Formatting (Prettier)"
   npx prettier --check . >/dev/null || { npx prettier --check . 2>&1 | tail -20; echo "Run: npm run format"; exit 1; }
 

@@ -1,6 +1,6 @@
 "use client";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { placeOrderBodySchema, type PlaceOrderBody } from "@/lib/orders/schemas";
 import { formatMoney, type OrderQuote } from "@/lib/pricing/price-book";
@@ -22,13 +22,13 @@ export function PlaceOrderForm({ designIds, customerId, quotes, depositPercent, 
   const {
     register,
     handleSubmit,
-    watch,
+    control,
     formState: { errors, isSubmitting },
   } = useForm<PlaceOrderBody>({
     resolver: zodResolver(placeOrderBodySchema),
     defaultValues: { designIds, customerId, fulfilment: "pickup", shipTo: "", notes: "" },
   });
-  const fulfilment = watch("fulfilment");
+  const fulfilment = useWatch({ control, name: "fulfilment" });
 
   const onSubmit = handleSubmit(async (values) => {
     setError(null);

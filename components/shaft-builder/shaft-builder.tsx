@@ -1,6 +1,6 @@
 "use client";
 
-import { useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
+import { useDeferredValue, useMemo, useRef, useState, useSyncExternalStore } from "react";
 import { useRouter } from "next/navigation";
 import { Controller, useForm, useWatch, type Path, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -68,6 +68,8 @@ const USE_LABEL: Record<(typeof SHAFT_USES)[number], string> = {
   industrial: "Industrial",
 };
 
+const noSubscribe = () => () => {};
+
 const NAN = "\u0000NaN";
 /** A stable text key of the form values (NaN kept, so an unparseable entry stays invalid). */
 const keyOf = (v: unknown) =>
@@ -113,8 +115,12 @@ export function ShaftBuilder({
   const [upload, setUpload] = useState<UploadState>({ kind: "idle" });
   const [quoting, setQuoting] = useState(false);
   const fileInput = useRef<HTMLInputElement>(null);
-  const [ready, setReady] = useState(false);
-  useEffect(() => setReady(true), []);
+  // True once hydrated (tests wait for it); false in the server render.
+  const ready = useSyncExternalStore(
+    noSubscribe,
+    () => true,
+    () => false,
+  );
 
   const resolver = useMemo(
     () => zodResolver(builderFormSchema(catalogue)) as unknown as Resolver<BuilderForm>,
@@ -150,9 +156,10 @@ export function ShaftBuilder({
       throw error;
     }
   }, [validation.design, catalogue, settings]);
-  const lastGood = useRef(evaluation);
-  if (evaluation) lastGood.current = evaluation;
-  const shown = evaluation ?? lastGood.current;
+  // While the form has errors, keep showing the last valid results (greyed).
+  const [lastGood, setLastGood] = useState(evaluation);
+  if (evaluation && evaluation !== lastGood) setLastGood(evaluation);
+  const shown = evaluation ?? lastGood;
   const stale = evaluation === null;
   const errs = validation.fieldErrors;
 

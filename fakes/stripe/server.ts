@@ -180,6 +180,7 @@ export async function startStripeFake(options: StripeFakeOptions = {}): Promise<
   const persistence = new StatePersistence(options.stateFile ?? null);
   let publicUrl = "";
   // Declared before use by the dispatcher callback; assigned right after.
+  // eslint-disable-next-line prefer-const -- assigned once, after the callbacks that read it
   let core: StripeFakeCore;
   const persist = () => persistence.scheduleSave(() => core.state);
   const dispatcher = new WebhookDispatcher(() => config, persist, log);

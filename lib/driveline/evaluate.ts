@@ -303,7 +303,7 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   const catalogueTube = tubeSpec.id ? index.tubes.get(tubeSpec.id) : undefined;
 
   // Ends: named, or suggested for this tube.
-  const ends = namedEnds.map((f, i) => {
+  const ends = namedEnds.map((f) => {
     if (f) return endReport(f, "design", index);
     const s = suggestFitting(catalogue, index, tubeSpec.odMm, material.weldFamily, torqueNm);
     return s ? endReport(s, "suggested", index) : null;

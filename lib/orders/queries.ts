@@ -2,6 +2,7 @@ import { Order, type OrderStatus, type PaymentState } from "@/entities";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { CurrentUser } from "@/lib/auth/guard";
 import type { QuoteLine } from "@/lib/pricing/price-book";
+import type { EvaluationReport } from "@/lib/driveline";
 import { seesAllOrders } from "./access";
 import { nextPaymentKind, amountDue } from "./payments";
 
@@ -116,7 +117,8 @@ export interface ShaftSource {
 
 /** A shaft's key numbers, checks and price, as plain data for the screens. */
 export function shaftView(s: ShaftSource): ShaftView {
-  const r = s.evaluation as Record<string, any>; // an EvaluationReport (possibly a frozen older one)
+  // A frozen EvaluationReport; read defensively, since an older order may predate a field.
+  const r = s.evaluation as Partial<EvaluationReport>;
   return {
     id: s.id,
     position: s.position,
@@ -134,9 +136,7 @@ export function shaftView(s: ShaftSource): ShaftView {
       },
       {
         label: "Working angles",
-        value: Array.isArray(r.joints)
-          ? r.joints.map((j: any) => fmt(j.workingAngleDeg, 2, "°")).join(" / ")
-          : "—",
+        value: r.joints ? r.joints.map((j) => fmt(j.workingAngleDeg, 2, "°")).join(" / ") : "—",
       },
       { label: "Rear yoke index", value: fmt(r.phasing?.phaseIndexDeg, 1, "°") },
       {
@@ -149,10 +149,8 @@ export function shaftView(s: ShaftSource): ShaftView {
         value: `${fmt(r.balance?.perPlaneGmm, 0, " g·mm")} at G ${fmt(r.balance?.gradeMmS, 1)}`,
       },
     ],
-    checks: Array.isArray(r.checks)
-      ? r.checks.map((c: any) => ({ id: String(c.id), status: String(c.status), message: String(c.message) }))
-      : [],
-    cautions: Array.isArray(r.cautions) ? r.cautions.map(String) : [],
+    checks: (r.checks ?? []).map((c) => ({ id: c.id, status: c.status, message: c.message })),
+    cautions: [...(r.cautions ?? [])],
   };
 }
 

@@ -2,7 +2,7 @@ import { describe, expect } from "vitest";
 import { AccessError, authorize } from "@/lib/auth/guard";
 import { ROLE_PERMISSIONS, type Permission } from "@/lib/auth/permissions";
 import { createStaffUser } from "@/lib/users/staff";
-import { ROLES, type Role } from "@/lib/auth/roles";
+import type { Role } from "@/lib/auth/roles";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
 import { dbTest } from "../setup/db";
 

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { readFileSync } from "node:fs";
 import { parseDesign } from "@/lib/driveline";
 
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- tests poke at arbitrary fields
 const example = (): Record<string, any> => JSON.parse(readFileSync("examples/street-truck.json", "utf8"));
 const messages = (input: unknown): string[] => {
   const r = parseDesign(input);

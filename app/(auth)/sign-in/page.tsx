@@ -22,7 +22,7 @@ export default async function SignInPage({ searchParams }: PageProps<"/sign-in">
     <div className="card p-6 md:p-8">
       <h1 className="text-2xl font-bold">Sign in</h1>
       <p className="mt-1 mb-6 text-sm text-ink-muted">
-        Follow your orders, or get to work if you are on the shop's staff.
+        Follow your orders, or get to work if you are on the shop’s staff.
       </p>
       {params["signed-out"] && (
         <div className="mb-4">

@@ -18,7 +18,7 @@ export default function SignUpPage() {
           Sign in
         </Link>
       </p>
-      <p className="mt-4 text-xs text-ink-muted">Shop staff: ask your shop's owner for an account.</p>
+      <p className="mt-4 text-xs text-ink-muted">Shop staff: ask your shop’s owner for an account.</p>
     </div>
   );
 }

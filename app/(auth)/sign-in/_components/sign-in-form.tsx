@@ -86,7 +86,7 @@ export function SignInForm({
             Demo accounts
           </h2>
           <p className="field-hint">
-            This is a demo shop with invented people. Every account's password is{" "}
+            This is a demo shop with invented people. Every account’s password is{" "}
             <code className="font-mono text-ink">{demoAccounts[0]?.password}</code>.
           </p>
           <ul className="mt-2 divide-y divide-line text-sm">

@@ -26,6 +26,8 @@ export function SignUpForm() {
       );
       return;
     }
+    // A full page load, so every server component reads the new session.
+    // eslint-disable-next-line @next/next/no-location-assign-relative-destination
     window.location.assign("/orders?welcome=1");
   });
 

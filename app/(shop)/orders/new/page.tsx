@@ -55,7 +55,7 @@ export default async function QuotePage({ searchParams }: PageProps<"/orders/new
             />
           )}
           <p className="text-xs text-ink-muted">
-            Engineering results are estimates for the shop's use and do not replace a qualified engineer or
+            Engineering results are estimates for the shop’s use and do not replace a qualified engineer or
             the rules that apply where the vehicle runs.
           </p>
         </aside>
