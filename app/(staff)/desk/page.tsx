@@ -5,6 +5,7 @@ import { requirePermission } from "@/lib/auth/guard";
 import { getEm } from "@/lib/db/orm";
 import { listOrders } from "@/lib/orders/queries";
 import { formatMoney } from "@/lib/pricing/price-book";
+import { CELL, TableCard } from "@/components/ui/table-card";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
 import { OrderStatusBadge, PaymentBadge } from "@/components/orders/status-badge";
@@ -30,59 +31,38 @@ export default async function OrderDeskPage() {
           Orders placed online and by phone are listed here, oldest promise date first.
         </EmptyState>
       ) : (
-        <div className="relative overflow-x-auto card">
-          <table className="w-full text-left text-sm">
-            <caption className="sr-only">Open orders</caption>
-            <thead className="border-b border-line bg-paper-sunk text-xs tracking-wide text-ink-muted uppercase">
-              <tr>
-                <th scope="col" className="px-4 py-2">
-                  Order
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Customer
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Shafts
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Status
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Payment
-                </th>
-                <th scope="col" className="px-4 py-2 text-right">
-                  Total
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Promised
-                </th>
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-line">
-              {orders.map((o) => (
-                <tr key={o.id} className={o.late ? "bg-fail-soft/40" : undefined}>
-                  <td className="px-4 py-2 font-mono font-semibold">
-                    <Link href={`/desk/orders/${o.id}`}>{o.number}</Link>
-                  </td>
-                  <td className="px-4 py-2">{o.customerName}</td>
-                  <td className="px-4 py-2">{o.shafts.join(", ")}</td>
-                  <td className="px-4 py-2">
-                    <OrderStatusBadge status={o.status} />
-                  </td>
-                  <td className="px-4 py-2">
-                    <PaymentBadge state={o.paymentState} />
-                  </td>
-                  <td className="px-4 py-2 text-right tabular-nums">
-                    {formatMoney(o.totalCents, o.currency)}
-                  </td>
-                  <td className="px-4 py-2 whitespace-nowrap">
-                    {o.promisedDate} {o.late && <span className="font-semibold text-fail">late</span>}
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <TableCard
+          caption="Open orders"
+          headings={[
+            "Order",
+            "Customer",
+            "Shafts",
+            "Status",
+            "Payment",
+            { label: "Total", align: "right" },
+            "Promised",
+          ]}
+        >
+          {orders.map((o) => (
+            <tr key={o.id} className={o.late ? "bg-fail-soft/40" : undefined}>
+              <td className={`${CELL} font-mono font-semibold`}>
+                <Link href={`/desk/orders/${o.id}`}>{o.number}</Link>
+              </td>
+              <td className={CELL}>{o.customerName}</td>
+              <td className={CELL}>{o.shafts.join(", ")}</td>
+              <td className={CELL}>
+                <OrderStatusBadge status={o.status} />
+              </td>
+              <td className={CELL}>
+                <PaymentBadge state={o.paymentState} />
+              </td>
+              <td className={`${CELL} text-right tabular-nums`}>{formatMoney(o.totalCents, o.currency)}</td>
+              <td className={`${CELL} whitespace-nowrap`}>
+                {o.promisedDate} {o.late && <span className="font-semibold text-fail">late</span>}
+              </td>
+            </tr>
+          ))}
+        </TableCard>
       )}
     </>
   );

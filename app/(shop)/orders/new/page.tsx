@@ -5,9 +5,7 @@ import { requirePermission } from "@/lib/auth/guard";
 import { quoteForDesigns } from "@/lib/orders/quote-page";
 import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
-import { Alert } from "@/components/ui/alert";
-import { ShaftSummary } from "@/components/orders/shaft-summary";
-import { PlaceOrderForm } from "@/components/orders/place-order-form";
+import { QuoteView } from "@/components/orders/quote-view";
 
 export const metadata: Metadata = { title: "Your quote" };
 
@@ -33,33 +31,7 @@ export default async function QuotePage({ searchParams }: PageProps<"/orders/new
           </Link>
         }
       />
-      <div className="grid gap-6 lg:grid-cols-[1fr_24rem]">
-        <div className="space-y-4">
-          {data.shafts.map((s) => (
-            <ShaftSummary key={s.id} shaft={s} currency={data.pickup.currency} />
-          ))}
-        </div>
-        <aside className="h-fit space-y-5 card p-5" aria-labelledby="order-box">
-          <h2 id="order-box" className="text-lg font-semibold">
-            Order
-          </h2>
-          {data.failing.length > 0 ? (
-            <Alert tone="error" title="This shaft cannot be ordered yet">
-              {data.failing.join(", ")} fails a check. Fix it in the shaft builder, or phone the shop.
-            </Alert>
-          ) : (
-            <PlaceOrderForm
-              designIds={data.designIds}
-              quotes={{ pickup: data.pickup, ship: data.ship }}
-              depositPercent={data.depositPercent}
-            />
-          )}
-          <p className="text-xs text-ink-muted">
-            Engineering results are estimates for the shop’s use and do not replace a qualified engineer or
-            the rules that apply where the vehicle runs.
-          </p>
-        </aside>
-      </div>
+      <QuoteView data={data} />
     </>
   );
 }

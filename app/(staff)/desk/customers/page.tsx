@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { Users } from "lucide-react";
 import { requirePermission } from "@/lib/auth/guard";
 import { listCustomers } from "@/lib/customers";
+import { CELL, TableCard } from "@/components/ui/table-card";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
 
@@ -21,40 +22,17 @@ export default async function CustomersPage() {
           Customers appear here when they sign up online or the counter enters a phone order.
         </EmptyState>
       ) : (
-        <div className="relative overflow-x-auto card">
-          <table className="w-full text-left text-sm">
-            <thead className="border-b border-line bg-paper-sunk text-xs tracking-wide text-ink-muted uppercase">
-              <tr>
-                <th scope="col" className="px-4 py-2">
-                  Name
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Company
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  E-mail
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Phone
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Orders online
-                </th>
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-line">
-              {customers.map((c) => (
-                <tr key={c.id}>
-                  <td className="px-4 py-2 font-medium">{c.name}</td>
-                  <td className="px-4 py-2">{c.company ?? "—"}</td>
-                  <td className="px-4 py-2">{c.email}</td>
-                  <td className="px-4 py-2">{c.phone ?? "—"}</td>
-                  <td className="px-4 py-2">{c.hasAccount ? "Yes" : "By phone"}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <TableCard caption="Customers" headings={["Name", "Company", "E-mail", "Phone", "Orders online"]}>
+          {customers.map((c) => (
+            <tr key={c.id}>
+              <td className={`${CELL} font-medium`}>{c.name}</td>
+              <td className={CELL}>{c.company ?? "—"}</td>
+              <td className={CELL}>{c.email}</td>
+              <td className={CELL}>{c.phone ?? "—"}</td>
+              <td className={CELL}>{c.hasAccount ? "Yes" : "By phone"}</td>
+            </tr>
+          ))}
+        </TableCard>
       )}
     </>
   );

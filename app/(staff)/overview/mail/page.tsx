@@ -5,6 +5,7 @@ import { Mail } from "lucide-react";
 import { requirePermission } from "@/lib/auth/guard";
 import { isDemo } from "@/lib/shop/shop";
 import { listOutbox } from "@/lib/mail/outbox-view";
+import { CELL, TableCard } from "@/components/ui/table-card";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
 import { MailStatus } from "./_components/mail-status";
@@ -27,56 +28,29 @@ export default async function SentMailPage() {
           Placing an order or taking a payment sends the customer an e-mail; it will appear here.
         </EmptyState>
       ) : (
-        <div className="relative overflow-x-auto card">
-          <table className="w-full text-left text-sm">
-            <caption className="sr-only">E-mails written by the app, newest first</caption>
-            <thead className="border-b border-line bg-paper-sunk text-xs tracking-wide text-ink-muted uppercase">
-              <tr>
-                <th scope="col" className="px-4 py-2">
-                  Created
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  To
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Subject
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Template
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Status
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Last error
-                </th>
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-line">
-              {messages.map((m) => (
-                <tr key={m.id} className="align-top">
-                  <td className="px-4 py-2 whitespace-nowrap">
-                    <time dateTime={m.createdAt}>{m.createdAt.slice(0, 16).replace("T", " ")} UTC</time>
-                  </td>
-                  <td className="px-4 py-2">{m.to}</td>
-                  <td className="px-4 py-2">
-                    <Link
-                      href={`/overview/mail/${m.id}`}
-                      className="font-medium underline underline-offset-2"
-                    >
-                      {m.subject}
-                    </Link>
-                  </td>
-                  <td className="px-4 py-2 font-mono text-xs">{m.template}</td>
-                  <td className="px-4 py-2 whitespace-nowrap">
-                    <MailStatus status={m.status} attempts={m.attempts} />
-                  </td>
-                  <td className="max-w-xs px-4 py-2 text-xs text-ink-muted">{m.lastError ?? "—"}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <TableCard
+          caption="E-mails written by the app, newest first"
+          headings={["Created", "To", "Subject", "Template", "Status", "Last error"]}
+        >
+          {messages.map((m) => (
+            <tr key={m.id} className="align-top">
+              <td className={`${CELL} whitespace-nowrap`}>
+                <time dateTime={m.createdAt}>{m.createdAt.slice(0, 16).replace("T", " ")} UTC</time>
+              </td>
+              <td className={CELL}>{m.to}</td>
+              <td className={CELL}>
+                <Link href={`/overview/mail/${m.id}`} className="font-medium underline underline-offset-2">
+                  {m.subject}
+                </Link>
+              </td>
+              <td className={`${CELL} font-mono text-xs`}>{m.template}</td>
+              <td className={`${CELL} whitespace-nowrap`}>
+                <MailStatus status={m.status} attempts={m.attempts} />
+              </td>
+              <td className="max-w-xs px-4 py-2 text-xs text-ink-muted">{m.lastError ?? "—"}</td>
+            </tr>
+          ))}
+        </TableCard>
       )}
     </>
   );
