@@ -11,6 +11,8 @@ yokeline_env_local() {
   export STRIPE_SECRET_KEY="${STRIPE_SECRET_KEY:-sk_test_local_fake}"
   export STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_local_fake}"
   export STRIPE_FAKE_WEBHOOK_URL="$APP_URL/api/payments/webhook"
+  # The fake keeps its sessions across restarts, so an open checkout link still works tomorrow.
+  export STRIPE_FAKE_STATE_FILE="${STRIPE_FAKE_STATE_FILE:-$PWD/.data/stripe-fake.json}"
   export MAIL_FAKE_SMTP_PORT="${MAIL_FAKE_SMTP_PORT:-12525}" MAIL_FAKE_HTTP_PORT="${MAIL_FAKE_HTTP_PORT:-12580}"
   export SMTP_URL="smtp://127.0.0.1:${MAIL_FAKE_SMTP_PORT}"
   export MAIL_FAKE_URL="http://127.0.0.1:${MAIL_FAKE_HTTP_PORT}"

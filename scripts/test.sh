@@ -37,6 +37,7 @@ fi
 
 echo "▸ Production build"
 export APP_PORT="${TEST_APP_PORT:-3100}" STRIPE_FAKE_PORT=12211 MAIL_FAKE_SMTP_PORT=12625 MAIL_FAKE_HTTP_PORT=12680
+export STRIPE_FAKE_STATE_FILE="$TMP_DIR/stripe-fake.json"
 yokeline_env_local
 export DATABASE_URL="$DB_BASE/yokeline_e2e"
 if scripts/needs-build.sh; then NODE_ENV=production npx next build >"$TMP_DIR/build.log" 2>&1 || { cat "$TMP_DIR/build.log"; exit 1; }; fi
