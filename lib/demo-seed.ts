@@ -1,4 +1,8 @@
-import { Customer, Shop, ShopConfig } from "@/entities";
+import { Customer, Design, Shop, ShopConfig, User } from "@/entities";
+import type { CurrentUser } from "@/lib/auth/guard";
+import { placeOrder } from "@/lib/orders/place-order";
+import streetTruck from "@/examples/street-truck.json";
+import compoundOffset from "@/examples/compound-offset.json";
 import { defaultCatalogue } from "@/lib/driveline";
 import { defaultPriceBook } from "@/lib/pricing/price-book";
 import { getEm } from "@/lib/db/orm";
@@ -61,5 +65,53 @@ export async function seedDemoShop(): Promise<boolean> {
     fill.create(Customer, { ...c, createdAt: new Date() });
   }
   await fill.flush();
+  await seedDemoOrders();
   return true;
+}
+
+/** Two open orders so the desk and the customer screens have something to show (demo data). */
+async function seedDemoOrders(): Promise<void> {
+  const em = await getEm();
+  const wendell = await em.findOneOrFail(
+    Customer,
+    { email: DEMO_CUSTOMERS[1].email },
+    { populate: ["user"] },
+  );
+  const harlan = await em.findOneOrFail(Customer, { email: DEMO_PHONE_CUSTOMERS[0].email });
+  const counter = await em.findOneOrFail(User, { email: DEMO_STAFF[1].email });
+  const asUser = (u: User): CurrentUser => ({ id: u.id, name: u.name, email: u.email, role: u.role });
+
+  const drafts = [
+    {
+      customer: wendell,
+      by: wendell.user!,
+      name: "Rear shaft, 1979 pickup",
+      design: streetTruck,
+      use: "street",
+      description: "1979 half-ton pickup, 350 V8, 3-speed automatic",
+    },
+    {
+      customer: harlan,
+      by: counter,
+      name: "Feed-mixer drive",
+      design: compoundOffset,
+      use: "industrial",
+      description: "Feed mixer on the home farm, offset gearbox",
+    },
+  ];
+  for (const d of drafts) {
+    const design = em.create(Design, {
+      name: d.name,
+      design: d.design,
+      application: { description: d.description, use: d.use },
+      customer: d.customer,
+      createdBy: d.by,
+    });
+    await em.flush();
+    await placeOrder(asUser(d.by), {
+      designIds: [design.id],
+      fulfilment: "pickup",
+      customerId: d.customer.id,
+    });
+  }
 }

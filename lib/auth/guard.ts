@@ -5,20 +5,9 @@ import { forbidden, redirect } from "next/navigation";
 import { auth } from "./server";
 import { can, type Permission } from "./permissions";
 import { isRole, type Role } from "./roles";
+import { AccessError, type CurrentUser } from "./access";
 
-export interface CurrentUser {
-  id: string;
-  name: string;
-  email: string;
-  role: Role;
-}
-
-/** Thrown when a caller is not signed in (401) or not allowed (403). */
-export class AccessError extends Error {
-  constructor(readonly status: 401 | 403) {
-    super(status === 401 ? "Sign in to continue." : "You do not have access to this.");
-  }
-}
+export { AccessError, type CurrentUser } from "./access";
 
 async function sessionUser(requestHeaders: Headers): Promise<CurrentUser | null> {
   const session = await auth.api.getSession({ headers: requestHeaders });

@@ -1,6 +1,6 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { Customer, Design, Order, OrderEvent, OrderShaft, User } from "@/entities";
-import { AccessError, type CurrentUser } from "@/lib/auth/guard";
+import { AccessError, type CurrentUser } from "@/lib/auth/access";
 import { can } from "@/lib/auth/permissions";
 import { recordAudit } from "@/lib/audit";
 import { inTransaction } from "@/lib/db/orm";
