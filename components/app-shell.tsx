@@ -64,6 +64,9 @@ export function AppShell({
           </details>
         </div>
       </header>
+      <p className="hidden border-b border-black pb-2 text-sm print:block">
+        {shopName} · printed from Yokeline
+      </p>
       <main id="main" className="mx-auto w-full max-w-7xl flex-1 px-4 py-6 md:py-8">
         {children}
       </main>

@@ -151,7 +151,7 @@ export function OrderFiles({ orderId, files: initialFiles, canUpload }: OrderFil
       )}
 
       {canUpload && (
-        <div className="mt-4 border-t border-line pt-4">
+        <div className="no-print mt-4 border-t border-line pt-4">
           <label htmlFor={inputId} className="field-label">
             Attach a photo or measurement sheet
           </label>
