@@ -32,6 +32,10 @@ pg_up() {
   local dir="$1" port="$2" password="$3" db="$4" throwaway="${5:-}"
   local bin; bin="$(pg_bin)"
   mkdir -p "$dir"
+  if [ "$(id -u)" -eq 0 ] && ! runuser -u postgres -- test -x "$(dirname "$dir")"; then
+    echo "The postgres user cannot reach $(dirname "$dir"); make the folders above it traversable (chmod o+x)." >&2
+    return 1
+  fi
   if [ ! -f "$dir/PG_VERSION" ]; then
     local pwfile; pwfile="$(mktemp)"; printf '%s' "$password" >"$pwfile"
     [ "$(id -u)" -eq 0 ] && chown -R postgres: "$dir" "$pwfile"

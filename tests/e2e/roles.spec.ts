@@ -56,7 +56,7 @@ test("demo mode lists the demo accounts on the sign-in page", async ({ page }) =
   await page.goto("/sign-in");
   const demo = page.getByRole("region", { name: "Demo accounts" });
   await expect(demo).toContainText(ACCOUNTS.owner);
-  await demo.getByRole("button", { name: "Fill in the Floor demo account" }).click();
+  await demo.getByRole("button", { name: "Use the Floor demo account" }).click();
   await page.getByRole("button", { name: "Sign in" }).click();
   await expect(page).toHaveURL("/floor");
 });

@@ -99,7 +99,7 @@ export function SignInForm({
                 <button
                   type="button"
                   className="btn-quiet px-2 py-1 text-xs"
-                  aria-label={`Fill in the ${a.role} demo account`}
+                  aria-label={`Use the ${a.role} demo account`}
                   onClick={(e) => {
                     const form = e.currentTarget.form;
                     if (!form) return;

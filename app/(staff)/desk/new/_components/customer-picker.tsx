@@ -55,7 +55,7 @@ export function CustomerPicker({ customers }: { customers: CustomerRow[] }) {
                 type="button"
                 className="btn-quiet px-3 py-1.5"
                 onClick={() => choose(c.id)}
-                aria-label={`Start an order for ${c.name}`}
+                aria-label={`Choose ${c.name}`}
               >
                 Choose
               </button>
