@@ -1,16 +1,55 @@
+import Link from "next/link";
 import type { QuotePageData } from "@/lib/orders/quote-page";
 import { Alert } from "@/components/ui/alert";
 import { ShaftSummary } from "./shaft-summary";
 import { PlaceOrderForm } from "./place-order-form";
 
 /** A quote: each shaft with its checks and price, and the box that places the order. */
-export function QuoteView({ data, counter = false }: { data: QuotePageData; counter?: boolean }) {
+export function QuoteView({
+  data,
+  counter = false,
+  hrefFor,
+}: {
+  data: QuotePageData;
+  counter?: boolean;
+  /** The quote page's address for another set of designs. */
+  hrefFor: (designIds: string[]) => string;
+}) {
   return (
     <div className="grid gap-6 lg:grid-cols-[1fr_24rem]">
       <div className="space-y-4">
         {data.shafts.map((s) => (
-          <ShaftSummary key={s.id} shaft={s} currency={data.pickup.currency} />
+          <div key={s.id}>
+            <ShaftSummary shaft={s} currency={data.pickup.currency} />
+            {data.shafts.length > 1 && (
+              <Link
+                href={hrefFor(data.designIds.filter((id) => id !== s.id))}
+                className="no-print mt-1 inline-block text-sm text-steel-600 underline"
+              >
+                Remove {s.name} from this order
+              </Link>
+            )}
+          </div>
         ))}
+        {data.others.length > 0 && (
+          <section className="no-print card p-5" aria-labelledby="add-shaft">
+            <h2 id="add-shaft" className="font-semibold">
+              Add another shaft to this order
+            </h2>
+            <ul className="mt-2 flex flex-wrap gap-2">
+              {data.others.map((d) => (
+                <li key={d.id}>
+                  <Link
+                    href={hrefFor([...data.designIds, d.id])}
+                    className="btn-quiet px-3 py-1.5 no-underline"
+                  >
+                    + {d.name}
+                  </Link>
+                </li>
+              ))}
+            </ul>
+          </section>
+        )}
       </div>
       <aside className="h-fit space-y-5 card p-5" aria-labelledby="order-box">
         <h2 id="order-box" className="text-lg font-semibold">

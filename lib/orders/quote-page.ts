@@ -17,6 +17,8 @@ export interface QuotePageData {
   depositPercent: number;
   leadTimeWorkingDays: number;
   failing: string[];
+  /** The customer's other saved designs, which can be added to the same order. */
+  others: { id: string; name: string }[];
 }
 
 /** Prices saved designs for the quote screen, exactly as placing the order will. */
@@ -58,5 +60,12 @@ export async function quoteForDesigns(
     depositPercent: shop.priceBook.depositPercent,
     leadTimeWorkingDays: shop.priceBook.leadTimeWorkingDays,
     failing: pickup.shafts.filter((s) => s.report.overall === "fail").map((s) => s.design.name),
+    others: (
+      await em.find(
+        Design,
+        { customer, id: { $nin: designIds } },
+        { orderBy: { updatedAt: "desc" }, limit: 20 },
+      )
+    ).map((d) => ({ id: d.id, name: d.name })),
   };
 }

@@ -8,7 +8,14 @@ import { POST as webhookPost } from "@/app/api/payments/webhook/route";
 import { createStaffUser } from "@/lib/users/staff";
 import { uniqueEmail } from "../setup/auth-requests";
 import { dbTest, hasDatabase } from "../setup/db";
-import { failingVan, newCustomer, payWithCard, saveDesign, startPaymentsHarness } from "../setup/orders";
+import {
+  compoundOffset,
+  failingVan,
+  newCustomer,
+  payWithCard,
+  saveDesign,
+  startPaymentsHarness,
+} from "../setup/orders";
 
 let harness: Awaited<ReturnType<typeof startPaymentsHarness>>;
 beforeAll(async () => {
@@ -158,6 +165,25 @@ describe("paying an order through the local Stripe fake", () => {
 });
 
 describe("placing an order", () => {
+  dbTest("one order can hold several shafts, each priced on its own", async () => {
+    const { user, customer } = await newCustomer();
+    const front = await saveDesign(customer, user.id, undefined, "Front shaft");
+    const rear = await saveDesign(customer, user.id, compoundOffset, "Rear shaft");
+    const order = await placeOrder(user, {
+      designIds: [front.id, rear.id],
+      fulfilment: "ship",
+      shipTo: "9 Elm Row, Millbrook",
+    });
+    const em = await getEm();
+    const loaded = await em.findOneOrFail(Order, { id: order.id }, { populate: ["shafts"] });
+    expect(loaded.shafts.getItems().map((s) => [s.position, s.name])).toEqual([
+      [1, "Front shaft"],
+      [2, "Rear shaft"],
+    ]);
+    expect(loaded.subtotalCents).toBe(loaded.shafts.getItems().reduce((sum, s) => sum + s.priceCents, 0));
+    expect(loaded.shippingCents).toBeGreaterThan(0);
+  });
+
   dbTest("a design that fails a check cannot be ordered", async () => {
     const { user, customer } = await newCustomer();
     const design = await saveDesign(customer, user.id, failingVan, "Long van");

@@ -12,6 +12,10 @@ export const streetTruck = JSON.parse(readFileSync("examples/street-truck.json",
   string,
   unknown
 >;
+export const compoundOffset = JSON.parse(readFileSync("examples/compound-offset.json", "utf8")) as Record<
+  string,
+  unknown
+>;
 export const failingVan = JSON.parse(
   readFileSync("examples/long-van-critical-speed-fail.json", "utf8"),
 ) as Record<string, unknown>;

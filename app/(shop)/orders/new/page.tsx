@@ -31,7 +31,7 @@ export default async function QuotePage({ searchParams }: PageProps<"/orders/new
           </Link>
         }
       />
-      <QuoteView data={data} />
+      <QuoteView data={data} hrefFor={(ids) => `/orders/new?${ids.map((id) => `design=${id}`).join("&")}`} />
     </>
   );
 }

@@ -34,7 +34,13 @@ export default async function CounterQuotePage({ searchParams }: PageProps<"/des
           </Link>
         }
       />
-      <QuoteView data={data} counter />
+      <QuoteView
+        data={data}
+        counter
+        hrefFor={(ids) =>
+          `/desk/new/quote?customer=${data.customer.id}&${ids.map((id) => `design=${id}`).join("&")}`
+        }
+      />
     </>
   );
 }
