@@ -1,8 +1,9 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
+import { forbidden, notFound, redirect } from "next/navigation";
 import { requirePermission } from "@/lib/auth/guard";
 import { getEm } from "@/lib/db/orm";
-import { loadOrderForUser } from "@/lib/orders/access";
+import { loadOrderForUser, seesAllOrders } from "@/lib/orders/access";
+import { can } from "@/lib/auth/permissions";
 import { orderView, populateOrder } from "@/lib/orders/queries";
 import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
@@ -13,14 +14,22 @@ export const metadata: Metadata = { title: "Order" };
 
 export default async function CustomerOrderPage({ params, searchParams }: PageProps<"/orders/[id]">) {
   const { id } = await params;
-  const user = await requirePermission("orders.own", `/orders/${id}`);
+  const query = await searchParams;
+  const user = await requirePermission(null, `/orders/${id}`);
+  // Staff follow the same links (e.g. back from a checkout they took by phone) to their own view.
+  if (seesAllOrders(user)) {
+    const rest = new URLSearchParams(
+      Object.entries(query).flatMap(([k, v]) => (typeof v === "string" ? [[k, v]] : [])),
+    );
+    redirect(`/desk/orders/${id}${rest.size ? `?${rest}` : ""}`);
+  }
+  if (!can(user.role, "orders.own")) forbidden();
   const em = await getEm();
   const order = await loadOrderForUser(em, user, id).catch((e: unknown) => {
     if (e instanceof AppError && e.code === "not_found") notFound();
     throw e;
   });
   await populateOrder(em, order);
-  const query = await searchParams;
   return (
     <>
       <PageHeader

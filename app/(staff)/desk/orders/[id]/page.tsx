@@ -24,7 +24,7 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
   });
   await populateOrder(em, order);
   const view = orderView(order, user);
-  const { placed } = await searchParams;
+  const { placed, paid, cancelled } = await searchParams;
   return (
     <>
       <PageHeader
@@ -42,6 +42,8 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
       <OrderPage
         order={view}
         payVerb="Take"
+        returnedFromCheckout={Boolean(paid)}
+        cancelledCheckout={Boolean(cancelled)}
         files={<OrderFilesSection em={em} order={order} user={user} />}
         staffActions={
           <StaffActions
