@@ -7,12 +7,12 @@ import {
   BodyTooLargeError,
   closeServer,
   envPort,
-  isMainModule,
   listen,
   LOCALHOST,
   readBody,
   sendHtml,
   sendJson,
+  runAsScript,
 } from "../shared/http";
 import { renderInbox, renderMessage } from "./inbox-page";
 import {
@@ -206,20 +206,9 @@ export function mailFakeOptionsFromEnv(): MailFakeOptions {
   };
 }
 
-async function main(): Promise<void> {
-  const fake = await startMailFake(mailFakeOptionsFromEnv());
-  console.log(`[mail-fake] SMTP on ${LOCALHOST}:${fake.smtpPort}, Resend API + inbox on ${fake.httpUrl}`);
-  const stop = () => {
-    void fake.close().then(() => process.exit(0));
-  };
-  process.once("SIGINT", stop);
-  process.once("SIGTERM", stop);
-}
-
-// No top-level await: tsx may load this file as CommonJS.
-if (isMainModule(import.meta.url)) {
-  main().catch((err: unknown) => {
-    console.error("[mail-fake] failed to start:", err);
-    process.exit(1);
-  });
-}
+runAsScript(
+  import.meta.url,
+  "mail-fake",
+  () => startMailFake(mailFakeOptionsFromEnv()),
+  (fake) => `SMTP on ${LOCALHOST}:${fake.smtpPort}, Resend API + inbox on ${fake.httpUrl}`,
+);

@@ -102,3 +102,28 @@ export function envPort(name: string, fallback: number): number {
 export function sleep(ms: number): Promise<void> {
   return new Promise((resolve) => setTimeout(resolve, ms));
 }
+
+/**
+ * When `moduleUrl` is the script node was started with: starts the fake, prints `describe(fake)`,
+ * and closes it on SIGINT/SIGTERM. (No top-level await: tsx may load these files as CommonJS.)
+ */
+export function runAsScript<F extends { close(): Promise<void> }>(
+  moduleUrl: string,
+  name: string,
+  start: () => Promise<F>,
+  describe: (fake: F) => string,
+): void {
+  if (!isMainModule(moduleUrl)) return;
+  start().then(
+    (fake) => {
+      console.log(`[${name}] ${describe(fake)}`);
+      const stop = () => void fake.close().then(() => process.exit(0));
+      process.once("SIGINT", stop);
+      process.once("SIGTERM", stop);
+    },
+    (err: unknown) => {
+      console.error(`[${name}] failed to start:`, err);
+      process.exit(1);
+    },
+  );
+}

@@ -9,13 +9,13 @@ import {
   BodyTooLargeError,
   closeServer,
   envPort,
-  isMainModule,
   listen,
   LOCALHOST,
   readBody,
   redirect,
   sendHtml,
   sendJson,
+  runAsScript,
 } from "../shared/http";
 import { StripeFakeCore, type RequestContext } from "./core";
 import { renderCheckoutPage, renderNotFound } from "./checkout-page";
@@ -491,22 +491,9 @@ export function stripeFakeOptionsFromEnv(env = process.env): StripeFakeOptions {
   };
 }
 
-async function main(): Promise<void> {
-  const fake = await startStripeFake(stripeFakeOptionsFromEnv());
-  console.log(
-    `[stripe-fake] listening on ${fake.url} (webhooks → ${fake.config.webhookUrl ?? "none configured"})`,
-  );
-  const stop = () => {
-    void fake.close().then(() => process.exit(0));
-  };
-  process.once("SIGINT", stop);
-  process.once("SIGTERM", stop);
-}
-
-// No top-level await: tsx may load this file as CommonJS.
-if (isMainModule(import.meta.url)) {
-  main().catch((err: unknown) => {
-    console.error("[stripe-fake] failed to start:", err);
-    process.exit(1);
-  });
-}
+runAsScript(
+  import.meta.url,
+  "stripe-fake",
+  () => startStripeFake(stripeFakeOptionsFromEnv()),
+  (fake) => `listening on ${fake.url} (webhooks → ${fake.config.webhookUrl ?? "none configured"})`,
+);

@@ -142,6 +142,15 @@ export async function getDraft(user: CurrentUser, id: string): Promise<DraftView
   return toView(await loadDraft(em, user, id));
 }
 
+/** One draft the user may see, or null when there is none (for pages that start afresh instead). */
+export async function findDraft(user: CurrentUser, id: string | undefined): Promise<DraftView | null> {
+  if (!id) return null;
+  return getDraft(user, id).catch((error: unknown) => {
+    if (error instanceof AppError && error.code === "not_found") return null;
+    throw error;
+  });
+}
+
 /** Saves a new draft for the caller (or, staff, for `customerId`). */
 export async function createDraft(user: CurrentUser, body: SaveDesignBody): Promise<DraftView> {
   scopeOf(user);

@@ -2,8 +2,7 @@ import type { Metadata } from "next";
 import { requirePermission } from "@/lib/auth/guard";
 import { PageHeader } from "@/components/ui/page-header";
 import { Alert } from "@/components/ui/alert";
-import { getDraft, listDrafts, type DraftView } from "@/lib/designs/drafts";
-import { AppError } from "@/lib/http/errors";
+import { findDraft, listDrafts } from "@/lib/designs/drafts";
 import { getShopEngineering } from "@/lib/shop/config";
 import { CustomerBuilder } from "./_components/customer-builder";
 
@@ -20,12 +19,7 @@ export default async function BuildPage({
   const [shop, drafts, draft] = await Promise.all([
     getShopEngineering(),
     listDrafts(user),
-    draftId
-      ? getDraft(user, draftId).catch((error: unknown) => {
-          if (error instanceof AppError && error.code === "not_found") return null;
-          throw error;
-        })
-      : Promise.resolve<DraftView | null>(null),
+    findDraft(user, draftId),
   ]);
   return (
     <>

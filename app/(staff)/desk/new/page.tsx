@@ -5,9 +5,8 @@ import { requirePermission } from "@/lib/auth/guard";
 import { getEm } from "@/lib/db/orm";
 import { Customer } from "@/entities";
 import { listCustomers } from "@/lib/customers";
-import { getDraft, listDrafts, type DraftView } from "@/lib/designs/drafts";
+import { findDraft, listDrafts } from "@/lib/designs/drafts";
 import { getShopEngineering } from "@/lib/shop/config";
-import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
 import { CustomerPicker } from "./_components/customer-picker";
 import { CounterBuilder } from "./_components/counter-builder";
@@ -40,11 +39,7 @@ export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/de
   const [shop, drafts, draft] = await Promise.all([
     getShopEngineering(),
     listDrafts(user, { customerId }),
-    draftId
-      ? getDraft(user, draftId).catch((e: unknown) =>
-          e instanceof AppError && e.code === "not_found" ? null : Promise.reject(e),
-        )
-      : Promise.resolve<DraftView | null>(null),
+    findDraft(user, draftId),
   ]);
   return (
     <>
