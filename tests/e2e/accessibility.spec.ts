@@ -22,7 +22,7 @@ const SCREENS = [
   { who: null, paths: ["/", "/sign-in", "/sign-up"] },
   { who: ACCOUNTS.customer, paths: ["/orders", "/build"] },
   { who: ACCOUNTS.counter, paths: ["/desk", "/desk/new", "/desk/customers"] },
-  { who: ACCOUNTS.owner, paths: ["/overview", "/overview/staff", "/overview/mail"] },
+  { who: ACCOUNTS.owner, paths: ["/overview", "/overview/staff", "/overview/mail", "/overview/catalogue"] },
   { who: ACCOUNTS.floor, paths: ["/floor"] },
 ] as const;
 
