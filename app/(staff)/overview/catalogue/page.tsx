@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { requirePermission } from "@/lib/auth/guard";
 import { getShopEngineering } from "@/lib/shop/config";
 import { formatMoney } from "@/lib/pricing/price-book";
-import { mmToIn } from "@/lib/driveline";
+import { mmToIn, type SettingKey } from "@/lib/driveline";
 import { PageHeader } from "@/components/ui/page-header";
 import { Alert } from "@/components/ui/alert";
 import { CELL, TableCard } from "@/components/ui/table-card";
@@ -13,6 +13,27 @@ export const metadata: Metadata = { title: "Catalogue & prices" };
 const inchesFromMm = (mm: number, digits: number) => `${mmToIn(mm).toFixed(digits)} in`;
 const num = (n: number, digits = 1) =>
   n.toLocaleString("en-US", { minimumFractionDigits: digits, maximumFractionDigits: digits });
+
+/** Names people read for each limit, with its unit. */
+const LIMIT_LABEL: Record<SettingKey, string> = {
+  minWorkingAngleDeg: "Smallest working angle (°)",
+  maxAngleDifferenceDeg: "Largest front/rear angle difference (°)",
+  maxJointAngularAccelerationRadS2: "Largest angular acceleration per joint (rad/s²)",
+  accelerationWarnFraction: "Warn from this share of the acceleration limit",
+  maxEquivalentAngleDeg: "Largest equivalent angle (°)",
+  maxCriticalSpeedRatio: "Largest service / critical speed",
+  warnCriticalSpeedRatio: "Warn from service / critical speed",
+  minTorsionSafetyFactor: "Smallest torsion safety factor",
+  balanceGradeMmS: "Balance grade G (mm/s)",
+  slipOutMinMm: "Slip yoke out at ride height, least (mm)",
+  slipOutMaxMm: "Slip yoke out at ride height, most (mm)",
+  slipMinReserveMm: "Spline engagement kept at full droop (mm)",
+  lengthToleranceMm: "Length tolerance after welding, ± (mm)",
+  runoutEndsMm: "Runout near each end, TIR (mm)",
+  runoutCentreMm: "Runout at the centre, TIR (mm)",
+  phasingToleranceDeg: "Phasing tolerance, ± (°)",
+  centreJointAngleDeg: "Centre-bearing joint angle (°)",
+};
 
 /** What the shop engineers and prices with: materials, tubes, end fittings, joints, limits, price book. */
 export default async function CataloguePage() {
@@ -69,16 +90,18 @@ export default async function CataloguePage() {
             caption="Engineering limits with their sources"
             headings={["Limit", { label: "Value", align: "right" }, "Source"]}
           >
-            {Object.entries(settings).map(([key, limit]) => (
-              <tr key={key}>
-                <td className={`${CELL} font-mono text-xs`}>{key}</td>
-                <td className={`${CELL} text-right tabular-nums`}>
-                  {limit.value}
-                  {key in settingOverrides && <span className="ml-1 text-xs text-brass-700">(shop)</span>}
-                </td>
-                <td className={CELL}>{limit.source}</td>
-              </tr>
-            ))}
+            {(Object.entries(settings) as [SettingKey, (typeof settings)[SettingKey]][]).map(
+              ([key, limit]) => (
+                <tr key={key}>
+                  <td className={CELL}>{LIMIT_LABEL[key]}</td>
+                  <td className={`${CELL} text-right tabular-nums`}>
+                    {limit.value}
+                    {key in settingOverrides && <span className="ml-1 text-xs text-brass-700">(shop)</span>}
+                  </td>
+                  <td className={CELL}>{limit.source}</td>
+                </tr>
+              ),
+            )}
           </TableCard>
         </section>
 
