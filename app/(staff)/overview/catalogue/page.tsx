@@ -94,7 +94,7 @@ export default async function CataloguePage() {
               ([key, limit]) => (
                 <tr key={key}>
                   <td className={CELL}>{LIMIT_LABEL[key]}</td>
-                  <td className={`${CELL} text-right tabular-nums`}>
+                  <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>
                     {limit.value}
                     {key in settingOverrides && <span className="ml-1 text-xs text-brass-700">(shop)</span>}
                   </td>
@@ -123,10 +123,18 @@ export default async function CataloguePage() {
             {catalogue.materials.map((m) => (
               <tr key={m.id}>
                 <td className={`${CELL} font-medium`}>{m.name}</td>
-                <td className={`${CELL} text-right tabular-nums`}>{num(m.elasticModulusGPa)}</td>
-                <td className={`${CELL} text-right tabular-nums`}>{num(m.densityKgM3, 0)}</td>
-                <td className={`${CELL} text-right tabular-nums`}>{num(m.tensileYieldMPa, 0)}</td>
-                <td className={`${CELL} text-right tabular-nums`}>{num(m.shearYieldMPa, 0)}</td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>
+                  {num(m.elasticModulusGPa)}
+                </td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>
+                  {num(m.densityKgM3, 0)}
+                </td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>
+                  {num(m.tensileYieldMPa, 0)}
+                </td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>
+                  {num(m.shearYieldMPa, 0)}
+                </td>
                 <td className={CELL}>{m.source}</td>
               </tr>
             ))}
@@ -158,8 +166,12 @@ export default async function CataloguePage() {
                 <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>
                   {num(t.wallMm, 2)} mm <span className="text-ink-muted">({inchesFromMm(t.wallMm, 3)})</span>
                 </td>
-                <td className={`${CELL} text-right tabular-nums`}>{num(t.maxLengthMm, 0)} mm</td>
-                <td className={`${CELL} text-right tabular-nums`}>{money(t.pricePerMetreCents)}</td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>
+                  {num(t.maxLengthMm, 0)} mm
+                </td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>
+                  {money(t.pricePerMetreCents)}
+                </td>
               </tr>
             ))}
           </TableCard>
@@ -188,11 +200,15 @@ export default async function CataloguePage() {
                   <span className="font-mono text-xs text-ink-muted">{f.id}</span>
                 </td>
                 <td className={CELL}>{f.jointSeriesId}</td>
-                <td className={`${CELL} text-right tabular-nums`}>{num(f.tubeOdMm)} mm</td>
-                <td className={`${CELL} text-right tabular-nums`}>{num(f.jointCentreToWeldSeatMm)} mm</td>
-                <td className={`${CELL} text-right tabular-nums`}>{num(f.massKg, 2)} kg</td>
-                <td className={`${CELL} text-right tabular-nums`}>{num(f.torqueRatingNm, 0)} N·m</td>
-                <td className={`${CELL} text-right tabular-nums`}>{money(f.priceCents)}</td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>{num(f.tubeOdMm)} mm</td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>
+                  {num(f.jointCentreToWeldSeatMm)} mm
+                </td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>{num(f.massKg, 2)} kg</td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>
+                  {num(f.torqueRatingNm, 0)} N·m
+                </td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>{money(f.priceCents)}</td>
               </tr>
             ))}
           </TableCard>
@@ -214,9 +230,13 @@ export default async function CataloguePage() {
             {catalogue.jointSeries.map((j) => (
               <tr key={j.id}>
                 <td className={`${CELL} font-medium`}>{j.name}</td>
-                <td className={`${CELL} text-right tabular-nums`}>{num(j.torqueRatingNm, 0)} N·m</td>
-                <td className={`${CELL} text-right tabular-nums`}>{num(j.maxWorkingAngleDeg)}°</td>
-                <td className={`${CELL} text-right tabular-nums`}>{money(j.priceCents)}</td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>
+                  {num(j.torqueRatingNm, 0)} N·m
+                </td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>
+                  {num(j.maxWorkingAngleDeg)}°
+                </td>
+                <td className={`${CELL} text-right whitespace-nowrap tabular-nums`}>{money(j.priceCents)}</td>
               </tr>
             ))}
           </TableCard>
