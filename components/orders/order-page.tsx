@@ -20,6 +20,7 @@ export function OrderPage({
   order,
   returnedFromCheckout,
   cancelledCheckout,
+  checkoutUnavailable,
   files,
   staffActions,
   payVerb = "Pay",
@@ -27,6 +28,7 @@ export function OrderPage({
   order: OrderView;
   returnedFromCheckout?: boolean;
   cancelledCheckout?: boolean;
+  checkoutUnavailable?: boolean;
   files?: React.ReactNode;
   staffActions?: React.ReactNode;
   /** "Pay" for the customer; the counter "Take"s the payment with the customer on the phone. */
@@ -55,6 +57,12 @@ export function OrderPage({
       )}
       {cancelledCheckout && order.paymentState === "unpaid" && (
         <Alert tone="info">You left the payment page; nothing was charged.</Alert>
+      )}
+      {checkoutUnavailable && order.paymentState === "unpaid" && (
+        <Alert tone="warning" title="Your order is placed">
+          The payment page could not be opened just now. Nothing was charged; try the payment button again in
+          a moment.
+        </Alert>
       )}
       {lastFailure && (
         <Alert tone="error" title="The last card payment was declined">

@@ -42,7 +42,11 @@ export function PlaceOrderForm({ designIds, customerId, quotes, depositPercent, 
       setError(body?.error?.message ?? "The order could not be placed. Nothing was charged.");
       return;
     }
-    window.location.assign(counter ? `/desk/orders/${body.id}?placed=1` : body.checkoutUrl);
+    window.location.assign(
+      counter
+        ? `/desk/orders/${body.id}?placed=1`
+        : (body.checkoutUrl ?? `/orders/${body.id}?checkout-unavailable=1`),
+    );
   });
 
   const quote = quotes[fulfilment];

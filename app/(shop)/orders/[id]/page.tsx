@@ -40,6 +40,7 @@ export default async function CustomerOrderPage({ params, searchParams }: PagePr
         order={orderView(order, user)}
         returnedFromCheckout={Boolean(query.paid)}
         cancelledCheckout={Boolean(query.cancelled)}
+        checkoutUnavailable={Boolean(query["checkout-unavailable"])}
         files={<OrderFilesSection em={em} order={order} user={user} />}
       />
     </>
