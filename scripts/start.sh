@@ -29,6 +29,8 @@ export BETTER_AUTH_SECRET
 export APP_PORT="${PORT:-3000}"
 yokeline_env_local
 export NODE_ENV=production
+# A larger young generation: fewer pauses under load (the requests allocate small, short-lived objects).
+export NODE_OPTIONS="${NODE_OPTIONS:---max-semi-space-size=64}"
 
 pids=()
 cleanup() {
