@@ -70,6 +70,13 @@ const USE_LABEL: Record<(typeof SHAFT_USES)[number], string> = {
 
 const noSubscribe = () => () => {};
 
+/** Drops `draft` from the address bar, keeping the rest (the counter's `customer`, for one). */
+function forgetDraftInAddress() {
+  const url = new URL(window.location.href);
+  url.searchParams.delete("draft");
+  window.history.replaceState(null, "", url.pathname + url.search);
+}
+
 const NAN = "\u0000NaN";
 /** A stable text key of the form values (NaN kept, so an unparseable entry stays invalid). */
 const keyOf = (v: unknown) =>
@@ -269,11 +276,28 @@ export function ShaftBuilder({
     window.history.replaceState(null, "", draftHref(draft.id));
   }
 
+  async function deleteDraft(id: string, name: string) {
+    if (!window.confirm(`Delete the saved design “${name}”? Orders already placed keep their own copy.`))
+      return;
+    const res = await fetch(`/api/designs/${id}`, { method: "DELETE" });
+    if (!res.ok && res.status !== 404) {
+      setSaveState({ kind: "error", message: "That draft could not be deleted." });
+      return;
+    }
+    setDrafts((list) => list.filter((d) => d.id !== id));
+    // The form keeps what is on screen; it is simply no longer saved.
+    if (id === draftId) {
+      setDraftId(null);
+      setSaveState({ kind: "idle" });
+      forgetDraftInAddress();
+    }
+  }
+
   function newDesign() {
     reset(defaultBuilderForm());
     setDraftId(null);
     setSaveState({ kind: "idle" });
-    window.history.replaceState(null, "", window.location.pathname);
+    forgetDraftInAddress();
   }
 
   function download() {
@@ -839,14 +863,24 @@ export function ShaftBuilder({
                         {USE_LABEL[d.use]} · saved {new Date(d.updatedAt).toLocaleString()}
                       </span>
                     </span>
-                    <button
-                      type="button"
-                      className="btn-quiet px-3 py-1 text-xs"
-                      onClick={() => void loadDraft(d.id)}
-                      aria-label={`Open ${d.name}`}
-                    >
-                      Open
-                    </button>
+                    <span className="flex gap-1">
+                      <button
+                        type="button"
+                        className="btn-quiet px-3 py-1 text-xs"
+                        onClick={() => void loadDraft(d.id)}
+                        aria-label={`Open ${d.name}`}
+                      >
+                        Open
+                      </button>
+                      <button
+                        type="button"
+                        className="btn-quiet px-3 py-1 text-xs"
+                        onClick={() => void deleteDraft(d.id, d.name)}
+                        aria-label={`Delete ${d.name}`}
+                      >
+                        Delete
+                      </button>
+                    </span>
                   </li>
                 ))}
               </ul>

@@ -103,3 +103,22 @@ test.describe("shaft builder", () => {
     await expect(page.getByRole("img", { name: /Speed ratio over one turn/ })).toBeVisible();
   });
 });
+
+test("a customer deletes a saved design after confirming", async ({ page }) => {
+  await signIn(page, ACCOUNTS.customer);
+  await page.goto("/build");
+  await page.locator("[data-builder-ready]").waitFor();
+  const name = `Throwaway ${Date.now()}`;
+  await page.getByLabel("Design name").fill(name);
+  await page.getByRole("button", { name: /Save (as )?draft/ }).click();
+  await expect(page.getByTestId("save-status")).toContainText("Saved ✓");
+  const list = page.getByTestId("draft-list");
+  await expect(list).toContainText(name);
+  page.once("dialog", (d) => void d.accept());
+  await list.getByRole("button", { name: `Delete ${name}` }).click();
+  await expect(page.getByTestId("draft-list").getByText(name)).toHaveCount(0);
+  await expect(page).not.toHaveURL(/draft=/);
+  await page.reload();
+  await page.locator("[data-builder-ready]").waitFor();
+  await expect(page.getByTestId("draft-list").getByText(name)).toHaveCount(0);
+});
