@@ -52,6 +52,10 @@ pg_up() {
     } >>"$dir/postgresql.conf"
   fi
   if ! as_postgres "$bin/pg_ctl" -D "$dir" status >/dev/null 2>&1; then
+    if (echo >"/dev/tcp/127.0.0.1/$port") 2>/dev/null; then
+      echo "Port $port on 127.0.0.1 is taken by another program (another PostgreSQL?). Stop it, or choose another port with PG_PORT=…" >&2
+      return 1
+    fi
     as_postgres "$bin/pg_ctl" -D "$dir" -l "$dir/server.log" -w -t 30 start >/dev/null
   fi
   if ! PGPASSWORD="$password" psql -h 127.0.0.1 -p "$port" -U app -d postgres -tAc \
