@@ -298,8 +298,8 @@ const TEXT: Record<GuideTopic, { title: string; alt: string; body: React.ReactNo
     alt: "A tube section showing the outside diameter and the wall.",
     body: (
       <p>
-        Yokeline picks the lightest tube from the shop&rsquo;s stock that passes every check. Choose one
-        yourself only if you must.
+        Yokeline picks a tube from the shop&rsquo;s stock that passes every check (the cheapest or the
+        lightest, as the shop prefers) and lists the others. Choose one yourself only if you must.
       </p>
     ),
   },

@@ -12,6 +12,7 @@ import {
   type DesignFile,
   type EvaluationReport,
   type TubeCandidate,
+  type TubePreference,
 } from "@/lib/driveline";
 import { DrivelineView } from "./driveline-diagram";
 import { SpeedRatioPlot } from "./speed-ratio-plot";
@@ -71,6 +72,8 @@ interface ResultsPanelProps {
   onUseTube: (tube: TubeChoice) => void;
   /** Shown at the end (the quote button). */
   footer?: React.ReactNode;
+  /** The shop's preference: the ranking (and the suggestion) is cheapest or lightest first. */
+  tubePreference?: TubePreference;
 }
 
 /** The live evaluation: verdict, cautions, tube, checks, pictures, alternatives. */
@@ -83,10 +86,13 @@ export function ResultsPanel({
   tubeChosen,
   onUseTube,
   footer,
+  tubePreference = "lightest",
 }: ResultsPanelProps) {
   const [exaggerate, setExaggerate] = useState(false);
   const critical = report.checks.find((c) => c.id === "critical-speed");
-  const ranking = report.tubeSelection?.byMass ?? [];
+  const ranking =
+    (tubePreference === "cheapest" ? report.tubeSelection?.byCost : report.tubeSelection?.byMass) ?? [];
+  const order = tubePreference === "cheapest" ? "cheapest" : "lightest";
   const suggested: TubeCandidate | undefined = ranking.find((c) => c.status === "pass") ?? ranking[0];
   const showSuggestion = tubeChosen && critical?.status === "fail";
   const failing = report.checks.filter((c) => c.status === "fail").length;
@@ -289,7 +295,7 @@ export function ResultsPanel({
         {ranking.length > 0 && (
           <section aria-labelledby="tubes-h" className="card p-4">
             <h3 id="tubes-h" className="font-semibold">
-              Tubes that pass, lightest first
+              Tubes that pass, {order} first
             </h3>
             <div className="relative mt-2 overflow-x-auto">
               <table
@@ -358,7 +364,7 @@ export function ResultsPanel({
             </div>
             {ranking.length > 8 && (
               <p className="mt-2 text-xs text-ink-muted">
-                {ranking.length - 8} more pass; the lightest are shown.
+                {ranking.length - 8} more pass; the {order} are shown.
               </p>
             )}
           </section>

@@ -13,6 +13,7 @@ import {
   type DesignFile,
   type EvaluationReport,
   type ShopSettings,
+  type TubePreference,
 } from "@/lib/driveline";
 import { SHAFT_USES } from "@/lib/designs/schemas";
 import type { DraftSummary, DraftView } from "@/lib/designs/drafts";
@@ -51,6 +52,8 @@ export interface ShaftBuilderProps {
   draftHref?: (draftId: string) => string;
   /** Unit system to start in (default inches). */
   initialUnits?: UnitSystem;
+  /** How the shop picks a tube the customer leaves to Yokeline (its price book's setting). */
+  tubePreference?: TubePreference;
 }
 
 type SaveState =
@@ -113,6 +116,7 @@ export function ShaftBuilder({
   customerId,
   draftHref = (id) => `?draft=${id}`,
   initialUnits = "imperial",
+  tubePreference = "lightest",
 }: ShaftBuilderProps) {
   const router = useRouter();
   const [system, setSystem] = useState<UnitSystem>(initialUnits);
@@ -154,6 +158,7 @@ export function ShaftBuilder({
         report: evaluateDesign(validation.design, {
           catalogue,
           settings,
+          tubePreference,
           curves: { points: 181 },
           alternatives: true,
         }),
@@ -162,7 +167,7 @@ export function ShaftBuilder({
       if (error instanceof DesignInputError) return null;
       throw error;
     }
-  }, [validation.design, catalogue, settings]);
+  }, [validation.design, catalogue, settings, tubePreference]);
   // While the form has errors, keep showing the last valid results (greyed).
   const [lastGood, setLastGood] = useState(evaluation);
   if (evaluation && evaluation !== lastGood) setLastGood(evaluation);
@@ -902,6 +907,7 @@ export function ShaftBuilder({
               catalogue={catalogue}
               tubeChosen={values.tubeMode === "chosen"}
               onUseTube={useTube}
+              tubePreference={tubePreference}
               footer={
                 <div className="no-print flex flex-wrap items-center gap-3 card p-4">
                   <button

@@ -50,7 +50,12 @@ export interface EvaluateOptions {
   readonly curves?: boolean | { readonly points: number };
   /** Rank the catalogue even when the design gives its tube. */
   readonly alternatives?: boolean;
+  /** How a tube is picked when the design leaves it to Yokeline (default: the lightest that passes). */
+  readonly tubePreference?: TubePreference;
 }
+
+/** Among the tubes that pass: the lightest (engineering's usual preference) or the cheapest (a shop's quote). */
+export type TubePreference = "lightest" | "cheapest";
 
 /** Thrown by evaluateDesign when a design that skipped parseDesign refers to unknown parts. */
 export class DesignInputError extends Error {
@@ -193,9 +198,10 @@ function endReport(f: EndFitting, origin: EndReport["origin"], index: CatalogueI
   };
 }
 
-/** Pick from a ranking: the lightest clean pass, else the lightest warn, else the stiffest. */
-function pickTube(selection: TubeSelection): TubeCandidate | null {
-  return selection.byMass.find((c) => c.status === "pass") ?? selection.byMass[0] ?? selection.stiffest;
+/** Pick from a ranking: the first clean pass, else the first that warns, else the stiffest. */
+function pickTube(selection: TubeSelection, choice: TubePreference = "lightest"): TubeCandidate | null {
+  const ranked = choice === "cheapest" ? selection.byCost : selection.byMass;
+  return ranked.find((c) => c.status === "pass") ?? ranked[0] ?? selection.stiffest;
 }
 
 /**
@@ -276,7 +282,7 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
     if (options?.alternatives) selection = rank();
   } else {
     selection = rank();
-    const pick = pickTube(selection);
+    const pick = pickTube(selection, options?.tubePreference);
     const fallback = catalogue.tubes[0];
     if (pick)
       tubeSpec = {

@@ -2,7 +2,13 @@
  * Yokeline engineering core: pure, framework-free, no I/O. Imported by the browser, the
  * server and the CLI alike.
  */
-export { evaluateDesign, parseAndEvaluate, DesignInputError, type EvaluateOptions } from "./evaluate";
+export {
+  evaluateDesign,
+  parseAndEvaluate,
+  DesignInputError,
+  type EvaluateOptions,
+  type TubePreference,
+} from "./evaluate";
 export {
   designFileSchema,
   parseDesign,

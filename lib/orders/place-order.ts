@@ -45,7 +45,11 @@ export function quoteDesigns<S extends QuoteSource>(
         `"${design.name}" has fields to fix: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`,
       );
     }
-    const report = evaluateDesign(parsed.design, { catalogue: shop.catalogue, settings: shop.settings });
+    const report = evaluateDesign(parsed.design, {
+      catalogue: shop.catalogue,
+      settings: shop.settings,
+      tubePreference: shop.priceBook.tubePreference,
+    });
     const tubePrice = shop.catalogue.tubes.find((t) => t.id === report.tube.tubeId)?.pricePerMetreCents;
     if (tubePrice === undefined) {
       throw new AppError(

@@ -17,6 +17,8 @@ export const priceBookSchema = z.object({
   depositPercent: z.number().int().min(1).max(100),
   /** Working days from order to the promised date. */
   leadTimeWorkingDays: z.number().int().min(0).max(120),
+  /** When the customer leaves the tube to Yokeline: the cheapest or the lightest that passes every check. */
+  tubePreference: z.enum(["cheapest", "lightest"]).default("cheapest"),
 });
 export type PriceBook = z.infer<typeof priceBookSchema>;
 
@@ -31,6 +33,7 @@ export const defaultPriceBook: PriceBook = {
   shippingCents: 4800,
   depositPercent: 50,
   leadTimeWorkingDays: 5,
+  tubePreference: "cheapest",
 };
 
 export interface QuoteLine {

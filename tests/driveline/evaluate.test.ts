@@ -122,6 +122,18 @@ describe("evaluateDesign", () => {
     expectConsistent(r);
   });
 
+  it("a shop that prefers the cheapest tube gets the cheapest that passes, never a failing one", () => {
+    const { tube: _t, ends: _e, ...rest } = load("street-truck");
+    const lightest = evaluateDesign(rest as DesignFile);
+    const cheapest = evaluateDesign(rest as DesignFile, { tubePreference: "cheapest" });
+    const sel = cheapest.tubeSelection!;
+    expect(cheapest.tube.tubeId).toBe(sel.byCost.find((c) => c.status === "pass")!.tubeId);
+    expect(cheapest.tube.priceCents!).toBeLessThanOrEqual(lightest.tube.priceCents!);
+    expect(cheapest.tube.massKg).toBeGreaterThanOrEqual(lightest.tube.massKg);
+    expect(cheapest.checks.find((c) => c.id === "critical-speed")!.status).not.toBe("fail");
+    expectConsistent(cheapest);
+  });
+
   it("rankTubes rejects tubes too long for stock, too weak or too whippy, with the reason", () => {
     const sel = rankTubes({ spanMm: 2000, maxShaftRpm: 4000, peakShaftTorqueNm: 3000 });
     const reasons = sel.rejected.flatMap((t) => t.reasons).join("\n");

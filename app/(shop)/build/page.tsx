@@ -38,6 +38,7 @@ export default async function BuildPage({
         key={draft?.id ?? "new"}
         catalogue={shop.catalogue}
         settings={shop.settings}
+        tubePreference={shop.priceBook.tubePreference}
         initialDraft={draft}
         drafts={drafts}
       />

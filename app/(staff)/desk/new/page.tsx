@@ -56,6 +56,7 @@ export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/de
         key={draft?.id ?? "new"}
         catalogue={shop.catalogue}
         settings={shop.settings}
+        tubePreference={shop.priceBook.tubePreference}
         initialDraft={draft}
         drafts={drafts}
         customerId={customerId}

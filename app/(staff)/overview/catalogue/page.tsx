@@ -60,7 +60,7 @@ export default async function CataloguePage() {
           <h2 id="policy" className="text-lg font-semibold">
             Price book and payment policy
           </h2>
-          <dl className="grid grid-cols-2 gap-4 card p-5 text-sm md:grid-cols-4">
+          <dl className="grid grid-cols-2 gap-4 card p-5 text-sm md:grid-cols-3 xl:grid-cols-5">
             {[
               ["Labour per shaft", money(priceBook.labourPerShaftCents)],
               ["Balancing per shaft", money(priceBook.balancingPerShaftCents)],
@@ -73,6 +73,7 @@ export default async function CataloguePage() {
                 priceBook.depositPercent >= 100 ? "Full payment" : `${priceBook.depositPercent} % deposit`,
               ],
               ["Lead time", `${priceBook.leadTimeWorkingDays} working days`],
+              ["Tube Yokeline picks", `The ${priceBook.tubePreference} that passes every check`],
             ].map(([label, value]) => (
               <div key={label}>
                 <dt className="text-ink-muted">{label}</dt>

@@ -27,6 +27,7 @@ export const POST = route("public", async ({ req }) => {
   const report = evaluateDesign(parsed.design, {
     catalogue: shop.catalogue,
     settings: shop.settings,
+    tubePreference: shop.priceBook.tubePreference,
     curves,
   });
   return json(report);
