@@ -1,9 +1,9 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { Order, Payment } from "@/entities";
 import { flushQueuedEmails, queueEmail, type EmailLine } from "@/lib/mail";
+import { appUrl } from "@/lib/http/app-url";
 import { formatMoney } from "@/lib/pricing/price-book";
 
-const appUrl = () => process.env.APP_URL ?? process.env.BETTER_AUTH_URL ?? "http://127.0.0.1:3000";
 const longDate = (iso: string) =>
   new Date(`${iso}T12:00:00Z`).toLocaleDateString("en-US", {
     weekday: "long",

@@ -9,10 +9,9 @@ import { AppError } from "@/lib/http/errors";
 import { logger } from "@/lib/logger";
 import { payments } from "@/lib/payments/stripe";
 import type { PaymentEvent } from "@/lib/payments/port";
+import { appUrl } from "@/lib/http/app-url";
 import { formatMoney } from "@/lib/pricing/price-book";
 import { afterCommit, notifyBalanceDue, notifyPaymentReceived } from "./notify";
-
-const appUrl = () => process.env.APP_URL ?? process.env.BETTER_AUTH_URL ?? "http://127.0.0.1:3000";
 
 /** What is still owed for each kind of request, given what has been paid. */
 export function amountDue(order: Order, kind: Payment["kind"]): number {
@@ -117,15 +116,16 @@ function refreshPaymentState(order: Order): void {
 
 /** Records the event id first; a second delivery of the same event changes nothing. */
 async function firstDelivery(em: EntityManager, event: PaymentEvent): Promise<boolean> {
-  const rows = await em.getConnection().execute<{ id: string }[]>(
+  const rows = await em.getConnection().execute<{ inserted: boolean }[]>(
     `insert into webhook_event (id, type, payload, received_at, deliveries) values (?, ?, ?, now(), 1)
      on conflict (id) do update set deliveries = webhook_event.deliveries + 1
-     returning (xmax = 0) as inserted, id`,
+     returning (xmax = 0) as inserted`,
     [event.id, event.type === "other" ? event.providerType : event.type, JSON.stringify(event.raw)],
     "all",
     em.getTransactionContext(),
   );
-  return Boolean((rows[0] as unknown as { inserted: boolean } | undefined)?.inserted);
+  // xmax = 0 only on a freshly inserted row; an update means this event was seen before.
+  return rows[0]?.inserted === true;
 }
 
 export type ApplyOutcome = "applied" | "duplicate" | "ignored";
@@ -294,7 +294,7 @@ export async function refundPayment(
   });
 }
 
-/** Marks a webhook-known check: true when the event id was stored (for tests and diagnostics). */
+/** How many times an event id has been delivered (0 when never seen); for tests and diagnostics. */
 export async function webhookDeliveries(eventId: string): Promise<number> {
   const em = await getEm();
   return (await em.findOne(WebhookEvent, { id: eventId }))?.deliveries ?? 0;

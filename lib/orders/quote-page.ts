@@ -6,7 +6,7 @@ import { shaftView, type ShaftView } from "./queries";
 import { quoteDesigns } from "./place-order";
 import { getShopEngineering } from "@/lib/shop/config";
 import { AppError } from "@/lib/http/errors";
-import type { OrderQuote } from "@/lib/pricing/price-book";
+import { quoteOrder, type OrderQuote } from "@/lib/pricing/price-book";
 
 export interface QuotePageData {
   designIds: string[];
@@ -38,8 +38,15 @@ export async function quoteForDesigns(
     throw new AppError("not_found", "That design is not yours or no longer exists.");
   const shop = await getShopEngineering();
   const ordered = designIds.map((id) => designs.find((d) => d.id === id)!);
+  // Evaluate and price each shaft once; only the order totals differ between pickup and shipping.
   const pickup = quoteDesigns(ordered, shop, "pickup");
-  const ship = quoteDesigns(ordered, shop, "ship");
+  const ship = {
+    quote: quoteOrder(
+      pickup.shafts.map((s) => s.lines),
+      "ship",
+      shop.priceBook,
+    ),
+  };
   return {
     designIds,
     customer: { id: customer.id, name: customer.name, email: customer.email },
