@@ -4,7 +4,7 @@ import { colors, text } from "./email-layout";
 /** One line of an order as an e-mail shows it; amounts are already formatted (e.g. "$412.00"). */
 export interface EmailLine {
   description: string;
-  /** A second, smaller line, e.g. "1350 mm · 1350 series joints". */
+  /** A second, smaller line, e.g. "1350 mm · YL-X41 joints". */
   detail?: string;
   amount: string;
 }

@@ -2,7 +2,7 @@ import type { TemplateName, TemplateProps } from "@/lib/mail";
 
 const lines = [
   {
-    description: "Rear driveshaft, 1350 series",
+    description: "Rear driveshaft, YL-X41 joints",
     detail: "1,382 mm · 3.5 in × 0.083 in DOM tube",
     amount: "$612.00",
   },
@@ -13,7 +13,7 @@ const lines = [
 export const SAMPLE_PROPS: { [N in TemplateName]: TemplateProps[N] } = {
   "order-received": {
     orderNumber: "Y26-0042",
-    customerName: "Dana Ortiz",
+    customerName: "Marisol Ortiz",
     lines,
     subtotal: "$657.00",
     tax: "$52.56",
@@ -26,7 +26,7 @@ export const SAMPLE_PROPS: { [N in TemplateName]: TemplateProps[N] } = {
   },
   "payment-receipt": {
     orderNumber: "Y26-0042",
-    customerName: "Dana Ortiz",
+    customerName: "Marisol Ortiz",
     paymentLabel: "Deposit",
     amountPaid: "$354.78",
     paidOn: "2 December 2026",
@@ -38,7 +38,7 @@ export const SAMPLE_PROPS: { [N in TemplateName]: TemplateProps[N] } = {
   },
   "balance-due": {
     orderNumber: "Y26-0042",
-    customerName: "Dana Ortiz",
+    customerName: "Marisol Ortiz",
     balanceDue: "$354.78",
     total: "$709.56",
     paidSoFar: "$354.78",
@@ -49,7 +49,7 @@ export const SAMPLE_PROPS: { [N in TemplateName]: TemplateProps[N] } = {
   },
   "shaft-ready": {
     orderNumber: "Y26-0042",
-    customerName: "Dana Ortiz",
+    customerName: "Marisol Ortiz",
     fulfilment: "pickup",
     lines: lines.map((l) => ({ ...l, amount: "" })),
     balanceDue: "$354.78",
@@ -58,11 +58,11 @@ export const SAMPLE_PROPS: { [N in TemplateName]: TemplateProps[N] } = {
   },
   "shaft-shipped": {
     orderNumber: "Y26-0042",
-    customerName: "Dana Ortiz",
+    customerName: "Marisol Ortiz",
     carrier: "UPS Ground",
     trackingNumber: "1Z999AA10123456784",
     trackingUrl: "https://www.ups.com/track?tracknum=1Z999AA10123456784",
-    shipTo: "Dana Ortiz\n12 Mill Road\nSpringfield",
+    shipTo: "Marisol Ortiz\n12 Mill Road\nSpringfield",
     shippedOn: "20 December 2026",
     lines: lines.map((l) => ({ ...l, amount: "" })),
     orderUrl: "http://127.0.0.1:3000/orders/Y26-0042",

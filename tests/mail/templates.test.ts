@@ -35,7 +35,7 @@ describe("e-mail templates", () => {
 
   test("order-received lists the lines and the total", async () => {
     const email = await renderEmail("order-received", SAMPLE_PROPS["order-received"], shop);
-    expect(email.text).toContain("Rear driveshaft, 1350 series");
+    expect(email.text).toContain("Rear driveshaft, YL-X41 joints");
     expect(email.text).toContain("$709.56");
     expect(email.text).toContain("Thursday 24 December 2026");
   });
