@@ -1,7 +1,5 @@
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
-import http from "node:http";
-import { Readable } from "node:stream";
-import type { AddressInfo } from "node:net";
+import type http from "node:http";
 import { NextRequest } from "next/server";
 import { readBody, readJson, jsonDepth, JSON_BODY_LIMIT_BYTES, MAX_JSON_DEPTH } from "@/lib/http/body";
 import { AppError } from "@/lib/http/errors";
@@ -9,6 +7,7 @@ import { POST as evaluate } from "@/app/api/designs/evaluate/route";
 import { POST as webhook } from "@/app/api/payments/webhook/route";
 import { POST as authPost } from "@/app/api/auth/[...all]/route";
 import { POST as signIn } from "@/app/api/sign-in/route";
+import { chunkedPost, serve } from "./chunked-http";
 
 /** A body that never ends on its own; counts what the reader pulled. */
 function endlessBody(chunkBytes = 64 * 1024) {
@@ -92,65 +91,6 @@ describe("readJson", () => {
     expect(JSON_BODY_LIMIT_BYTES).toBe(1024 * 1024);
   });
 });
-
-/**
- * A real HTTP server in front of a route handler, as `next start` hands it the request: the Node
- * request stream becomes the Request's body, read only as the handler pulls it.
- */
-async function serve(handler: (req: NextRequest) => Promise<Response>) {
-  const server = http.createServer(async (req, res) => {
-    const request = new NextRequest(`http://127.0.0.1${req.url}`, {
-      method: req.method,
-      headers: req.headers as Record<string, string>,
-      body: Readable.toWeb(req) as ReadableStream<Uint8Array>,
-      duplex: "half",
-    } as RequestInit & { duplex: "half" });
-    const response = await handler(request);
-    res.writeHead(response.status, Object.fromEntries(response.headers));
-    res.end(Buffer.from(await response.arrayBuffer()));
-    // What the client still sends after the answer is not read (the connection is closed).
-    req.destroy();
-  });
-  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-  return { server, port: (server.address() as AddressInfo).port };
-}
-
-/**
- * Sends up to `totalBytes` in 64 kB chunks with Transfer-Encoding: chunked (no Content-Length),
- * and resolves with the answer and how much had been written when it came.
- */
-function chunkedPost(port: number, path: string, totalBytes: number, contentType = "application/json") {
-  return new Promise<{ status: number; body: string; writtenBytes: number }>((resolve, reject) => {
-    let written = 0;
-    let answered = false;
-    const req = http.request({
-      host: "127.0.0.1",
-      port,
-      path,
-      method: "POST",
-      headers: { "content-type": contentType },
-    });
-    req.on("response", (res) => {
-      answered = true;
-      const at = written;
-      let body = "";
-      res.setEncoding("utf8");
-      res.on("data", (c: string) => (body += c));
-      res.on("end", () => resolve({ status: res.statusCode ?? 0, body, writtenBytes: at }));
-    });
-    req.on("error", (error) => (answered ? undefined : reject(error)));
-    const chunk = Buffer.alloc(64 * 1024, 0x20);
-    const pump = () => {
-      while (!answered && written < totalBytes) {
-        written += chunk.length;
-        if (!req.write(chunk)) return void req.once("drain", pump);
-      }
-      if (!answered) req.end();
-    };
-    req.flushHeaders();
-    pump();
-  });
-}
 
 describe("chunked bodies over real HTTP are refused early with 413", () => {
   const servers: http.Server[] = [];
