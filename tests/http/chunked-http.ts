@@ -14,7 +14,7 @@ export async function serve(handler: (req: NextRequest) => Promise<Response>) {
       headers: req.headers as Record<string, string>,
       body: Readable.toWeb(req) as ReadableStream<Uint8Array>,
       duplex: "half",
-    } as RequestInit & { duplex: "half" });
+    } as ConstructorParameters<typeof NextRequest>[1]);
     const response = await handler(request);
     res.writeHead(response.status, Object.fromEntries(response.headers));
     res.end(Buffer.from(await response.arrayBuffer()));

@@ -50,7 +50,8 @@ beforeAll(async () => {
   }
 });
 
-type Handler = (req: NextRequest, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
+/** Any of the route handlers (each narrows its own params). */
+type Handler = (req: NextRequest, ctx: { params: Promise<never> }) => Promise<Response>;
 type Body =
   { json: string } | { form: Record<string, string> } | { multipart: Record<string, string> } | null;
 
@@ -354,7 +355,7 @@ describe("odd requests answer 4xx with the usual error shape, never 500", () => 
         Object.entries(c.params ?? {}).map(([k, v]) => [k, v === "ORDER" ? orderId : v]),
       );
       const res = await c.handler(request(c.method ?? "POST", c.path, c.body, cookie), {
-        params: Promise.resolve(params),
+        params: Promise.resolve(params) as Promise<never>,
       });
       expect(res.status).toBe(c.status);
       const body = (await res.json()) as {

@@ -14,7 +14,6 @@ import { CounterBuilder } from "./_components/counter-builder";
 
 export const metadata: Metadata = { title: "New phone order" };
 
-
 export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/desk/new">) {
   const user = await requirePermission("orders.desk", "/desk/new");
   const { customer: customerParam, draft: draftParam } = await searchParams;
