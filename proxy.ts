@@ -10,4 +10,13 @@ export function proxy(req: NextRequest) {
   return NextResponse.next({ request: { headers } });
 }
 
-export const config = { matcher: ["/((?!api/|_next/|favicon|.*\\.(?:svg|png|woff2)$).*)"] };
+export const config = {
+  matcher: [
+    {
+      source: "/((?!api/|_next/|favicon|.*\\.(?:svg|png|woff2)$).*)",
+      // Server actions skip the proxy: Next buffers a body the proxy sees, whatever its size, so
+      // an oversized one would be read to the end instead of being cut off at the 1 MB action limit.
+      missing: [{ type: "header", key: "next-action" }],
+    },
+  ],
+};

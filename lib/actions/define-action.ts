@@ -3,6 +3,7 @@ import type { ZodType } from "zod";
 import { AccessError, authorize, type CurrentUser } from "@/lib/auth/guard";
 import type { Permission } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/http/errors";
+import { knownError } from "@/lib/http/known-errors";
 import { logger } from "@/lib/logger";
 import { zodIssues } from "@/lib/validation";
 
@@ -42,8 +43,10 @@ export function defineAction<I, O>(
           error: { code: error.status === 401 ? "unauthenticated" : "forbidden", message: error.message },
         };
       }
-      if (error instanceof AppError) {
-        return { ok: false, error: { code: error.code, message: error.message, fields: error.fields } };
+      // An unknown id (a record gone, or not an id at all) is not_found, never internal.
+      const known = error instanceof AppError ? error : knownError(error);
+      if (known) {
+        return { ok: false, error: { code: known.code, message: known.message, fields: known.fields } };
       }
       logger.error({ err: error }, "unhandled error in server action");
       return { ok: false, error: { code: "internal", message: "Something went wrong on our side." } };

@@ -11,7 +11,36 @@ const POSITIVE = "must be a positive number";
 const NUMBER = "must be a number";
 
 const positive = () => z.number({ error: POSITIVE }).positive({ error: POSITIVE });
-const optionalPositive = () => positive().nullish();
+
+/**
+ * Largest values the core accepts: well past any real driveshaft, so a typo or a hostile 1e308
+ * is a field error rather than an Infinity in the results and prices. Each is named in its message.
+ */
+export const PHYSICAL_MAX = {
+  lengthMm: 10_000,
+  tubeOdMm: 1_000,
+  tubeWallMm: 100,
+  elasticModulusGPa: 1_500,
+  densityKgM3: 25_000,
+  shearYieldMPa: 10_000,
+  jointCentreMm: 50_000,
+  torqueNm: 100_000,
+  ratio: 100,
+  shaftRpm: 50_000,
+  topSpeedKmh: 1_000,
+  tireDiameterMm: 5_000,
+  engineRpm: 50_000,
+  /** The coarsest balance grade of ISO 1940-1 (G 4000). */
+  balanceGradeMmS: 4_000,
+  slipMm: 5_000,
+} as const;
+
+/** A positive number at most `max` (`unit` is shown in the message, e.g. "mm"). */
+const bounded = (max: number, unit: string) => {
+  const tooBig = `must be at most ${max}${unit ? ` ${unit}` : ""}`;
+  return positive().max(max, { error: tooBig });
+};
+const optionalBounded = (max: number, unit: string) => bounded(max, unit).nullish();
 const angleDeg = (maxAbs: number) =>
   z
     .number({ error: `must be an angle in degrees between −${maxAbs} and ${maxAbs}` })
@@ -29,16 +58,19 @@ const shaftAnglesSchema = object({
   horizontalDeg: angleDeg(MAX_PROJECTED_ANGLE_DEG),
 });
 
-const pointSchema = object({
-  x: z.number({ error: NUMBER }),
-  y: z.number({ error: NUMBER }),
-  z: z.number({ error: NUMBER }),
-});
+const coordinate = () => {
+  const m = `must be a number between −${PHYSICAL_MAX.jointCentreMm} and ${PHYSICAL_MAX.jointCentreMm} mm`;
+  return z
+    .number({ error: NUMBER })
+    .min(-PHYSICAL_MAX.jointCentreMm, { error: m })
+    .max(PHYSICAL_MAX.jointCentreMm, { error: m });
+};
+const pointSchema = object({ x: coordinate(), y: coordinate(), z: coordinate() });
 
 const tubeSchema = object({
   materialId: id(),
-  odMm: positive(),
-  wallMm: positive(),
+  odMm: bounded(PHYSICAL_MAX.tubeOdMm, "mm"),
+  wallMm: bounded(PHYSICAL_MAX.tubeWallMm, "mm"),
 }).check((ctx) => {
   const t = ctx.value;
   if (t.wallMm * 2 >= t.odMm) {
@@ -52,35 +84,35 @@ const tubeSchema = object({
 });
 
 const materialSchema = object({
-  elasticModulusGPa: optionalPositive(),
-  densityKgM3: optionalPositive(),
-  shearYieldMPa: optionalPositive(),
+  elasticModulusGPa: optionalBounded(PHYSICAL_MAX.elasticModulusGPa, "GPa"),
+  densityKgM3: optionalBounded(PHYSICAL_MAX.densityKgM3, "kg/m³"),
+  shearYieldMPa: optionalBounded(PHYSICAL_MAX.shearYieldMPa, "MPa"),
 });
 
 const endSchema = object({ fittingId: id() });
 
+const nonNegativeMm = () =>
+  z
+    .number({ error: "must be a number ≥ 0" })
+    .min(0, { error: "must be a number ≥ 0" })
+    .max(PHYSICAL_MAX.slipMm, { error: `must be at most ${PHYSICAL_MAX.slipMm} mm` });
+
 /** Slip-joint data: lengths joint centre to joint centre, mm. */
 const slipSchema = object({
   /** Installed length with the slip fully collapsed. */
-  collapsedLengthMm: positive(),
+  collapsedLengthMm: bounded(PHYSICAL_MAX.lengthMm, "mm"),
   /** Total spline travel from fully collapsed to fully out. */
-  travelMm: positive(),
+  travelMm: bounded(PHYSICAL_MAX.slipMm, "mm"),
   /** Lengthening from ride height at full suspension droop (default 0). */
-  droopExtensionMm: z
-    .number({ error: "must be a number ≥ 0" })
-    .min(0, { error: "must be a number ≥ 0" })
-    .nullish(),
+  droopExtensionMm: nonNegativeMm().nullish(),
   /** Shortening from ride height at full bump (default 0). */
-  bumpCompressionMm: z
-    .number({ error: "must be a number ≥ 0" })
-    .min(0, { error: "must be a number ≥ 0" })
-    .nullish(),
+  bumpCompressionMm: nonNegativeMm().nullish(),
 });
 
 /** The design file (contract: /shared/spec/design-file.md). Unknown fields are ignored. */
 export const designFileSchema = object({
-  name: z.string({ error: "must be text" }).nullish(),
-  lengthMm: positive(),
+  name: z.string({ error: "must be text" }).max(200, { error: "must be at most 200 characters" }).nullish(),
+  lengthMm: bounded(PHYSICAL_MAX.lengthMm, "mm"),
   tube: tubeSchema.nullish(),
   material: materialSchema.nullish(),
   geometry: object({
@@ -92,20 +124,20 @@ export const designFileSchema = object({
     rearJointCentreMm: pointSchema.nullish(),
   }),
   torque: object({
-    engineTorqueNm: positive(),
-    firstGearRatio: optionalPositive(),
-    transferCaseLowRatio: optionalPositive(),
-    converterStallRatio: optionalPositive(),
+    engineTorqueNm: bounded(PHYSICAL_MAX.torqueNm, "N·m"),
+    firstGearRatio: optionalBounded(PHYSICAL_MAX.ratio, ""),
+    transferCaseLowRatio: optionalBounded(PHYSICAL_MAX.ratio, ""),
+    converterStallRatio: optionalBounded(PHYSICAL_MAX.ratio, ""),
   }),
   speed: object({
-    maxShaftRpm: optionalPositive(),
-    topSpeedKmh: optionalPositive(),
-    axleRatio: optionalPositive(),
-    tireDiameterMm: optionalPositive(),
-    maxEngineRpm: optionalPositive(),
-    topGearRatio: optionalPositive(),
+    maxShaftRpm: optionalBounded(PHYSICAL_MAX.shaftRpm, "rpm"),
+    topSpeedKmh: optionalBounded(PHYSICAL_MAX.topSpeedKmh, "km/h"),
+    axleRatio: optionalBounded(PHYSICAL_MAX.ratio, ""),
+    tireDiameterMm: optionalBounded(PHYSICAL_MAX.tireDiameterMm, "mm"),
+    maxEngineRpm: optionalBounded(PHYSICAL_MAX.engineRpm, "rpm"),
+    topGearRatio: optionalBounded(PHYSICAL_MAX.ratio, ""),
   }),
-  balanceGradeMmS: optionalPositive(),
+  balanceGradeMmS: optionalBounded(PHYSICAL_MAX.balanceGradeMmS, "mm/s"),
   ends: object({ front: endSchema.nullish(), rear: endSchema.nullish() }).nullish(),
   slip: slipSchema.nullish(),
   /** As-built (or planned) index of the rear yoke, deg in (−90, 90]; absent: the best index. */

@@ -6,6 +6,8 @@ import type { Permission } from "@/lib/auth/permissions";
 import { logger } from "@/lib/logger";
 import { AppError, STATUS_OF, type ErrorBody } from "./errors";
 import { zodIssues } from "@/lib/validation";
+import { JSON_BODY_LIMIT_BYTES, readJson } from "./body";
+import { knownError } from "./known-errors";
 
 type Access = { permission: Permission } | { permission: null } | "public";
 
@@ -52,13 +54,16 @@ export function errorResponse(error: unknown): Response {
       {
         error: {
           code: "invalid",
-          message: issues.map((i) => `${i.path}: ${i.message}`).join("\n"),
-          fields: Object.fromEntries(issues.map((i) => [i.path, i.message])),
+          message: issues.map((i) => `${i.path || "body"}: ${i.message}`).join("\n"),
+          // An issue on the whole body (not an object at all) is reported on "body".
+          fields: Object.fromEntries(issues.map((i) => [i.path || "body", i.message])),
         },
       },
       422,
     );
   }
+  const known = knownError(error);
+  if (known) return errorResponse(known);
   if (isUniqueViolation(error)) {
     return json<ErrorBody>({ error: { code: "conflict", message: "That already exists." } }, 409);
   }
@@ -74,13 +79,14 @@ export function json<T>(body: T, status = 200, headers?: HeadersInit): Response 
   return NextResponse.json(body, { status, headers });
 }
 
-/** Parses a JSON body with a schema; a body that is not JSON is a 422 too. */
-export async function parseJson<T>(req: Request, schema: ZodType<T>): Promise<T> {
-  let body: unknown;
-  try {
-    body = await req.json();
-  } catch {
-    throw new AppError("invalid", "The request body is not valid JSON.");
-  }
-  return schema.parse(body);
+/**
+ * Parses a JSON body with a schema. The body is read capped (413 past `limitBytes`, about 1 MB);
+ * a form, text that is not JSON or JSON nested too deeply is a 422 too.
+ */
+export async function parseJson<T>(
+  req: Request,
+  schema: ZodType<T>,
+  limitBytes = JSON_BODY_LIMIT_BYTES,
+): Promise<T> {
+  return schema.parse(await readJson(req, limitBytes));
 }

@@ -7,6 +7,8 @@ export {
   toUploadView,
   mayAttachFiles,
   inlineDisposition,
+  attachmentDisposition,
   type IncomingFile,
 } from "./uploads";
 export * from "./rules";
+export { assertRoomForUpload } from "./limits";

@@ -35,3 +35,16 @@ export function formatBytes(bytes: number): string {
   if (bytes < 1024 * 1024) return `${(bytes / 1024).toFixed(0)} KB`;
   return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
 }
+
+/** Most files one order can carry (photos of each end, measurement sheets, a few spares). */
+export const MAX_FILES_PER_ORDER = 20;
+/** Most files attached to one customer's orders in 24 hours (keeps a runaway script off the disk). */
+export const MAX_FILES_PER_CUSTOMER_PER_DAY = 30;
+export const ORDER_FILES_LIMIT_MESSAGE = `An order can have at most ${MAX_FILES_PER_ORDER} files attached.`;
+export const DAILY_FILES_LIMIT_MESSAGE = `At most ${MAX_FILES_PER_CUSTOMER_PER_DAY} files a day can be attached to one customer's orders; try again tomorrow.`;
+
+/**
+ * Served with every attached file: a document of its own, sandboxed (no scripts, no forms, an
+ * opaque origin), that may show only itself — an image still displays inline.
+ */
+export const FILE_CSP = "sandbox; default-src 'none'; img-src 'self'; style-src 'unsafe-inline'";

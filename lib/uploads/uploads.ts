@@ -16,6 +16,7 @@ import {
   UPLOAD_TYPE_MESSAGE,
   type UploadView,
 } from "./rules";
+import { assertRoomForUpload } from "./limits";
 
 export interface IncomingFile {
   /** The name on the uploader's machine; only shown, never used as a path. */
@@ -56,7 +57,8 @@ export function toUploadView(upload: Upload): UploadView {
 /**
  * Attaches a photo or measurement sheet to an order the caller may already see (load it with
  * loadOrderForUser). Checks size (413) and the sniffed type (422 on "file"), stores the bytes
- * under a fresh key, then writes the Upload row, a timeline event and an audit entry together.
+ * under a fresh key, then — after the file limits (409/429), under a lock — writes the Upload row,
+ * a timeline event and an audit entry together.
  */
 export async function saveOrderUpload(
   em: EntityManager,
@@ -83,6 +85,7 @@ export async function saveOrderUpload(
   await storage.put(storageKey, file.bytes, contentType);
   try {
     const upload = await em.transactional(async (tx) => {
+      await assertRoomForUpload(tx, order, { lock: true });
       const row = tx.create(Upload, {
         order: tx.getReference(Order, order.id),
         uploadedBy: tx.getReference(User, user.id),
@@ -148,10 +151,19 @@ export function mayAttachFiles(user: CurrentUser): boolean {
 
 /** `Content-Disposition` for showing a file in the browser under its original name (RFC 6266 / 5987). */
 export function inlineDisposition(filename: string): string {
+  return disposition("inline", filename);
+}
+
+/** `Content-Disposition` for downloading a file under its original name (RFC 6266 / 5987). */
+export function attachmentDisposition(filename: string): string {
+  return disposition("attachment", filename);
+}
+
+function disposition(kind: "inline" | "attachment", filename: string): string {
   const ascii = filename.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
   const encoded = encodeURIComponent(filename).replace(
     /['()*]/g,
     (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`,
   );
-  return `inline; filename="${ascii}"; filename*=UTF-8''${encoded}`;
+  return `${kind}; filename="${ascii}"; filename*=UTF-8''${encoded}`;
 }

@@ -137,6 +137,10 @@ describe("order files", () => {
       expect(file.status).toBe(200);
       expect(file.headers.get("content-type")).toBe("image/png");
       expect(file.headers.get("x-content-type-options")).toBe("nosniff");
+      // Opened on its own the photo is a sandboxed document that can only show itself.
+      expect(file.headers.get("content-security-policy")).toBe(
+        "sandbox; default-src 'none'; img-src 'self'; style-src 'unsafe-inline'",
+      );
       expect(file.headers.get("cache-control")).toMatch(/^private/);
       expect(file.headers.get("content-disposition")).toBe(
         `inline; filename="propshaft photo.png"; filename*=UTF-8''propshaft%20photo.png`,
@@ -145,14 +149,18 @@ describe("order files", () => {
     },
   );
 
-  dbTest("a PDF measurement sheet is accepted and served as application/pdf", async () => {
+  dbTest("a PDF measurement sheet is accepted and served as an application/pdf download", async () => {
     const res = await upload(aliceOrder.id, alice.cookie, new Blob([PDF], { type: "image/png" }), "Maße.pdf");
     expect(res.status).toBe(201);
     const { data } = (await res.json()) as { data: { id: string; contentType: string; kind: string } };
     expect(data).toMatchObject({ contentType: "application/pdf", kind: "pdf" });
     const file = await download(data.id, alice.cookie);
     expect(file.headers.get("content-type")).toBe("application/pdf");
-    expect(file.headers.get("content-disposition")).toContain("filename*=UTF-8''Ma%C3%9Fe.pdf");
+    // PDFs are downloaded rather than shown, and sandboxed should a browser show them anyway.
+    expect(file.headers.get("content-disposition")).toBe(
+      `attachment; filename="Ma_e.pdf"; filename*=UTF-8''Ma%C3%9Fe.pdf`,
+    );
+    expect(file.headers.get("content-security-policy")).toMatch(/^sandbox; default-src 'none'/);
   });
 
   dbTest(

@@ -4,11 +4,18 @@ import { signInBodySchema } from "@/lib/auth/schemas";
 import { ROLE_HOME } from "@/lib/auth/permissions";
 import { isRole } from "@/lib/auth/roles";
 import { safeNextPath } from "@/lib/http/safe-next";
+import { FORM_BODY_LIMIT_BYTES, readForm } from "@/lib/http/body";
+import { errorResponse } from "@/lib/http/route";
 
 // POST /api/sign-in — the sign-in form's own submission (works without JavaScript). It goes
 // through the auth library's handler, so its checks and rate limit apply, then redirects.
 export async function POST(req: NextRequest) {
-  const form = await req.formData();
+  let form: FormData;
+  try {
+    form = await readForm(req, FORM_BODY_LIMIT_BYTES);
+  } catch (error) {
+    return errorResponse(error);
+  }
   const next = safeNextPath(form.get("next"));
   const back = (error: string) => {
     const query = new URLSearchParams({ error });

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { isUuid } from "@/lib/http/known-errors";
 import { requirePermission } from "@/lib/auth/guard";
 import { quoteForDesigns } from "@/lib/orders/quote-page";
 import { AppError } from "@/lib/http/errors";
@@ -12,9 +13,7 @@ export const metadata: Metadata = { title: "Your quote" };
 export default async function QuotePage({ searchParams }: PageProps<"/orders/new">) {
   const user = await requirePermission("orders.own", "/orders/new");
   const { design } = await searchParams;
-  const designIds = (Array.isArray(design) ? design : design ? [design] : []).filter((id) =>
-    /^[0-9a-f-]{36}$/i.test(id),
-  );
+  const designIds = (Array.isArray(design) ? design : design ? [design] : []).filter(isUuid);
   if (designIds.length === 0) notFound();
   const data = await quoteForDesigns(user, designIds).catch((e: unknown) => {
     if (e instanceof AppError && e.code === "not_found") notFound();

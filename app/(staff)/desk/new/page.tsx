@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { isUuid } from "@/lib/http/known-errors";
 import { requirePermission } from "@/lib/auth/guard";
 import { getEm } from "@/lib/db/orm";
 import { Customer } from "@/entities";
@@ -13,12 +14,10 @@ import { CounterBuilder } from "./_components/counter-builder";
 
 export const metadata: Metadata = { title: "New phone order" };
 
-const UUID = /^[0-9a-f-]{36}$/i;
-
 export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/desk/new">) {
   const user = await requirePermission("orders.desk", "/desk/new");
   const { customer: customerParam, draft: draftParam } = await searchParams;
-  const customerId = typeof customerParam === "string" && UUID.test(customerParam) ? customerParam : null;
+  const customerId = isUuid(customerParam) ? customerParam : null;
 
   if (!customerId) {
     return (

@@ -1,4 +1,5 @@
 import { parseDesign, evaluateDesign } from "@/lib/driveline";
+import { readJson } from "@/lib/http/body";
 import { json, route } from "@/lib/http/route";
 import { AppError } from "@/lib/http/errors";
 import { getShopEngineering } from "@/lib/shop/config";
@@ -6,12 +7,7 @@ import { evaluateDesignBodySchema } from "@/lib/designs/schemas";
 
 // POST /api/designs/evaluate — evaluate a design file with the shop's catalogue and limits
 export const POST = route("public", async ({ req }) => {
-  let body: unknown;
-  try {
-    body = await req.json();
-  } catch {
-    throw new AppError("invalid", "The request body is not valid JSON.");
-  }
+  const body = await readJson(req);
   const { design: input, curves } = evaluateDesignBodySchema.parse(
     body && typeof body === "object" && "design" in body ? body : { design: body },
   );

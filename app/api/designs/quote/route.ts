@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { parseDesign } from "@/lib/driveline";
+import { AppError, fieldsFromIssues } from "@/lib/http/errors";
 import { json, parseJson, route } from "@/lib/http/route";
 import { quoteDesigns } from "@/lib/orders/place-order";
 import { getShopEngineering } from "@/lib/shop/config";
@@ -12,6 +14,15 @@ const quoteDesignBodySchema = z.object({
 export const POST = route("public", async ({ req }) => {
   const { design, fulfilment } = await parseJson(req, quoteDesignBodySchema);
   const shop = await getShopEngineering();
+  // Checked here first so each bad field is named (design.lengthMm: must be at most …).
+  const parsed = parseDesign(design, { catalogue: shop.catalogue });
+  if (!parsed.ok) {
+    throw new AppError(
+      "invalid",
+      parsed.issues.map((i) => i.message).join("\n"),
+      fieldsFromIssues(parsed.issues.map((i) => ({ path: `design.${i.path}`, message: i.message }))),
+    );
+  }
   const { shafts, quote } = quoteDesigns(
     [{ name: String(design.name ?? "Shaft"), design }],
     shop,

@@ -4,7 +4,7 @@ import { route } from "@/lib/http/route";
 import { logger } from "@/lib/logger";
 import { loadOrderForUser } from "@/lib/orders/access";
 import { getStorage } from "@/lib/storage";
-import { findUpload, inlineDisposition } from "@/lib/uploads";
+import { attachmentDisposition, FILE_CSP, findUpload, inlineDisposition } from "@/lib/uploads";
 
 // GET /api/files/[id] — the bytes of an attached file, only to those who may see its order (others 404)
 export const GET = route<{ id: string }>({ permission: null }, async ({ params, user }) => {
@@ -28,7 +28,14 @@ export const GET = route<{ id: string }>({ permission: null }, async ({ params, 
       // The type we sniffed when it was uploaded, never the browser's.
       "Content-Type": upload.contentType,
       "Content-Length": String(stored.sizeBytes),
-      "Content-Disposition": inlineDisposition(upload.filename),
+      // Photos show inline; PDFs (which can carry scripts and forms) are downloaded, since
+      // Chromium's viewer will not run in a sandboxed document.
+      "Content-Disposition":
+        upload.contentType === "application/pdf"
+          ? attachmentDisposition(upload.filename)
+          : inlineDisposition(upload.filename),
+      // Opened directly, the file is its own sandboxed document: no scripts, no same-origin access.
+      "Content-Security-Policy": FILE_CSP,
       "X-Content-Type-Options": "nosniff",
       "Cache-Control": "private, max-age=300",
     },

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { isUuid } from "@/lib/http/known-errors";
 import { requirePermission } from "@/lib/auth/guard";
 import { quoteForDesigns } from "@/lib/orders/quote-page";
 import { AppError } from "@/lib/http/errors";
@@ -12,10 +13,8 @@ export const metadata: Metadata = { title: "Phone order quote" };
 export default async function CounterQuotePage({ searchParams }: PageProps<"/desk/new/quote">) {
   const user = await requirePermission("orders.desk", "/desk/new/quote");
   const { design, customer } = await searchParams;
-  const designIds = (Array.isArray(design) ? design : design ? [design] : []).filter((id) =>
-    /^[0-9a-f-]{36}$/i.test(id),
-  );
-  if (designIds.length === 0 || typeof customer !== "string") notFound();
+  const designIds = (Array.isArray(design) ? design : design ? [design] : []).filter(isUuid);
+  if (designIds.length === 0 || !isUuid(customer)) notFound();
   const data = await quoteForDesigns(user, designIds, customer).catch((e: unknown) => {
     if (e instanceof AppError && e.code === "not_found") notFound();
     throw e;

@@ -1,8 +1,10 @@
 import { getEm } from "@/lib/db/orm";
+import { readForm } from "@/lib/http/body";
 import { AppError } from "@/lib/http/errors";
 import { json, route } from "@/lib/http/route";
 import { loadOrderForUser } from "@/lib/orders/access";
 import {
+  assertRoomForUpload,
   listOrderUploads,
   mayAttachFiles,
   MAX_UPLOAD_BYTES,
@@ -12,6 +14,7 @@ import {
 
 /** Room for the multipart envelope around a file of the largest allowed size. */
 const MAX_BODY_BYTES = MAX_UPLOAD_BYTES + 64 * 1024;
+const SEND_AS_FORM = "Send the file as multipart/form-data in the field “file”.";
 
 // GET /api/orders/[id]/files — the files attached to an order the caller may see
 export const GET = route<{ id: string }>({ permission: null }, async ({ params, user }) => {
@@ -30,15 +33,15 @@ export const POST = route<{ id: string }>({ permission: null }, async ({ req, pa
   const order = await loadOrderForUser(em, user!, params.id);
   if (!mayAttachFiles(user!))
     throw new AppError("forbidden", "Only the customer and the counter can attach files to an order.");
+  // Refuse before reading megabytes; saveOrderUpload checks again under a lock.
+  await assertRoomForUpload(em, order);
 
-  let form: FormData;
-  try {
-    form = await req.formData();
-  } catch {
-    throw new AppError("invalid", "Send the file as multipart/form-data in the field “file”.", {
-      file: "Choose a file to attach.",
-    });
-  }
+  // Read with the cap while streaming (a chunked body has no length to check up front).
+  const form = await readForm(req, MAX_BODY_BYTES, {
+    field: "file",
+    message: SEND_AS_FORM,
+    sizeMessage: UPLOAD_SIZE_MESSAGE,
+  });
   const file = form.get("file");
   if (!(file instanceof Blob))
     throw new AppError("invalid", "Choose a file to attach.", { file: "Choose a file to attach." });

@@ -1,0 +1,158 @@
+import { AppError } from "./errors";
+
+/** JSON endpoints: a design file with its application text is a few kB; 1 MB is ample. */
+export const JSON_BODY_LIMIT_BYTES = 1024 * 1024;
+/** Small forms and the auth library's JSON (e-mail, password, name). */
+export const FORM_BODY_LIMIT_BYTES = 16 * 1024;
+/** Payment provider events are a few kB each. */
+export const WEBHOOK_BODY_LIMIT_BYTES = 256 * 1024;
+/** Deeper JSON than this is refused before parsing (no design file nests more than 4 levels). */
+export const MAX_JSON_DEPTH = 32;
+
+function formatLimit(bytes: number): string {
+  return bytes >= 1024 * 1024 ? `${bytes / (1024 * 1024)} MB` : `${Math.round(bytes / 1024)} kB`;
+}
+
+function tooLarge(limitBytes: number, field: string, message?: string): AppError {
+  const text = message ?? `The request body is larger than ${formatLimit(limitBytes)}.`;
+  return new AppError("too_large", text, { [field]: text });
+}
+
+/**
+ * Reads a request body counting bytes as they arrive and cancels the stream once it passes
+ * `limitBytes` (413), so a body without a length (chunked) is refused early, never buffered whole.
+ * A declared Content-Length over the limit is refused before reading anything.
+ */
+export async function readBody(
+  req: Request,
+  limitBytes: number,
+  options: { field?: string; message?: string } = {},
+): Promise<Uint8Array<ArrayBuffer>> {
+  const field = options.field ?? "body";
+  const declared = Number(req.headers.get("content-length") ?? "");
+  if (Number.isFinite(declared) && declared > limitBytes) throw tooLarge(limitBytes, field, options.message);
+  if (!req.body) return new Uint8Array(0);
+  const reader = req.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let total = 0;
+  try {
+    for (;;) {
+      const { done, value } = await reader.read();
+      if (done) break;
+      total += value.byteLength;
+      if (total > limitBytes) {
+        await reader.cancel().catch(() => undefined);
+        throw tooLarge(limitBytes, field, options.message);
+      }
+      chunks.push(value);
+    }
+  } catch (error) {
+    if (error instanceof AppError) throw error;
+    throw new AppError("invalid", "The request body could not be read.", {
+      [field]: "The request body could not be read.",
+    });
+  } finally {
+    reader.releaseLock();
+  }
+  const bytes = new Uint8Array(total);
+  let at = 0;
+  for (const chunk of chunks) {
+    bytes.set(chunk, at);
+    at += chunk.byteLength;
+  }
+  return bytes;
+}
+
+/** The body as UTF-8 text, capped like readBody. */
+export async function readText(req: Request, limitBytes: number): Promise<string> {
+  return new TextDecoder().decode(await readBody(req, limitBytes));
+}
+
+/** How deeply a JSON text nests arrays and objects (strings skipped); a linear scan, no recursion. */
+export function jsonDepth(text: string): number {
+  let depth = 0;
+  let max = 0;
+  let inString = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (inString) {
+      if (c === 0x5c)
+        i++; // backslash: skip the escaped character
+      else if (c === 0x22) inString = false;
+    } else if (c === 0x22) inString = true;
+    else if (c === 0x5b || c === 0x7b) max = Math.max(max, ++depth);
+    else if (c === 0x5d || c === 0x7d) depth--;
+  }
+  return max;
+}
+
+const FORM_TYPES = /^\s*(application\/x-www-form-urlencoded|multipart\/form-data)\b/i;
+
+/**
+ * Reads a JSON body capped at `limitBytes` (413) and `MAX_JSON_DEPTH` levels; a form, text that is
+ * not JSON or JSON nested too deeply is a 422 on the field "body".
+ */
+export async function readJson(req: Request, limitBytes = JSON_BODY_LIMIT_BYTES): Promise<unknown> {
+  const invalid = (message: string) => new AppError("invalid", message, { body: message });
+  if (FORM_TYPES.test(req.headers.get("content-type") ?? "")) {
+    await req.body?.cancel().catch(() => undefined);
+    throw invalid("Send the body as JSON (application/json), not as a form.");
+  }
+  const text = await readText(req, limitBytes);
+  if (jsonDepth(text) > MAX_JSON_DEPTH)
+    throw invalid(`The request body nests more than ${MAX_JSON_DEPTH} levels deep.`);
+  try {
+    return JSON.parse(text) as unknown;
+  } catch {
+    throw invalid("The request body is not valid JSON.");
+  }
+}
+
+/**
+ * Reads a form (urlencoded or multipart) capped at `limitBytes`; anything else — JSON where a
+ * form is expected, a broken multipart envelope — is a 422 on `field`.
+ */
+export async function readForm(
+  req: Request,
+  limitBytes: number,
+  options: { field?: string; message?: string; sizeMessage?: string } = {},
+): Promise<FormData> {
+  const field = options.field ?? "body";
+  const message = options.message ?? "Send the body as a form (multipart/form-data or urlencoded).";
+  const contentType = req.headers.get("content-type") ?? "";
+  if (!FORM_TYPES.test(contentType)) {
+    await req.body?.cancel().catch(() => undefined);
+    throw new AppError("invalid", message, { [field]: message });
+  }
+  const bytes = await readBody(req, limitBytes, { field, message: options.sizeMessage });
+  try {
+    return await new Response(bytes, { headers: { "content-type": contentType } }).formData();
+  } catch {
+    throw new AppError("invalid", message, { [field]: message });
+  }
+}
+
+/**
+ * Wraps a handler that reads the body itself (the auth library's): the body is read with the cap
+ * first and handed on as a fresh request, so an oversized one never reaches it.
+ */
+export function withBodyLimit<A extends unknown[]>(
+  limitBytes: number,
+  handler: (req: Request, ...rest: A) => Promise<Response>,
+  onError: (error: unknown) => Response,
+): (req: Request, ...rest: A) => Promise<Response> {
+  return async (req, ...rest) => {
+    let bytes: Uint8Array<ArrayBuffer>;
+    try {
+      bytes = await readBody(req, limitBytes);
+    } catch (error) {
+      return onError(error);
+    }
+    const headers = new Headers(req.headers);
+    headers.delete("transfer-encoding");
+    headers.set("content-length", String(bytes.byteLength));
+    const init: RequestInit = { method: req.method, headers, signal: req.signal };
+    if (req.method !== "GET" && req.method !== "HEAD") init.body = bytes;
+    return handler(new Request(req.url, init), ...rest);
+  };
+}

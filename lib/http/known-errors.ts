@@ -1,0 +1,22 @@
+import { NotFoundError } from "@mikro-orm/core";
+import { AppError } from "./errors";
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** Whether `value` is a well-formed UUID (what every id in Yokeline is). */
+export function isUuid(value: unknown): value is string {
+  return typeof value === "string" && UUID.test(value);
+}
+
+/**
+ * Errors that come from a request the caller got wrong, not from a fault of ours, as the AppError
+ * they should be answered with: a record that is not there (MikroORM's findOneOrFail) or an id
+ * PostgreSQL cannot read (22P02) is not_found; a number out of a column's range (22003) invalid.
+ */
+export function knownError(error: unknown): AppError | null {
+  if (error instanceof NotFoundError) return new AppError("not_found", "No such record.");
+  const code = typeof error === "object" && error !== null ? (error as { code?: unknown }).code : undefined;
+  if (code === "22P02") return new AppError("not_found", "No such record.");
+  if (code === "22003") return new AppError("invalid", "A number is out of range.");
+  return null;
+}
