@@ -21,6 +21,7 @@ export const STATUS_OF: Record<ErrorCode, number> = {
   too_large: 413,
   invalid: 422,
   rate_limited: 429,
+  unavailable: 503,
 };
 
 export interface ErrorBody {
