@@ -62,10 +62,10 @@ describe("the app recovers when the database comes back", () => {
     async () => {
       const { getEm } = await import("@/lib/db/orm");
       const { GET } = await import("@/app/api/health/route");
-    // better-auth's own pool (lib/auth/server.ts) must come back too.
-    await import("@/lib/auth/server");
-    const authPool = (globalThis as { yokelineAuthPool?: import("pg").Pool }).yokelineAuthPool!;
-    await expect(authPool.query("select 1")).rejects.toThrow(/ECONNREFUSED/);
+      // better-auth's own pool (lib/auth/server.ts) must come back too.
+      await import("@/lib/auth/server");
+      const authPool = (globalThis as { yokelineAuthPool?: import("pg").Pool }).yokelineAuthPool!;
+      await expect(authPool.query("select 1")).rejects.toThrow(/ECONNREFUSED/);
 
       await expect(getEm()).rejects.toMatchObject({
         code: "unavailable",
@@ -81,13 +81,14 @@ describe("the app recovers when the database comes back", () => {
       const up = await GET();
       expect(up.status).toBe(200);
       expect(await up.json()).toMatchObject({ status: "ok", database: { ok: true } });
-    expect((await authPool.query("select 1 as one")).rows).toEqual([{ one: 1 }]);
+      expect((await authPool.query("select 1 as one")).rows).toEqual([{ one: 1 }]);
 
       // Down again after a good start: health says so, and recovers by itself.
       await pg("pg_down", path.join(dir, "pg"));
       expect((await GET()).status).toBe(503);
       await pg("pg_up", path.join(dir, "pg"), String(port), password, "app", "throwaway");
       expect((await GET()).status).toBe(200);
+      expect((await authPool.query("select 2 as two")).rows).toEqual([{ two: 2 }]);
     },
   );
 });
