@@ -10,7 +10,14 @@ export class AppError extends Error {
 }
 
 export type ErrorCode =
-  "unauthenticated" | "forbidden" | "not_found" | "conflict" | "invalid" | "too_large" | "rate_limited";
+  | "unauthenticated"
+  | "forbidden"
+  | "not_found"
+  | "conflict"
+  | "invalid"
+  | "too_large"
+  | "rate_limited"
+  | "unavailable";
 
 /** The one map from error code to HTTP status. */
 export const STATUS_OF: Record<ErrorCode, number> = {

@@ -93,7 +93,7 @@ describe("the server's start-up hook", () => {
           NEXT_RUNTIME: "nodejs",
           YOKELINE_JOBS: "0",
           ...env,
-        },
+        } as NodeJS.ProcessEnv,
       },
     );
 
