@@ -88,12 +88,13 @@ describe("the server's start-up hook", () => {
         encoding: "utf8",
         timeout: 30_000,
         env: {
+          NODE_ENV: "production",
           PATH: process.env.PATH,
           HOME: process.env.HOME,
           NEXT_RUNTIME: "nodejs",
           YOKELINE_JOBS: "0",
           ...env,
-        } as NodeJS.ProcessEnv,
+        },
       },
     );
 
