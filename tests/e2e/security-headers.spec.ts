@@ -61,19 +61,18 @@ test("signed out: home, sign-in, sign-up and a missing page", async ({ page }) =
   expect(await violations()).toEqual([]);
 });
 
-test("customer: orders, an order, and the builder working live", async ({ page }) => {
+test("customer: orders and the builder working live", async ({ page }) => {
   const violations = await watchPolicy(page);
   await signIn(page, ACCOUNTS.customer);
+  // The demo customer has no orders yet (the counter's order page is the same view, below).
   await visit(page, "/orders", violations);
-  await openFirstOrder(page);
-  expect(await violations(), page.url()).toEqual([]);
   await visit(page, "/build", violations);
   // Typing re-runs the engineering core and redraws the plots in the browser.
-  const length = page.getByLabel(/length/i).first();
-  await length.fill("1400");
+  const length = page.getByLabel("Installed length", { exact: true });
+  await length.fill("55");
   await length.blur();
-  await expect(page.locator("svg").first()).toBeVisible();
-  await page.waitForTimeout(500);
+  await expect(page.getByRole("img", { name: /Side view of the driveline/ })).toBeVisible();
+  await expect(page.getByRole("img", { name: /Speed ratio over one turn/ })).toBeVisible();
   expect(await violations(), "/build after typing").toEqual([]);
 });
 
