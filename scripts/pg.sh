@@ -27,14 +27,15 @@ pg_ensure_installed() {
   [ -n "$(pg_bin)" ] || { echo "PostgreSQL is not installed and could not be installed." >&2; return 1; }
 }
 
-as_postgres() { if [ "$(id -u)" -eq 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi; }
+# From / so that a working folder postgres cannot enter draws no warning.
+as_postgres() { if [ "$(id -u)" -eq 0 ]; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi; }
 
 # Where the cluster for DATA_DIR really lives. Running as root, the server runs as `postgres`; when
 # that user cannot enter the folders above DATA_DIR (a clone in root's home, a mode-700 temp
 # folder), the cluster is kept under postgres's own home instead, one folder per DATA_DIR.
 pg_dir() {
-  local dir="$1"
-  if [ "$(id -u)" -ne 0 ] || runuser -u postgres -- test -x "$(dirname "$dir")" 2>/dev/null; then
+  local dir; dir="$(realpath -m "$1")"
+  if [ "$(id -u)" -ne 0 ] || as_postgres test -x "$(dirname "$dir")" 2>/dev/null; then
     printf '%s\n' "$dir"
     return
   fi
@@ -43,13 +44,14 @@ pg_dir() {
 }
 
 pg_up() {
-  local requested="$1" port="$2" password="$3" db="$4" throwaway="${5:-}"
+  local requested port="$2" password="$3" db="$4" throwaway="${5:-}"
+  requested="$(realpath -m "$1")"
   local bin; bin="$(pg_bin)"
   mkdir -p "$requested"
   local dir; dir="$(pg_dir "$requested")"
   if [ "$dir" != "$requested" ]; then
     echo "The postgres user cannot enter $(dirname "$requested"), so the database lives in $dir"
-    runuser -u postgres -- mkdir -p "$dir"
+    as_postgres mkdir -p "$dir"
     rmdir "$requested" 2>/dev/null || true
   fi
   if [ ! -f "$dir/PG_VERSION" ]; then
@@ -89,7 +91,7 @@ pg_down() {
 
 pg_forget() {
   local dir; dir="$(pg_dir "$1")"
-  [ "$dir" = "$1" ] && return 0
+  [ "$dir" = "$(realpath -m "$1")" ] && return 0
   pg_down "$1"
   rm -rf "$(dirname "$dir")"
 }
