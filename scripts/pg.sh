@@ -50,7 +50,7 @@ pg_up() {
   mkdir -p "$requested"
   local dir; dir="$(pg_dir "$requested")"
   if [ "$dir" != "$requested" ]; then
-    echo "The postgres user cannot enter $(dirname "$requested"), so the database lives in $dir"
+    echo "The postgres user cannot reach $(dirname "$requested"), so the database lives in $dir"
     as_postgres mkdir -p "$dir"
     rmdir "$requested" 2>/dev/null || true
   fi

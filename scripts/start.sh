@@ -42,7 +42,7 @@ cleanup() {
   trap - INT TERM EXIT
   for pid in "${pids[@]}"; do kill -- -"$pid" 2>/dev/null || kill "$pid" 2>/dev/null || true; done
   pg_down "$PG_DIR"
-  echo "Stopped. Your data is kept in .data/."
+  echo "Stopped. Your data is kept for next time."
 }
 trap cleanup INT TERM EXIT
 
