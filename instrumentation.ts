@@ -1,6 +1,12 @@
-/** Next's start-up hook: the Node.js server also runs the background jobs (e-mail delivery). */
+/**
+ * Next's start-up hook. A production run with unsafe settings stops here (each one named), before
+ * the server takes a request; otherwise the Node.js server also runs the background jobs.
+ */
 export async function register() {
-  if (process.env.NEXT_RUNTIME === "nodejs" && process.env.YOKELINE_JOBS !== "0") {
+  if (process.env.NEXT_RUNTIME !== "nodejs") return;
+  const { refuseUnsafeProduction } = await import("./lib/config/production");
+  refuseUnsafeProduction(process.env, "Yokeline");
+  if (process.env.YOKELINE_JOBS !== "0") {
     const { startBackgroundJobs } = await import("./lib/jobs/start");
     startBackgroundJobs();
   }

@@ -4,6 +4,7 @@
 #   pg_ensure_installed
 #   pg_up DATA_DIR PORT PASSWORD DBNAME [throwaway]   -> starts (initialising on first use)
 #   pg_down DATA_DIR
+#   pg_forget DATA_DIR   -> stops and deletes a cluster kept outside the checkout (see pg_dir)
 set -euo pipefail
 
 pg_bin() { ls -d /usr/lib/postgresql/*/bin 2>/dev/null | sort -V | tail -1; }
@@ -26,18 +27,35 @@ pg_ensure_installed() {
   [ -n "$(pg_bin)" ] || { echo "PostgreSQL is not installed and could not be installed." >&2; return 1; }
 }
 
-as_postgres() { if [ "$(id -u)" -eq 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi; }
+# From / so that a working folder postgres cannot enter draws no warning.
+as_postgres() { if [ "$(id -u)" -eq 0 ]; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi; }
+
+# Where the cluster for DATA_DIR really lives. Running as root, the server runs as `postgres`; when
+# that user cannot enter the folders above DATA_DIR (a clone in root's home, a mode-700 temp
+# folder), the cluster is kept under postgres's own home instead, one folder per DATA_DIR.
+pg_dir() {
+  local dir; dir="$(realpath -m "$1")"
+  if [ "$(id -u)" -ne 0 ] || as_postgres test -x "$(dirname "$dir")" 2>/dev/null; then
+    printf '%s\n' "$dir"
+    return
+  fi
+  local home; home="$(getent passwd postgres | cut -d: -f6)"
+  printf '%s/yokeline/%s/pg\n' "$home" "$(printf '%s' "$dir" | sha256sum | cut -c1-12)"
+}
 
 pg_up() {
-  local dir="$1" port="$2" password="$3" db="$4" throwaway="${5:-}"
+  local requested port="$2" password="$3" db="$4" throwaway="${5:-}"
+  requested="$(realpath -m "$1")"
   local bin; bin="$(pg_bin)"
-  mkdir -p "$dir"
-  if [ "$(id -u)" -eq 0 ] && ! runuser -u postgres -- test -x "$(dirname "$dir")"; then
-    echo "The postgres user cannot reach $(dirname "$dir"); make the folders above it traversable (chmod o+x)." >&2
-    return 1
+  mkdir -p "$requested"
+  local dir; dir="$(pg_dir "$requested")"
+  if [ "$dir" != "$requested" ]; then
+    echo "The postgres user cannot reach $(dirname "$requested"), so the database lives in $dir"
+    as_postgres mkdir -p "$dir"
+    rmdir "$requested" 2>/dev/null || true
   fi
   if [ ! -f "$dir/PG_VERSION" ]; then
-    local pwfile; pwfile="$(mktemp)"; printf '%s' "$password" >"$pwfile"
+    local pwfile; pwfile="$(mktemp -p /tmp yokeline-pw.XXXXXX)"; printf '%s' "$password" >"$pwfile"
     [ "$(id -u)" -eq 0 ] && chown -R postgres: "$dir" "$pwfile"
     chmod 700 "$dir"
     as_postgres "$bin/initdb" -D "$dir" -U app --pwfile="$pwfile" --auth=scram-sha-256 -E UTF8 \
@@ -56,7 +74,7 @@ pg_up() {
       echo "Port $port on 127.0.0.1 is taken by another program (another PostgreSQL?). Stop it, or choose another port with PG_PORT=…" >&2
       return 1
     fi
-    as_postgres "$bin/pg_ctl" -D "$dir" -l "$dir/server.log" -w -t 30 start >/dev/null
+    as_postgres "$bin/pg_ctl" -D "$dir" -l "$dir/server.log" -o "-p $port" -w -t 30 start >/dev/null
   fi
   if ! PGPASSWORD="$password" psql -h 127.0.0.1 -p "$port" -U app -d postgres -tAc \
       "select 1 from pg_database where datname = '$db'" | grep -q 1; then
@@ -65,8 +83,15 @@ pg_up() {
 }
 
 pg_down() {
-  local dir="$1" bin; bin="$(pg_bin)"
+  local dir bin; dir="$(pg_dir "$1")"; bin="$(pg_bin)"
   [ -f "$dir/PG_VERSION" ] || return 0
   as_postgres "$bin/pg_ctl" -D "$dir" -m fast -w status >/dev/null 2>&1 || return 0
   as_postgres "$bin/pg_ctl" -D "$dir" -m fast -w stop >/dev/null || true
+}
+
+pg_forget() {
+  local dir; dir="$(pg_dir "$1")"
+  [ "$dir" = "$(realpath -m "$1")" ] && return 0
+  pg_down "$1"
+  rm -rf "$(dirname "$dir")"
 }

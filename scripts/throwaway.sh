@@ -1,5 +1,6 @@
 #!/usr/bin/env bash
-# A throw-away PostgreSQL cluster in /tmp for tests and benchmarks, removed on exit.
+# A throw-away PostgreSQL cluster in /tmp for tests and benchmarks, removed on exit (pg_up keeps it
+# elsewhere if the postgres user cannot enter /tmp/…; pg_forget removes it there).
 # After `throwaway_up PORT DB...`: TMP_DIR, PG_DIR, DB_BASE (postgresql://app:…@127.0.0.1:PORT).
 throwaway_up() {
   local port="$1"; shift
@@ -19,5 +20,6 @@ throwaway_up() {
 throwaway_down() {
   [ -n "${APP_PID:-}" ] && { kill -- -"$APP_PID" 2>/dev/null || true; }
   pg_down "$PG_DIR" || true
+  pg_forget "$PG_DIR" || true
   rm -rf "$TMP_DIR"
 }

@@ -3,6 +3,7 @@ import { nextCookies } from "better-auth/next-js";
 import { randomUUID } from "node:crypto";
 import { Pool } from "pg";
 import { databaseUrl } from "@/lib/db/url";
+import { logger } from "@/lib/logger";
 import { recordAudit } from "@/lib/audit";
 import { linkCustomerToUser } from "@/lib/customers";
 
@@ -13,7 +14,11 @@ const snake = <T extends string>(...names: T[]) =>
   >;
 
 const globalForAuth = globalThis as unknown as { yokelineAuthPool?: Pool };
-const pool = (globalForAuth.yokelineAuthPool ??= new Pool({ connectionString: databaseUrl(), max: 5 }));
+// An idle connection dropped by a database restart must not crash the server: log it, the pool reconnects.
+const pool = (globalForAuth.yokelineAuthPool ??= new Pool({ connectionString: databaseUrl(), max: 5 }).on(
+  "error",
+  (err) => logger.warn({ err }, "auth database connection lost"),
+));
 
 /** Sign-in attempts allowed per client and window; a shop setting with a safe default. */
 const signInMax = Number(process.env.AUTH_SIGN_IN_MAX ?? 8);

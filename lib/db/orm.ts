@@ -1,12 +1,25 @@
 import "reflect-metadata";
 import { MikroORM, type EntityManager } from "@mikro-orm/postgresql";
 import config from "@/mikro-orm.config";
+import { AppError } from "@/lib/http/errors";
+import { logger } from "@/lib/logger";
 
 const globalForOrm = globalThis as unknown as { yokelineOrm?: Promise<MikroORM> };
 
-/** The one ORM instance of this process (kept across hot reloads in development). */
+/** The message callers see while the database cannot be reached. */
+export const DATABASE_DOWN_MESSAGE = "The database is not reachable just now; try again in a moment.";
+
+/**
+ * The one ORM instance of this process (kept across hot reloads in development). A failed first
+ * connection is not kept: the next call tries again, so the app recovers once the database is back.
+ * While it is down, callers get an AppError "unavailable" (503).
+ */
 export function getOrm(): Promise<MikroORM> {
-  globalForOrm.yokelineOrm ??= MikroORM.init(config);
+  globalForOrm.yokelineOrm ??= MikroORM.init(config).catch((err: unknown) => {
+    globalForOrm.yokelineOrm = undefined;
+    logger.warn({ err }, "database not reachable; the next request tries again");
+    throw new AppError("unavailable", DATABASE_DOWN_MESSAGE);
+  });
   return globalForOrm.yokelineOrm;
 }
 

@@ -10,7 +10,14 @@ export class AppError extends Error {
 }
 
 export type ErrorCode =
-  "unauthenticated" | "forbidden" | "not_found" | "conflict" | "invalid" | "too_large" | "rate_limited";
+  | "unauthenticated"
+  | "forbidden"
+  | "not_found"
+  | "conflict"
+  | "invalid"
+  | "too_large"
+  | "rate_limited"
+  | "unavailable";
 
 /** The one map from error code to HTTP status. */
 export const STATUS_OF: Record<ErrorCode, number> = {
@@ -21,6 +28,7 @@ export const STATUS_OF: Record<ErrorCode, number> = {
   too_large: 413,
   invalid: 422,
   rate_limited: 429,
+  unavailable: 503,
 };
 
 export interface ErrorBody {

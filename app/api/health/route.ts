@@ -1,10 +1,10 @@
-import { getOrm } from "@/lib/db/orm";
+import { DATABASE_DOWN_MESSAGE, getOrm } from "@/lib/db/orm";
 import { json } from "@/lib/http/route";
 import { APP_VERSION } from "@/lib/version";
 
 export const dynamic = "force-dynamic";
 
-// GET /api/health — app version and a real round-trip to the database
+// GET /api/health — app version and a real round-trip to the database (503 while it is down)
 export async function GET() {
   const started = performance.now();
   try {
@@ -20,6 +20,9 @@ export async function GET() {
       },
     });
   } catch {
-    return json({ status: "degraded", version: APP_VERSION, database: { ok: false } }, 503);
+    return json(
+      { status: "degraded", version: APP_VERSION, database: { ok: false, message: DATABASE_DOWN_MESSAGE } },
+      503,
+    );
   }
 }
