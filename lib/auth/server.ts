@@ -17,7 +17,8 @@ const globalForAuth = globalThis as unknown as { yokelineAuthPool?: Pool };
 // An idle connection dropped by a database restart must not crash the server: log it, the pool reconnects.
 const pool = (globalForAuth.yokelineAuthPool ??= new Pool({ connectionString: databaseUrl(), max: 5 }).on(
   "error",
-  (err) => logger.warn({ err }, "auth database connection lost"),
+  (err: Error & { code?: string }) =>
+    logger.warn({ code: err.code, message: err.message }, "auth database connection lost"),
 ));
 
 /** Sign-in attempts allowed per client and window; a shop setting with a safe default. */

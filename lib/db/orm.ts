@@ -3,11 +3,11 @@ import { MikroORM, type EntityManager } from "@mikro-orm/postgresql";
 import config from "@/mikro-orm.config";
 import { AppError } from "@/lib/http/errors";
 import { logger } from "@/lib/logger";
+import { DATABASE_DOWN_MESSAGE } from "@/lib/http/known-errors";
 
 const globalForOrm = globalThis as unknown as { yokelineOrm?: Promise<MikroORM> };
 
-/** The message callers see while the database cannot be reached. */
-export const DATABASE_DOWN_MESSAGE = "The database is not reachable just now; try again in a moment.";
+export { DATABASE_DOWN_MESSAGE };
 
 /**
  * The one ORM instance of this process (kept across hot reloads in development). A failed first

@@ -1,5 +1,11 @@
-import { NotFoundError } from "@mikro-orm/core";
+import { ConnectionException, NotFoundError } from "@mikro-orm/core";
 import { AppError } from "./errors";
+
+/** The message callers see while the database cannot be reached. */
+export const DATABASE_DOWN_MESSAGE = "The database is not reachable just now; try again in a moment.";
+
+/** Node socket errors and PostgreSQL shutdown/start-up states (57P01–57P03). */
+const DOWN_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "EPIPE", "57P01", "57P02", "57P03"]);
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
@@ -12,11 +18,18 @@ export function isUuid(value: unknown): value is string {
  * Errors that come from a request the caller got wrong, not from a fault of ours, as the AppError
  * they should be answered with: a record that is not there (MikroORM's findOneOrFail) or an id
  * PostgreSQL cannot read (22P02) is not_found; a number out of a column's range (22003) invalid.
+ * A database that went away after a good start (refused connection, server shut down or starting,
+ * SQLSTATE class 08) is unavailable (503), so the caller is told to try again.
  */
 export function knownError(error: unknown): AppError | null {
   if (error instanceof NotFoundError) return new AppError("not_found", "No such record.");
   const code = typeof error === "object" && error !== null ? (error as { code?: unknown }).code : undefined;
   if (code === "22P02") return new AppError("not_found", "No such record.");
   if (code === "22003") return new AppError("invalid", "A number is out of range.");
+  if (
+    error instanceof ConnectionException ||
+    (typeof code === "string" && (DOWN_CODES.has(code) || code.startsWith("08")))
+  )
+    return new AppError("unavailable", DATABASE_DOWN_MESSAGE);
   return null;
 }

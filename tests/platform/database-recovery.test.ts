@@ -1,5 +1,5 @@
 import { execFile } from "node:child_process";
-import { mkdtempSync, rmSync } from "node:fs";
+import { mkdtempSync, readFileSync, rmSync } from "node:fs";
 import net from "node:net";
 import os from "node:os";
 import path from "node:path";
@@ -86,6 +86,19 @@ describe("the app recovers when the database comes back", () => {
       // Down again after a good start: health says so, and recovers by itself.
       await pg("pg_down", path.join(dir, "pg"));
       expect((await GET()).status).toBe(503);
+      // A handler that needs the database says so with 503 and the message, never a 500.
+      const { POST: evaluate } = await import("@/app/api/designs/evaluate/route");
+      const { NextRequest } = await import("next/server");
+      const res = await evaluate(
+        new NextRequest("http://127.0.0.1/api/designs/evaluate", {
+          method: "POST",
+          body: readFileSync(path.join(root, "examples/street-truck.json"), "utf8"),
+          headers: { "content-type": "application/json" },
+        }),
+        { params: Promise.resolve({}) },
+      );
+      expect(res.status).toBe(503);
+      expect(await res.json()).toMatchObject({ error: { code: "unavailable", message: /not reachable/ } });
       await pg("pg_up", path.join(dir, "pg"), String(port), password, "app", "throwaway");
       expect((await GET()).status).toBe(200);
       expect((await authPool.query("select 2 as two")).rows).toEqual([{ two: 2 }]);
