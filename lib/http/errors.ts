@@ -10,7 +10,14 @@ export class AppError extends Error {
 }
 
 export type ErrorCode =
-  "unauthenticated" | "forbidden" | "not_found" | "conflict" | "invalid" | "too_large" | "rate_limited";
+  | "unauthenticated"
+  | "forbidden"
+  | "not_found"
+  | "conflict"
+  | "invalid"
+  | "too_large"
+  | "rate_limited"
+  | "unavailable";
 
 /** The one map from error code to HTTP status. */
 export const STATUS_OF: Record<ErrorCode, number> = {
@@ -21,6 +28,8 @@ export const STATUS_OF: Record<ErrorCode, number> = {
   too_large: 413,
   invalid: 422,
   rate_limited: 429,
+  // An outside service (the payment provider) cannot be reached; nothing was changed.
+  unavailable: 503,
 };
 
 export interface ErrorBody {
@@ -32,4 +41,9 @@ export function fieldsFromIssues(issues: { path: string; message: string }[]): R
   const fields: Record<string, string> = {};
   for (const issue of issues) fields[issue.path || "(root)"] ??= issue.message;
   return fields;
+}
+
+/** Whether a database error is a unique-constraint violation (PostgreSQL 23505). */
+export function isUniqueViolation(error: unknown): boolean {
+  return typeof error === "object" && error !== null && (error as { code?: string }).code === "23505";
 }
