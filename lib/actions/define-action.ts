@@ -2,7 +2,7 @@ import "server-only";
 import type { ZodType } from "zod";
 import { AccessError, authorize, type CurrentUser } from "@/lib/auth/guard";
 import type { Permission } from "@/lib/auth/permissions";
-import { AppError } from "@/lib/http/errors";
+import { AppError, isUniqueViolation } from "@/lib/http/errors";
 import { logger } from "@/lib/logger";
 import { zodIssues } from "@/lib/validation";
 
@@ -45,6 +45,9 @@ export function defineAction<I, O>(
       if (error instanceof AppError) {
         return { ok: false, error: { code: error.code, message: error.message, fields: error.fields } };
       }
+      // A pre-check can lose a race; the database's unique index still says no (e.g. a customer e-mail).
+      if (isUniqueViolation(error))
+        return { ok: false, error: { code: "conflict", message: "That already exists." } };
       logger.error({ err: error }, "unhandled error in server action");
       return { ok: false, error: { code: "internal", message: "Something went wrong on our side." } };
     }

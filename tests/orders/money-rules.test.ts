@@ -1,9 +1,10 @@
 import { afterAll, beforeAll, describe, expect } from "vitest";
 import { NextRequest } from "next/server";
 import { AuditEvent, Order, OrderEvent, Payment, Refund } from "@/entities";
-import { getEm } from "@/lib/db/orm";
+import { getEm, inTransaction } from "@/lib/db/orm";
 import { placeOrder } from "@/lib/orders/place-order";
 import { requestBalance, startCheckout } from "@/lib/orders/payments";
+import { payments } from "@/lib/payments/stripe";
 import { POST as checkoutPost } from "@/app/api/orders/[id]/checkout/route";
 import { createStaffUser } from "@/lib/users/staff";
 import type { Role } from "@/lib/auth/roles";
@@ -49,6 +50,20 @@ async function postCheckout(orderId: string, cookie: string) {
   );
 }
 
+/**
+ * Opens `n` pooled connections at once, so concurrent requests each get one straight away and
+ * really overlap (a cold pool would hand them out one by one, hiding a race).
+ */
+async function warmPool(n: number): Promise<void> {
+  await Promise.all(
+    Array.from({ length: n }, () =>
+      inTransaction((em) =>
+        em.getConnection().execute("select pg_sleep(0.05)", [], "all", em.getTransactionContext()),
+      ),
+    ),
+  );
+}
+
 /** Status of a checkout session at the provider (the fake), as Stripe's API reports it. */
 async function sessionStatus(sessionId: string): Promise<string> {
   return harness.fake.core.storedSession(sessionId).session.status;
@@ -57,6 +72,7 @@ async function sessionStatus(sessionId: string): Promise<string> {
 describe("at most one open checkout per order", () => {
   dbTest("two checkout requests at the same moment open one payable session", async () => {
     const { user, order } = await placedOrder();
+    await warmPool(3);
     const [a, b, c] = await Promise.all([
       startCheckout(order.id, user),
       startCheckout(order.id, user),
@@ -71,11 +87,12 @@ describe("at most one open checkout per order", () => {
     expect(sessions.map((s) => s.session.status)).toEqual(["open"]);
   });
 
-  dbTest("the same over HTTP: concurrent POSTs answer the same checkout", async () => {
+  dbTest("over HTTP too: two POSTs at once answer the same checkout", async () => {
     const { user, order } = await placedOrder();
     const cookie = sessionCookie(
       await authRequest("/sign-in/email", { email: user.email, password: "a-long-password-1" }),
     );
+    await warmPool(2);
     const responses = await Promise.all([postCheckout(order.id, cookie), postCheckout(order.id, cookie)]);
     expect(responses.map((r) => r.status)).toEqual([200, 200]);
     const [x, y] = await Promise.all(responses.map((r) => r.json()));
@@ -216,6 +233,25 @@ describe("the webhook never credits more than is owed", () => {
       expect(charge.refunded).toBe(true);
     },
   );
+});
+
+describe("the payments port closes checkouts", () => {
+  dbTest("expireCheckout says expired (also when asked twice) or completed when it was paid", async () => {
+    const { user, order } = await placedOrder();
+    const first = await startCheckout(order.id, user);
+    expect(await payments().expireCheckout(first.checkoutSessionId)).toBe("expired");
+    expect(await payments().expireCheckout(first.checkoutSessionId)).toBe("expired");
+    expect(await sessionStatus(first.checkoutSessionId)).toBe("expired");
+    await harness.fake.idle(10_000); // checkout.session.expired marks our row too
+    const em = await getEm();
+    expect((await em.findOneOrFail(Payment, { id: first.id })).status).toBe("expired");
+
+    const second = await startCheckout(order.id, user);
+    expect(second.id).not.toBe(first.id);
+    await payWithCard(harness.fake, second.checkoutSessionId, "4242424242424242");
+    expect(await payments().expireCheckout(second.checkoutSessionId)).toBe("completed");
+    await harness.fake.idle(10_000);
+  });
 });
 
 describe("who may open a checkout", () => {
