@@ -35,15 +35,17 @@ export function mayOpenCheckout(user: CurrentUser): boolean {
 
 const UNAVAILABLE =
   "The payment service cannot be reached just now. The order is saved; try paying again in a few minutes.";
+const REFUND_UNAVAILABLE =
+  "The payment service cannot be reached just now, so nothing was refunded. Try again in a few minutes.";
 
 /** Calls the payments port, turning "provider unreachable" into a 503 the caller can show. */
-async function provider<T>(call: () => Promise<T>): Promise<T> {
+async function provider<T>(call: () => Promise<T>, message = UNAVAILABLE): Promise<T> {
   try {
     return await call();
   } catch (error) {
     if (error instanceof PaymentsUnavailableError) {
       logger.warn({ err: error }, "payment provider unavailable");
-      throw new AppError("unavailable", UNAVAILABLE);
+      throw new AppError("unavailable", message);
     }
     throw error;
   }
@@ -391,13 +393,15 @@ export async function refundPayment(
       );
     }
     const paymentIntentId = payment.paymentIntentId;
-    const result = await provider(() =>
-      payments().refund({
-        paymentIntentId,
-        amountCents: input.amountCents,
-        reason: input.reason,
-        idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${input.amountCents}`,
-      }),
+    const result = await provider(
+      () =>
+        payments().refund({
+          paymentIntentId,
+          amountCents: input.amountCents,
+          reason: input.reason,
+          idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${input.amountCents}`,
+        }),
+      REFUND_UNAVAILABLE,
     );
     const refund = em.create(Refund, {
       payment,
