@@ -1,4 +1,4 @@
-import { Entity, Index, OneToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
+import { Entity, Index, OneToOne, Unique, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import { User } from "./user.entity";
 
@@ -7,6 +7,11 @@ import { User } from "./user.entity";
  * counter may not (the counter keeps their details here).
  */
 @Entity({ tableName: "customer" })
+// One customer per e-mail address, whatever its capitals (Migration20261204110000).
+@Unique({
+  name: "customer_email_lower_unique",
+  expression: `create unique index "customer_email_lower_unique" on "customer" (lower(email)) where email <> ''`,
+})
 export class Customer {
   [OptionalProps]?: "createdAt";
 

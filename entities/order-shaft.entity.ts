@@ -1,10 +1,11 @@
-import { Entity, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { Check, Entity, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import type { QuoteLine } from "../lib/pricing/price-book";
 
 /** One shaft of an order, with frozen copies of its design, its evaluation and its price. */
 @Entity({ tableName: "order_shaft" })
+@Check({ name: "order_shaft_price_nonnegative_check", expression: "price_cents >= 0" })
 export class OrderShaft {
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();

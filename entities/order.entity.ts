@@ -1,4 +1,5 @@
 import {
+  Check,
   Collection,
   Entity,
   Enum,
@@ -30,6 +31,15 @@ export type PaymentState = (typeof PAYMENT_STATES)[number];
 
 /** One customer order: one or more shafts, a price, a promised date, its payments and timeline. */
 @Entity({ tableName: "shop_order" })
+// Money the database itself refuses (Migration20261204110000): see lib/orders/payments.ts.
+@Check({
+  name: "shop_order_money_nonnegative_check",
+  expression:
+    "subtotal_cents >= 0 and tax_cents >= 0 and shipping_cents >= 0 and total_cents >= 0 and deposit_cents >= 0 and paid_cents >= 0 and refunded_cents >= 0",
+})
+@Check({ name: "shop_order_deposit_within_total_check", expression: "deposit_cents <= total_cents" })
+@Check({ name: "shop_order_paid_within_total_check", expression: "paid_cents <= total_cents" })
+@Check({ name: "shop_order_refunded_within_paid_check", expression: "refunded_cents <= paid_cents" })
 export class Order {
   [OptionalProps]?: "status" | "paymentState" | "paidCents" | "refundedCents" | "createdAt" | "updatedAt";
 
@@ -82,6 +92,7 @@ export class Order {
   @Property({ type: "integer" })
   depositCents!: number;
 
+  /** Money credited to the order, never more than its total (any excess is refunded on its payment). */
   @Property({ type: "integer", default: 0 })
   paidCents: number = 0;
 

@@ -1,10 +1,15 @@
-import { Entity, Enum, Index, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
+import { Check, Entity, Enum, Index, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import { User } from "./user.entity";
 
 /** One request for money on an order (deposit, balance or full), through a hosted checkout. */
 @Entity({ tableName: "payment" })
+@Check({ name: "payment_amount_positive_check", expression: "amount_cents > 0" })
+@Check({
+  name: "payment_refunded_within_amount_check",
+  expression: "refunded_cents >= 0 and refunded_cents <= amount_cents",
+})
 export class Payment {
   [OptionalProps]?: "status" | "refundedCents" | "createdAt";
 

@@ -1,10 +1,11 @@
-import { Entity, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
+import { Check, Entity, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import { Payment } from "./payment.entity";
 import { User } from "./user.entity";
 
 /** Money given back on a payment, by an owner. */
 @Entity({ tableName: "refund" })
+@Check({ name: "refund_amount_positive_check", expression: "amount_cents > 0" })
 export class Refund {
   [OptionalProps]?: "createdAt";
 

@@ -1,6 +1,8 @@
 /**
  * Test card behaviour, following Stripe's documented test numbers.
  * https://docs.stripe.com/testing#cards
+ * The codes (card_declined, insufficient_funds, invalid_number, …) are the API's own, since the SDK
+ * and the app read them; the messages people read are this fake's own words.
  */
 export interface CardInput {
   number: string;
@@ -30,11 +32,14 @@ export const TEST_CARDS: Readonly<Record<string, TestCard>> = {
   "5555555555554444": { brand: "mastercard", result: "success" },
   "4000000000000002": {
     brand: "visa",
-    result: { declineCode: "generic_decline", message: "Your card was declined." },
+    result: { declineCode: "generic_decline", message: "The bank turned this card down." },
   },
   "4000000000009995": {
     brand: "visa",
-    result: { declineCode: "insufficient_funds", message: "Your card has insufficient funds." },
+    result: {
+      declineCode: "insufficient_funds",
+      message: "The bank turned this card down: there is not enough money on it.",
+    },
   },
 };
 
@@ -70,7 +75,7 @@ export function evaluateCard(input: CardInput, now = new Date()): CardOutcome {
       kind: "invalid",
       field: "number",
       code: "invalid_number",
-      message: "Your card number is invalid.",
+      message: "That is not a valid card number. Check the digits.",
     };
   }
   const card = TEST_CARDS[number];
@@ -79,8 +84,7 @@ export function evaluateCard(input: CardInput, now = new Date()): CardOutcome {
       kind: "invalid",
       field: "number",
       code: "card_declined",
-      message:
-        "Your card was declined. This is a local test payment page: use a test card such as 4242 4242 4242 4242.",
+      message: "This local test page takes test cards only, such as 4242 4242 4242 4242.",
     };
   }
   const expiry = parseExpiry(input.expiry ?? "", now);
@@ -89,7 +93,7 @@ export function evaluateCard(input: CardInput, now = new Date()): CardOutcome {
       kind: "invalid",
       field: "expiry",
       code: "invalid_expiry",
-      message: "Your card's expiration date is incomplete.",
+      message: "Enter the card's expiry as month and year (MM/YY).",
     };
   }
   if (expiry === "past") {
@@ -97,7 +101,7 @@ export function evaluateCard(input: CardInput, now = new Date()): CardOutcome {
       kind: "invalid",
       field: "expiry",
       code: "invalid_expiry_year",
-      message: "Your card's expiration date is in the past.",
+      message: "This card's expiry date has passed.",
     };
   }
   if (!/^\d{3,4}$/.test((input.cvc ?? "").trim())) {
@@ -105,7 +109,7 @@ export function evaluateCard(input: CardInput, now = new Date()): CardOutcome {
       kind: "invalid",
       field: "cvc",
       code: "incomplete_cvc",
-      message: "Your card's security code is incomplete.",
+      message: "Enter the 3 or 4 digit security code from the card.",
     };
   }
   const last4 = number.slice(-4);

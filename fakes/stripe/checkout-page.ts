@@ -81,8 +81,8 @@ export function renderCheckoutPage(stored: StoredSession, state: PageState = {})
       ? session.success_url.replaceAll("{CHECKOUT_SESSION_ID}", session.id)
       : session.cancel_url;
     return layout(
-      done ? "Payment complete" : "Checkout expired",
-      `<h1>${done ? "This payment is complete" : "This checkout session has expired"}</h1>
+      done ? "Payment complete" : "Payment page expired",
+      `<h1>${done ? "This payment is complete" : "This payment page has expired"}</h1>
 ${summary(stored)}
 <p class="notice" role="status">${done ? `${escapeHtml(total)} was paid.` : "It can no longer be paid. Start a new checkout from the shop."}</p>
 ${next ? `<a class="cancel" href="${escapeHtml(next)}">Return to the shop</a>` : ""}`,

@@ -415,8 +415,8 @@ export class StripeFakeCore {
     if (session.status !== "open") {
       const message =
         session.status === "complete"
-          ? "This Checkout Session has already been paid."
-          : "This Checkout Session has expired.";
+          ? "This payment is already complete."
+          : "This payment page has expired; start again from the shop.";
       return { outcome: "unavailable", message, session: clone(session) };
     }
     const result = evaluateCard(card);

@@ -43,7 +43,7 @@ export function defineAction<I, O>(
           error: { code: error.status === 401 ? "unauthenticated" : "forbidden", message: error.message },
         };
       }
-      // An unknown id (a record gone, or not an id at all) is not_found, never internal.
+      // An unknown id is not_found, a lost race on a unique index conflict, never internal.
       const known = error instanceof AppError ? error : knownError(error);
       if (known) {
         return { ok: false, error: { code: known.code, message: known.message, fields: known.fields } };

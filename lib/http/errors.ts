@@ -28,6 +28,7 @@ export const STATUS_OF: Record<ErrorCode, number> = {
   too_large: 413,
   invalid: 422,
   rate_limited: 429,
+  // An outside service (the database, the payment provider) cannot be reached; nothing was changed.
   unavailable: 503,
 };
 

@@ -64,15 +64,8 @@ export function errorResponse(error: unknown): Response {
   }
   const known = knownError(error);
   if (known) return errorResponse(known);
-  if (isUniqueViolation(error)) {
-    return json<ErrorBody>({ error: { code: "conflict", message: "That already exists." } }, 409);
-  }
   logger.error({ err: error }, "unhandled error in route handler");
   return json<ErrorBody>({ error: { code: "internal", message: "Something went wrong on our side." } }, 500);
-}
-
-function isUniqueViolation(error: unknown): boolean {
-  return typeof error === "object" && error !== null && (error as { code?: string }).code === "23505";
 }
 
 export function json<T>(body: T, status = 200, headers?: HeadersInit): Response {

@@ -8,7 +8,8 @@ import { getEm, inTransaction } from "@/lib/db/orm";
 import { AppError } from "@/lib/http/errors";
 import { logger } from "@/lib/logger";
 import { payments } from "@/lib/payments/stripe";
-import type { PaymentEvent } from "@/lib/payments/port";
+import { PaymentsUnavailableError, type PaymentEvent } from "@/lib/payments/port";
+import { can } from "@/lib/auth/permissions";
 import { appUrl } from "@/lib/http/app-url";
 import { formatMoney } from "@/lib/pricing/price-book";
 import { afterCommit, notifyBalanceDue, notifyPaymentReceived } from "./notify";
@@ -27,57 +28,111 @@ export function nextPaymentKind(order: Order): Payment["kind"] | null {
   return "balance";
 }
 
+/** Who may open a checkout: the owning customer (scoped by the caller), the counter and owners — not the floor. */
+export function mayOpenCheckout(user: CurrentUser): boolean {
+  return can(user.role, "orders.own") || can(user.role, "orders.desk");
+}
+
+const UNAVAILABLE =
+  "The payment service cannot be reached just now. The order is saved; try paying again in a few minutes.";
+const REFUND_UNAVAILABLE =
+  "The payment service cannot be reached just now, so nothing was refunded. Try again in a few minutes.";
+
+/** Calls the payments port, turning "provider unreachable" into a 503 the caller can show. */
+async function provider<T>(call: () => Promise<T>, message = UNAVAILABLE): Promise<T> {
+  try {
+    return await call();
+  } catch (error) {
+    if (error instanceof PaymentsUnavailableError) {
+      logger.warn({ err: error }, "payment provider unavailable");
+      throw new AppError("unavailable", message);
+    }
+    throw error;
+  }
+}
+
 /**
- * Opens (or reuses) a hosted checkout for the order's next payment and returns its address.
- * The provider call carries an idempotency key, so a retried request never charges twice.
+ * Locks the order's row for the rest of the transaction and loads it fresh. Every change to an
+ * order's money takes this lock first, so checkouts, webhooks and refunds of one order run one
+ * after the other (and always in the same lock order: order, then its payments).
+ */
+async function lockOrder(em: EntityManager, orderId: string): Promise<Order> {
+  const order = await em.findOneOrFail(
+    Order,
+    { id: orderId },
+    { lockMode: LockMode.PESSIMISTIC_WRITE, refresh: true },
+  );
+  await em.populate(order, ["customer"]);
+  return order;
+}
+
+/**
+ * Opens (or reuses) the hosted checkout for the order's next payment and returns it. An order has
+ * at most one open checkout: under the order's row lock, a checkout for the same kind and amount
+ * is reused and any other open one is expired at the provider first. Its amount is what is owed
+ * now; the provider call carries an idempotency key, so a retried request never charges twice.
  */
 export async function startCheckout(
   orderId: string,
   requestedBy: CurrentUser | null,
   kind?: Payment["kind"],
 ): Promise<Payment> {
-  const em = await getEm();
-  const order = await em.findOneOrFail(Order, { id: orderId }, { populate: ["customer"] });
-  const want = kind ?? nextPaymentKind(order);
-  if (!want) throw new AppError("conflict", "Nothing is owed on this order.");
-  const amountCents = amountDue(order, want);
-  if (amountCents <= 0) throw new AppError("conflict", "Nothing is owed on this order for that payment.");
+  if (requestedBy && !mayOpenCheckout(requestedBy))
+    throw new AppError("forbidden", "Only the customer, the counter or an owner can take a payment.");
+  return inTransaction(async (em) => {
+    const order = await lockOrder(em, orderId);
+    if (order.status === "cancelled")
+      throw new AppError("conflict", "This order is cancelled; it takes no payment.");
+    const want = kind ?? nextPaymentKind(order);
+    if (!want) throw new AppError("conflict", "Nothing is owed on this order.");
+    if (want === "balance" && (order.paidCents === 0 || order.paidCents < order.depositCents))
+      throw new AppError("conflict", "The deposit has not been paid yet; ask for the balance once it has.");
+    const amountCents = amountDue(order, want);
+    if (amountCents <= 0) throw new AppError("conflict", "Nothing is owed on this order for that payment.");
 
-  const open = await em.findOne(
-    Payment,
-    { order, kind: want, status: "open", amountCents },
-    { orderBy: { createdAt: "desc" } },
-  );
-  if (open) return open;
+    const open = await em.find(Payment, { order, status: "open" }, { orderBy: { createdAt: "desc" } });
+    const reuse = open.find((p) => p.kind === want && p.amountCents === amountCents);
+    for (const stale of open) {
+      if (stale === reuse) continue;
+      const closed = await provider(() => payments().expireCheckout(stale.checkoutSessionId));
+      if (closed === "completed")
+        throw new AppError(
+          "conflict",
+          "A payment on this order has just been made; reload to see what is still owed.",
+        );
+      stale.status = "expired";
+    }
+    if (reuse) return reuse;
 
-  const paymentId = randomUUID();
-  const label = want === "deposit" ? "Deposit" : want === "balance" ? "Balance" : "Payment";
-  const session = await payments().createCheckout({
-    orderId: order.id,
-    orderNumber: order.number,
-    paymentId,
-    amountCents,
-    currency: order.currency,
-    description: `${label} for Yokeline order ${order.number}`,
-    customerEmail: order.customer.email,
-    successUrl: `${appUrl()}/orders/${order.id}?paid={CHECKOUT_SESSION_ID}`,
-    cancelUrl: `${appUrl()}/orders/${order.id}?cancelled=1`,
-    idempotencyKey: `checkout-${paymentId}`,
+    const paymentId = randomUUID();
+    const label = want === "deposit" ? "Deposit" : want === "balance" ? "Balance" : "Payment";
+    const session = await provider(() =>
+      payments().createCheckout({
+        orderId: order.id,
+        orderNumber: order.number,
+        paymentId,
+        amountCents,
+        currency: order.currency,
+        description: `${label} for Yokeline order ${order.number}`,
+        customerEmail: order.customer.email,
+        successUrl: `${appUrl()}/orders/${order.id}?paid={CHECKOUT_SESSION_ID}`,
+        cancelUrl: `${appUrl()}/orders/${order.id}?cancelled=1`,
+        idempotencyKey: `checkout-${paymentId}`,
+      }),
+    );
+    return em.create(Payment, {
+      id: paymentId,
+      order,
+      kind: want,
+      amountCents,
+      currency: order.currency,
+      status: "open",
+      checkoutSessionId: session.id,
+      checkoutUrl: session.url,
+      requestedBy: requestedBy ? em.getReference(User, requestedBy.id) : null,
+      createdAt: new Date(),
+    });
   });
-  const payment = em.create(Payment, {
-    id: paymentId,
-    order,
-    kind: want,
-    amountCents,
-    currency: order.currency,
-    status: "open",
-    checkoutSessionId: session.id,
-    checkoutUrl: session.url,
-    requestedBy: requestedBy ? em.getReference(User, requestedBy.id) : null,
-    createdAt: new Date(),
-  });
-  await em.flush();
-  return payment;
 }
 
 /** Asks for the balance (after final inspection): a checkout for what is owed, and an e-mail with its link. */
@@ -136,39 +191,50 @@ export async function applyPaymentEvent(event: PaymentEvent): Promise<ApplyOutco
     if (!(await firstDelivery(em, event))) return "duplicate";
     switch (event.type) {
       case "checkout.session.completed": {
-        const payment = await em.findOne(
-          Payment,
-          { checkoutSessionId: event.sessionId },
-          { populate: ["order", "order.customer"], lockMode: LockMode.PESSIMISTIC_WRITE },
-        );
-        if (!payment || !event.paid || payment.status === "succeeded") return "ignored";
-        const order = payment.order;
+        const found = await em.findOne(Payment, { checkoutSessionId: event.sessionId });
+        if (!found || !event.paid) return "ignored";
+        const order = await lockOrder(em, found.order.id);
+        const payment = await em.findOneOrFail(Payment, { id: found.id }, { refresh: true });
+        if (payment.status === "succeeded") return "ignored";
         payment.status = "succeeded";
         payment.paymentIntentId = event.paymentIntentId;
         payment.paidAt = new Date();
         payment.failureMessage = null;
-        order.paidCents += payment.amountCents;
-        if (order.status === "awaiting_payment") order.status = "received";
-        refreshPaymentState(order);
-        const what =
-          payment.kind === "deposit" ? "Deposit" : payment.kind === "balance" ? "Balance" : "Payment";
-        em.create(OrderEvent, {
-          order,
-          kind: "paid",
-          label: `${what} of ${formatMoney(payment.amountCents, order.currency)} received`,
-          at: new Date(),
-        });
-        await recordAudit(
-          {
-            actorId: null,
-            action: "payment.succeeded",
-            subjectType: "order",
-            subjectId: order.id,
-            details: { paymentId: payment.id, amountCents: payment.amountCents, event: event.id },
-          },
-          em,
-        );
-        await notifyPaymentReceived(em, order, payment);
+        // Never credit more than is still owed; a cancelled order owes nothing.
+        const owed = order.status === "cancelled" ? 0 : Math.max(0, order.totalCents - order.paidCents);
+        const creditCents = Math.min(payment.amountCents, owed);
+        const excessCents = payment.amountCents - creditCents;
+        if (creditCents > 0) {
+          order.paidCents += creditCents;
+          if (order.status === "awaiting_payment") order.status = "received";
+          refreshPaymentState(order);
+          const what =
+            payment.kind === "deposit" ? "Deposit" : payment.kind === "balance" ? "Balance" : "Payment";
+          em.create(OrderEvent, {
+            order,
+            kind: "paid",
+            label: `${what} of ${formatMoney(creditCents, order.currency)} received`,
+            at: new Date(),
+          });
+          await recordAudit(
+            {
+              actorId: null,
+              action: "payment.succeeded",
+              subjectType: "order",
+              subjectId: order.id,
+              details: { paymentId: payment.id, amountCents: creditCents, event: event.id },
+            },
+            em,
+          );
+          await notifyPaymentReceived(em, order, payment);
+        }
+        if (excessCents > 0) {
+          const why =
+            order.status === "cancelled"
+              ? "the order is cancelled, so the payment was returned"
+              : "paid more than was still owed, so the difference was returned";
+          await refundExcess(em, order, payment, excessCents, why, event.id);
+        }
         return "applied";
       }
       case "payment_intent.payment_failed": {
@@ -192,14 +258,16 @@ export async function applyPaymentEvent(event: PaymentEvent): Promise<ApplyOutco
         return "applied";
       }
       case "charge.refunded": {
-        const payment = event.paymentIntentId
-          ? await em.findOne(
-              Payment,
-              { paymentIntentId: event.paymentIntentId },
-              { populate: ["order"], lockMode: LockMode.PESSIMISTIC_WRITE },
-            )
+        const found = event.paymentIntentId
+          ? await em.findOne(Payment, { paymentIntentId: event.paymentIntentId })
           : null;
-        if (!payment) return "ignored";
+        if (!found) return "ignored";
+        await lockOrder(em, found.order.id);
+        const payment = await em.findOneOrFail(
+          Payment,
+          { id: found.id },
+          { refresh: true, populate: ["order"] },
+        );
         const missing = event.amountRefundedCents - payment.refundedCents;
         if (missing <= 0) return "ignored"; // already recorded when the owner refunded here
         const known = new Set((await em.find(Refund, { payment })).map((r) => r.providerRefundId));
@@ -236,18 +304,82 @@ function applyRefund(em: EntityManager, payment: Payment, amountCents: number, r
   });
 }
 
+/**
+ * Returns money a payment brought in beyond what the order still owed (a stale checkout paid
+ * late, or any payment on a cancelled order). It is refunded at the provider in the webhook's
+ * transaction: if that fails, the whole event is rolled back and the provider delivers it again.
+ * Only the payment's refunded amount grows; the order never counted the excess as paid.
+ */
+async function refundExcess(
+  em: EntityManager,
+  order: Order,
+  payment: Payment,
+  amountCents: number,
+  why: string,
+  eventId: string,
+): Promise<void> {
+  const label = `Refund of ${formatMoney(amountCents, order.currency)}: ${why}`;
+  if (!payment.paymentIntentId) {
+    // Cannot happen with a hosted card checkout; leave a trace for the owner instead of guessing.
+    logger.error({ payment: payment.id, amountCents }, "excess payment without a payment intent");
+    em.create(OrderEvent, { order, kind: "note", label: `${label} (to be refunded by hand)`, public: false });
+    await recordAudit(
+      {
+        actorId: null,
+        action: "payment.excess-unrefunded",
+        subjectType: "order",
+        subjectId: order.id,
+        details: { paymentId: payment.id, amountCents, event: eventId },
+      },
+      em,
+    );
+    return;
+  }
+  const paymentIntentId = payment.paymentIntentId;
+  const result = await payments().refund({
+    paymentIntentId,
+    amountCents,
+    reason: why,
+    idempotencyKey: `excess-${payment.id}`,
+  });
+  em.create(Refund, {
+    payment,
+    amountCents: result.amountCents,
+    providerRefundId: result.id,
+    reason: why,
+    by: null,
+    createdAt: new Date(),
+  });
+  payment.refundedCents += result.amountCents;
+  em.create(OrderEvent, { order, kind: "refunded", label, at: new Date() });
+  await recordAudit(
+    {
+      actorId: null,
+      action: "payment.excess-refunded",
+      subjectType: "order",
+      subjectId: order.id,
+      details: {
+        paymentId: payment.id,
+        amountCents: result.amountCents,
+        providerRefundId: result.id,
+        reason: why,
+        event: eventId,
+      },
+    },
+    em,
+  );
+}
+
 /** An owner refunds part or all of a payment; recorded with who did it and why. */
 export async function refundPayment(
   user: CurrentUser,
   input: { paymentId: string; amountCents: number; reason: string },
 ): Promise<Refund> {
   return inTransaction(async (em) => {
-    const payment = await em.findOne(
-      Payment,
-      { id: input.paymentId },
-      { populate: ["order"], lockMode: LockMode.PESSIMISTIC_WRITE },
-    );
-    if (!payment) throw new AppError("not_found", "No such payment.");
+    const found = await em.findOne(Payment, { id: input.paymentId });
+    if (!found) throw new AppError("not_found", "No such payment.");
+    await lockOrder(em, found.order.id);
+    const payment = await em.findOneOrFail(Payment, { id: found.id }, { refresh: true, populate: ["order"] });
     if (payment.status !== "succeeded" || !payment.paymentIntentId)
       throw new AppError("conflict", "Only a completed payment can be refunded.");
     const refundable = payment.amountCents - payment.refundedCents;
@@ -260,12 +392,17 @@ export async function refundPayment(
         },
       );
     }
-    const result = await payments().refund({
-      paymentIntentId: payment.paymentIntentId,
-      amountCents: input.amountCents,
-      reason: input.reason,
-      idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${input.amountCents}`,
-    });
+    const paymentIntentId = payment.paymentIntentId;
+    const result = await provider(
+      () =>
+        payments().refund({
+          paymentIntentId,
+          amountCents: input.amountCents,
+          reason: input.reason,
+          idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${input.amountCents}`,
+        }),
+      REFUND_UNAVAILABLE,
+    );
     const refund = em.create(Refund, {
       payment,
       amountCents: result.amountCents,

@@ -10,6 +10,11 @@ export interface PaymentsPort {
     id: string;
     amountCents: number;
   }>;
+  /**
+   * Closes an open checkout so it can no longer be paid. Resolves "expired" (now or before), or
+   * "completed" when it was paid in the meantime (its completion event is then on its way).
+   */
+  expireCheckout(sessionId: string): Promise<"expired" | "completed">;
   /** Verifies a webhook's signature and returns its event; throws WebhookSignatureError when it does not verify. */
   verifyWebhook(rawBody: string, signatureHeader: string | null): Promise<PaymentEvent>;
 }
@@ -57,3 +62,6 @@ export type PaymentEvent =
   | { id: string; type: "other"; providerType: string; raw: unknown };
 
 export class WebhookSignatureError extends Error {}
+
+/** The provider could not be reached or answered with its own failure; nothing was done there. */
+export class PaymentsUnavailableError extends Error {}

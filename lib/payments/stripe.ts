@@ -1,6 +1,21 @@
 import Stripe from "stripe";
 import type { CheckoutInput, PaymentEvent, PaymentsPort } from "./port";
-import { WebhookSignatureError } from "./port";
+import { PaymentsUnavailableError, WebhookSignatureError } from "./port";
+
+/** Turns "could not reach the provider" (and its own 5xx failures) into the port's error. */
+async function reaching<T>(call: () => Promise<T>): Promise<T> {
+  try {
+    return await call();
+  } catch (error) {
+    if (
+      error instanceof Stripe.errors.StripeConnectionError ||
+      error instanceof Stripe.errors.StripeAPIError
+    ) {
+      throw new PaymentsUnavailableError(error.message);
+    }
+    throw error;
+  }
+}
 
 /**
  * The Stripe adapter. In development and tests STRIPE_API_HOST/PORT/PROTOCOL point the
@@ -30,38 +45,59 @@ export function createStripePayments(
 ): PaymentsPort {
   return {
     async createCheckout(input: CheckoutInput) {
-      const session = await stripe.checkout.sessions.create(
-        {
-          mode: "payment",
-          line_items: [
-            {
-              quantity: 1,
-              price_data: {
-                currency: input.currency.toLowerCase(),
-                unit_amount: input.amountCents,
-                product_data: { name: input.description },
+      const session = await reaching(() =>
+        stripe.checkout.sessions.create(
+          {
+            mode: "payment",
+            line_items: [
+              {
+                quantity: 1,
+                price_data: {
+                  currency: input.currency.toLowerCase(),
+                  unit_amount: input.amountCents,
+                  product_data: { name: input.description },
+                },
               },
-            },
-          ],
-          client_reference_id: input.orderId,
-          customer_email: input.customerEmail,
-          success_url: input.successUrl,
-          cancel_url: input.cancelUrl,
-          metadata: { orderId: input.orderId, paymentId: input.paymentId, orderNumber: input.orderNumber },
-          payment_intent_data: { metadata: { orderId: input.orderId, paymentId: input.paymentId } },
-        },
-        { idempotencyKey: input.idempotencyKey },
+            ],
+            client_reference_id: input.orderId,
+            customer_email: input.customerEmail,
+            success_url: input.successUrl,
+            cancel_url: input.cancelUrl,
+            metadata: { orderId: input.orderId, paymentId: input.paymentId, orderNumber: input.orderNumber },
+            payment_intent_data: { metadata: { orderId: input.orderId, paymentId: input.paymentId } },
+          },
+          { idempotencyKey: input.idempotencyKey },
+        ),
       );
       if (!session.url) throw new Error("The payment provider returned no checkout address.");
       return { id: session.id, url: session.url };
     },
 
     async refund({ paymentIntentId, amountCents, idempotencyKey, reason }) {
-      const refund = await stripe.refunds.create(
-        { payment_intent: paymentIntentId, amount: amountCents, metadata: { reason: reason.slice(0, 400) } },
-        { idempotencyKey },
+      const refund = await reaching(() =>
+        stripe.refunds.create(
+          {
+            payment_intent: paymentIntentId,
+            amount: amountCents,
+            metadata: { reason: reason.slice(0, 400) },
+          },
+          { idempotencyKey },
+        ),
       );
       return { id: refund.id, amountCents: refund.amount };
+    },
+
+    async expireCheckout(sessionId) {
+      try {
+        await reaching(() => stripe.checkout.sessions.expire(sessionId));
+        return "expired";
+      } catch (error) {
+        if (!(error instanceof Stripe.errors.StripeInvalidRequestError)) throw error;
+        // Refused because it is no longer open: say which way it closed.
+        const session = await reaching(() => stripe.checkout.sessions.retrieve(sessionId));
+        if (session.status === "open") throw error;
+        return session.status === "complete" ? "completed" : "expired";
+      }
     },
 
     async verifyWebhook(rawBody, signatureHeader) {

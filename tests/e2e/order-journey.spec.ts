@@ -70,7 +70,7 @@ test("a new customer designs a shaft, fixes it, uploads a photo, pays a deposit 
   await page.getByLabel("Expiry (MM/YY)").fill("12/34");
   await page.getByLabel("CVC").fill("123");
   await page.getByRole("button", { name: /^Pay / }).click();
-  await expect(page.getByText("Your card was declined.")).toBeVisible();
+  await expect(page.getByText("The bank turned this card down.")).toBeVisible();
   await page.getByLabel("Card number").fill("4242 4242 4242 4242");
   await page.getByLabel("Expiry (MM/YY)").fill("12/34");
   await page.getByLabel("CVC").fill("123");

@@ -275,7 +275,10 @@ describe("Stripe fake: paying and webhooks", () => {
     const pay = await control(`/_fake/checkout/${session.id}/pay`, { card: "4000000000000002" });
     expect(pay.status).toBe(402);
     expect(pay.json["outcome"]).toBe("declined");
-    expect(pay.json["message"]).toBe("Your card was declined.");
+    // The fake's own words for people; the code the SDK sees stays the API's.
+    expect(pay.json["message"]).toBe("The bank turned this card down.");
+    expect(pay.json["code"]).toBe("card_declined");
+    expect(pay.json["declineCode"]).toBe("generic_decline");
 
     const still = await stripe.checkout.sessions.retrieve(session.id);
     expect(still.status).toBe("open");
@@ -297,7 +300,8 @@ describe("Stripe fake: paying and webhooks", () => {
     const session = await stripe.checkout.sessions.create(sessionParams());
     const bad = await control(`/_fake/checkout/${session.id}/pay`, { card: "1234123412341234" });
     expect(bad.status).toBe(400);
-    expect(bad.json["message"]).toBe("Your card number is invalid.");
+    expect(bad.json["message"]).toBe("That is not a valid card number. Check the digits.");
+    expect(bad.json["code"]).toBe("invalid_number");
     expect((await stripe.checkout.sessions.retrieve(session.id)).status).toBe("open");
   });
 
@@ -354,7 +358,9 @@ describe("Stripe fake: hosted checkout page", () => {
       });
     const declined = await post({ cardNumber: "4000 0000 0000 0002", expiry: "12/34", cvc: "123" });
     expect(declined.status).toBe(402);
-    expect(await declined.text()).toContain("Your card was declined.");
+    const declinedPage = await declined.text();
+    expect(declinedPage).toContain("The bank turned this card down.");
+    expect(declinedPage).not.toMatch(/Your card (was declined|has insufficient funds|number is invalid)/);
     expect((await stripe.checkout.sessions.retrieve(session.id)).status).toBe("open");
 
     const ok = await post({ cardNumber: "4242 4242 4242 4242", expiry: "12/34", cvc: "123" });
