@@ -74,7 +74,10 @@ export function parseSerial(text: string): ParsedSerial {
   const m = SERIAL.exec(serial);
   if (!m) return { ok: false, message: `"${serial}" is not a shaft serial (like TGW-26-00042-7)` };
   if (!hasValidCheck(serial.replace(/-/g, ""))) {
-    return { ok: false, message: `"${serial}" fails its check character: scan it again or type it carefully` };
+    return {
+      ok: false,
+      message: `"${serial}" fails its check character: scan it again or type it carefully`,
+    };
   }
   return {
     ok: true,

@@ -55,7 +55,8 @@ export function angularDeviationDeg(valueDeg: number, targetDeg: number): number
 /** Limit as text in the shop's units, e.g. "0.000–0.0100 in" or "52.000 in ± 0.063 in". */
 export function describeLimit(quantity: FloorQuantity, units: FloorUnits, limit: NumericLimit): string {
   const f = (v: number) => formatQuantity(quantity, units, v);
-  if (limit.nominal != null && limit.max != null) return `${f(limit.nominal)} ± ${f(limit.max - limit.nominal)}`;
+  if (limit.nominal != null && limit.max != null)
+    return `${f(limit.nominal)} ± ${f(limit.max - limit.nominal)}`;
   if (limit.max != null && (limit.min == null || limit.min === 0)) return `at most ${f(limit.max)}`;
   if (limit.min != null && limit.max == null) return `at least ${f(limit.min)}`;
   return `${f(limit.min ?? 0)} to ${f(limit.max ?? 0)}`;
@@ -107,7 +108,8 @@ export function checkMeasurements(
       case "text": {
         const text = typeof raw === "string" ? raw.trim() : typeof raw === "number" ? String(raw) : "";
         if (!text) issues.push({ path: field.key, message: `${field.label}: required` });
-        else if (text.length > 200) issues.push({ path: field.key, message: `${field.label}: at most 200 characters` });
+        else if (text.length > 200)
+          issues.push({ path: field.key, message: `${field.label}: at most 200 characters` });
         else values[field.key] = text;
         break;
       }
@@ -138,7 +140,13 @@ export function checkMeasurements(
         }
         values[field.key] = b;
         if (!b) {
-          failures.push({ key: field.key, label: field.label, value: null, limit: null, message: `${field.label}: no` });
+          failures.push({
+            key: field.key,
+            label: field.label,
+            value: null,
+            limit: null,
+            message: `${field.label}: no`,
+          });
         }
         break;
       }

@@ -65,7 +65,11 @@ export function phaseTarget(ctx: StepContext): { indexDeg: number; toleranceDeg:
   if (ctx.floor.phasingToleranceDeg != null) {
     return { indexDeg, toleranceDeg: ctx.floor.phasingToleranceDeg, source: "shop setting (floor)" };
   }
-  return { indexDeg, toleranceDeg: shopFloor.phasingToleranceDeg, source: shopFloor.sources[3] ?? "shop setting" };
+  return {
+    indexDeg,
+    toleranceDeg: shopFloor.phasingToleranceDeg,
+    source: shopFloor.sources[3] ?? "shop setting",
+  };
 }
 
 /** Tube length as cut (weld seat to weld seat), mm. */
@@ -106,7 +110,13 @@ export function runoutStations(ctx: StepContext): { stations: RunoutStation[]; f
     fast,
     stations: [
       near("runoutFrontMm", "Runout near the front weld", inset),
-      { key: "runoutMidMm", label: "Runout at mid-span", fromFrontWeldMm: length / 2, limitMm: centre, source: centreSource },
+      {
+        key: "runoutMidMm",
+        label: "Runout at mid-span",
+        fromFrontWeldMm: length / 2,
+        limitMm: centre,
+        source: centreSource,
+      },
       near("runoutRearMm", "Runout near the rear weld", length - inset),
     ],
   };
@@ -156,7 +166,7 @@ function fieldsFor(step: RoutingStep, ctx: StepContext): FieldSpec[] {
         { key: "rearJointLot", label: "Rear joint lot", type: "text" },
         {
           key: "weldedLengthMm",
-          label: "Length between joint centres, as welded",
+          label: "As-welded length (joint centres)",
           type: "number",
           quantity: "length",
           limit: tol(report.lengthMm, lengthTol, lengthSource),
@@ -190,8 +200,8 @@ function fieldsFor(step: RoutingStep, ctx: StepContext): FieldSpec[] {
           quantity: "speed",
           limit: { min: 1, max: null, nominal: null, source: "the balancing machine's speed" },
         },
-        residual("residualFrontGmm", "Residual unbalance, front plane"),
-        residual("residualRearGmm", "Residual unbalance, rear plane"),
+        residual("residualFrontGmm", "Residual, front plane"),
+        residual("residualRearGmm", "Residual, rear plane"),
         { key: "weights", label: "Weights added", type: "weights" },
       ];
     }
@@ -199,12 +209,12 @@ function fieldsFor(step: RoutingStep, ctx: StepContext): FieldSpec[] {
       return [
         {
           key: "overallLengthMm",
-          label: "Overall length between joint centres",
+          label: "Overall length (joint centres)",
           type: "number",
           quantity: "length",
           limit: tol(report.lengthMm, lengthTol, lengthSource),
         },
-        { key: "jointsFree", label: "Joints turn freely, no binding", type: "confirm" },
+        { key: "jointsFree", label: "Joints turn freely", type: "confirm" },
         phaseField("phaseIndexDeg", "Rear yoke phase index"),
         { key: "paintMarking", label: "Paint and serial marking done", type: "confirm" },
       ];

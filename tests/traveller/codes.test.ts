@@ -16,7 +16,9 @@ describe("check character (ISO/IEC 7064 MOD 37,36)", () => {
 
   test("catches every single-character substitution and every adjacent swap", () => {
     const alphabet = "0123456789ABCDEFGHIJKLMNOPQRSTUVWXYZ".split("");
-    const body = fc.array(fc.constantFrom(...alphabet), { minLength: 4, maxLength: 24 }).map((a) => a.join(""));
+    const body = fc
+      .array(fc.constantFrom(...alphabet), { minLength: 4, maxLength: 24 })
+      .map((a) => a.join(""));
     fc.assert(
       fc.property(body, fc.nat(), fc.constantFrom(...alphabet), (text, at, ch) => {
         const i = at % text.length;
@@ -35,7 +37,11 @@ describe("serial numbers", () => {
   test("shop, two-digit year, five-digit sequence and a check character", () => {
     const serial = formatSerial({ shopCode: "TGW", year: 2026, sequence: 42 });
     expect(serial).toMatch(/^TGW-26-00042-[0-9A-Z]$/);
-    expect(parseSerial(serial)).toEqual({ ok: true, serial, parts: { shopCode: "TGW", year: 2026, sequence: 42 } });
+    expect(parseSerial(serial)).toEqual({
+      ok: true,
+      serial,
+      parts: { shopCode: "TGW", year: 2026, sequence: 42 },
+    });
     // Scanners and people may type lower case and stray spaces.
     expect(parseSerial(` ${serial.toLowerCase()} `)).toMatchObject({ ok: true, serial });
   });
@@ -73,7 +79,10 @@ describe("step codes", () => {
 
   test("a misread character or a swapped pair is refused", () => {
     const code = formatStepCode({ serial, step: "RUN", revision: 1 });
-    expect(parseStepCode(code.replace("RUN", "RUM"))).toMatchObject({ ok: false, message: expect.stringContaining("check") });
+    expect(parseStepCode(code.replace("RUN", "RUM"))).toMatchObject({
+      ok: false,
+      message: expect.stringContaining("check"),
+    });
     expect(parseStepCode(code.replace("-R1-", "-R7-"))).toMatchObject({ ok: false });
     expect(parseStepCode(serial)).toMatchObject({ ok: false, message: expect.stringContaining("step code") });
   });

@@ -32,9 +32,11 @@ describe("routing and record sheets from the frozen report", () => {
       [5, "FIN", "Final inspection"],
       [6, "SHP", "Pack and ship"],
     ]);
-    expect(deriveSteps({ report: street, fulfilment: "pickup", floor }).at(-1)!.fields.map((f) => f.key)).toEqual([
-      "pickedUpBy",
-    ]);
+    expect(
+      deriveSteps({ report: street, fulfilment: "pickup", floor })
+        .at(-1)!
+        .fields.map((f) => f.key),
+    ).toEqual(["pickedUpBy"]);
     expect(step("SHP").fields.map((f) => f.key)).toEqual(["carrier", "trackingNumber"]);
   });
 
@@ -88,7 +90,11 @@ describe("routing and record sheets from the frozen report", () => {
   });
 
   test("a shop's phasing tolerance replaces the report's", () => {
-    const tight = deriveSteps({ report: street, fulfilment: "ship", floor: resolveFloorSettings({ phasingToleranceDeg: 0.5 }) });
+    const tight = deriveSteps({
+      report: street,
+      fulfilment: "ship",
+      floor: resolveFloorSettings({ phasingToleranceDeg: 0.5 }),
+    });
     const f = tight[1]!.fields.find((x) => x.key === "phaseIndexDeg");
     expect(f).toMatchObject({ limit: { min: -0.5, max: 0.5 } });
   });
@@ -101,7 +107,11 @@ describe("measurement check", () => {
   });
 
   test("inches at the edge: 0.012 in runout near a weld is over 0.25 mm and holds, naming value and limit", () => {
-    const r = checkMeasurements(step("RUN"), { runoutFrontMm: 0.012, runoutMidMm: 0.01, runoutRearMm: 0.005 }, "in");
+    const r = checkMeasurements(
+      step("RUN"),
+      { runoutFrontMm: 0.012, runoutMidMm: 0.01, runoutRearMm: 0.005 },
+      "in",
+    );
     expect(r.outcome).toBe("hold");
     if (r.outcome !== "hold") return;
     expect(r.values.runoutFrontMm).toBeCloseTo(inToMm(0.012), 9);
@@ -118,7 +128,11 @@ describe("measurement check", () => {
       { overallLengthMm: 1325, jointsFree: "no", phaseIndexDeg: 2.5, paintMarking: true },
       "mm",
     );
-    expect(r.outcome === "hold" && r.failures.map((f) => f.key)).toEqual(["overallLengthMm", "jointsFree", "phaseIndexDeg"]);
+    expect(r.outcome === "hold" && r.failures.map((f) => f.key)).toEqual([
+      "overallLengthMm",
+      "jointsFree",
+      "phaseIndexDeg",
+    ]);
   });
 
   test("phase index compares modulo 180°: 179.5° is 0.5° from 0°", () => {
