@@ -80,6 +80,24 @@ export async function releaseOrder(
   reason?: string | null,
 ): Promise<ReleaseResult> {
   ensure(by, "orders.desk");
+  return release(orderId, by, reason?.trim() || null);
+}
+
+/**
+ * The automatic release, for the payments wiring to call once the deposit policy is met (after
+ * the payment's transaction commits). No actor; does nothing (null) when the order is already
+ * released, cancelled or not yet paid.
+ */
+export async function releaseOrderOnDeposit(orderId: string): Promise<ReleaseResult | null> {
+  try {
+    return await release(orderId, null, null);
+  } catch (error) {
+    if (error instanceof AppError && (error.code === "conflict" || error.code === "invalid")) return null;
+    throw error;
+  }
+}
+
+async function release(orderId: string, by: CurrentUser | null, note: string | null): Promise<ReleaseResult> {
   const shop = await getShopEngineering();
   return inTransaction(async (em) => {
     const order = await em.findOne(Order, { id: orderId }, { lockMode: LockMode.PESSIMISTIC_WRITE });
@@ -88,7 +106,6 @@ export async function releaseOrder(
     if ((await em.count(WorkOrder, { order: order.id })) > 0) {
       throw new AppError("conflict", `Order ${order.number} is already released to the shop.`);
     }
-    const note = reason?.trim() || null;
     if (order.paymentState === "unpaid" && !note) {
       throw new AppError("invalid", "The deposit is not paid: give a reason to release by hand.", {
         reason: "required when the deposit is not paid",
@@ -116,7 +133,7 @@ export async function releaseOrder(
         serialYear: year,
         serialSequence: sequence,
         stepCount: specs.length,
-        releasedBy: userRef(em, by),
+        releasedBy: by ? userRef(em, by) : null,
         releaseReason: note,
       });
       addSteps(em, wo, specs);
@@ -128,13 +145,13 @@ export async function releaseOrder(
         order,
         kind: "step",
         label: "Released to the shop",
-        actor: userRef(em, by),
+        actor: by ? userRef(em, by) : null,
         public: true,
       }),
     );
     await recordAudit(
       {
-        actorId: by.id,
+        actorId: by?.id ?? null,
         action: "order.release",
         subjectType: "order",
         subjectId: order.id,
@@ -560,7 +577,7 @@ export async function travellerViewFor(
 export async function findWorkOrderBySerial(em: EntityManager, serial: string): Promise<WorkOrder> {
   const parsed = parseSerial(serial);
   if (!parsed.ok) throw new AppError("invalid", parsed.message);
-  const wo = await em.findOne(WorkOrder, { serial: parsed.serial }, { lockMode: LockMode.PESSIMISTIC_WRITE });
+  const wo = await em.findOne(WorkOrder, { serial: parsed.serial });
   if (!wo) throw new AppError("not_found", `No shaft with serial ${parsed.serial}.`);
   return wo;
 }
