@@ -12,7 +12,15 @@ import { PDFDocument, degrees, rgb, type PDFFont, type PDFPage } from "pdf-lib";
 
 type Fontkit = Parameters<PDFDocument["registerFontkit"]>[0];
 import { describeLimit } from "./measure";
-import { balanceLimit, phaseTarget, runoutStations, tubeCutLengthMm, type FieldSpec } from "./steps";
+import {
+  balanceLimit,
+  phaseTarget,
+  runoutStations,
+  tubeCutLengthMm,
+  type FieldSpec,
+  type NumericLimit,
+  type StepSpec,
+} from "./steps";
 import { formatQuantity, type FloorUnits } from "./units";
 import type { TravellerStep, TravellerView } from "./view";
 
@@ -225,6 +233,17 @@ function fieldLine(field: FieldSpec, units: FloorUnits): string {
   return field.label;
 }
 
+type NumberField = Extract<FieldSpec, { type: "number" }>;
+
+/** The frozen number fields of the first step of `kind` (the limits printed are the ones checked). */
+function frozenFields(steps: readonly StepSpec[], kind: StepSpec["kind"]): NumberField[] {
+  const step = steps.find((s) => s.kind === kind);
+  return (step?.fields ?? []).filter((f): f is NumberField => f.type === "number");
+}
+
+const plusMinus = (l: NumericLimit | null | undefined) =>
+  l && l.nominal != null && l.max != null ? { nominal: l.nominal, tol: l.max - l.nominal } : null;
+
 function shaftBlock(w: Writer, view: TravellerView, top: number, left: number, width: number): number {
   const { report } = view;
   const units = view.floor.units;
@@ -249,8 +268,11 @@ function shaftBlock(w: Writer, view: TravellerView, top: number, left: number, w
   y -= 16;
   label("Cut length (weld seat to weld seat)", left, y);
   y -= 15;
-  const cutTol = view.floor.limits.cutLengthToleranceMm.value;
-  w.text(`${q("length", tubeCutLengthMm(report))} ± ${q("length", cutTol)}`, left, y, 15, f.bold);
+  const cut = plusMinus(frozenFields(view.steps, "cut").find((x) => x.key === "cutLengthMm")?.limit) ?? {
+    nominal: tubeCutLengthMm(report),
+    tol: view.floor.limits.cutLengthToleranceMm.value,
+  };
+  w.text(`${q("length", cut.nominal)} ± ${q("length", cut.tol)}`, left, y, 15, f.bold);
   y -= 14;
   w.text(
     `Between joint centres ${q("length", report.lengthMm)} ± ${q("length", report.shopFloor.lengthToleranceMm)}`,
@@ -298,7 +320,12 @@ function shaftBlock(w: Writer, view: TravellerView, top: number, left: number, w
   // Right column: phase drawing, runout, balance, speed.
   const rx = left + colW;
   let ry = top;
-  const phase = phaseTarget(ctx);
+  const frozenPhase = plusMinus(
+    frozenFields(view.steps, "weld-phase").find((x) => x.key === "phaseIndexDeg")?.limit,
+  );
+  const phase = frozenPhase
+    ? { indexDeg: frozenPhase.nominal, toleranceDeg: frozenPhase.tol }
+    : phaseTarget(ctx);
   label("Phase index, looking rearward", rx, ry);
   drawPhaseDiagram(w, rx + 26, ry - 34, 20, phase.indexDeg);
   w.text(`${phase.indexDeg.toFixed(1)}°`, rx + 56, ry - 26, 16, f.bold);
@@ -313,7 +340,13 @@ function shaftBlock(w: Writer, view: TravellerView, top: number, left: number, w
   ry -= 68;
   label("Runout (TIR) stations", rx, ry);
   ry -= 11;
-  const { stations, fast } = runoutStations(ctx);
+  const { stations: current, fast } = runoutStations(ctx);
+  const frozenRunout = frozenFields(view.steps, "runout").filter(
+    (x) => x.stationMm != null && x.limit?.max != null,
+  );
+  const stations = frozenRunout.length
+    ? frozenRunout.map((x) => ({ fromFrontWeldMm: x.stationMm!, limitMm: x.limit!.max! }))
+    : current;
   for (const s of stations) {
     w.text(`${q("length", s.fromFrontWeldMm)} from front weld: at most ${q("runout", s.limitMm)}`, rx, ry, 8);
     ry -= 10;
@@ -325,8 +358,10 @@ function shaftBlock(w: Writer, view: TravellerView, top: number, left: number, w
   ry -= 3;
   label("Balance", rx, ry);
   ry -= 12;
-  const bal = balanceLimit(report);
-  w.text(`at most ${q("unbalance", bal.perPlaneGmm)} per plane`, rx, ry, 10, f.bold);
+  const perPlane =
+    frozenFields(view.steps, "balance").find((x) => x.key === "residualFrontGmm")?.limit?.max ??
+    balanceLimit(report).perPlaneGmm;
+  w.text(`at most ${q("unbalance", perPlane)} per plane`, rx, ry, 10, f.bold);
   ry -= 10;
   w.text(
     `ISO 21940-11 G ${report.balance.gradeMmS} at ${Math.round(report.balance.speedRpm)} rpm`,

@@ -20,7 +20,15 @@ export interface NumericLimit {
 
 export type FieldSpec =
   | { key: string; label: string; type: "text" }
-  | { key: string; label: string; type: "number"; quantity: FloorQuantity; limit: NumericLimit | null }
+  | {
+      key: string;
+      label: string;
+      type: "number";
+      quantity: FloorQuantity;
+      limit: NumericLimit | null;
+      /** Runout only: where to read it, mm from the front weld. */
+      stationMm?: number;
+    }
   /** Must be confirmed (yes); "no" holds the step. */
   | { key: string; label: string; type: "confirm" }
   /** Balance weights added: a list of { plane, mass (g), angleDeg }. */
@@ -181,6 +189,7 @@ function fieldsFor(step: RoutingStep, ctx: StepContext): FieldSpec[] {
         type: "number" as const,
         quantity: "runout" as const,
         limit: { min: 0, max: s.limitMm, nominal: null, source: s.source },
+        stationMm: s.fromFrontWeldMm,
       }));
     }
     case "balance": {

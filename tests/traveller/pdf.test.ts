@@ -5,6 +5,7 @@ import path from "node:path";
 import { afterAll, describe, expect, test } from "vitest";
 import { PDFDocument } from "pdf-lib";
 import { parseStepCode } from "@/lib/traveller/codes";
+import { resolveFloorSettings } from "@/lib/traveller/settings";
 import { renderTraveller, renderTravellers } from "@/lib/traveller/pdf";
 import { exampleView } from "./fixtures";
 
@@ -102,6 +103,16 @@ describe("traveller PDF", () => {
     expect(mm).toContain("1188.8 mm ± 0.8 mm");
     expect(mm).toContain("at most 134 g·mm per plane");
     expect(mm).toContain("75.0 mm from front weld: at most 0.25 mm");
+  });
+
+  test("prints the limits frozen with the revision, not today's settings", async () => {
+    const frozen = exampleView({
+      floor: { units: "mm", limits: { cutLengthToleranceMm: 0.5, runoutStationInsetMm: 50 } },
+    });
+    const reprint = { ...frozen, floor: resolveFloorSettings({ shopCode: "TGW", units: "mm" }) };
+    const text = pdfText(await renderTraveller(reprint), "frozen");
+    expect(text).toContain("1188.8 mm ± 0.5 mm");
+    expect(text).toContain("50.0 mm from front weld: at most 0.25 mm");
   });
 
   test(
