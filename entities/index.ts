@@ -16,6 +16,9 @@ import { Upload } from "./upload.entity";
 import { User } from "./user.entity";
 import { Verification } from "./verification.entity";
 import { WebhookEvent } from "./webhook-event.entity";
+import { WorkOrder } from "./work-order.entity";
+import { WorkOrderStep } from "./work-order-step.entity";
+import { StepRecord } from "./step-record.entity";
 
 export {
   Account,
@@ -36,9 +39,15 @@ export {
   User,
   Verification,
   WebhookEvent,
+  WorkOrder,
+  WorkOrderStep,
+  StepRecord,
 };
 export type { OrderStatus, PaymentState } from "./order.entity";
 export type { OrderEventKind } from "./order-event.entity";
+export type { WorkOrderState } from "./work-order.entity";
+export type { StepState, StepCompletion } from "./work-order-step.entity";
+export type { StepOutcome } from "./step-record.entity";
 
 /** Every entity, for the ORM configuration. */
 export const entities = [
@@ -60,4 +69,7 @@ export const entities = [
   OrderEvent,
   EmailMessage,
   Upload,
+  WorkOrder,
+  WorkOrderStep,
+  StepRecord,
 ];

@@ -1,6 +1,7 @@
 import { Entity, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import type { Catalogue, SettingKey } from "../lib/driveline";
 import type { PriceBook } from "../lib/pricing/price-book";
+import type { FloorSettingsDocument } from "../lib/traveller/settings";
 
 /**
  * The shop's engineering catalogue, its limits and its price book (one row). Kept as
@@ -8,7 +9,7 @@ import type { PriceBook } from "../lib/pricing/price-book";
  */
 @Entity({ tableName: "shop_config" })
 export class ShopConfig {
-  [OptionalProps]?: "updatedAt" | "settings";
+  [OptionalProps]?: "updatedAt" | "settings" | "floor";
 
   @PrimaryKey({ type: "integer", autoincrement: false })
   id: number = 1;
@@ -22,6 +23,10 @@ export class ShopConfig {
 
   @Property({ type: "json" })
   priceBook!: PriceBook;
+
+  /** The shop floor's routing, tolerances, paper size and units (lib/traveller/settings.ts fills in missing keys). */
+  @Property({ type: "json", defaultRaw: `'{}'` })
+  floor: FloorSettingsDocument = {};
 
   @Property({ type: "Date", defaultRaw: "now()", onUpdate: () => new Date() })
   updatedAt: Date = new Date();

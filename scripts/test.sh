@@ -11,6 +11,7 @@ source scripts/throwaway.sh
 
 pg_ensure_installed
 [ -x /usr/bin/chromium ] || ensure_apt_packages chromium
+ensure_apt_packages zbar-tools poppler-utils # the traveller test renders its PDF and decodes the barcodes
 
 PG_PORT="${TEST_PG_PORT:-54339}"
 echo "▸ PostgreSQL (throw-away) on 127.0.0.1:${PG_PORT}"

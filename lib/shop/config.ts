@@ -2,6 +2,7 @@ import { ShopConfig } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 import { defaultCatalogue, resolveSettings, type Catalogue, type ShopSettings } from "@/lib/driveline";
 import { defaultPriceBook, priceBookSchema, type PriceBook } from "@/lib/pricing/price-book";
+import { resolveFloorSettings, type FloorSettings } from "@/lib/traveller/settings";
 
 export interface ShopEngineering {
   catalogue: Catalogue;
@@ -9,6 +10,8 @@ export interface ShopEngineering {
   /** The raw overrides, as stored (for screens that show what the shop changed). */
   settingOverrides: Record<string, number>;
   priceBook: PriceBook;
+  /** The shop floor's routing, tolerances, paper size and units. */
+  floor: FloorSettings;
 }
 
 const CACHE_MS = 5_000;
@@ -27,6 +30,7 @@ export async function getShopEngineering(): Promise<ShopEngineering> {
     settings: resolveSettings(row?.settings ?? {}),
     settingOverrides: (row?.settings ?? {}) as Record<string, number>,
     priceBook: row ? priceBookSchema.parse(row.priceBook) : defaultPriceBook,
+    floor: resolveFloorSettings(row?.floor),
   };
   cached = { at: Date.now(), value };
   return value;

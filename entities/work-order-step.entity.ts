@@ -1,0 +1,48 @@
+import { Entity, Enum, ManyToOne, OptionalProps, PrimaryKey, Property, Unique } from "@mikro-orm/core";
+import { randomUUID } from "node:crypto";
+import type { StepSpec } from "../lib/traveller/steps";
+import { User } from "./user.entity";
+import type { WorkOrder } from "./work-order.entity";
+
+export const STEP_STATES = ["pending", "on_hold", "done"] as const;
+export type StepState = (typeof STEP_STATES)[number];
+export type StepCompletion = "pass" | "rework" | "concession";
+
+/** One routing step of one traveller revision, with its record sheet and limits frozen. */
+@Entity({ tableName: "work_order_step" })
+@Unique({ properties: ["workOrder", "revision", "position"] })
+export class WorkOrderStep {
+  [OptionalProps]?: "state" | "completion" | "completedAt" | "completedBy";
+
+  @PrimaryKey({ type: "uuid" })
+  id: string = randomUUID();
+
+  @ManyToOne("WorkOrder", { deleteRule: "cascade" })
+  workOrder!: WorkOrder;
+
+  @Property({ type: "integer" })
+  revision!: number;
+
+  @Property({ type: "integer" })
+  position!: number;
+
+  /** Three letters, as in the step's barcode. */
+  @Property({ type: "text" })
+  code!: string;
+
+  @Property({ type: "json" })
+  spec!: StepSpec;
+
+  @Enum({ items: () => STEP_STATES, nativeEnumName: "work_order_step_state" })
+  state: StepState = "pending";
+
+  /** How the step was completed (a pass, a pass after rework, or an owner's concession). */
+  @Property({ type: "text", nullable: true })
+  completion?: StepCompletion | null;
+
+  @Property({ type: "Date", nullable: true })
+  completedAt?: Date | null;
+
+  @ManyToOne(() => User, { nullable: true, deleteRule: "set null" })
+  completedBy?: User | null;
+}

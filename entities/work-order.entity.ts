@@ -1,0 +1,78 @@
+import {
+  Collection,
+  Entity,
+  Enum,
+  Index,
+  ManyToOne,
+  OneToMany,
+  OneToOne,
+  OptionalProps,
+  PrimaryKey,
+  Property,
+  Unique,
+} from "@mikro-orm/core";
+import { randomUUID } from "node:crypto";
+import type { Order } from "./order.entity";
+import type { OrderShaft } from "./order-shaft.entity";
+import { User } from "./user.entity";
+import { WorkOrderStep } from "./work-order-step.entity";
+
+export const WORK_ORDER_STATES = ["released", "in_shop", "on_hold", "ready", "shipped", "picked_up"] as const;
+export type WorkOrderState = (typeof WORK_ORDER_STATES)[number];
+
+/** One shaft of a released order on the shop floor: its serial for life, its traveller revision, where it is. */
+@Entity({ tableName: "work_order" })
+@Unique({ properties: ["serialYear", "serialSequence"] })
+export class WorkOrder {
+  [OptionalProps]?: "revision" | "state" | "currentPosition" | "releaseReason" | "createdAt" | "updatedAt";
+
+  @PrimaryKey({ type: "uuid" })
+  id: string = randomUUID();
+
+  @Index()
+  @ManyToOne("Order", { deleteRule: "restrict" })
+  order!: Order;
+
+  @OneToOne("OrderShaft", { owner: true, unique: true, deleteRule: "restrict" })
+  orderShaft!: OrderShaft;
+
+  /** e.g. "TGW-26-00042-7" (lib/traveller/codes.ts). */
+  @Property({ type: "text", unique: true })
+  serial!: string;
+
+  @Property({ type: "integer" })
+  serialYear!: number;
+
+  @Property({ type: "integer" })
+  serialSequence!: number;
+
+  /** The traveller revision in force; codes of earlier revisions are void. */
+  @Property({ type: "integer", default: 1 })
+  revision: number = 1;
+
+  @Index()
+  @Enum({ items: () => WORK_ORDER_STATES, nativeEnumName: "work_order_state" })
+  state: WorkOrderState = "released";
+
+  /** 1-based routing position of the next step; stepCount + 1 once every step is done. */
+  @Property({ type: "integer", default: 1 })
+  currentPosition: number = 1;
+
+  @Property({ type: "integer" })
+  stepCount!: number;
+
+  @ManyToOne(() => User, { nullable: true, deleteRule: "set null" })
+  releasedBy?: User | null;
+
+  @Property({ type: "text", nullable: true })
+  releaseReason?: string | null;
+
+  @OneToMany(() => WorkOrderStep, (s) => s.workOrder, { orderBy: { revision: "asc", position: "asc" } })
+  steps = new Collection<WorkOrderStep>(this);
+
+  @Property({ type: "Date", defaultRaw: "now()" })
+  createdAt: Date = new Date();
+
+  @Property({ type: "Date", defaultRaw: "now()", onUpdate: () => new Date() })
+  updatedAt: Date = new Date();
+}

@@ -1,0 +1,527 @@
+/**
+ * The traveller PDF: one page per shaft, letter or A4, black on white. A QR code for the serial,
+ * a Code 128 per step (drawn as vector bars from bwip-js's encoding, so they stay sharp at any
+ * printer resolution), what each station needs, and a sign-off line per step. Server only (reads
+ * the embedded fonts from lib/traveller/fonts).
+ */
+import { readFileSync } from "node:fs";
+import path from "node:path";
+import bwipjs from "bwip-js/node";
+import fontkit from "@pdf-lib/fontkit";
+import { PDFDocument, degrees, rgb, type PDFFont, type PDFPage } from "pdf-lib";
+
+type Fontkit = Parameters<PDFDocument["registerFontkit"]>[0];
+import { describeLimit } from "./measure";
+import {
+  balanceLimit,
+  phaseTarget,
+  runoutStations,
+  tubeCutLengthMm,
+  type FieldSpec,
+  type NumericLimit,
+  type StepSpec,
+} from "./steps";
+import { formatQuantity, type FloorUnits } from "./units";
+import type { TravellerStep, TravellerView } from "./view";
+
+const PAGE = { letter: [612, 792], a4: [595.28, 841.89] } as const;
+const BLACK = rgb(0, 0, 0);
+const GREY = rgb(0.35, 0.35, 0.35);
+const MARGIN = 28;
+/** Code 128 narrowest bar: 0.25 mm (about 10 mil), which keyboard-wedge scanners read easily. */
+const MODULE_PT = (0.25 / 25.4) * 72;
+
+const FONT_DIR = path.join(process.cwd(), "lib", "traveller", "fonts");
+let fontBytes: { regular: Buffer; bold: Buffer; mono: Buffer } | null = null;
+function fonts() {
+  fontBytes ??= {
+    regular: readFileSync(path.join(FONT_DIR, "inter-latin-400-normal.ttf")),
+    bold: readFileSync(path.join(FONT_DIR, "inter-latin-700-normal.ttf")),
+    mono: readFileSync(path.join(FONT_DIR, "JetBrainsMono-Bold.ttf")),
+  };
+  return fontBytes;
+}
+
+/**
+ * fontkit with each font parsed once per process and a plain character → glyph mapping instead of
+ * full OpenType shaping: pdf-lib only uses the glyph ids (it ignores kerning), and shaping was
+ * most of the page's time. The travellers use no ligatures or complex scripts.
+ */
+const parsedFonts = new Map<Uint8Array, ReturnType<Fontkit["create"]>>();
+const fastFontkit: Fontkit = {
+  create(data, postscriptName) {
+    let font = parsedFonts.get(data);
+    if (!font) {
+      const parsed = fontkit.create(data, postscriptName);
+      const glyphs = new Map<number, ReturnType<typeof parsed.glyphForCodePoint>>();
+      const glyphFor = (cp: number) => {
+        let g = glyphs.get(cp);
+        if (!g) glyphs.set(cp, (g = parsed.glyphForCodePoint(cp)));
+        return g;
+      };
+      parsed.layout = ((text: string) => ({
+        glyphs: Array.from(text, (ch) => glyphFor(ch.codePointAt(0)!)),
+        positions: [],
+      })) as unknown as typeof parsed.layout;
+      parsedFonts.set(data, (font = parsed));
+    }
+    return font;
+  },
+};
+
+interface Fonts {
+  regular: PDFFont;
+  bold: PDFFont;
+  mono: PDFFont;
+}
+
+/** Replaces characters the embedded subset lacks (the core's messages use a few maths signs). */
+const charsets = new WeakMap<PDFFont, Set<number>>();
+function printable(text: string, font: PDFFont): string {
+  let has = charsets.get(font);
+  if (!has) charsets.set(font, (has = new Set(font.getCharacterSet())));
+  const swaps: Record<string, string> = { "≥": ">=", "≤": "<=", "√": "sqrt ", β: "b", ω: "w", "²": "2" };
+  let out = "";
+  for (const ch of text) {
+    const cp = ch.codePointAt(0)!;
+    out += has.has(cp) ? ch : (swaps[ch] ?? "?");
+  }
+  return out;
+}
+
+class Writer {
+  constructor(
+    readonly page: PDFPage,
+    readonly f: Fonts,
+  ) {}
+
+  text(
+    text: string,
+    x: number,
+    y: number,
+    size: number,
+    font: PDFFont = this.f.regular,
+    color = BLACK,
+  ): number {
+    const t = printable(text, font);
+    this.page.drawText(t, { x, y, size, font, color });
+    return font.widthOfTextAtSize(t, size);
+  }
+
+  /** Word-wrapped text from the top line's baseline down; returns the y below the last line. */
+  wrap(
+    text: string,
+    x: number,
+    y: number,
+    width: number,
+    size: number,
+    font: PDFFont = this.f.regular,
+    maxLines = 99,
+  ): number {
+    const words = printable(text, font).split(/\s+/);
+    let line = "";
+    let lines = 0;
+    const lead = size * 1.25;
+    for (const word of words) {
+      const next = line ? `${line} ${word}` : word;
+      if (font.widthOfTextAtSize(next, size) > width && line) {
+        if (++lines >= maxLines) {
+          this.page.drawText(`${line} …`, { x, y, size, font, color: BLACK });
+          return y - lead;
+        }
+        this.page.drawText(line, { x, y, size, font, color: BLACK });
+        y -= lead;
+        line = word;
+      } else line = next;
+    }
+    if (line) {
+      this.page.drawText(line, { x, y, size, font, color: BLACK });
+      y -= lead;
+    }
+    return y;
+  }
+
+  rule(x1: number, y: number, x2: number, thickness = 0.6): void {
+    this.page.drawLine({ start: { x: x1, y }, end: { x: x2, y }, thickness, color: BLACK });
+  }
+}
+
+/** Code 128 as vector bars, bottom-left at (x, y). Returns the drawn width. */
+function drawCode128(
+  page: PDFPage,
+  text: string,
+  x: number,
+  y: number,
+  heightPt: number,
+  maxWidthPt: number,
+): number {
+  const [enc] = bwipjs.raw({ bcid: "code128", text }) as Array<{ sbs: number[] }>;
+  const sbs = enc!.sbs;
+  const modules = sbs.reduce((a, b) => a + b, 0);
+  const m = Math.min(MODULE_PT, maxWidthPt / modules);
+  let cx = x;
+  sbs.forEach((w, i) => {
+    if (i % 2 === 0) page.drawRectangle({ x: cx, y, width: w * m, height: heightPt, color: BLACK });
+    cx += w * m;
+  });
+  return modules * m;
+}
+
+/** QR code (error correction M) as vector modules, bottom-left at (x, y), `sizePt` square. */
+function drawQr(page: PDFPage, text: string, x: number, y: number, sizePt: number): void {
+  const [enc] = bwipjs.raw("qrcode", text, "eclevel=M") as Array<{
+    pixs: number[];
+    pixx: number;
+    pixy: number;
+  }>;
+  const { pixs, pixx, pixy } = enc!;
+  const m = sizePt / pixx;
+  for (let row = 0; row < pixy; row++) {
+    let start = -1;
+    for (let col = 0; col <= pixx; col++) {
+      const dark = col < pixx && pixs[row * pixx + col] === 1;
+      if (dark && start < 0) start = col;
+      if (!dark && start >= 0) {
+        // Rows run top to bottom in the encoding; PDF y runs upward.
+        page.drawRectangle({
+          x: x + start * m,
+          y: y + sizePt - (row + 1) * m,
+          width: (col - start) * m,
+          height: m,
+          color: BLACK,
+        });
+        start = -1;
+      }
+    }
+  }
+}
+
+/** Looking rearward: the front yoke's plane as a dashed reference, the rear yoke rotated by the index. */
+function drawPhaseDiagram(w: Writer, cx: number, cy: number, r: number, indexDeg: number): void {
+  const p = w.page;
+  p.drawEllipse({ x: cx, y: cy, xScale: r, yScale: r, borderColor: BLACK, borderWidth: 0.8 });
+  p.drawLine({
+    start: { x: cx, y: cy - r - 4 },
+    end: { x: cx, y: cy + r + 4 },
+    thickness: 0.6,
+    color: GREY,
+    dashArray: [2, 2],
+  });
+  // Clockwise looking rearward = clockwise on the page, from 12 o'clock.
+  const a = (indexDeg * Math.PI) / 180;
+  const dx = Math.sin(a) * r;
+  const dy = Math.cos(a) * r;
+  p.drawLine({
+    start: { x: cx - dx, y: cy - dy },
+    end: { x: cx + dx, y: cy + dy },
+    thickness: 2.2,
+    color: BLACK,
+  });
+  for (const s of [1, -1]) {
+    p.drawEllipse({ x: cx + s * dx, y: cy + s * dy, xScale: 3.2, yScale: 3.2, color: BLACK });
+  }
+  w.text("front", cx + 3, cy + r + 1, 5.5, w.f.regular, GREY);
+}
+
+function fieldLine(field: FieldSpec, units: FloorUnits): string {
+  if (field.type === "number" && field.limit) {
+    const limit = field.quantity === "speed" ? "" : `: ${describeLimit(field.quantity, units, field.limit)}`;
+    return `${field.label}${limit}`;
+  }
+  if (field.type === "confirm") return `${field.label}  [ ] yes`;
+  if (field.type === "weights") return `${field.label}: plane, mass, angle`;
+  return field.label;
+}
+
+type NumberField = Extract<FieldSpec, { type: "number" }>;
+
+/** The frozen number fields of the first step of `kind` (the limits printed are the ones checked). */
+function frozenFields(steps: readonly StepSpec[], kind: StepSpec["kind"]): NumberField[] {
+  const step = steps.find((s) => s.kind === kind);
+  return (step?.fields ?? []).filter((f): f is NumberField => f.type === "number");
+}
+
+const plusMinus = (l: NumericLimit | null | undefined) =>
+  l && l.nominal != null && l.max != null ? { nominal: l.nominal, tol: l.max - l.nominal } : null;
+
+function shaftBlock(w: Writer, view: TravellerView, top: number, left: number, width: number): number {
+  const { report } = view;
+  const units = view.floor.units;
+  const ctx = { report, fulfilment: view.order.fulfilment, floor: view.floor };
+  const { f } = w;
+  const q = (quantity: Parameters<typeof formatQuantity>[0], v: number) => formatQuantity(quantity, units, v);
+  const colW = width * 0.56;
+  let y = top;
+  const label = (t: string, x: number, yy: number) => w.text(t.toUpperCase(), x, yy, 6.5, f.bold, GREY);
+
+  // Left column: tube, lengths, ends.
+  label("Tube", left, y);
+  y -= 12;
+  const t = report.tube;
+  w.text(
+    `${t.tubeId ?? "tube as designed"} · ${t.materialId} · ${q("length", t.odMm)} OD × ${q("length", t.wallMm)} wall`,
+    left,
+    y,
+    9,
+    f.bold,
+  );
+  y -= 16;
+  label("Cut length (weld seat to weld seat)", left, y);
+  y -= 15;
+  const cut = plusMinus(frozenFields(view.steps, "cut").find((x) => x.key === "cutLengthMm")?.limit) ?? {
+    nominal: tubeCutLengthMm(report),
+    tol: view.floor.limits.cutLengthToleranceMm.value,
+  };
+  w.text(`${q("length", cut.nominal)} ± ${q("length", cut.tol)}`, left, y, 15, f.bold);
+  y -= 14;
+  w.text(
+    `Between joint centres ${q("length", report.lengthMm)} ± ${q("length", report.shopFloor.lengthToleranceMm)}`,
+    left,
+    y,
+    8.5,
+  );
+  y -= 14;
+  label("Fittings and joints", left, y);
+  y -= 11;
+  for (const pos of ["front", "rear"] as const) {
+    const end = report.ends[pos];
+    const jointName = report.joints.find((j) => j.position === pos);
+    const txt = end
+      ? `${pos === "front" ? "Front" : "Rear"}: ${end.name} (${end.fittingId}), joint ${end.jointSeriesId}`
+      : `${pos === "front" ? "Front" : "Rear"}: as designed`;
+    y = w.wrap(
+      `${txt}${jointName ? `, working angle ${jointName.workingAngleDeg.toFixed(2)}°` : ""}`,
+      left,
+      y,
+      colW - 8,
+      8,
+      f.regular,
+      2,
+    );
+  }
+  y -= 2;
+  label("Verdict and cautions", left, y);
+  y -= 11;
+  const notPassing = report.checks.filter((c) => c.status !== "pass");
+  w.text(
+    `Checks: ${report.overall.toUpperCase()} (${report.checks.length - notPassing.length} of ${report.checks.length} pass)`,
+    left,
+    y,
+    9,
+    f.bold,
+  );
+  y -= 11;
+  for (const c of notPassing.slice(0, 3))
+    y = w.wrap(`${c.status.toUpperCase()}: ${c.message}`, left, y, colW - 8, 7, f.regular, 2);
+  for (const caution of report.cautions.slice(0, 2))
+    y = w.wrap(caution, left, y, colW - 8, 6.5, f.regular, 3);
+  const leftBottom = y;
+
+  // Right column: phase drawing, runout, balance, speed.
+  const rx = left + colW;
+  let ry = top;
+  const frozenPhase = plusMinus(
+    frozenFields(view.steps, "weld-phase").find((x) => x.key === "phaseIndexDeg")?.limit,
+  );
+  const phase = frozenPhase
+    ? { indexDeg: frozenPhase.nominal, toleranceDeg: frozenPhase.tol }
+    : phaseTarget(ctx);
+  label("Phase index, looking rearward", rx, ry);
+  drawPhaseDiagram(w, rx + 26, ry - 34, 20, phase.indexDeg);
+  w.text(`${phase.indexDeg.toFixed(1)}°`, rx + 56, ry - 26, 16, f.bold);
+  w.text(`± ${phase.toleranceDeg.toFixed(1)}°, rear yoke`, rx + 56, ry - 37, 8);
+  const turn = phase.indexDeg > 0 ? "clockwise" : "anticlockwise";
+  w.text(
+    phase.indexDeg === 0 ? "ears in line with the front" : `${turn} from the front yoke`,
+    rx + 56,
+    ry - 47,
+    7,
+  );
+  ry -= 68;
+  label("Runout (TIR) stations", rx, ry);
+  ry -= 11;
+  const { stations: current, fast } = runoutStations(ctx);
+  const frozenRunout = frozenFields(view.steps, "runout").filter(
+    (x) => x.stationMm != null && x.limit?.max != null,
+  );
+  const stations = frozenRunout.length
+    ? frozenRunout.map((x) => ({ fromFrontWeldMm: x.stationMm!, limitMm: x.limit!.max! }))
+    : current;
+  for (const s of stations) {
+    w.text(`${q("length", s.fromFrontWeldMm)} from front weld: at most ${q("runout", s.limitMm)}`, rx, ry, 8);
+    ry -= 10;
+  }
+  if (fast) {
+    w.text("Fast shaft: tighter runout limits", rx, ry, 7, f.bold);
+    ry -= 10;
+  }
+  ry -= 3;
+  label("Balance", rx, ry);
+  ry -= 12;
+  const perPlane =
+    frozenFields(view.steps, "balance").find((x) => x.key === "residualFrontGmm")?.limit?.max ??
+    balanceLimit(report).perPlaneGmm;
+  w.text(`at most ${q("unbalance", perPlane)} per plane`, rx, ry, 10, f.bold);
+  ry -= 10;
+  w.text(
+    `ISO 21940-11 G ${report.balance.gradeMmS} at ${Math.round(report.balance.speedRpm)} rpm`,
+    rx,
+    ry,
+    7.5,
+  );
+  ry -= 13;
+  label("Service", rx, ry);
+  ry -= 11;
+  w.text(
+    `Max shaft speed ${Math.round(report.service.maxShaftRpm)} rpm (critical ${Math.round(report.criticalSpeedRpm)} rpm)`,
+    rx,
+    ry,
+    7.5,
+  );
+  ry -= 10;
+  return Math.min(leftBottom, ry);
+}
+
+function stepBlock(
+  w: Writer,
+  step: TravellerStep,
+  units: FloorUnits,
+  top: number,
+  left: number,
+  width: number,
+  height: number,
+): void {
+  const { f, page } = w;
+  const barcodeW = 190;
+  const textW = width - barcodeW - 32;
+  page.drawRectangle({ x: left, y: top - height, width, height, borderColor: BLACK, borderWidth: 0.8 });
+  const x = left + 26;
+  w.text(`${step.position}`, left + 6, top - 18, 16, f.bold);
+  w.text(step.name, x, top - 13, 11, f.bold);
+  let y = top - 23;
+  if (step.instructions.length) y = w.wrap(step.instructions.join(". "), x, y, textW, 6.5, f.regular, 1);
+  // Fields flow left to right: lot numbers in quarter cells, measured values in half cells.
+  y -= 2;
+  let cx = 0;
+  let rowLines = 1;
+  for (const field of step.fields) {
+    const cell = field.type === "text" ? textW / 4 : textW / 2;
+    if (cx + cell > textW + 0.5) {
+      y -= rowLines * 9;
+      cx = 0;
+      rowLines = 1;
+    }
+    const after = w.wrap(fieldLine(field, units), x + cx, y, cell - 6, 7.5, f.regular, 2);
+    rowLines = Math.max(rowLines, Math.round((y - after) / 9.375));
+    cx += cell;
+  }
+  // Sign-off line for shops that also sign on paper.
+  const sy = top - height + 6;
+  const half = textW / 2;
+  w.text("Signed", x, sy, 7, f.regular, GREY);
+  w.rule(x + 26, sy - 1, x + half - 10, 0.5);
+  w.text("Date", x + half, sy, 7, f.regular, GREY);
+  w.rule(x + half + 20, sy - 1, x + textW, 0.5);
+  // The step's code: bars, then its text in a fixed-width font under them.
+  const bx = left + width - barcodeW;
+  const drawn = drawCode128(page, step.barcodeText, bx, top - height + 16, height - 24, barcodeW - 8);
+  const lw = f.mono.widthOfTextAtSize(step.barcodeText, 7);
+  w.text(step.barcodeText, bx + (drawn - lw) / 2, top - height + 6, 7, f.mono);
+}
+
+/** Draws one shaft's traveller on a new page of `doc`. */
+async function addTravellerPage(doc: PDFDocument, view: TravellerView, f: Fonts): Promise<void> {
+  const [pw, ph] = PAGE[view.floor.paperSize];
+  const page = doc.addPage([pw, ph]);
+  const w = new Writer(page, f);
+  const left = MARGIN;
+  const width = pw - 2 * MARGIN;
+  let y = ph - MARGIN;
+
+  // Header: who, what, when; the serial big, with its QR code.
+  const qr = 78;
+  drawQr(page, view.serialQrText, left + width - qr, y - qr, qr);
+  w.text(`${view.shop.name} · TRAVELLER`, left, y - 9, 9, f.bold);
+  w.text(view.serial, left, y - 32, 22, f.mono);
+  w.text(
+    `Revision ${view.revision} · shaft ${view.shaft.position} of ${view.shaft.count} · order ${view.order.number}`,
+    left,
+    y - 45,
+    9,
+  );
+  const cols = [
+    ["Customer", view.order.customerName],
+    ["Promised", view.order.promisedDate],
+    [
+      view.order.fulfilment === "ship" ? "Ship" : "Pickup",
+      view.order.fulfilment === "ship" ? "to the customer" : "at the shop",
+    ],
+  ] as const;
+  const colW = (width - qr - 10) / 3;
+  cols.forEach(([k, v], i) => {
+    w.text(k.toUpperCase(), left + i * colW, y - 60, 6.5, f.bold, GREY);
+    w.text(v.slice(0, 34), left + i * colW, y - 73, 11, f.bold);
+  });
+  const app = view.shaft.application;
+  w.wrap(
+    `${view.shaft.name}${app ? ` · ${app.description} (${app.use})` : ""}`,
+    left,
+    y - 88,
+    width - qr - 10,
+    9,
+    f.regular,
+    1,
+  );
+  y -= 96;
+  w.rule(left, y, left + width, 1.2);
+  y = shaftBlock(w, view, y - 12, left, width);
+  y -= 4;
+
+  // Steps fill the rest of the page.
+  const bottom = MARGIN;
+  const gap = 4;
+  const n = view.steps.length;
+  const h = Math.min(92, (y - bottom - gap * (n - 1)) / n);
+  view.steps.forEach((step, i) => {
+    stepBlock(w, step, view.floor.units, y - i * (h + gap), left, width, h);
+  });
+
+  if (view.voidedBy != null) {
+    const text = `VOID - see revision ${view.voidedBy}`;
+    const size = 54;
+    page.drawText(text, {
+      x: pw / 2 - f.bold.widthOfTextAtSize(text, size) / 2.6,
+      y: ph / 2 - 160,
+      size,
+      font: f.bold,
+      color: BLACK,
+      opacity: 0.3,
+      rotate: degrees(35),
+    });
+  }
+}
+
+async function embedFonts(doc: PDFDocument): Promise<Fonts> {
+  doc.registerFontkit(fastFontkit);
+  const b = fonts();
+  const [regular, bold, mono] = await Promise.all([
+    doc.embedFont(b.regular, { subset: true }),
+    doc.embedFont(b.bold, { subset: true }),
+    doc.embedFont(b.mono, { subset: true }),
+  ]);
+  return { regular, bold, mono };
+}
+
+/** One page per shaft, in the order given. */
+export async function renderTravellers(views: readonly TravellerView[]): Promise<Uint8Array> {
+  const doc = await PDFDocument.create();
+  doc.setTitle(views.length === 1 ? `Traveller ${views[0]!.serial}` : `Travellers (${views.length})`);
+  doc.setCreator("Yokeline");
+  const f = await embedFonts(doc);
+  for (const view of views) await addTravellerPage(doc, view, f);
+  return doc.save();
+}
+
+export async function renderTraveller(view: TravellerView): Promise<Uint8Array> {
+  return renderTravellers([view]);
+}

@@ -1,0 +1,59 @@
+/**
+ * The traveller's view model: plain data (no entities) from which the PDF, and later the scan
+ * station and the as-built record, are drawn. Built by the floor service from a work order.
+ */
+import type { EvaluationReport } from "@/lib/driveline/report";
+import { formatStepCode } from "./codes";
+import type { FloorSettings } from "./settings";
+import type { StepSpec } from "./steps";
+
+export interface TravellerStep extends StepSpec {
+  /** The text of the step's Code 128. */
+  barcodeText: string;
+}
+
+export interface TravellerView {
+  shop: { name: string; phone: string | null };
+  serial: string;
+  /** What the serial's QR code holds (the serial itself, or a link to the as-built record). */
+  serialQrText: string;
+  revision: number;
+  /** Set when this revision was superseded: the page is marked VOID. */
+  voidedBy: number | null;
+  order: {
+    number: string;
+    customerName: string;
+    promisedDate: string;
+    fulfilment: "pickup" | "ship";
+  };
+  shaft: {
+    name: string;
+    /** 1-based, of `count` shafts on the order. */
+    position: number;
+    count: number;
+    application: { description: string; use: string } | null;
+  };
+  /** The floor settings the steps were derived with (paper size, units, limits). */
+  floor: FloorSettings;
+  report: EvaluationReport;
+  steps: TravellerStep[];
+}
+
+export interface TravellerViewInput extends Omit<TravellerView, "steps" | "serialQrText" | "voidedBy"> {
+  steps: readonly StepSpec[];
+  serialQrText?: string;
+  voidedBy?: number | null;
+}
+
+/** Adds each step's code; the same serial, step and revision always give the same code. */
+export function buildTravellerView(input: TravellerViewInput): TravellerView {
+  return {
+    ...input,
+    serialQrText: input.serialQrText ?? input.serial,
+    voidedBy: input.voidedBy ?? null,
+    steps: input.steps.map((s) => ({
+      ...s,
+      barcodeText: formatStepCode({ serial: input.serial, step: s.code, revision: input.revision }),
+    })),
+  };
+}
