@@ -11,6 +11,7 @@ import { RateLimit } from "./rate-limit.entity";
 import { Refund } from "./refund.entity";
 import { Session } from "./session.entity";
 import { Shop } from "./shop.entity";
+import { SignInFailure } from "./sign-in-failure.entity";
 import { ShopConfig } from "./shop-config.entity";
 import { Upload } from "./upload.entity";
 import { User } from "./user.entity";
@@ -32,6 +33,7 @@ export {
   Session,
   Shop,
   ShopConfig,
+  SignInFailure,
   Upload,
   User,
   Verification,
@@ -47,6 +49,7 @@ export const entities = [
   Account,
   Verification,
   RateLimit,
+  SignInFailure,
   Shop,
   ShopConfig,
   Customer,
