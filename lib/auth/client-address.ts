@@ -1,11 +1,15 @@
+import { randomBytes } from "node:crypto";
 import type { IncomingMessage, Server } from "node:http";
 
 /**
  * The header the auth library keys its rate limit on. Only our own server code sets it (any copy a
  * client sends is overwritten), from the socket's address — or, when the shop says it sits behind
- * a proxy (TRUST_PROXY=1), from the address that proxy appended to X-Forwarded-For.
+ * a proxy (TRUST_PROXY=1), from the address that proxy appended to X-Forwarded-For. Its name has a
+ * random part made once per process (shared by every bundle through the environment), so a client
+ * cannot send it even in the moment before the stamp is installed.
  */
-export const CLIENT_ADDRESS_HEADER = "x-yokeline-client-address";
+export const CLIENT_ADDRESS_HEADER =
+  (process.env.YOKELINE_CLIENT_ADDRESS_HEADER ??= `x-yokeline-client-address-${randomBytes(6).toString("hex")}`);
 
 type HeaderValue = string | string[] | undefined;
 

@@ -2,7 +2,6 @@ import { appUrl } from "./app-url";
 
 // C0 controls, DEL and C1 controls: browsers strip or reinterpret them, so a path holding one
 // may not be the path it looks like.
-// eslint-disable-next-line no-control-regex
 const CONTROL = /[\u0000-\u001f\u007f-\u009f]/;
 
 /**
