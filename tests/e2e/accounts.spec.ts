@@ -2,8 +2,20 @@ import { createServer, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import { expect, test } from "@playwright/test";
 import { DEMO_PASSWORD, DEMO_PHONE_CUSTOMERS, DEMO_STAFF } from "../../lib/demo";
+import { ACCOUNTS, signIn } from "./fixtures";
 
 const MAIL = `http://127.0.0.1:${process.env.MAIL_FAKE_HTTP_PORT ?? 12680}`;
+
+async function mailTo(email: string, subject: RegExp): Promise<{ subject: string; text: string }> {
+  for (let i = 0; i < 60; i++) {
+    const res = await fetch(`${MAIL}/messages?to=${encodeURIComponent(email)}`);
+    const { data } = (await res.json()) as { data: { subject: string; text: string }[] };
+    const hit = data.find((m) => subject.test(m.subject));
+    if (hit) return hit;
+    await new Promise((r) => setTimeout(r, 500));
+  }
+  throw new Error(`no e-mail to ${email} matching ${subject}`);
+}
 
 /** The newest verification link the mail fake caught for `email`. */
 async function verificationLink(email: string, after = 0): Promise<string> {
@@ -81,4 +93,34 @@ test.describe("a page on another site", () => {
     await page.goto("/desk");
     await expect(page).toHaveURL(/\/sign-in\?next=%2Fdesk/);
   });
+});
+
+test("the counter invites a phone customer; the link in the e-mail makes their account", async ({
+  browser,
+}) => {
+  const email = `invited-${Date.now()}@farm.example`;
+  const desk = await browser.newPage();
+  await signIn(desk, ACCOUNTS.counter);
+  await desk.goto("/desk/new");
+  const newCustomer = desk.getByRole("region", { name: "A new customer" });
+  await newCustomer.getByLabel("Name").fill("Ines Invited");
+  await newCustomer.getByLabel("E-mail").fill(email);
+  await newCustomer.getByLabel("Phone").fill("555-0177");
+  await newCustomer.getByRole("button", { name: "Save and start the order" }).click();
+  await expect(desk.getByRole("heading", { name: "Phone order for Ines Invited" })).toBeVisible();
+  await desk.goto("/desk/customers");
+  await desk.getByRole("button", { name: "Invite Ines Invited to an account" }).click();
+  await expect(desk.getByRole("status").filter({ hasText: `Invitation sent to ${email}` })).toBeVisible();
+  await desk.close();
+
+  const page = await browser.newPage();
+  const mail = await mailTo(email, /follow your orders online/i);
+  const link = mail.text.match(/https?:\/\/\S+\/sign-up\?invite=[\w-]+/)?.[0];
+  expect(link).toBeTruthy();
+  await page.goto(link!);
+  await expect(page.getByLabel("E-mail")).toHaveValue(email);
+  await page.getByLabel("Password").fill("invited-password-1");
+  await page.getByRole("button", { name: "Create account" }).click();
+  await expect(page).toHaveURL(/\/orders\?welcome=1/);
+  await page.close();
 });
