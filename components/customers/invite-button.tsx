@@ -2,8 +2,11 @@
 import { useState, useTransition } from "react";
 import { inviteCustomerAction } from "@/lib/actions/invite-customer";
 
-/** "Invite to an account": e-mails a phone customer a one-time sign-up link (desk screens). */
-export function InviteButton({ customerId, customerName }: { customerId: string; customerName: string }) {
+/**
+ * "Invite to an account": e-mails a phone customer a one-time sign-up link (desk screens). The
+ * button is named by its row or sentence (the customer's name is beside it on every screen).
+ */
+export function InviteButton({ customerId }: { customerId: string }) {
   const [pending, startTransition] = useTransition();
   const [outcome, setOutcome] = useState<{ ok: boolean; text: string } | null>(null);
   return (
@@ -12,7 +15,6 @@ export function InviteButton({ customerId, customerName }: { customerId: string;
         type="button"
         className="btn-quiet px-2 py-1 text-xs"
         disabled={pending}
-        aria-label={`Invite ${customerName} to an account`}
         onClick={() =>
           startTransition(async () => {
             const result = await inviteCustomerAction({ customerId });

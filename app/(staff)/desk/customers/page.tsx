@@ -35,7 +35,7 @@ export default async function CustomersPage() {
                   "Yes"
                 ) : (
                   <span className="inline-flex flex-wrap items-center gap-2">
-                    By phone <InviteButton customerId={c.id} customerName={c.name} />
+                    By phone <InviteButton customerId={c.id} />
                   </span>
                 )}
               </td>

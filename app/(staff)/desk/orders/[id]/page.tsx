@@ -34,8 +34,7 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
       />
       {!order.customer.user && (
         <p className="mb-4 text-sm text-ink-muted">
-          {order.customer.name} has no account yet.{" "}
-          <InviteButton customerId={order.customer.id} customerName={order.customer.name} />
+          {order.customer.name} has no account yet. <InviteButton customerId={order.customer.id} />
         </p>
       )}
       {placed && (
