@@ -11,6 +11,7 @@ import { RateLimit } from "./rate-limit.entity";
 import { Refund } from "./refund.entity";
 import { Session } from "./session.entity";
 import { Shop } from "./shop.entity";
+import { SignInFailure } from "./sign-in-failure.entity";
 import { ShopConfig } from "./shop-config.entity";
 import { Upload } from "./upload.entity";
 import { User } from "./user.entity";
@@ -35,6 +36,7 @@ export {
   Session,
   Shop,
   ShopConfig,
+  SignInFailure,
   Upload,
   User,
   Verification,
@@ -56,6 +58,7 @@ export const entities = [
   Account,
   Verification,
   RateLimit,
+  SignInFailure,
   Shop,
   ShopConfig,
   Customer,

@@ -9,22 +9,37 @@ import { getEm } from "@/lib/db/orm";
 import { createStaffUser } from "@/lib/users/staff";
 import { auth } from "@/lib/auth/server";
 import { DEMO_CUSTOMERS, DEMO_PASSWORD, DEMO_PHONE_CUSTOMERS, DEMO_STAFF } from "@/lib/demo";
+import { isDemo } from "@/lib/shop/shop";
+
+/** Outside demo mode: neutral details the owner replaces under Overview. */
+const PLACEHOLDER_SHOP = {
+  name: "Your shop",
+  addressLines: "",
+  phone: "",
+  email: "",
+};
+
+const DEMO_SHOP = {
+  name: "Tallgrass Driveline Works",
+  addressLines: "1840 Foundry Road\nMillbrook, KS 67599",
+  phone: "(555) 010-4420",
+  email: "shop@tallgrass.example",
+};
 
 /**
- * Seeds the invented demo shop into an empty database: the shop, one user per staff role,
- * customers with accounts and one known only by phone. Does nothing when a shop exists.
- * Returns whether it seeded.
+ * Seeds an empty database. Always the shop row and its configuration; in demo mode
+ * (YOKELINE_DEMO=1) also the invented demo shop's details, one user per staff role with the
+ * published demo password, customers with accounts, one known only by phone, and two orders.
+ * Outside demo mode no account exists afterwards: the first owner comes from `npm run owner:create`.
+ * Does nothing when a shop exists. Returns whether it seeded.
  */
-export async function seedDemoShop(): Promise<boolean> {
+export async function seedDemoShop(demo: boolean = isDemo()): Promise<boolean> {
   const em = await getEm();
   if (await em.findOne(Shop, { id: 1 })) return false;
 
   em.create(Shop, {
     id: 1,
-    name: "Tallgrass Driveline Works",
-    addressLines: "1840 Foundry Road\nMillbrook, KS 67599",
-    phone: "(555) 010-4420",
-    email: "shop@tallgrass.example",
+    ...(demo ? DEMO_SHOP : PLACEHOLDER_SHOP),
     currency: "USD",
     updatedAt: new Date(),
   });
@@ -36,6 +51,7 @@ export async function seedDemoShop(): Promise<boolean> {
     updatedAt: new Date(),
   });
   await em.flush();
+  if (!demo) return true;
 
   for (const s of DEMO_STAFF) {
     await createStaffUser({ name: s.name, email: s.email, role: s.role, password: DEMO_PASSWORD }, null);

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { ROLES } from "./roles";
+import { safeNextPath } from "@/lib/http/safe-next";
 
 export const signInBodySchema = z.object({
   email: z.email({ error: "Enter the e-mail address you signed up with." }),
@@ -23,3 +24,40 @@ export const createStaffBodySchema = z.object({
   password: z.string().min(10, { error: "Use at least 10 characters." }).max(128),
 });
 export type CreateStaffBody = z.infer<typeof createStaffBodySchema>;
+
+/**
+ * What the server accepts at sign-up (the auth library's JSON endpoint): the form's fields, the
+ * return path, and nothing else — every field checked here, not only in the browser.
+ */
+export const signUpServerBodySchema = signUpBodySchema
+  .extend({
+    email: z
+      .email({ error: "Enter a valid e-mail address." })
+      .max(254, { error: "Use a shorter e-mail address." }),
+    callbackURL: z
+      .string()
+      .refine((v) => safeNextPath(v) !== null, { error: "Must be a path on this site." })
+      .optional(),
+    rememberMe: z.boolean().optional(),
+  })
+  .strict();
+
+/** Accepting the counter's invitation: the address comes from the invitation, not the form. */
+export const acceptInviteBodySchema = z.object({
+  token: z.string().min(20).max(200),
+  name: signUpBodySchema.shape.name,
+  password: signUpBodySchema.shape.password,
+});
+export type AcceptInviteBody = z.infer<typeof acceptInviteBodySchema>;
+
+/** Setting the first password from a one-time link (the first owner). */
+export const setPasswordBodySchema = z.object({
+  password: signUpBodySchema.shape.password,
+});
+export type SetPasswordBody = z.infer<typeof setPasswordBodySchema>;
+
+/** The counter invites a customer it knows to an account of their own. */
+export const inviteCustomerBodySchema = z.object({
+  customerId: z.uuid({ error: "Choose a customer." }),
+});
+export type InviteCustomerBody = z.infer<typeof inviteCustomerBodySchema>;

@@ -1,4 +1,5 @@
 import { betterAuth } from "better-auth";
+import { APIError, createAuthMiddleware } from "better-auth/api";
 import { nextCookies } from "better-auth/next-js";
 import { randomUUID } from "node:crypto";
 import { Pool } from "pg";
@@ -6,6 +7,12 @@ import { databaseUrl } from "@/lib/db/url";
 import { logger } from "@/lib/logger";
 import { recordAudit } from "@/lib/audit";
 import { linkCustomerToUser } from "@/lib/customers";
+import { fieldsFromIssues } from "@/lib/http/errors";
+import { zodIssues } from "@/lib/validation";
+import { sendAccountEmail } from "./auth-mail";
+import { CLIENT_ADDRESS_HEADER } from "./client-address";
+import { signUpServerBodySchema } from "./schemas";
+import { clearSignInFailures, recordSignInFailure, signInLockedUntil, waitMinutes } from "./sign-in-lock";
 
 const snake = <T extends string>(...names: T[]) =>
   Object.fromEntries(names.map((n) => [n, n.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)])) as Record<
@@ -24,6 +31,26 @@ const pool = (globalForAuth.yokelineAuthPool ??= new Pool({ connectionString: da
 /** Sign-in attempts allowed per client and window; a shop setting with a safe default. */
 const signInMax = Number(process.env.AUTH_SIGN_IN_MAX ?? 8);
 
+/** Refuses with a house-style error body that the auth library's client can also read. */
+function refuse(
+  status: "UNPROCESSABLE_ENTITY" | "TOO_MANY_REQUESTS",
+  code: string,
+  message: string,
+  fields?: Record<string, string>,
+) {
+  return new APIError(status, {
+    code,
+    message,
+    ...(fields ? { fields } : {}),
+    error: { code: status === "TOO_MANY_REQUESTS" ? "rate_limited" : "invalid", message, fields },
+  });
+}
+
+const emailOf = (body: unknown) =>
+  body && typeof body === "object" && typeof (body as { email?: unknown }).email === "string"
+    ? (body as { email: string }).email
+    : null;
+
 /**
  * The auth library, on the same database as everything else. Its tables are declared as
  * MikroORM entities in entities/ and created by our migrations (snake_case columns, mapped here).
@@ -34,7 +61,27 @@ export const auth = betterAuth({
   baseURL: process.env.BETTER_AUTH_URL ?? process.env.APP_URL ?? "http://127.0.0.1:3000",
   secret: process.env.BETTER_AUTH_SECRET,
   database: pool,
-  emailAndPassword: { enabled: true, minPasswordLength: 10, autoSignIn: true },
+  // No session until the address is proven: signing up with someone else's address gets nothing.
+  emailAndPassword: {
+    enabled: true,
+    minPasswordLength: 10,
+    maxPasswordLength: 128,
+    autoSignIn: false,
+    requireEmailVerification: true,
+  },
+  emailVerification: {
+    sendOnSignUp: true,
+    sendOnSignIn: true,
+    autoSignInAfterVerification: true,
+    expiresIn: 3600,
+    sendVerificationEmail: async ({ user, url }) => {
+      await sendAccountEmail("verify-email", user.email, { name: user.name, url });
+    },
+    // Only a proven address takes over the counter's customer record of that address.
+    afterEmailVerification: async (user) => {
+      if ((user as { role?: string }).role === "customer") await linkCustomerToUser(user);
+    },
+  },
   user: {
     modelName: "app_user",
     fields: snake("emailVerified", "createdAt", "updatedAt"),
@@ -76,11 +123,56 @@ export const auth = betterAuth({
     customRules: {
       "/sign-in/email": { window: 60, max: signInMax },
       "/sign-up/email": { window: 60, max: 10 },
+      "/send-verification-email": { window: 60, max: 5 },
     },
   },
   advanced: {
     database: { generateId: () => randomUUID() },
-    ipAddress: { ipAddressHeaders: ["x-forwarded-for", "x-real-ip"] },
+    // Set by our own server code from the socket (or the shop's proxy, TRUST_PROXY=1); never by the client.
+    ipAddress: { ipAddressHeaders: [CLIENT_ADDRESS_HEADER] },
+  },
+  hooks: {
+    before: createAuthMiddleware(async (ctx) => {
+      if (ctx.path === "/sign-up/email") {
+        const parsed = signUpServerBodySchema.safeParse(ctx.body);
+        if (!parsed.success) {
+          const fields = fieldsFromIssues(zodIssues(parsed.error));
+          for (const issue of parsed.error.issues) {
+            if (issue.code === "unrecognized_keys")
+              for (const k of issue.keys) fields[k] = "Not a sign-up field.";
+          }
+          delete fields["(root)"];
+          throw refuse(
+            "UNPROCESSABLE_ENTITY",
+            "VALIDATION_FAILED",
+            Object.values(fields)[0] ?? "Check the sign-up fields.",
+            fields,
+          );
+        }
+      }
+      if (ctx.path === "/sign-in/email") {
+        const email = emailOf(ctx.body);
+        const until = email ? await signInLockedUntil(email) : null;
+        if (until) {
+          throw refuse(
+            "TOO_MANY_REQUESTS",
+            "ACCOUNT_LOCKED",
+            `Too many wrong passwords for this account. Wait ${waitMinutes(until)} minutes, then try again.`,
+          );
+        }
+      }
+    }),
+    after: createAuthMiddleware(async (ctx) => {
+      if (ctx.path !== "/sign-in/email") return;
+      const email = emailOf(ctx.body);
+      if (!email) return;
+      const returned = ctx.context.returned;
+      if (returned instanceof APIError) {
+        if (returned.status === "UNAUTHORIZED") await recordSignInFailure(email);
+      } else {
+        await clearSignInFailures(email);
+      }
+    }),
   },
   databaseHooks: {
     user: {
@@ -88,13 +180,15 @@ export const auth = betterAuth({
         after: async (user) => {
           // Staff accounts are audited where an owner creates them (lib/users/staff.ts).
           if ((user as { role?: string }).role !== "customer") return;
-          await linkCustomerToUser(user);
+          // Accounts made with a proven address (the demo seed, an accepted invitation) are linked
+          // now; a sign-up waits for its verification link (afterEmailVerification above).
+          if (user.emailVerified) await linkCustomerToUser(user);
           await recordAudit({
             actorId: user.id,
             action: "user.sign-up",
             subjectType: "user",
             subjectId: user.id,
-            details: { email: user.email },
+            details: { email: user.email, verified: user.emailVerified },
           });
         },
       },

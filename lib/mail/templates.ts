@@ -10,6 +10,12 @@ import {
 import { BalanceDueEmail, balanceDueSubject, type BalanceDueProps } from "@/emails/balance-due";
 import { ShaftReadyEmail, shaftReadySubject, type ShaftReadyProps } from "@/emails/shaft-ready";
 import { ShaftShippedEmail, shaftShippedSubject, type ShaftShippedProps } from "@/emails/shaft-shipped";
+import { VerifyEmail, verifyEmailSubject, type VerifyEmailProps } from "@/emails/verify-email";
+import {
+  CustomerInviteEmail,
+  customerInviteSubject,
+  type CustomerInviteProps,
+} from "@/emails/customer-invite";
 
 /** What each template needs from its caller (the shop's details are added by the outbox). */
 export interface TemplateProps {
@@ -18,6 +24,8 @@ export interface TemplateProps {
   "balance-due": Omit<BalanceDueProps, "shop">;
   "shaft-ready": Omit<ShaftReadyProps, "shop">;
   "shaft-shipped": Omit<ShaftShippedProps, "shop">;
+  "verify-email": Omit<VerifyEmailProps, "shop">;
+  "customer-invite": Omit<CustomerInviteProps, "shop">;
 }
 
 export type TemplateName = keyof TemplateProps;
@@ -36,6 +44,11 @@ const TEMPLATES: { [N in TemplateName]: TemplateDefinition<TemplateProps[N]> } =
   "balance-due": { element: (p) => createElement(BalanceDueEmail, p), subject: balanceDueSubject },
   "shaft-ready": { element: (p) => createElement(ShaftReadyEmail, p), subject: shaftReadySubject },
   "shaft-shipped": { element: (p) => createElement(ShaftShippedEmail, p), subject: shaftShippedSubject },
+  "verify-email": { element: (p) => createElement(VerifyEmail, p), subject: verifyEmailSubject },
+  "customer-invite": {
+    element: (p) => createElement(CustomerInviteEmail, p),
+    subject: customerInviteSubject,
+  },
 };
 
 export const TEMPLATE_NAMES = Object.keys(TEMPLATES) as TemplateName[];

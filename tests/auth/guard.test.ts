@@ -3,7 +3,7 @@ import { AccessError, authorize } from "@/lib/auth/guard";
 import { ROLE_PERMISSIONS, type Permission } from "@/lib/auth/permissions";
 import { createStaffUser } from "@/lib/users/staff";
 import type { Role } from "@/lib/auth/roles";
-import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
+import { authRequest, sessionCookie, signUpVerified, uniqueEmail } from "../setup/auth-requests";
 import { dbTest } from "../setup/db";
 
 const PASSWORD = "a-long-password-1";
@@ -11,7 +11,7 @@ const PASSWORD = "a-long-password-1";
 async function signedInAs(role: Role): Promise<Headers> {
   const email = uniqueEmail(role);
   if (role === "customer") {
-    await authRequest("/sign-up/email", { name: "Cust", email, password: PASSWORD });
+    await signUpVerified({ name: "Cust", email, password: PASSWORD });
   } else {
     await createStaffUser({ name: `A ${role}`, email, role, password: PASSWORD }, null);
   }

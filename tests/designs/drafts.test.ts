@@ -6,7 +6,7 @@ import { DELETE as deleteRoute, GET as getRoute, PUT as putRoute } from "@/app/a
 import { createStaffUser } from "@/lib/users/staff";
 import { getEm } from "@/lib/db/orm";
 import { Customer } from "@/entities";
-import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
+import { authRequest, sessionCookie, signUpVerified, uniqueEmail } from "../setup/auth-requests";
 import { dbTest } from "../setup/db";
 
 const PASSWORD = "a-long-password-1";
@@ -26,8 +26,7 @@ async function signIn(email: string): Promise<string> {
 }
 async function customer(): Promise<string> {
   const email = uniqueEmail("drafts");
-  const res = await authRequest("/sign-up/email", { name: "Draft Customer", email, password: PASSWORD });
-  expect(res.status).toBe(200);
+  await signUpVerified({ name: "Draft Customer", email, password: PASSWORD });
   return signIn(email);
 }
 async function staff(role: "counter" | "floor"): Promise<string> {

@@ -19,7 +19,10 @@ async function violations(page: Page) {
 }
 
 const SCREENS = [
-  { who: null, paths: ["/", "/sign-in", "/sign-up"] },
+  {
+    who: null,
+    paths: ["/", "/sign-in", "/sign-up", "/check-email?email=a%40b.example", "/set-password?token=x"],
+  },
   { who: ACCOUNTS.customer, paths: ["/orders", "/build"] },
   { who: ACCOUNTS.counter, paths: ["/desk", "/desk/new", "/desk/customers"] },
   { who: ACCOUNTS.owner, paths: ["/overview", "/overview/staff", "/overview/mail", "/overview/catalogue"] },

@@ -37,6 +37,12 @@ test("a new customer designs a shaft, fixes it, uploads a photo, pays a deposit 
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill("journey-password-1");
   await page.getByRole("button", { name: "Create account" }).click();
+  await expect(page).toHaveURL(/\/check-email\?/);
+  // The account works once the address is confirmed through the link in the e-mail.
+  const verify = await mailTo(email, /confirm your e-mail/i);
+  const link = verify.text.match(/https?:\/\/\S+\/verify-email\?token=[^\s\])]+/)?.[0];
+  expect(link).toBeTruthy();
+  await page.goto(link!);
   await expect(page).toHaveURL(/\/orders\?welcome=1/);
 
   // Design in inches, switch to millimetres and back.

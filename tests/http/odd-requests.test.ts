@@ -15,7 +15,7 @@ import { requestBalanceAction } from "@/lib/actions/request-balance";
 import { refundPaymentAction } from "@/lib/actions/refund-payment";
 import { getEm } from "@/lib/db/orm";
 import { createStaffUser } from "@/lib/users/staff";
-import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
+import { authRequest, sessionCookie, signUpVerified, uniqueEmail } from "../setup/auth-requests";
 import { dbTest, hasDatabase } from "../setup/db";
 import { createTestOrder } from "../setup/test-orders";
 
@@ -36,7 +36,7 @@ let orderId = "";
 beforeAll(async () => {
   if (!hasDatabase) return;
   const email = uniqueEmail("odd");
-  await authRequest("/sign-up/email", { name: "Odd Customer", email, password: PASSWORD });
+  await signUpVerified({ name: "Odd Customer", email, password: PASSWORD });
   const res = await authRequest("/sign-in/email", { email, password: PASSWORD });
   customerCookie = sessionCookie(res);
   const userId = ((await res.json()) as { user: { id: string } }).user.id;

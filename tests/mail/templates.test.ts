@@ -9,8 +9,25 @@ const shop = {
   email: "shop@tallgrass.example",
 };
 
+/** Account e-mails carry no order; they are checked on their own below. */
+const ACCOUNT_TEMPLATES = ["verify-email", "customer-invite"] as const;
+const ORDER_TEMPLATES = TEMPLATE_NAMES.filter((n) => !(ACCOUNT_TEMPLATES as readonly string[]).includes(n));
+
 describe("e-mail templates", () => {
-  test.each(TEMPLATE_NAMES)(
+  test.each(ACCOUNT_TEMPLATES)(
+    "%s carries its one-time link in both versions, with the shop",
+    async (name) => {
+      const email = await renderEmail(name, SAMPLE_PROPS[name] as never, shop);
+      const url = SAMPLE_PROPS[name].url;
+      expect(email.html).toMatch(/^<!DOCTYPE html/i);
+      expect(email.html).toContain(`href="${url.replace(/&/g, "&amp;")}"`);
+      expect(email.html).toContain("Tallgrass Driveline Works");
+      expect(email.text).toContain(url);
+      expect(email.text.toLowerCase()).toContain("dana ortiz");
+    },
+  );
+
+  test.each(ORDER_TEMPLATES)(
     "%s renders HTML and plain text with the order number and the shop",
     async (name) => {
       const email = await renderEmail(name, SAMPLE_PROPS[name] as never, shop);

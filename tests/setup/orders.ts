@@ -6,7 +6,7 @@ import { getEm } from "@/lib/db/orm";
 import type { CurrentUser } from "@/lib/auth/guard";
 import { startStripeFake, type StripeFake } from "@/fakes/stripe/server";
 import { POST as webhookPost } from "@/app/api/payments/webhook/route";
-import { authRequest, uniqueEmail } from "./auth-requests";
+import { signUpVerified, uniqueEmail } from "./auth-requests";
 
 export const streetTruck = JSON.parse(readFileSync("examples/street-truck.json", "utf8")) as Record<
   string,
@@ -23,7 +23,7 @@ export const failingVan = JSON.parse(
 /** A new customer with an account, as sign-up makes them. */
 export async function newCustomer(): Promise<{ user: CurrentUser; customer: Customer }> {
   const email = uniqueEmail("buyer");
-  await authRequest("/sign-up/email", { name: "Bea Buyer", email, password: "a-long-password-1" });
+  await signUpVerified({ name: "Bea Buyer", email, password: "a-long-password-1" });
   const em = await getEm();
   const user = await em.findOneOrFail(User, { email });
   const customer = await em.findOneOrFail(Customer, { user: user.id });

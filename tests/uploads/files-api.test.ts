@@ -9,7 +9,7 @@ import { GET as getFile } from "@/app/api/files/[id]/route";
 import { getEm } from "@/lib/db/orm";
 import { createStaffUser } from "@/lib/users/staff";
 import type { Role } from "@/lib/auth/roles";
-import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
+import { authRequest, sessionCookie, signUpVerified, uniqueEmail } from "../setup/auth-requests";
 import { dbTest, hasDatabase } from "../setup/db";
 import { createTestOrder } from "../setup/test-orders";
 
@@ -29,8 +29,7 @@ const PDF = Buffer.from(
 let uploadsDir: string;
 async function signIn(role: Role): Promise<{ cookie: string; userId: string }> {
   const email = uniqueEmail(role);
-  if (role === "customer")
-    await authRequest("/sign-up/email", { name: "Cust Omer", email, password: PASSWORD });
+  if (role === "customer") await signUpVerified({ name: "Cust Omer", email, password: PASSWORD });
   else await createStaffUser({ name: `A ${role}`, email, role, password: PASSWORD }, null);
   const res = await authRequest("/sign-in/email", { email, password: PASSWORD });
   expect(res.status).toBe(200);

@@ -15,6 +15,7 @@ const MESSAGES: Record<string, string> = {
   credentials: "That e-mail and password do not match an account.",
   "too-many": "Too many sign-in attempts. Wait a minute, then try again.",
   invalid: "Enter your e-mail address and password.",
+  locked: "Too many wrong passwords for this account. Wait 15 minutes, then try again.",
 };
 
 /**

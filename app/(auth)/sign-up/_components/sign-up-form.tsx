@@ -7,28 +7,66 @@ import { signUpBodySchema, type SignUpBody } from "@/lib/auth/schemas";
 import { Field } from "@/components/ui/field";
 import { Alert } from "@/components/ui/alert";
 
-export function SignUpForm() {
+interface ServerError {
+  status?: number;
+  message?: string;
+  code?: string;
+  fields?: Record<string, string>;
+}
+
+/**
+ * Sign-up. With an invitation from the counter the address is fixed and the account is made at
+ * once (the invitation proved the address); otherwise the server sends a verification link and
+ * the page says to check the inbox.
+ */
+export function SignUpForm({ invite }: { invite?: { token: string; name: string; email: string } }) {
   const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
     handleSubmit,
+    setError,
     formState: { errors, isSubmitting },
-  } = useForm<SignUpBody>({ resolver: zodResolver(signUpBodySchema) });
+  } = useForm<SignUpBody>({
+    resolver: zodResolver(signUpBodySchema),
+    defaultValues: invite ? { name: invite.name, email: invite.email } : undefined,
+  });
+
+  const showServerError = (error: ServerError) => {
+    for (const [field, message] of Object.entries(error.fields ?? {})) {
+      if (field === "name" || field === "email" || field === "password") setError(field, { message });
+    }
+    setFormError(
+      error.code === "USER_ALREADY_EXISTS_USE_ANOTHER_EMAIL" || /exist/i.test(error.message ?? "")
+        ? "An account with that e-mail already exists. Sign in instead."
+        : (error.message ?? "Could not create the account. Try again."),
+    );
+  };
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
-    const { error } = await authClient.signUp.email(values);
-    if (error) {
-      setFormError(
-        error.status === 422 || /exist/i.test(error.message ?? "")
-          ? "An account with that e-mail already exists. Sign in instead."
-          : (error.message ?? "Could not create the account. Try again."),
-      );
+    if (invite) {
+      const res = await fetch("/api/auth/invite", {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify({ token: invite.token, name: values.name, password: values.password }),
+      });
+      if (!res.ok) {
+        const body = (await res.json().catch(() => ({}))) as { error?: ServerError };
+        showServerError(body.error ?? {});
+        return;
+      }
+      // A full page load, so every server component reads the new session.
+      // eslint-disable-next-line @next/next/no-location-assign-relative-destination
+      window.location.assign("/orders?welcome=1");
       return;
     }
-    // A full page load, so every server component reads the new session.
+    const { error } = await authClient.signUp.email({ ...values, callbackURL: "/orders?welcome=1" });
+    if (error) {
+      showServerError(error as ServerError);
+      return;
+    }
     // eslint-disable-next-line @next/next/no-location-assign-relative-destination
-    window.location.assign("/orders?welcome=1");
+    window.location.assign(`/check-email?${new URLSearchParams({ email: values.email, from: "sign-up" })}`);
   });
 
   return (
@@ -39,6 +77,8 @@ export function SignUpForm() {
         label="E-mail"
         type="email"
         autoComplete="email"
+        readOnly={Boolean(invite)}
+        hint={invite ? "The address the shop has on record for you." : undefined}
         {...register("email")}
         error={errors.email?.message}
       />

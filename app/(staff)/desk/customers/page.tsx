@@ -5,6 +5,7 @@ import { listCustomers } from "@/lib/customers";
 import { CELL, TableCard } from "@/components/ui/table-card";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
+import { InviteButton } from "@/components/customers/invite-button";
 
 export const metadata: Metadata = { title: "Customers" };
 
@@ -29,7 +30,15 @@ export default async function CustomersPage() {
               <td className={CELL}>{c.company ?? "—"}</td>
               <td className={CELL}>{c.email}</td>
               <td className={CELL}>{c.phone ?? "—"}</td>
-              <td className={CELL}>{c.hasAccount ? "Yes" : "By phone"}</td>
+              <td className={CELL}>
+                {c.hasAccount ? (
+                  "Yes"
+                ) : (
+                  <span className="inline-flex flex-wrap items-center gap-2">
+                    By phone <InviteButton customerId={c.id} />
+                  </span>
+                )}
+              </td>
             </tr>
           ))}
         </TableCard>

@@ -10,6 +10,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { Alert } from "@/components/ui/alert";
 import { OrderPage } from "@/components/orders/order-page";
 import { OrderFilesSection } from "@/components/orders/order-files-section";
+import { InviteButton } from "@/components/customers/invite-button";
 import { StaffActions } from "./_components/staff-actions";
 
 export const metadata: Metadata = { title: "Order" };
@@ -31,6 +32,11 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
         title={`Order ${order.number}`}
         description={`${order.customer.name} · ${order.customer.email}${order.customer.phone ? ` · ${order.customer.phone}` : ""} · ${order.channel === "counter" ? "phone order" : "online"}`}
       />
+      {!order.customer.user && (
+        <p className="mb-4 text-sm text-ink-muted">
+          {order.customer.name} has no account yet. <InviteButton customerId={order.customer.id} />
+        </p>
+      )}
       {placed && (
         <div className="mb-4">
           <Alert tone="success" title="Order placed">
