@@ -8,7 +8,7 @@ import { Order, Upload, User } from "@/entities";
 import { POST as postFile } from "@/app/api/orders/[id]/files/route";
 import { getEm } from "@/lib/db/orm";
 import { MAX_FILES_PER_CUSTOMER_PER_DAY, MAX_FILES_PER_ORDER } from "@/lib/uploads";
-import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
+import { authRequest, sessionCookie, signUpVerified, uniqueEmail } from "../setup/auth-requests";
 import { dbTest, hasDatabase } from "../setup/db";
 import { createTestOrder } from "../setup/test-orders";
 import { chunkedPost, serve } from "../http/chunked-http";
@@ -25,7 +25,7 @@ let previousUploadsDir: string | undefined;
 
 async function customer(): Promise<{ cookie: string; userId: string }> {
   const email = uniqueEmail("limits");
-  await authRequest("/sign-up/email", { name: "Many Files", email, password: PASSWORD });
+  await signUpVerified({ name: "Many Files", email, password: PASSWORD });
   const res = await authRequest("/sign-in/email", { email, password: PASSWORD });
   return { cookie: sessionCookie(res), userId: ((await res.json()) as { user: { id: string } }).user.id };
 }
