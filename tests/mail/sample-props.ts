@@ -68,11 +68,11 @@ export const SAMPLE_PROPS: { [N in TemplateName]: TemplateProps[N] } = {
     orderUrl: "http://127.0.0.1:3000/orders/Y26-0042",
   },
   "verify-email": {
-    name: "Dana Ortiz",
+    name: "Marisol Ortiz",
     url: "http://127.0.0.1:3000/api/auth/verify-email?token=sample&callbackURL=%2Forders",
   },
   "customer-invite": {
-    customerName: "Dana Ortiz",
+    customerName: "Marisol Ortiz",
     url: "http://127.0.0.1:3000/sign-up?invite=sample",
   },
 };

@@ -23,7 +23,7 @@ describe("e-mail templates", () => {
       expect(email.html).toContain(`href="${url.replace(/&/g, "&amp;")}"`);
       expect(email.html).toContain("Tallgrass Driveline Works");
       expect(email.text).toContain(url);
-      expect(email.text.toLowerCase()).toContain("dana ortiz");
+      expect(email.text.toLowerCase()).toContain("marisol ortiz");
     },
   );
 
@@ -38,7 +38,7 @@ describe("e-mail templates", () => {
       expect(email.html).toContain("400 Mill Road");
       expect(email.text).toContain("Y26-0042");
       expect(email.text).not.toMatch(/<[a-z]/i);
-      expect(email.text.toLowerCase()).toContain("dana ortiz");
+      expect(email.text.toLowerCase()).toContain("marisol ortiz");
     },
   );
 
