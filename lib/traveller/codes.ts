@@ -10,7 +10,7 @@
  * mistyped or misread scan is refused instead of signing off the wrong step.
  *
  * Check characters are ISO/IEC 7064 MOD 37,36 (hybrid system over 0–9 A–Z): every single-character
- * error and every swap of two adjacent characters changes the check character. Only letters,
+ * error changes the check character, and all but a few swaps of two adjacent characters do. Only letters,
  * digits and hyphens are used, which every keyboard-wedge scanner types the same on any layout.
  */
 
