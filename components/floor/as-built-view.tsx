@@ -35,7 +35,8 @@ export function AsBuiltView({
   audience: "staff" | "customer";
 }) {
   const r = record.evaluation as unknown as EvaluationReport;
-  const len = (mm: number | undefined) => (typeof mm === "number" ? formatQuantity("length", units, mm) : "—");
+  const len = (mm: number | undefined) =>
+    typeof mm === "number" ? formatQuantity("length", units, mm) : "—";
   const summary: [string, string][] = [
     ["Overall verdict", r.overall ?? "—"],
     ["Length between joint centres", len(r.lengthMm)],
@@ -44,7 +45,9 @@ export function AsBuiltView({
     ["Service speed", r.service ? `${Math.round(r.service.maxShaftRpm)} rpm` : "—"],
     [
       "Critical speed",
-      r.criticalSpeedRpm ? `${Math.round(r.criticalSpeedRpm)} rpm (ratio ${r.criticalSpeedRatio?.toFixed(2)})` : "—",
+      r.criticalSpeedRpm
+        ? `${Math.round(r.criticalSpeedRpm)} rpm (ratio ${r.criticalSpeedRatio?.toFixed(2)})`
+        : "—",
     ],
     ["Torsion safety factor", r.torsion ? r.torsion.safetyFactor.toFixed(2) : "—"],
     ["Phase index", r.phasing ? `${r.phasing.phaseIndexDeg}°` : "—"],
@@ -59,17 +62,22 @@ export function AsBuiltView({
   return (
     <div className="space-y-6">
       <div className="flex flex-wrap gap-3 text-lg">
-        <span className="rounded-full bg-steel-50 px-3 py-1 font-semibold text-steel-900">{STATE[record.state]}</span>
+        <span className="rounded-full bg-steel-50 px-3 py-1 font-semibold text-steel-900">
+          {STATE[record.state]}
+        </span>
         <span className="text-ink-muted">
           Traveller revision {record.revision}
-          {record.voidRevisions.length > 0 && ` (void: ${record.voidRevisions.map((v) => `rev ${v}`).join(", ")})`}
+          {record.voidRevisions.length > 0 &&
+            ` (void: ${record.voidRevisions.map((v) => `rev ${v}`).join(", ")})`}
         </span>
       </div>
       <section aria-labelledby="ab-design" className="card p-5">
         <h2 id="ab-design" className="mb-3 text-lg font-semibold">
           Built to (frozen design and evaluation)
         </h2>
-        {record.shaft.application?.description && <p className="mb-3">{record.shaft.application.description}</p>}
+        {record.shaft.application?.description && (
+          <p className="mb-3">{record.shaft.application.description}</p>
+        )}
         <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-2">
           {summary.map(([k, v]) => (
             <div key={k}>
@@ -123,7 +131,9 @@ export function AsBuiltView({
                     {records.map((rec, i) => (
                       <li key={i} className="border-t border-line pt-2">
                         <p className="text-sm">
-                          <span className={`mr-2 rounded-full px-2 py-0.5 text-xs font-semibold ${OUTCOME[rec.outcome]?.tone}`}>
+                          <span
+                            className={`mr-2 rounded-full px-2 py-0.5 text-xs font-semibold ${OUTCOME[rec.outcome]?.tone}`}
+                          >
                             {OUTCOME[rec.outcome]?.label ?? rec.outcome}
                           </span>
                           {rec.byName ?? "—"} · {when(rec.at)}

@@ -62,7 +62,8 @@ export type ScanResult =
   | { kind: "serial"; serial: string; href: string };
 
 function stationField(field: FieldSpec, units: FloorUnits): StationField {
-  if (field.type !== "number") return { key: field.key, label: field.label, type: field.type, unit: null, limit: null };
+  if (field.type !== "number")
+    return { key: field.key, label: field.label, type: field.type, unit: null, limit: null };
   const u = unitOf(field.quantity, units);
   return {
     key: field.key,
@@ -124,7 +125,10 @@ export async function scanCode(em: EntityManager, raw: string): Promise<ScanResu
     );
   }
   if (asStep.revision > wo.revision) {
-    throw new AppError("not_found", `${wo.serial} has no revision ${asStep.revision} (the current one is ${wo.revision}).`);
+    throw new AppError(
+      "not_found",
+      `${wo.serial} has no revision ${asStep.revision} (the current one is ${wo.revision}).`,
+    );
   }
   const [steps, { floor }] = await Promise.all([
     em.find(WorkOrderStep, { workOrder: wo.id, revision: wo.revision }, { orderBy: { position: "asc" } }),
@@ -165,7 +169,11 @@ export async function scanCode(em: EntityManager, raw: string): Promise<ScanResu
     next: nextStep ? { position: nextStep.position, code: nextStep.code, name: nextStep.spec.name } : null,
     hold: holdRecord
       ? {
-          failures: (holdRecord.failures ?? []).map((f) => ({ key: f.key, label: f.label, message: f.message })),
+          failures: (holdRecord.failures ?? []).map((f) => ({
+            key: f.key,
+            label: f.label,
+            message: f.message,
+          })),
           at: holdRecord.at.toISOString(),
         }
       : null,
@@ -175,12 +183,14 @@ export async function scanCode(em: EntityManager, raw: string): Promise<ScanResu
 /** A value in SI shown back in the shop's units (for the as-built record). */
 export function shownValue(field: FieldSpec | undefined, value: unknown, units: FloorUnits): string {
   if (typeof value === "boolean") return value ? "yes" : "no";
-  if (typeof value === "number" && field?.type === "number") return formatQuantity(field.quantity, units, value);
+  if (typeof value === "number" && field?.type === "number")
+    return formatQuantity(field.quantity, units, value);
   if (Array.isArray(value)) {
     if (!value.length) return "none";
     return value
-      .map((w: { plane: string; massG: number; angleDeg: number }) =>
-        `${w.plane} ${fromSi("mass", units, w.massG).toFixed(unitOf("mass", units).decimals)} ${unitOf("mass", units).symbol} at ${w.angleDeg}°`,
+      .map(
+        (w: { plane: string; massG: number; angleDeg: number }) =>
+          `${w.plane} ${fromSi("mass", units, w.massG).toFixed(unitOf("mass", units).decimals)} ${unitOf("mass", units).symbol} at ${w.angleDeg}°`,
       )
       .join("; ");
   }

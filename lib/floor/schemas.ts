@@ -20,7 +20,11 @@ export const scanFloorQuerySchema = z.object({
  * against the step's record sheet by the service) and a key the station keeps for this submission.
  */
 export const submitStepBodySchema = z.object({
-  code: z.string({ error: "scan the step's barcode" }).trim().min(1, { error: "scan the step's barcode" }).max(100),
+  code: z
+    .string({ error: "scan the step's barcode" })
+    .trim()
+    .min(1, { error: "scan the step's barcode" })
+    .max(100),
   values: z.record(z.string(), z.unknown(), { error: "must be an object of measured values" }),
   idempotencyKey: z
     .string({ error: "is required" })

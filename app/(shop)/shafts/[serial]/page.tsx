@@ -28,7 +28,10 @@ export default async function CustomerAsBuiltPage({ params }: PageProps<"/shafts
     if (e instanceof AppError && e.code === "not_found") notFound();
     throw e;
   });
-  const [record, { floor }] = await Promise.all([getEm().then((em) => asBuiltRecord(em, wo.serial)), getShopEngineering()]);
+  const [record, { floor }] = await Promise.all([
+    getEm().then((em) => asBuiltRecord(em, wo.serial)),
+    getShopEngineering(),
+  ]);
   return (
     <>
       <PageHeader

@@ -103,7 +103,11 @@ export function ScanStation({ canConcede }: { canConcede: boolean }) {
             placeholder="Scan or type, then Enter"
             aria-describedby="scan-help"
           />
-          <button type="submit" className="btn-primary min-h-14 px-5 text-lg" disabled={view.kind === "loading"}>
+          <button
+            type="submit"
+            className="btn-primary min-h-14 px-5 text-lg"
+            disabled={view.kind === "loading"}
+          >
             <ScanLine className="size-5" aria-hidden="true" />
             Open
           </button>
@@ -121,12 +125,15 @@ export function ScanStation({ canConcede }: { canConcede: boolean }) {
           </div>
         )}
         {view.kind === "loading" && (
-          <div className="card flex items-center justify-center gap-3 px-6 py-10 text-lg" role="status">
+          <div className="flex items-center justify-center gap-3 card px-6 py-10 text-lg" role="status">
             <Loader2 className="size-6 animate-spin" aria-hidden="true" /> Reading {view.code}…
           </div>
         )}
         {view.kind === "error" && (
-          <div role="alert" className="flex gap-3 rounded-md border-2 border-fail bg-fail-soft p-5 text-lg text-fail">
+          <div
+            role="alert"
+            className="flex gap-3 rounded-md border-2 border-fail bg-fail-soft p-5 text-lg text-fail"
+          >
             <XCircle className="mt-1 size-7 shrink-0" aria-hidden="true" />
             <div>
               <p className="text-xl font-bold">Not accepted</p>
@@ -232,7 +239,7 @@ function StepPanel({
   }
 
   return (
-    <section className="card space-y-5 p-4 md:p-6" aria-labelledby="step-title">
+    <section className="space-y-5 card p-4 md:p-6" aria-labelledby="step-title">
       <div id="step-title">
         <StepHeading scan={scan} />
       </div>
@@ -248,7 +255,8 @@ function StepPanel({
         {STATUS_TEXT[scan.status]}
         {(scan.status === "ahead" || scan.status === "done") && scan.next && (
           <span className="block font-normal text-ink">
-            Next for {scan.serial} is step {scan.next.position}: {scan.next.name}. Scan that step&apos;s barcode.
+            Next for {scan.serial} is step {scan.next.position}: {scan.next.name}. Scan that step&apos;s
+            barcode.
           </span>
         )}
       </p>
@@ -434,7 +442,9 @@ function WeightsInput({
   };
   return (
     <fieldset className="md:col-span-2">
-      <legend className="field-label text-base">{field.label} (mass in the shop&apos;s units, angle in °)</legend>
+      <legend className="field-label text-base">
+        {field.label} (mass in the shop&apos;s units, angle in °)
+      </legend>
       {rows.length === 0 && <p className="text-ink-muted">None added.</p>}
       <div className="space-y-2">
         {rows.map((r, i) => (
@@ -444,7 +454,9 @@ function WeightsInput({
               className="field-input min-h-12"
               value={r.plane}
               onChange={(e) =>
-                update(rows.map((x, j) => (j === i ? { ...x, plane: e.target.value as WeightRow["plane"] } : x)))
+                update(
+                  rows.map((x, j) => (j === i ? { ...x, plane: e.target.value as WeightRow["plane"] } : x)),
+                )
               }
             >
               <option value="front">Front</option>
@@ -476,7 +488,7 @@ function WeightsInput({
       </div>
       <button
         type="button"
-        className="btn-quiet mt-2 min-h-12"
+        className="mt-2 btn-quiet min-h-12"
         onClick={() => update([...rows, { plane: "front", mass: "", angleDeg: "" }])}
       >
         Add a weight

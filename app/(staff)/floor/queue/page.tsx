@@ -77,9 +77,15 @@ export default async function WorkQueuePage() {
   const held = items.filter((i) => i.state === "on_hold");
   // Shafts grouped by the step they wait for, in routing order.
   const groups = floor.routing
-    .map((r) => ({ code: r.code, name: r.name, items: items.filter((i) => i.state !== "on_hold" && i.next?.code === r.code) }))
+    .map((r) => ({
+      code: r.code,
+      name: r.name,
+      items: items.filter((i) => i.state !== "on_hold" && i.next?.code === r.code),
+    }))
     .filter((g) => g.items.length > 0);
-  const others = items.filter((i) => i.state !== "on_hold" && !floor.routing.some((r) => r.code === i.next?.code));
+  const others = items.filter(
+    (i) => i.state !== "on_hold" && !floor.routing.some((r) => r.code === i.next?.code),
+  );
   return (
     <>
       <PageHeader
@@ -109,18 +115,20 @@ export default async function WorkQueuePage() {
               </ul>
             </section>
           )}
-          {[...groups, ...(others.length ? [{ code: "other", name: "Other", items: others }] : [])].map((g) => (
-            <section key={g.code} aria-labelledby={`q-${g.code}`}>
-              <h2 id={`q-${g.code}`} className="mb-3 text-xl font-bold">
-                {g.name} ({g.items.length})
-              </h2>
-              <ul className="grid gap-3 lg:grid-cols-2">
-                {g.items.map((i) => (
-                  <ShaftCard key={i.workOrderId} item={i} today={today} deskLinks={deskLinks} />
-                ))}
-              </ul>
-            </section>
-          ))}
+          {[...groups, ...(others.length ? [{ code: "other", name: "Other", items: others }] : [])].map(
+            (g) => (
+              <section key={g.code} aria-labelledby={`q-${g.code}`}>
+                <h2 id={`q-${g.code}`} className="mb-3 text-xl font-bold">
+                  {g.name} ({g.items.length})
+                </h2>
+                <ul className="grid gap-3 lg:grid-cols-2">
+                  {g.items.map((i) => (
+                    <ShaftCard key={i.workOrderId} item={i} today={today} deskLinks={deskLinks} />
+                  ))}
+                </ul>
+              </section>
+            ),
+          )}
         </div>
       )}
     </>

@@ -28,7 +28,11 @@ export default async function FindShaftPage({ searchParams }: PageProps<"/floor/
   }
   return (
     <>
-      <PageHeader title="Find a shaft" description="Its as-built record, by serial." actions={<SerialSearch />} />
+      <PageHeader
+        title="Find a shaft"
+        description="Its as-built record, by serial."
+        actions={<SerialSearch />}
+      />
       <EmptyState icon={SearchX} title={text ? "Not found" : "Find a shaft"}>
         {message}
       </EmptyState>

@@ -10,7 +10,9 @@ import { PageHeader } from "@/components/ui/page-header";
 import { Alert } from "@/components/ui/alert";
 import { OrderPage } from "@/components/orders/order-page";
 import { OrderFilesSection } from "@/components/orders/order-files-section";
+import { orderFloorState } from "@/lib/floor/work-orders";
 import { StaffActions } from "./_components/staff-actions";
+import { FloorActions } from "./_components/floor-actions";
 
 export const metadata: Metadata = { title: "Order" };
 
@@ -23,6 +25,7 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
     throw e;
   });
   await populateOrder(em, order);
+  const floor = await orderFloorState(em, order.id);
   const view = orderView(order, user);
   const { placed, paid, cancelled } = await searchParams;
   return (
@@ -46,13 +49,21 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
         cancelledCheckout={Boolean(cancelled)}
         files={<OrderFilesSection em={em} order={order} user={user} />}
         staffActions={
-          <StaffActions
-            orderId={order.id}
-            currency={order.currency}
-            canRequestBalance={view.due?.kind === "balance"}
-            canRefund={can(user.role, "payments.refund")}
-            payments={view.payments}
-          />
+          <>
+            <FloorActions
+              orderId={order.id}
+              depositPaid={order.paymentState !== "unpaid"}
+              cancelled={order.status === "cancelled"}
+              floor={floor}
+            />
+            <StaffActions
+              orderId={order.id}
+              currency={order.currency}
+              canRequestBalance={view.due?.kind === "balance"}
+              canRefund={can(user.role, "payments.refund")}
+              payments={view.payments}
+            />
+          </>
         }
       />
     </>
