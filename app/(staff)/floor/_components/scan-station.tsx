@@ -94,7 +94,7 @@ export function ScanStation({ canConcede }: { canConcede: boolean }) {
             name="code"
             value={code}
             onChange={(e) => setCode(e.target.value)}
-            className="field-input min-h-14 flex-1 font-mono text-xl uppercase md:text-2xl"
+            className="field-input min-h-14 min-w-0 flex-1 font-mono text-xl uppercase placeholder:font-sans placeholder:normal-case md:text-2xl"
             autoFocus
             autoComplete="off"
             autoCapitalize="characters"
@@ -410,7 +410,7 @@ function FieldInput({
         aria-describedby={describedBy || undefined}
       />
       {field.type === "number" && (
-        <p id={`${id}-limit`} className="field-hint text-base">
+        <p id={`${id}-limit`} className="mt-1 text-lg font-semibold text-ink-soft">
           {field.station && <span className="block">At {field.station}</span>}
           {field.limit ? <>Limit {field.limit}</> : "No limit"}
         </p>

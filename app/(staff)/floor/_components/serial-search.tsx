@@ -8,8 +8,8 @@ export function SerialSearch() {
       <input
         id="serial-search"
         name="serial"
-        className="field-input min-h-12 font-mono uppercase"
-        placeholder="Serial, e.g. TGW-26-00042-7"
+        className="field-input min-h-12 min-w-0 font-mono uppercase placeholder:font-sans placeholder:normal-case"
+        placeholder="Shaft serial"
         autoComplete="off"
         required
       />
