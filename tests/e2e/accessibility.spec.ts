@@ -61,7 +61,9 @@ test("no serious accessibility problems on the floor's screens with a shaft in t
     .getByRole("link", { name: /^Y\d{2}-\d{4}$/ })
     .last()
     .click();
+  await desk.waitForURL(/\/desk\/orders\/[0-9a-f-]{36}$/);
   const box = desk.getByRole("region", { name: "Shop floor" });
+  await expect(box).toBeVisible();
   const release = box.getByRole("button", { name: "Release to the shop" });
   if (await release.isVisible()) {
     await box.getByLabel(/why release now/).fill("Regular customer, pays on pickup");

@@ -109,6 +109,7 @@ test("a paid order goes through the shop: release, traveller, scans, a hold and 
   await signIn(desk, ACCOUNTS.counter);
   await desk.goto(`/desk/orders/${orderId}`);
   const floorBox = desk.getByRole("region", { name: "Shop floor" });
+  await expect(floorBox).toBeVisible();
   const release = floorBox.getByRole("button", { name: "Release to the shop" });
   if (await release.isVisible()) await release.click();
   await expect(floorBox.getByRole("link", { name: "Print traveller" })).toBeVisible();
