@@ -38,7 +38,7 @@ export function OrderPage({
   return (
     <div className="space-y-6">
       <div className="flex flex-wrap items-center gap-3">
-        <OrderStatusBadge status={order.status} />
+        <OrderStatusBadge status={order.status} label={order.statusLabel} onHold={order.onHold} />
         <PaymentBadge state={order.paymentState} />
         <span className="text-sm text-ink-muted">
           Promised {order.promisedDate} · {order.fulfilment === "ship" ? "Shipping" : "Pickup at the shop"}
