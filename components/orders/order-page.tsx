@@ -6,6 +6,7 @@ import { OrderTimeline } from "./order-timeline";
 import { ShaftSummary, Totals } from "./shaft-summary";
 import { PayButton } from "./pay-button";
 import { PaymentConfirming } from "./payment-confirming";
+import { OrderPapers } from "./order-papers";
 
 const PAYMENT_STATUS: Record<string, string> = {
   open: "not paid yet",
@@ -136,6 +137,7 @@ export function OrderPage({
               </ul>
             )}
           </section>
+          {order.status !== "cancelled" && <OrderPapers order={order} />}
           {staffActions}
         </aside>
       </div>

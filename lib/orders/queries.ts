@@ -116,6 +116,8 @@ export interface OrderView extends OrderRow {
     checkoutUrl: string;
   }[];
   events: { id: string; at: string; kind: string; label: string }[];
+  /** Every shaft passed final inspection: the as-built certificate can be downloaded. */
+  asBuiltReady: boolean;
   /** What the order asks for next, if anything. */
   due: { kind: "deposit" | "balance" | "full"; amountCents: number } | null;
 }
@@ -206,6 +208,10 @@ export function orderView(order: Order, user: CurrentUser): OrderView {
       .filter((e) => staff || e.public)
       .map((e) => ({ id: e.id, at: e.at.toISOString(), kind: e.kind, label: e.label })),
     due: kind ? { kind, amountCents: amountDue(order, kind) } : null,
+    asBuiltReady:
+      (order.status === "ready" || order.status === "shipped") &&
+      order.workOrders.isInitialized() &&
+      order.workOrders.length > 0,
   };
 }
 

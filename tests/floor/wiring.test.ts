@@ -71,6 +71,7 @@ describe("the floor wired to payments, the customer's e-mails and the order's st
       const customerSees = await view(order.id, user);
       expect(customerSees.statusLabel).toBe("In the shop — step 3 of 6");
       expect(customerSees.onHold).toBe(false);
+      expect(customerSees.asBuiltReady).toBe(false); // no certificate before final inspection
       expect(customerSees.events.some((e) => /hold/i.test(e.label))).toBe(false);
       const deskSees = await view(order.id, counter);
       expect(deskSees).toMatchObject({ statusLabel: "On hold — step 3 of 6", onHold: true });
@@ -85,6 +86,7 @@ describe("the floor wired to payments, the customer's e-mails and the order's st
       const fresh = await view(order.id, user);
       expect(fresh.status).toBe("ready");
       expect(fresh.statusLabel).toBe("Ready to ship");
+      expect(fresh.asBuiltReady).toBe(true);
       const balance = await em.fork().find(Payment, { order: order.id, kind: "balance" });
       expect(balance).toHaveLength(1);
       expect(balance[0]).toMatchObject({
