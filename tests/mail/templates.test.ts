@@ -21,7 +21,7 @@ describe("e-mail templates", () => {
       expect(email.html).toContain("400 Mill Road");
       expect(email.text).toContain("Y26-0042");
       expect(email.text).not.toMatch(/<[a-z]/i);
-      expect(email.text.toLowerCase()).toContain("dana ortiz");
+      expect(email.text.toLowerCase()).toContain("marisol ortiz");
     },
   );
 
