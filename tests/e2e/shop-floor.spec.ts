@@ -5,6 +5,19 @@ import path from "node:path";
 import { expect, test, type APIRequestContext, type Page } from "@playwright/test";
 import { ACCOUNTS, signIn } from "./fixtures";
 
+const MAIL = `http://127.0.0.1:${process.env.MAIL_FAKE_HTTP_PORT ?? 12680}`;
+
+async function mailTo(email: string, subject: RegExp): Promise<{ subject: string; text: string }> {
+  for (let i = 0; i < 60; i++) {
+    const res = await fetch(`${MAIL}/messages?to=${encodeURIComponent(email)}`);
+    const { data } = (await res.json()) as { data: { subject: string; text: string }[] };
+    const hit = data.find((m) => subject.test(m.subject));
+    if (hit) return hit;
+    await new Promise((r) => setTimeout(r, 500));
+  }
+  throw new Error(`no e-mail to ${email} matching ${subject}`);
+}
+
 // The shop floor issue's "Done when" journey: a paid order is released at the desk, its traveller
 // PDF's codes are read back from the rendered page, the floor signs off every step by "scanning"
 // (typing the code plus Enter), a runout hold is reworked, the shaft ships, the customer's
@@ -184,13 +197,24 @@ test("a paid order goes through the shop: release, traveller, scans, a hold and 
     await record(floor, codeOf(s));
     await expect(floor.getByRole("status").filter({ hasText: "Passed:" })).toBeVisible();
   }
-  // TODO(wiring): once lib/floor/hooks.ts sends them, assert the balance request and the "ready"
-  // e-mail in the mail fake here, and the "shipped" e-mail with the tracking number after shipping.
+  // Final inspection passed: the balance is requested and "ready" is in the mail fake.
+  const orderNumber = (await floor
+    .getByText(/order Y\d{2}-\d{4}/)
+    .first()
+    .textContent())!.match(/Y\d{2}-\d{4}/)![0];
+  expect(
+    (await mailTo(ACCOUNTS.customer, new RegExp(`^Order ${orderNumber} is ready`))).subject,
+  ).toBeTruthy();
+  expect(
+    (await mailTo(ACCOUNTS.customer, new RegExp(`^Balance of .* due for order ${orderNumber}`))).subject,
+  ).toBeTruthy();
 
   await scan(floor, codeOf("SHP"));
   await record(floor, codeOf("SHP"), { carrier: "Demo Freight", trackingNumber: "1Z-DEMO-0042" });
   await expect(floor.getByRole("status").filter({ hasText: "Passed: Pack and ship" })).toBeVisible();
   await expect(floor.getByText("This shaft has left the shop.")).toBeVisible();
+  const shipped = await mailTo(ACCOUNTS.customer, new RegExp(`^Order ${orderNumber} has shipped`));
+  expect(shipped.text).toContain("1Z-DEMO-0042");
 
   // Scanning the serial opens its as-built record with every measurement.
   await scan(floor, serial);

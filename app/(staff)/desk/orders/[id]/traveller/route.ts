@@ -3,6 +3,7 @@ import { can } from "@/lib/auth/permissions";
 import { getEm } from "@/lib/db/orm";
 import { travellerViewFor } from "@/lib/floor/work-orders";
 import { AppError } from "@/lib/http/errors";
+import { pdfResponse } from "@/lib/http/pdf-response";
 import { route } from "@/lib/http/route";
 import { loadOrderForUser } from "@/lib/orders/access";
 import { renderTravellers } from "@/lib/traveller/pdf";
@@ -19,11 +20,5 @@ export const GET = route<{ id: string }>({ permission: null }, async ({ params, 
   const views = [];
   for (const wo of wos) views.push(await travellerViewFor(em, wo.id));
   const pdf = await renderTravellers(views);
-  return new Response(Buffer.from(pdf), {
-    headers: {
-      "content-type": "application/pdf",
-      "content-disposition": `inline; filename="traveller-${order.number}.pdf"`,
-      "cache-control": "private, no-store",
-    },
-  });
+  return pdfResponse(pdf, `traveller-${order.number}.pdf`);
 });
