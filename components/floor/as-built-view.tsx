@@ -61,7 +61,7 @@ export function AsBuiltView({
   const checks = (r.checks ?? []).filter((c) => c.status !== "pass");
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap gap-3 text-lg">
+      <div className="flex flex-wrap items-center gap-3 text-lg">
         <span className="rounded-full bg-steel-50 px-3 py-1 font-semibold text-steel-900">
           {STATE[record.state]}
         </span>
