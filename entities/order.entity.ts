@@ -16,6 +16,7 @@ import { User } from "./user.entity";
 import { OrderShaft } from "./order-shaft.entity";
 import { Payment } from "./payment.entity";
 import { OrderEvent } from "./order-event.entity";
+import { WorkOrder } from "./work-order.entity";
 
 export const ORDER_STATUSES = [
   "awaiting_payment",
@@ -113,6 +114,10 @@ export class Order {
 
   @OneToMany(() => OrderEvent, (e) => e.order, { orderBy: { at: "asc" } })
   events = new Collection<OrderEvent>(this);
+
+  /** One per shaft once released to the shop (lib/floor). */
+  @OneToMany(() => WorkOrder, (w) => w.order)
+  workOrders = new Collection<WorkOrder>(this);
 
   @Index()
   @Property({ type: "Date", defaultRaw: "now()" })

@@ -15,6 +15,7 @@ export const NAVIGATION: Record<Role, NavItem[]> = {
     { href: "/desk", label: "Order desk" },
     { href: "/desk/new", label: "New phone order" },
     { href: "/desk/customers", label: "Customers" },
+    { href: "/floor/queue", label: "Work queue" },
   ],
   floor: [
     { href: "/floor", label: "Scan station" },

@@ -6,6 +6,7 @@ import { OrderTimeline } from "./order-timeline";
 import { ShaftSummary, Totals } from "./shaft-summary";
 import { PayButton } from "./pay-button";
 import { PaymentConfirming } from "./payment-confirming";
+import { OrderPapers } from "./order-papers";
 
 const PAYMENT_STATUS: Record<string, string> = {
   open: "not paid yet",
@@ -38,7 +39,7 @@ export function OrderPage({
   return (
     <div className="space-y-6">
       <div className="flex flex-wrap items-center gap-3">
-        <OrderStatusBadge status={order.status} />
+        <OrderStatusBadge status={order.status} label={order.statusLabel} onHold={order.onHold} />
         <PaymentBadge state={order.paymentState} />
         <span className="text-sm text-ink-muted">
           Promised {order.promisedDate} · {order.fulfilment === "ship" ? "Shipping" : "Pickup at the shop"}
@@ -136,6 +137,7 @@ export function OrderPage({
               </ul>
             )}
           </section>
+          {order.status !== "cancelled" && <OrderPapers order={order} />}
           {staffActions}
         </aside>
       </div>

@@ -20,8 +20,18 @@ const PAYMENT_TONE: Record<PaymentState, string> = {
 
 const pill = "inline-flex items-center rounded-full px-2.5 py-0.5 text-xs font-semibold whitespace-nowrap";
 
-export function OrderStatusBadge({ status }: { status: OrderStatus }) {
-  return <span className={`${pill} ${ORDER_TONE[status]}`}>{ORDER_STATUS_LABEL[status]}</span>;
+/** `label` (an order row's statusLabel) says more than the status, e.g. "In the shop — step 3 of 6". */
+export function OrderStatusBadge({
+  status,
+  label,
+  onHold = false,
+}: {
+  status: OrderStatus;
+  label?: string;
+  onHold?: boolean;
+}) {
+  const tone = onHold ? "bg-warn-soft text-warn" : ORDER_TONE[status];
+  return <span className={`${pill} ${tone}`}>{label ?? ORDER_STATUS_LABEL[status]}</span>;
 }
 
 export function PaymentBadge({ state }: { state: PaymentState }) {

@@ -30,7 +30,15 @@ import { checkMeasurements, type Failure, type SiValues } from "@/lib/traveller/
 import type { FloorSettings } from "@/lib/traveller/settings";
 import { deriveSteps, type StepSpec } from "@/lib/traveller/steps";
 import { buildTravellerView, type TravellerView } from "@/lib/traveller/view";
-import { onFinalInspectionPassed, onShaftDispatched, onStepCompleted } from "./hooks";
+import {
+  newAfterCommit,
+  onFinalInspectionPassed,
+  onReissued,
+  onShaftDispatched,
+  onStepCompleted,
+  runAfterCommit,
+  type AfterCommit,
+} from "./hooks";
 
 function ensure(by: CurrentUser, permission: Permission): void {
   if (!can(by.role, permission)) throw new AccessError(403);
@@ -244,6 +252,7 @@ async function complete(
   record: StepRecord,
   completion: "pass" | "rework" | "concession",
   by: CurrentUser,
+  after: AfterCommit,
 ): Promise<void> {
   step.state = "done";
   step.completion = completion;
@@ -257,10 +266,10 @@ async function complete(
   if (wo.currentPosition > wo.stepCount || fulfilled) {
     wo.state = order.fulfilment === "ship" ? "shipped" : "picked_up";
   } else wo.state = inspected ? "ready" : "in_shop";
-  await onStepCompleted(em, { order, workOrder: wo, step, record });
-  if (step.spec.kind === "final-inspection")
-    await onFinalInspectionPassed(em, { order, workOrder: wo, record });
-  if (step.spec.kind === "dispatch") await onShaftDispatched(em, { order, workOrder: wo, record });
+  const m = { order, workOrder: wo, record, after };
+  await onStepCompleted(em, { ...m, step });
+  if (step.spec.kind === "final-inspection") await onFinalInspectionPassed(em, m);
+  if (step.spec.kind === "dispatch") await onShaftDispatched(em, m);
 }
 
 async function replay(em: EntityManager, key: string) {
@@ -284,8 +293,10 @@ export async function submitStep(
   if (!key || key.length > 200)
     throw new AppError("invalid", "A submission key (1–200 characters) is required.");
   const shop = await getShopEngineering();
+  const after = newAfterCommit();
   try {
-    return await inTransaction(async (em) => {
+    const out = await inTransaction(async (em) => {
+      after.balanceFor.clear();
       const { wo, steps, step } = await lockForCode(em, code);
       const earlier = await replay(em, key);
       if (earlier) {
@@ -340,11 +351,13 @@ export async function submitStep(
           }),
         );
       } else {
-        await complete(em, wo, step, steps, record, outcome as "pass" | "rework", by);
+        await complete(em, wo, step, steps, record, outcome as "pass" | "rework", by, after);
       }
       await em.flush();
       return result(wo, step, steps, record, false);
     });
+    await runAfterCommit(after);
+    return out;
   } catch (error) {
     // A parallel submission with the same key won the race: answer its result.
     if (error instanceof UniqueConstraintViolationException) {
@@ -368,7 +381,9 @@ export async function concedeHold(workOrderId: string, by: CurrentUser, reason: 
   ensure(by, "shop.manage");
   const why = reason.trim();
   if (!why) throw new AppError("invalid", "A concession needs a reason.", { reason: "required" });
-  return inTransaction(async (em) => {
+  const after = newAfterCommit();
+  const out = await inTransaction(async (em) => {
+    after.balanceFor.clear();
     const wo = await em.findOne(WorkOrder, { id: workOrderId }, { lockMode: LockMode.PESSIMISTIC_WRITE });
     if (!wo) throw new AppError("not_found", "No such work order.");
     const steps = await stepsFor(em, wo);
@@ -391,7 +406,7 @@ export async function concedeHold(workOrderId: string, by: CurrentUser, reason: 
       idempotencyKey: `concession:${step.id}`,
       at: new Date(),
     });
-    await complete(em, wo, step, steps, record, "concession", by);
+    await complete(em, wo, step, steps, record, "concession", by, after);
     await recordAudit(
       {
         actorId: by.id,
@@ -411,6 +426,8 @@ export async function concedeHold(workOrderId: string, by: CurrentUser, reason: 
     await em.flush();
     return result(wo, step, steps, record, false);
   });
+  await runAfterCommit(after);
+  return out;
 }
 
 /**
@@ -445,6 +462,7 @@ export async function voidAndReissue(
     wo.currentPosition = 1;
     wo.state = "released";
     addSteps(em, wo, specs);
+    onReissued(order);
     await recordAudit(
       {
         actorId: by.id,

@@ -109,3 +109,50 @@ export async function notifyBalanceDue(em: EntityManager, order: Order, payment:
 export async function afterCommit(): Promise<void> {
   await flushQueuedEmails();
 }
+
+/** Final inspection passed on every shaft: "your order is ready", with what is left to pay. */
+export async function notifyOrderReady(em: EntityManager, order: Order): Promise<void> {
+  const owedCents = Math.max(0, order.totalCents - order.paidCents);
+  const orderUrl = `${appUrl()}/orders/${order.id}`;
+  await queueEmail(em, {
+    template: "shaft-ready",
+    to: order.customer.email,
+    orderId: order.id,
+    props: {
+      orderNumber: order.number,
+      customerName: order.customer.name,
+      fulfilment: order.fulfilment,
+      lines: await shaftLines(em, order),
+      balanceDue: owedCents > 0 ? money(order, owedCents) : null,
+      // The order page opens (or reuses) the checkout; a checkout link itself expires.
+      payUrl: owedCents > 0 ? orderUrl : null,
+      orderUrl,
+    },
+  });
+}
+
+/** Every shaft has shipped: one e-mail with each carrier and tracking number used. */
+export async function notifyOrderShipped(
+  em: EntityManager,
+  order: Order,
+  parcels: { carrier: string; trackingNumber: string }[],
+  shippedAt: Date,
+): Promise<void> {
+  const unique = (xs: string[]) => [...new Set(xs.filter(Boolean))].join(", ");
+  await queueEmail(em, {
+    template: "shaft-shipped",
+    to: order.customer.email,
+    orderId: order.id,
+    props: {
+      orderNumber: order.number,
+      customerName: order.customer.name,
+      carrier: unique(parcels.map((p) => p.carrier)),
+      trackingNumber: unique(parcels.map((p) => p.trackingNumber)),
+      trackingUrl: null,
+      shipTo: order.shipTo ?? "",
+      shippedOn: shippedAt.toLocaleDateString("en-US", { dateStyle: "long", timeZone: "UTC" }),
+      lines: await shaftLines(em, order),
+      orderUrl: `${appUrl()}/orders/${order.id}`,
+    },
+  });
+}

@@ -12,6 +12,7 @@ import { PaymentsUnavailableError, type PaymentEvent } from "@/lib/payments/port
 import { can } from "@/lib/auth/permissions";
 import { appUrl } from "@/lib/http/app-url";
 import { formatMoney } from "@/lib/pricing/price-book";
+import { releaseAfterPayment } from "@/lib/floor/hooks";
 import { afterCommit, notifyBalanceDue, notifyPaymentReceived } from "./notify";
 
 /** What is still owed for each kind of request, given what has been paid. */
@@ -187,7 +188,10 @@ export type ApplyOutcome = "applied" | "duplicate" | "ignored";
 
 /** Applies one verified provider event to Yokeline's records, exactly once. */
 export async function applyPaymentEvent(event: PaymentEvent): Promise<ApplyOutcome> {
+  // An order whose deposit policy this payment met: released to the shop after the commit.
+  let release: string | null = null;
   const outcome = await inTransaction(async (em): Promise<ApplyOutcome> => {
+    release = null;
     if (!(await firstDelivery(em, event))) return "duplicate";
     switch (event.type) {
       case "checkout.session.completed": {
@@ -227,6 +231,7 @@ export async function applyPaymentEvent(event: PaymentEvent): Promise<ApplyOutco
             em,
           );
           await notifyPaymentReceived(em, order, payment);
+          if (order.status !== "cancelled" && order.paidCents >= order.depositCents) release = order.id;
         }
         if (excessCents > 0) {
           const why =
@@ -288,6 +293,8 @@ export async function applyPaymentEvent(event: PaymentEvent): Promise<ApplyOutco
   });
   await afterCommit();
   if (outcome !== "duplicate") logger.info({ event: event.id, type: event.type, outcome }, "payment event");
+  // Never inside the payment's transaction: a failed release must not roll the payment back.
+  if (release) await releaseAfterPayment(release);
   return outcome;
 }
 

@@ -4,6 +4,7 @@ import type { CurrentUser } from "@/lib/auth/guard";
 import type { QuoteLine } from "@/lib/pricing/price-book";
 import type { EvaluationReport } from "@/lib/driveline";
 import { seesAllOrders } from "./access";
+import { orderStatusLabel, type FloorProgress } from "./labels";
 import { nextPaymentKind, amountDue } from "./payments";
 
 export interface OrderRow {
@@ -20,9 +21,26 @@ export interface OrderRow {
   shafts: string[];
   channel: "online" | "counter";
   late: boolean;
+  /** The status in words, e.g. "In the shop — step 3 of 6" (lib/orders/labels.ts). */
+  statusLabel: string;
+  /** Staff only: a shaft is on hold on the floor. */
+  onHold: boolean;
 }
 
-function toRow(o: Order, today: string): OrderRow {
+/** The least advanced shaft's step of its step count, once released (work orders populated). */
+function floorProgress(o: Order): FloorProgress | null {
+  if (!o.workOrders.isInitialized() || o.workOrders.length === 0) return null;
+  const wos = o.workOrders.getItems();
+  const least = wos.reduce((a, b) => (b.currentPosition < a.currentPosition ? b : a));
+  return {
+    k: Math.min(least.currentPosition, least.stepCount),
+    n: least.stepCount,
+    onHold: wos.some((w) => w.state === "on_hold"),
+  };
+}
+
+function toRow(o: Order, today: string, staff: boolean): OrderRow {
+  const floor = floorProgress(o);
   return {
     id: o.id,
     number: o.number,
@@ -37,6 +55,8 @@ function toRow(o: Order, today: string): OrderRow {
     shafts: o.shafts.isInitialized() ? o.shafts.getItems().map((s) => s.name) : [],
     channel: o.channel,
     late: !["shipped", "cancelled"].includes(o.status) && o.promisedDate < today,
+    statusLabel: orderStatusLabel(o.status, o.fulfilment, floor, staff),
+    onHold: staff && (floor?.onHold ?? false),
   };
 }
 
@@ -52,12 +72,12 @@ export async function listOrders(
     ...(filter.open ? { status: { $nin: ["shipped", "cancelled"] as OrderStatus[] } } : {}),
   };
   const orders = await em.find(Order, where, {
-    populate: ["customer", "shafts"],
+    populate: ["customer", "shafts", "workOrders"],
     orderBy: all ? { promisedDate: "asc", createdAt: "asc" } : { createdAt: "desc" },
     limit: 200,
   });
   const today = new Date().toISOString().slice(0, 10);
-  return orders.map((o) => toRow(o, today));
+  return orders.map((o) => toRow(o, today, all));
 }
 
 export interface ShaftView {
@@ -96,6 +116,8 @@ export interface OrderView extends OrderRow {
     checkoutUrl: string;
   }[];
   events: { id: string; at: string; kind: string; label: string }[];
+  /** Every shaft passed final inspection: the as-built certificate can be downloaded. */
+  asBuiltReady: boolean;
   /** What the order asks for next, if anything. */
   due: { kind: "deposit" | "balance" | "full"; amountCents: number } | null;
 }
@@ -159,7 +181,7 @@ export function orderView(order: Order, user: CurrentUser): OrderView {
   const staff = seesAllOrders(user);
   const kind = nextPaymentKind(order);
   return {
-    ...toRow(order, new Date().toISOString().slice(0, 10)),
+    ...toRow(order, new Date().toISOString().slice(0, 10), staff),
     customerEmail: order.customer.email,
     fulfilment: order.fulfilment,
     shipTo: order.shipTo ?? null,
@@ -186,11 +208,15 @@ export function orderView(order: Order, user: CurrentUser): OrderView {
       .filter((e) => staff || e.public)
       .map((e) => ({ id: e.id, at: e.at.toISOString(), kind: e.kind, label: e.label })),
     due: kind ? { kind, amountCents: amountDue(order, kind) } : null,
+    asBuiltReady:
+      (order.status === "ready" || order.status === "shipped") &&
+      order.workOrders.isInitialized() &&
+      order.workOrders.length > 0,
   };
 }
 
 /** Loads everything an order page needs in one go. */
 export async function populateOrder(em: EntityManager, order: Order): Promise<Order> {
-  await em.populate(order, ["customer", "shafts", "payments", "events"]);
+  await em.populate(order, ["customer", "shafts", "payments", "events", "workOrders"]);
   return order;
 }

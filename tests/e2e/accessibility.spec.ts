@@ -1,5 +1,6 @@
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
+import { formatStepCode } from "../../lib/traveller/codes";
 import { ACCOUNTS, signIn } from "./fixtures";
 
 /** Serious and critical WCAG 2.1 A/AA problems found by axe on the page as it stands. */
@@ -26,7 +27,7 @@ const SCREENS = [
   { who: ACCOUNTS.customer, paths: ["/orders", "/build"] },
   { who: ACCOUNTS.counter, paths: ["/desk", "/desk/new", "/desk/customers"] },
   { who: ACCOUNTS.owner, paths: ["/overview", "/overview/staff", "/overview/mail", "/overview/catalogue"] },
-  { who: ACCOUNTS.floor, paths: ["/floor"] },
+  { who: ACCOUNTS.floor, paths: ["/floor", "/floor/queue", "/floor/shafts"] },
 ] as const;
 
 for (const { who, paths } of SCREENS) {
@@ -49,4 +50,49 @@ test("no serious accessibility problems on an order page and its quote", async (
     .click();
   await page.waitForLoadState("networkidle");
   expect(await violations(page), page.url()).toEqual([]);
+});
+
+test("no serious accessibility problems on the floor's screens with a shaft in the shop", async ({
+  browser,
+}) => {
+  test.setTimeout(90_000);
+  // The counter releases a demo order by hand (its deposit is not paid), as the desk would.
+  const desk = await (await browser.newContext()).newPage();
+  await signIn(desk, ACCOUNTS.counter);
+  await desk.goto("/desk");
+  await desk
+    .getByRole("link", { name: /^Y\d{2}-\d{4}$/ })
+    .last()
+    .click();
+  await desk.waitForURL(/\/desk\/orders\/[0-9a-f-]{36}$/);
+  const box = desk.getByRole("region", { name: "Shop floor" });
+  await expect(box).toBeVisible();
+  const release = box.getByRole("button", { name: "Release to the shop" });
+  if (await release.isVisible()) {
+    await box.getByLabel(/why release now/).fill("Regular customer, pays on pickup");
+    await release.click();
+  }
+  await expect(box.getByRole("link", { name: "Print traveller" })).toBeVisible();
+  expect(await violations(desk), desk.url()).toEqual([]);
+  const serial = (await box.locator("a.font-mono").first().textContent())!.trim();
+  await desk.close();
+
+  const page = await (await browser.newContext()).newPage();
+  await signIn(page, ACCOUNTS.floor);
+  const scan = page.getByLabel("Scan a traveller barcode or a serial");
+  await scan.fill(formatStepCode({ serial, step: "CUT", revision: 1 }));
+  await scan.press("Enter");
+  await expect(page.getByRole("heading", { name: /Step 1 of \d+: Cut tube/ })).toBeVisible();
+  expect(await violations(page), "/floor with a step open").toEqual([]);
+  // A length far off its limit: the hold panel.
+  await page.getByLabel("Tube heat / lot number").fill("H-1");
+  await page.getByLabel(/^Cut length/).fill("1");
+  await page.getByRole("button", { name: /^Submit/ }).click();
+  await expect(page.getByText("On hold: Cut tube")).toBeVisible();
+  expect(await violations(page), "/floor after a hold").toEqual([]);
+  for (const path of ["/floor/queue", `/floor/shafts/${serial}`]) {
+    await page.goto(path);
+    await page.waitForLoadState("networkidle");
+    expect(await violations(page), path).toEqual([]);
+  }
 });

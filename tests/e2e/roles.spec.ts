@@ -12,7 +12,7 @@ const HOMES = [
     role: "counter",
     path: "/desk",
     heading: "Order desk",
-    nav: ["Order desk", "New phone order", "Customers"],
+    nav: ["Order desk", "New phone order", "Customers", "Work queue"],
   },
   { role: "floor", path: "/floor", heading: "Scan station", nav: ["Scan station", "Work queue"] },
   { role: "customer", path: "/orders", heading: "My orders", nav: ["My orders", "Design a shaft"] },

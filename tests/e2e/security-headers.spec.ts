@@ -87,7 +87,7 @@ test("counter: desk, a phone order, customers and an order page", async ({ page 
 test("floor: scan station and work queue", async ({ page }) => {
   const violations = await watchPolicy(page);
   await signIn(page, ACCOUNTS.floor);
-  for (const path of ["/floor", "/floor/queue"]) await visit(page, path, violations);
+  for (const path of ["/floor", "/floor/queue", "/floor/shafts"]) await visit(page, path, violations);
 });
 
 test("owner: overview, staff, catalogue, sent mail and one e-mail's preview", async ({ page }) => {

@@ -54,7 +54,7 @@ describe("paying an order through the local Stripe fake", () => {
       expect(await harness.fake.idle(10_000)).toBe(true);
 
       const after = await reload(order.id);
-      expect(after.status).toBe("received");
+      expect(after.status).toBe("in_shop"); // the deposit met the policy: released to the shop (lib/floor/hooks.ts)
       expect(after.paymentState).toBe("deposit_paid");
       expect(after.paidCents).toBe(order.depositCents);
       expect(after.events.getItems().filter((e) => e.kind === "paid")).toHaveLength(1);

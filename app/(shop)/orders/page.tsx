@@ -48,7 +48,7 @@ export default async function MyOrdersPage({ searchParams }: PageProps<"/orders"
               >
                 <span className="font-mono font-semibold">{o.number}</span>
                 <span className="min-w-0 flex-1 truncate">{o.shafts.join(", ")}</span>
-                <OrderStatusBadge status={o.status} />
+                <OrderStatusBadge status={o.status} label={o.statusLabel} />
                 <PaymentBadge state={o.paymentState} />
                 <span className="tabular-nums">{formatMoney(o.totalCents, o.currency)}</span>
                 <span className="text-sm text-ink-muted">promised {o.promisedDate}</span>

@@ -112,6 +112,9 @@ function buildTubes(): TubeSize[] {
   return tubes;
 }
 
+/** The demo catalogue's fastener torques are invented: a real shop enters its parts makers' figures. */
+const DEMO_TORQUE = "demo data (invented) — use the part maker's published figure";
+
 export const defaultJointSeries: readonly JointSeries[] = [
   {
     id: "YL-X28",
@@ -120,6 +123,8 @@ export const defaultJointSeries: readonly JointSeries[] = [
     maxWorkingAngleDeg: 20,
     massKg: 0.55,
     priceCents: 4500,
+    strapTorqueNm: 19,
+    strapTorqueSource: DEMO_TORQUE,
   },
   {
     id: "YL-X30",
@@ -128,6 +133,8 @@ export const defaultJointSeries: readonly JointSeries[] = [
     maxWorkingAngleDeg: 20,
     massKg: 0.7,
     priceCents: 5900,
+    strapTorqueNm: 20,
+    strapTorqueSource: DEMO_TORQUE,
   },
   {
     id: "YL-X35",
@@ -136,6 +143,8 @@ export const defaultJointSeries: readonly JointSeries[] = [
     maxWorkingAngleDeg: 18,
     massKg: 1.0,
     priceCents: 8900,
+    strapTorqueNm: 27,
+    strapTorqueSource: DEMO_TORQUE,
   },
   {
     id: "YL-X41",
@@ -144,6 +153,8 @@ export const defaultJointSeries: readonly JointSeries[] = [
     maxWorkingAngleDeg: 18,
     massKg: 1.5,
     priceCents: 14500,
+    strapTorqueNm: 41,
+    strapTorqueSource: DEMO_TORQUE,
   },
   {
     id: "YL-X48",
@@ -152,6 +163,8 @@ export const defaultJointSeries: readonly JointSeries[] = [
     maxWorkingAngleDeg: 15,
     massKg: 2.3,
     priceCents: 24000,
+    strapTorqueNm: 61,
+    strapTorqueSource: DEMO_TORQUE,
   },
 ];
 
@@ -213,6 +226,9 @@ function buildFittings(): EndFitting[] {
         massKg: Math.round(f.massKg * 1.6 * 100) / 100,
         torqueRatingNm: series.torqueRatingNm,
         priceCents: Math.round(f.priceCents * 1.9),
+        // Demo data: grows with the series like the flange bolt size does.
+        fastenerTorqueNm: Math.round(series.torqueRatingNm / 45),
+        fastenerTorqueSource: DEMO_TORQUE,
       });
     }
   }

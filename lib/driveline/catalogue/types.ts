@@ -39,6 +39,10 @@ export interface EndFitting {
   /** Rating of the fitting including its weld (governs at the heat-affected zone). */
   readonly torqueRatingNm: number;
   readonly priceCents: number;
+  /** Tightening torque of the bolts that fasten it to the vehicle (a flange yoke's), N·m, as its maker gives it. */
+  readonly fastenerTorqueNm?: number;
+  /** Where that figure comes from (the maker's sheet, or "demo data"). */
+  readonly fastenerTorqueSource?: string;
 }
 
 export interface JointSeries {
@@ -48,6 +52,10 @@ export interface JointSeries {
   readonly maxWorkingAngleDeg: number;
   readonly massKg: number;
   readonly priceCents: number;
+  /** Tightening torque of the straps / U-bolts holding the joint's caps in the vehicle's yoke, N·m, as the joint maker gives it. */
+  readonly strapTorqueNm?: number;
+  /** Where that figure comes from (the maker's sheet, or "demo data"). */
+  readonly strapTorqueSource?: string;
 }
 
 export interface Catalogue {

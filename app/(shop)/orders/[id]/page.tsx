@@ -9,6 +9,9 @@ import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
 import { OrderPage } from "@/components/orders/order-page";
 import { OrderFilesSection } from "@/components/orders/order-files-section";
+import Link from "next/link";
+import { WorkOrder } from "@/entities";
+import { asBuiltHref } from "@/lib/floor/scan";
 
 export const metadata: Metadata = { title: "Order" };
 
@@ -30,6 +33,7 @@ export default async function CustomerOrderPage({ params, searchParams }: PagePr
     throw e;
   });
   await populateOrder(em, order);
+  const shafts = await em.find(WorkOrder, { order: order.id }, { orderBy: { serialSequence: "asc" } });
   return (
     <>
       <PageHeader
@@ -43,6 +47,25 @@ export default async function CustomerOrderPage({ params, searchParams }: PagePr
         checkoutUnavailable={Boolean(query["checkout-unavailable"])}
         files={<OrderFilesSection em={em} order={order} user={user} />}
       />
+      {shafts.length > 0 && (
+        <section aria-labelledby="shaft-records" className="mt-6 card p-5">
+          <h2 id="shaft-records" className="mb-2 text-lg font-semibold">
+            Your shafts&apos; records
+          </h2>
+          <p className="mb-2 text-sm text-ink-muted">
+            What the shop measured on each shaft as it was built; reorder the same shaft from its record.
+          </p>
+          <ul className="space-y-1">
+            {shafts.map((w) => (
+              <li key={w.id}>
+                <Link href={asBuiltHref(w.serial, "customer")} className="font-mono underline">
+                  {w.serial}
+                </Link>
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
     </>
   );
 }

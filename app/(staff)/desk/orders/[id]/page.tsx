@@ -11,7 +11,9 @@ import { Alert } from "@/components/ui/alert";
 import { OrderPage } from "@/components/orders/order-page";
 import { OrderFilesSection } from "@/components/orders/order-files-section";
 import { InviteButton } from "@/components/customers/invite-button";
+import { orderFloorState } from "@/lib/floor/work-orders";
 import { StaffActions } from "./_components/staff-actions";
+import { FloorActions } from "./_components/floor-actions";
 
 export const metadata: Metadata = { title: "Order" };
 
@@ -24,6 +26,7 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
     throw e;
   });
   await populateOrder(em, order);
+  const floor = await orderFloorState(em, order.id);
   const view = orderView(order, user);
   const { placed, paid, cancelled } = await searchParams;
   return (
@@ -52,13 +55,21 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
         cancelledCheckout={Boolean(cancelled)}
         files={<OrderFilesSection em={em} order={order} user={user} />}
         staffActions={
-          <StaffActions
-            orderId={order.id}
-            currency={order.currency}
-            canRequestBalance={view.due?.kind === "balance"}
-            canRefund={can(user.role, "payments.refund")}
-            payments={view.payments}
-          />
+          <>
+            <FloorActions
+              orderId={order.id}
+              depositPaid={order.paymentState !== "unpaid"}
+              cancelled={order.status === "cancelled"}
+              floor={floor}
+            />
+            <StaffActions
+              orderId={order.id}
+              currency={order.currency}
+              canRequestBalance={view.due?.kind === "balance"}
+              canRefund={can(user.role, "payments.refund")}
+              payments={view.payments}
+            />
+          </>
         }
       />
     </>
