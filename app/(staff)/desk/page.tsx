@@ -51,7 +51,7 @@ export default async function OrderDeskPage() {
               <td className={CELL}>{o.customerName}</td>
               <td className={CELL}>{o.shafts.join(", ")}</td>
               <td className={CELL}>
-                <OrderStatusBadge status={o.status} />
+                <OrderStatusBadge status={o.status} label={o.statusLabel} onHold={o.onHold} />
               </td>
               <td className={CELL}>
                 <PaymentBadge state={o.paymentState} />
