@@ -14,7 +14,7 @@ describe("check character (ISO/IEC 7064 MOD 37,36)", () => {
     expect(checkCharacter("A12425GABC1234002")).toBe("M");
   });
 
-  test("catches every single-character substitution and every adjacent swap", () => {
+  test("catches every single-character substitution", () => {
     const alphabet = "0123456789ABCDEFGHIJKLMNOPQRSTUVWXYZ".split("");
     const body = fc
       .array(fc.constantFrom(...alphabet), { minLength: 4, maxLength: 24 })
@@ -24,12 +24,29 @@ describe("check character (ISO/IEC 7064 MOD 37,36)", () => {
         const i = at % text.length;
         const changed = text.slice(0, i) + ch + text.slice(i + 1);
         if (changed !== text) expect(checkCharacter(changed)).not.toBe(checkCharacter(text));
-        if (i + 1 < text.length && text[i] !== text[i + 1]) {
-          const swapped = text.slice(0, i) + text[i + 1] + text[i] + text.slice(i + 2);
-          expect(checkCharacter(swapped)).not.toBe(checkCharacter(text));
-        }
       }),
     );
+  });
+
+  test("catches nearly every adjacent swap", () => {
+    // A hybrid ISO/IEC 7064 system does not catch every transposition (e.g. F4NO and F4ON share
+    // their check character); measured here on a fixed sample, about 0.2 % slip through.
+    const alphabet = "0123456789ABCDEFGHIJKLMNOPQRSTUVWXYZ";
+    expect(checkCharacter("F4ON")).toBe(checkCharacter("F4NO"));
+    const rng = fc.noShrink(fc.array(fc.nat(35), { minLength: 4, maxLength: 24 }));
+    const samples = fc.sample(rng, { numRuns: 20_000, seed: 7064 });
+    let swaps = 0;
+    let missed = 0;
+    samples.forEach((digits, n) => {
+      const text = digits.map((d) => alphabet[d]).join("");
+      const i = n % (text.length - 1);
+      if (text[i] === text[i + 1]) return;
+      swaps += 1;
+      const swapped = text.slice(0, i) + text[i + 1] + text[i] + text.slice(i + 2);
+      if (checkCharacter(swapped) === checkCharacter(text)) missed += 1;
+    });
+    expect(swaps).toBeGreaterThan(19_000);
+    expect(missed / swaps).toBeLessThan(0.005);
   });
 });
 
