@@ -2,12 +2,20 @@
 import { benchDriveline } from "./driveline";
 import { benchApi } from "./api";
 import { benchTraveller } from "./traveller";
+import { benchFloor } from "./floor";
+import { benchScan } from "./scan";
 
 async function main(): Promise<void> {
   await benchDriveline();
   await benchTraveller();
-  if (process.env.BENCH_BASE_URL) await benchApi(process.env.BENCH_BASE_URL);
-  else console.log("\nAPI latency: skipped (run through `npm run bench`, which starts the app).");
+  const floor = await benchFloor();
+  if (process.env.BENCH_BASE_URL) {
+    await benchApi(process.env.BENCH_BASE_URL);
+    await benchScan(process.env.BENCH_BASE_URL, floor?.scanCode ?? null);
+  } else
+    console.log(
+      "\nAPI latency and the scan route: skipped (run through `npm run bench`, which starts the app).",
+    );
 }
 
 main().catch((error: unknown) => {

@@ -18,9 +18,17 @@ import { releaseOrderOnDeposit } from "./work-orders";
 export interface AfterCommit {
   /** Orders whose balance is to be requested (final inspection passed, deposit paid, money owed). */
   balanceFor: Set<string>;
+  /** An e-mail was queued: hand the outbox to the delivery job. */
+  mail: boolean;
 }
 
-export const newAfterCommit = (): AfterCommit => ({ balanceFor: new Set() });
+export const newAfterCommit = (): AfterCommit => ({ balanceFor: new Set(), mail: false });
+
+/** Clears what an earlier (rolled back) attempt collected. */
+export function resetAfterCommit(after: AfterCommit): void {
+  after.balanceFor.clear();
+  after.mail = false;
+}
 
 export interface Milestone {
   order: Order;
@@ -71,6 +79,7 @@ export async function onFinalInspectionPassed(em: EntityManager, m: Milestone): 
   );
   await em.populate(m.order, ["customer"]);
   await notifyOrderReady(em, m.order);
+  m.after.mail = true;
   const owed = m.order.totalCents - m.order.paidCents;
   if (owed <= 0) return;
   if (m.order.paidCents > 0 && m.order.paidCents >= m.order.depositCents) m.after.balanceFor.add(m.order.id);
@@ -115,6 +124,7 @@ export async function onShaftDispatched(em: EntityManager, m: Milestone): Promis
     }));
   await em.populate(m.order, ["customer"]);
   await notifyOrderShipped(em, m.order, parcels, m.record.at);
+  m.after.mail = true;
 }
 
 /** A reissued traveller sends a ready shaft back through the routing: the order is in the shop again. */
@@ -138,7 +148,7 @@ async function staffNote(orderId: string, label: string): Promise<void> {
  * be requested is logged and noted for the desk, which can request it by hand.
  */
 export async function runAfterCommit(after: AfterCommit): Promise<void> {
-  await afterCommit();
+  if (after.mail) await afterCommit();
   for (const orderId of after.balanceFor) {
     try {
       await requestBalance(orderId, null);

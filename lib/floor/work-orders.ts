@@ -36,6 +36,7 @@ import {
   onReissued,
   onShaftDispatched,
   onStepCompleted,
+  resetAfterCommit,
   runAfterCommit,
   type AfterCommit,
 } from "./hooks";
@@ -296,7 +297,7 @@ export async function submitStep(
   const after = newAfterCommit();
   try {
     const out = await inTransaction(async (em) => {
-      after.balanceFor.clear();
+      resetAfterCommit(after);
       const { wo, steps, step } = await lockForCode(em, code);
       const earlier = await replay(em, key);
       if (earlier) {
@@ -383,7 +384,7 @@ export async function concedeHold(workOrderId: string, by: CurrentUser, reason: 
   if (!why) throw new AppError("invalid", "A concession needs a reason.", { reason: "required" });
   const after = newAfterCommit();
   const out = await inTransaction(async (em) => {
-    after.balanceFor.clear();
+    resetAfterCommit(after);
     const wo = await em.findOne(WorkOrder, { id: workOrderId }, { lockMode: LockMode.PESSIMISTIC_WRITE });
     if (!wo) throw new AppError("not_found", "No such work order.");
     const steps = await stepsFor(em, wo);

@@ -6,6 +6,8 @@ import { describe, expect } from "vitest";
 import { NextRequest } from "next/server";
 import { GET as installSheetGet } from "@/app/api/orders/[id]/papers/install-sheet/route";
 import { GET as asBuiltGet } from "@/app/api/orders/[id]/papers/as-built/route";
+import { EmailMessage, OrderEvent, Payment } from "@/entities";
+import { getEm } from "@/lib/db/orm";
 import { releaseOrder, submitStep } from "@/lib/floor/work-orders";
 import { placeOrder } from "@/lib/orders/place-order";
 import { authRequest, sessionCookie } from "../setup/auth-requests";
@@ -84,6 +86,19 @@ describe("the customer's papers", () => {
       const floor = await staff("floor");
       for (const step of ["CUT", "WLD", "RUN", "BAL", "FIN"])
         await submitStep(code(serial, step), good[step]!, floor, key());
+
+      // Released by hand with nothing paid: the balance is not requested; the desk gets a note.
+      const em = (await getEm()).fork();
+      expect(await em.count(Payment, { order: order.id })).toBe(0);
+      expect(
+        await em.count(OrderEvent, {
+          order: order.id,
+          public: false,
+          label: { $like: "Ready with nothing paid%" },
+        }),
+      ).toBe(1);
+      const [ready] = await em.find(EmailMessage, { orderId: order.id, template: "shaft-ready" });
+      expect(ready?.text).toContain("Left to pay");
 
       const cert = await get(asBuiltGet, order.id, "as-built", cookieA);
       expect(cert.status).toBe(200);

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect } from "vitest";
-import { AuditEvent, EmailMessage, Order, OrderEvent, Payment, WorkOrder } from "@/entities";
+import { AuditEvent, EmailMessage, Order, OrderEvent, OrderShaft, Payment, WorkOrder } from "@/entities";
 import type { CurrentUser } from "@/lib/auth/guard";
 import { getEm } from "@/lib/db/orm";
 import { releaseOrder, submitStep } from "@/lib/floor/work-orders";
@@ -173,4 +173,25 @@ describe("the floor wired to payments, the customer's e-mails and the order's st
       await em.count(OrderEvent, { order: order.id, label: { $like: "%automatic release%failed%" } }),
     ).toBe(0);
   });
+
+  dbTest(
+    "a release that fails after the deposit leaves the payment standing and a note for the desk",
+    async () => {
+      const { user, order } = await placed("pickup");
+      // A frozen evaluation the routing cannot read: deriving the steps throws inside the release.
+      const em = (await getEm()).fork();
+      await em.nativeUpdate(OrderShaft, { order: order.id }, { evaluation: { broken: true } });
+      await pay(order.id, user);
+      const fresh = (await getEm()).fork();
+      expect(await fresh.findOneOrFail(Order, { id: order.id })).toMatchObject({
+        paymentState: "deposit_paid",
+        paidCents: order.depositCents,
+        status: "received",
+      });
+      expect(await fresh.count(WorkOrder, { order: order.id })).toBe(0);
+      const note = await fresh.findOneOrFail(OrderEvent, { order: order.id, kind: "note", public: false });
+      expect(note.label).toContain("automatic release to the shop failed");
+      expect(await mails(order.id, "payment-receipt")).toHaveLength(1);
+    },
+  );
 });
