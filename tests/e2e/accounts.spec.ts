@@ -2,20 +2,9 @@ import { createServer, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import { expect, test } from "@playwright/test";
 import { DEMO_PASSWORD, DEMO_PHONE_CUSTOMERS, DEMO_STAFF } from "../../lib/demo";
-import { ACCOUNTS, signIn } from "./fixtures";
+import { ACCOUNTS, MAIL_FAKE, mailTo, signIn } from "./fixtures";
 
-const MAIL = `http://127.0.0.1:${process.env.MAIL_FAKE_HTTP_PORT ?? 12680}`;
-
-async function mailTo(email: string, subject: RegExp): Promise<{ subject: string; text: string }> {
-  for (let i = 0; i < 60; i++) {
-    const res = await fetch(`${MAIL}/messages?to=${encodeURIComponent(email)}`);
-    const { data } = (await res.json()) as { data: { subject: string; text: string }[] };
-    const hit = data.find((m) => subject.test(m.subject));
-    if (hit) return hit;
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  throw new Error(`no e-mail to ${email} matching ${subject}`);
-}
+const MAIL = MAIL_FAKE;
 
 /** The newest verification link the mail fake caught for `email`. */
 async function verificationLink(email: string, after = 0): Promise<string> {

@@ -16,3 +16,18 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await page.getByRole("button", { name: "Sign in" }).click();
   await expect(page).not.toHaveURL(/\/sign-in/);
 }
+
+/** The local mail fake's inbox (the port `npm test` gives it). */
+export const MAIL_FAKE = `http://127.0.0.1:${process.env.MAIL_FAKE_HTTP_PORT ?? 12680}`;
+
+/** Waits (up to 30 s) for the mail fake to catch an e-mail to `email` whose subject matches. */
+export async function mailTo(email: string, subject: RegExp): Promise<{ subject: string; text: string }> {
+  for (let i = 0; i < 60; i++) {
+    const res = await fetch(`${MAIL_FAKE}/messages?to=${encodeURIComponent(email)}`);
+    const { data } = (await res.json()) as { data: { subject: string; text: string }[] };
+    const hit = data.find((m) => subject.test(m.subject));
+    if (hit) return hit;
+    await new Promise((r) => setTimeout(r, 500));
+  }
+  throw new Error(`no e-mail to ${email} matching ${subject}`);
+}

@@ -1,40 +1,13 @@
 import { expect, test } from "@playwright/test";
-import http from "node:http";
 import { readFileSync } from "node:fs";
 import { ACCOUNTS, signIn } from "./fixtures";
+import { chunkedPost } from "../http/chunked-client";
 
 const port = Number(process.env.APP_PORT ?? 3100);
 
-/**
- * Sends up to `totalBytes` in 64 kB chunks with Transfer-Encoding: chunked (no Content-Length) to
- * the running `next start`, and resolves with its answer and how much had been sent by then.
- */
-function chunkedPost(path: string, totalBytes: number, headers: Record<string, string>) {
-  return new Promise<{ status: number; body: string; writtenBytes: number }>((resolve, reject) => {
-    let written = 0;
-    let answered = false;
-    const req = http.request({ host: "127.0.0.1", port, path, method: "POST", headers });
-    req.on("response", (res) => {
-      answered = true;
-      const at = written;
-      let body = "";
-      res.setEncoding("utf8");
-      res.on("data", (c: string) => (body += c));
-      res.on("end", () => resolve({ status: res.statusCode ?? 0, body, writtenBytes: at }));
-    });
-    req.on("error", (error) => (answered ? undefined : reject(error)));
-    const chunk = Buffer.alloc(64 * 1024, 0x20);
-    const pump = () => {
-      while (!answered && written < totalBytes) {
-        written += chunk.length;
-        if (!req.write(chunk)) return void req.once("drain", pump);
-      }
-      if (!answered) req.end();
-    };
-    req.flushHeaders();
-    pump();
-  });
-}
+/** A chunked POST of up to `totalBytes` (no Content-Length) to the running `next start`. */
+const chunkedPostToApp = (path: string, totalBytes: number, headers: Record<string, string>) =>
+  chunkedPost(port, path, totalBytes, headers["content-type"] ?? "application/octet-stream", headers);
 
 const JSON_TYPE = { "content-type": "application/json" };
 const FORM_TYPE = { "content-type": "application/x-www-form-urlencoded" };
@@ -48,7 +21,7 @@ test.describe("bodies without a length are refused early by the running app", ()
     ["/api/sign-in", FORM_TYPE],
   ] as const) {
     test(`POST ${path}: 100 MB chunked → 413 too_large long before the end`, async () => {
-      const res = await chunkedPost(path, 100 * 1024 * 1024, headers);
+      const res = await chunkedPostToApp(path, 100 * 1024 * 1024, headers);
       expect(res.status).toBe(413);
       expect(JSON.parse(res.body)).toMatchObject({ error: { code: "too_large" } });
       expect(res.writtenBytes).toBeLessThan(16 * 1024 * 1024);
@@ -63,7 +36,7 @@ test("a server action's body is cut off at Next's 1 MB action limit, not read to
   };
   const id = Object.entries(manifest.node).find(([, v]) => v.exportedName === "createCustomerAction")?.[0];
   expect(id).toBeTruthy();
-  const res = await chunkedPost("/desk/new", 100 * 1024 * 1024, {
+  const res = await chunkedPostToApp("/desk/new", 100 * 1024 * 1024, {
     "next-action": id!,
     accept: "text/x-component",
     "content-type": "text/plain;charset=UTF-8",

@@ -1,7 +1,7 @@
 import { expect, test, type Page } from "@playwright/test";
+import { mailTo } from "./fixtures";
 
 // The issue's acceptance journey, end to end in Chromium, against the local Stripe and mail fakes.
-const MAIL = `http://127.0.0.1:${process.env.MAIL_FAKE_HTTP_PORT ?? 12680}`;
 // A 1×1 PNG (the smallest valid image; demo data).
 const PNG = Buffer.from(
   "iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==",
@@ -12,17 +12,6 @@ async function typeInto(page: Page, label: string, value: string) {
   const field = page.getByLabel(label, { exact: true });
   await field.fill(value);
   await field.blur();
-}
-
-async function mailTo(email: string, subject: RegExp): Promise<{ subject: string; text: string }> {
-  for (let i = 0; i < 60; i++) {
-    const res = await fetch(`${MAIL}/messages?to=${encodeURIComponent(email)}`);
-    const { data } = (await res.json()) as { data: { subject: string; text: string }[] };
-    const hit = data.find((m) => subject.test(m.subject));
-    if (hit) return hit;
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  throw new Error(`no e-mail to ${email} matching ${subject}`);
 }
 
 test("a new customer designs a shaft, fixes it, uploads a photo, pays a deposit and sees the order paid", async ({

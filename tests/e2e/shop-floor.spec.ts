@@ -3,20 +3,7 @@ import { mkdtempSync, readdirSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { expect, test, type APIRequestContext, type Page } from "@playwright/test";
-import { ACCOUNTS, signIn } from "./fixtures";
-
-const MAIL = `http://127.0.0.1:${process.env.MAIL_FAKE_HTTP_PORT ?? 12680}`;
-
-async function mailTo(email: string, subject: RegExp): Promise<{ subject: string; text: string }> {
-  for (let i = 0; i < 60; i++) {
-    const res = await fetch(`${MAIL}/messages?to=${encodeURIComponent(email)}`);
-    const { data } = (await res.json()) as { data: { subject: string; text: string }[] };
-    const hit = data.find((m) => subject.test(m.subject));
-    if (hit) return hit;
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  throw new Error(`no e-mail to ${email} matching ${subject}`);
-}
+import { ACCOUNTS, mailTo, signIn } from "./fixtures";
 
 // The shop floor issue's "Done when" journey: a paid order is released at the desk, its traveller
 // PDF's codes are read back from the rendered page, the floor signs off every step by "scanning"
