@@ -6,6 +6,7 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { StepRecord, WorkOrder, WorkOrderStep, type WorkOrderState } from "@/entities";
 import { AppError } from "@/lib/http/errors";
+import { assertCurrentRevision } from "./work-orders";
 import { getShopEngineering } from "@/lib/shop/config";
 import { normaliseCode, parseSerial, parseStepCode } from "@/lib/traveller/codes";
 import { describeLimit, type Failure } from "@/lib/traveller/measure";
@@ -118,18 +119,7 @@ export async function scanCode(em: EntityManager, raw: string): Promise<ScanResu
     { populate: ["order", "order.customer", "orderShaft"] },
   );
   if (!wo) throw new AppError("not_found", `No shaft with serial ${asStep.serial}.`);
-  if (asStep.revision < wo.revision) {
-    throw new AppError(
-      "conflict",
-      `This traveller is void: ${wo.serial} revision ${asStep.revision} was replaced by revision ${wo.revision} after the design changed. Scan the revision ${wo.revision} traveller.`,
-    );
-  }
-  if (asStep.revision > wo.revision) {
-    throw new AppError(
-      "not_found",
-      `${wo.serial} has no revision ${asStep.revision} (the current one is ${wo.revision}).`,
-    );
-  }
+  assertCurrentRevision(wo, asStep.revision);
   const [steps, { floor }] = await Promise.all([
     em.find(WorkOrderStep, { workOrder: wo.id, revision: wo.revision }, { orderBy: { position: "asc" } }),
     getShopEngineering(),

@@ -221,23 +221,28 @@ function result(
 }
 
 /** Loads and locks the work order a code names, refusing void revisions and unknown codes. */
+/** A scanned code must be of the shaft's current traveller: an older revision is void (409). */
+export function assertCurrentRevision(wo: { serial: string; revision: number }, revision: number): void {
+  if (revision < wo.revision) {
+    throw new AppError(
+      "conflict",
+      `This traveller is void: ${wo.serial} revision ${revision} was replaced by revision ${wo.revision} after the design changed. Scan the revision ${wo.revision} traveller.`,
+    );
+  }
+  if (revision > wo.revision) {
+    throw new AppError(
+      "not_found",
+      `${wo.serial} has no revision ${revision} (the current one is ${wo.revision}).`,
+    );
+  }
+}
+
 async function lockForCode(em: EntityManager, code: string) {
   const parsed = parseStepCode(code);
   if (!parsed.ok) throw new AppError("invalid", parsed.message, { code: parsed.message });
   const wo = await em.findOne(WorkOrder, { serial: parsed.serial }, { lockMode: LockMode.PESSIMISTIC_WRITE });
   if (!wo) throw new AppError("not_found", `No shaft with serial ${parsed.serial}.`);
-  if (parsed.revision < wo.revision) {
-    throw new AppError(
-      "conflict",
-      `This traveller is void: ${wo.serial} revision ${parsed.revision} was replaced by revision ${wo.revision} after the design changed. Scan the revision ${wo.revision} traveller.`,
-    );
-  }
-  if (parsed.revision > wo.revision) {
-    throw new AppError(
-      "not_found",
-      `${wo.serial} has no revision ${parsed.revision} (the current one is ${wo.revision}).`,
-    );
-  }
+  assertCurrentRevision(wo, parsed.revision);
   const steps = await stepsFor(em, wo);
   const step = steps.find((s) => s.code === parsed.step);
   if (!step) throw new AppError("not_found", `${wo.serial} has no step ${parsed.step}.`);
