@@ -9,7 +9,8 @@ source scripts/throwaway.sh
 
 pg_ensure_installed
 throwaway_up "${BENCH_PG_PORT:-54349}" yokeline_bench
-export APP_PORT="${BENCH_APP_PORT:-3200}" STRIPE_FAKE_PORT=12311 MAIL_FAKE_SMTP_PORT=12725 MAIL_FAKE_HTTP_PORT=12780
+export APP_PORT="${BENCH_APP_PORT:-3200}" STRIPE_FAKE_PORT="${BENCH_STRIPE_FAKE_PORT:-12311}"
+export MAIL_FAKE_SMTP_PORT="${BENCH_MAIL_SMTP_PORT:-12725}" MAIL_FAKE_HTTP_PORT="${BENCH_MAIL_HTTP_PORT:-12780}"
 export STRIPE_FAKE_STATE_FILE="$TMP_DIR/stripe-fake.json"
 yokeline_env_local
 export DATABASE_URL="$DB_BASE/yokeline_bench" BETTER_AUTH_SECRET="bench-$(head -c 24 /dev/urandom | base64 | tr -d '/+=')"
