@@ -12,6 +12,15 @@ import { User } from "./user.entity";
   name: "customer_email_lower_unique",
   expression: `create unique index "customer_email_lower_unique" on "customer" (lower(email)) where email <> ''`,
 })
+// The counter's customer search (lib/customers.ts): trigram indexes for substring matches (Migration20261204150500).
+@Index({
+  name: "customer_search_trgm_index",
+  expression: `create index "customer_search_trgm_index" on "customer" using gin ((lower(name || ' ' || email || ' ' || coalesce(company, '') || ' ' || coalesce(phone, ''))) gin_trgm_ops)`,
+})
+@Index({
+  name: "customer_phone_digits_trgm_index",
+  expression: `create index "customer_phone_digits_trgm_index" on "customer" using gin ((regexp_replace(coalesce(phone, ''), '[^0-9]', '', 'g')) gin_trgm_ops)`,
+})
 export class Customer {
   [OptionalProps]?: "createdAt";
 

@@ -3,6 +3,18 @@ import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import type { QuoteLine } from "../lib/pricing/price-book";
 
+/** Who acknowledged one warning of the frozen evaluation before the order was placed, and how. */
+export interface WarningAcknowledgement {
+  checkId: string;
+  /** The warning's text as it was shown when acknowledged. */
+  message: string;
+  byUserId: string | null;
+  byName: string;
+  channel: "online" | "counter";
+  /** ISO date-time. */
+  at: string;
+}
+
 /** One shaft of an order, with frozen copies of its design, its evaluation and its price. */
 @Entity({ tableName: "order_shaft" })
 @Check({ name: "order_shaft_price_nonnegative_check", expression: "price_cents >= 0" })
@@ -37,4 +49,8 @@ export class OrderShaft {
 
   @Property({ type: "integer" })
   priceCents!: number;
+
+  /** Each warning of the frozen evaluation, acknowledged by the customer (online) or the counter (Migration20261204150500). */
+  @Property({ type: "json", defaultRaw: `'[]'` })
+  warningAcknowledgements: WarningAcknowledgement[] = [];
 }
