@@ -47,6 +47,7 @@ export {
 };
 export type { OrderStatus, PaymentState } from "./order.entity";
 export type { OrderEventKind } from "./order-event.entity";
+export type { WarningAcknowledgement } from "./order-shaft.entity";
 export type { WorkOrderState } from "./work-order.entity";
 export type { StepState, StepCompletion } from "./work-order-step.entity";
 export type { StepOutcome } from "./step-record.entity";

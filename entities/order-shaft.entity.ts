@@ -1,4 +1,4 @@
-import { Check, Entity, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { Check, Entity, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import type { QuoteLine } from "../lib/pricing/price-book";
@@ -19,6 +19,8 @@ export interface WarningAcknowledgement {
 @Entity({ tableName: "order_shaft" })
 @Check({ name: "order_shaft_price_nonnegative_check", expression: "price_cents >= 0" })
 export class OrderShaft {
+  [OptionalProps]?: "warningAcknowledgements";
+
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
 

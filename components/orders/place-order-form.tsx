@@ -6,6 +6,7 @@ import { placeOrderBodySchema, type PlaceOrderBody } from "@/lib/orders/schemas"
 import { formatMoney, type OrderQuote } from "@/lib/pricing/price-book";
 import { Totals } from "./shaft-summary";
 import { Alert } from "@/components/ui/alert";
+import type { AckItem } from "@/lib/orders/acknowledgements";
 
 interface Props {
   designIds: string[];
@@ -14,11 +15,46 @@ interface Props {
   depositPercent: number;
   /** Counter: give the checkout link to the customer instead of going there. */
   counter?: boolean;
+  /** Per design (in order): the warnings (and, at the counter, failed checks) to acknowledge. */
+  acknowledge?: { name: string; items: AckItem[] }[];
 }
 
+const ackField = (i: number) => `shafts.${i}.acknowledgements`;
+
 /** Pickup or shipping, then place the order and go to the payment page. */
-export function PlaceOrderForm({ designIds, customerId, quotes, depositPercent, counter }: Props) {
+export function PlaceOrderForm({
+  designIds,
+  customerId,
+  quotes,
+  depositPercent,
+  counter,
+  acknowledge = [],
+}: Props) {
   const [error, setError] = useState<string | null>(null);
+  // Ticked check ids per shaft; the server re-evaluates and refuses any warning left out.
+  const [acked, setAcked] = useState<string[][]>(() => designIds.map(() => []));
+  const [ackErrors, setAckErrors] = useState<Record<string, string>>({});
+  const toggle = (i: number, checkId: string, on: boolean) => {
+    setAcked((all) =>
+      all.map((ids, j) =>
+        j !== i
+          ? ids
+          : on
+            ? [...ids.filter((x) => x !== checkId), checkId]
+            : ids.filter((x) => x !== checkId),
+      ),
+    );
+    setAckErrors((errs) => {
+      const { [ackField(i)]: _drop, ...rest } = errs;
+      return rest;
+    });
+  };
+  const focusFirstUnticked = () =>
+    document
+      .querySelector<HTMLInputElement>(
+        '[data-testid="acknowledgements"] input[type="checkbox"]:not(:checked)',
+      )
+      ?.focus();
   const {
     register,
     handleSubmit,
@@ -32,14 +68,33 @@ export function PlaceOrderForm({ designIds, customerId, quotes, depositPercent, 
 
   const onSubmit = handleSubmit(async (values) => {
     setError(null);
+    const missing: Record<string, string> = {};
+    acknowledge.forEach((shaft, i) => {
+      const left = shaft.items.filter((item) => !acked[i]?.includes(item.checkId));
+      if (left.length > 0)
+        missing[ackField(i)] =
+          `Tick each ${left.length === 1 ? "item" : `of the ${left.length} items`} for ${shaft.name} to place the order.`;
+    });
+    setAckErrors(missing);
+    if (Object.keys(missing).length > 0) {
+      focusFirstUnticked();
+      return;
+    }
     const res = await fetch("/api/orders", {
       method: "POST",
       headers: { "content-type": "application/json" },
-      body: JSON.stringify(values),
+      body: JSON.stringify({
+        ...values,
+        shafts: designIds.map((_, i) => ({ acknowledgements: acked[i] ?? [] })),
+      }),
     });
     const body = await res.json().catch(() => null);
     if (!res.ok) {
+      const fields = (body?.error?.fields ?? {}) as Record<string, string>;
+      const fromServer = Object.fromEntries(Object.entries(fields).filter(([k]) => k.startsWith("shafts.")));
+      setAckErrors(fromServer);
       setError(body?.error?.message ?? "The order could not be placed. Nothing was charged.");
+      if (Object.keys(fromServer).length > 0) focusFirstUnticked();
       return;
     }
     window.location.assign(
@@ -110,6 +165,61 @@ export function PlaceOrderForm({ designIds, customerId, quotes, depositPercent, 
         </label>
         <textarea id="notes" rows={2} className="field-input" {...register("notes")} />
       </div>
+      {acknowledge.some((a) => a.items.length > 0) && (
+        <div className="space-y-3" data-testid="acknowledgements">
+          {acknowledge.map((shaft, i) =>
+            shaft.items.length === 0 ? null : (
+              <fieldset
+                key={i}
+                className="space-y-2 rounded-md border border-warn bg-warn-soft/60 p-3"
+                aria-describedby={ackErrors[ackField(i)] ? `ack-${i}-error` : undefined}
+              >
+                <legend className="px-1 text-sm font-semibold">
+                  {counter ? "Read to the customer and acknowledge" : "Acknowledge before ordering"}:{" "}
+                  {shaft.name}
+                </legend>
+                {shaft.items.map((item) => (
+                  <label key={item.checkId} className="flex cursor-pointer items-start gap-2 text-sm">
+                    <input
+                      type="checkbox"
+                      className="mt-0.5 size-4 shrink-0 accent-steel-700"
+                      name={ackField(i)}
+                      value={item.checkId}
+                      checked={acked[i]?.includes(item.checkId) ?? false}
+                      onChange={(e) => toggle(i, item.checkId, e.target.checked)}
+                    />
+                    <span>
+                      {item.status === "fail" ? (
+                        <>
+                          <strong className="text-fail">Fails:</strong> {item.message}.{" "}
+                          <em>
+                            I have told the customer this shaft fails the check and the order waits for the
+                            owner&apos;s engineering sign-off.
+                          </em>
+                        </>
+                      ) : (
+                        <>
+                          <strong className="text-warn">Warning:</strong> {item.message}.{" "}
+                          <em>
+                            {counter
+                              ? "I have read this warning to the customer and they want the shaft as designed."
+                              : "I have read this warning and want the shaft as designed."}
+                          </em>
+                        </>
+                      )}
+                    </span>
+                  </label>
+                ))}
+                {ackErrors[ackField(i)] && (
+                  <p id={`ack-${i}-error`} className="field-error" role="alert">
+                    {ackErrors[ackField(i)]}
+                  </p>
+                )}
+              </fieldset>
+            ),
+          )}
+        </div>
+      )}
       <div className="rounded-md bg-paper-sunk p-3 text-sm">
         <p>
           Total <strong className="tabular-nums">{formatMoney(quote.totalCents, currency)}</strong>.{" "}

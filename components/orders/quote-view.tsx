@@ -1,6 +1,7 @@
 import Link from "next/link";
 import type { QuotePageData } from "@/lib/orders/quote-page";
 import { Alert } from "@/components/ui/alert";
+import { failedChecks, warningsToAcknowledge } from "@/lib/orders/acknowledgements";
 import { ShaftSummary } from "./shaft-summary";
 import { PlaceOrderForm } from "./place-order-form";
 
@@ -55,21 +56,32 @@ export function QuoteView({
         <h2 id="order-box" className="text-lg font-semibold">
           Order
         </h2>
-        {data.failing.length > 0 ? (
-          <Alert tone="error" title="This shaft cannot be ordered yet">
-            {data.failing.join(", ")} fails a check.{" "}
-            {counter
-              ? "Change the design before ordering."
-              : "Fix it in the shaft builder, or phone the shop."}
+        {data.failing.length > 0 && !counter ? (
+          <Alert tone="error" title="This shaft cannot be ordered online">
+            {data.failing.join(", ")} fails a check. Fix it in the shaft builder, or phone the shop: the
+            counter can take the order for the owner&apos;s engineering review.
           </Alert>
         ) : (
-          <PlaceOrderForm
-            designIds={data.designIds}
-            customerId={counter ? data.customer.id : undefined}
-            quotes={{ pickup: data.pickup, ship: data.ship }}
-            depositPercent={data.depositPercent}
-            counter={counter}
-          />
+          <>
+            {data.failing.length > 0 && (
+              <Alert tone="error" title="A check fails">
+                {data.failing.join(", ")} fails a check. This is a failure, not a pass: the order can be
+                placed, but it waits for the owner&apos;s engineering sign-off before it is paid for or built.
+                Tell the customer so.
+              </Alert>
+            )}
+            <PlaceOrderForm
+              designIds={data.designIds}
+              customerId={counter ? data.customer.id : undefined}
+              quotes={{ pickup: data.pickup, ship: data.ship }}
+              depositPercent={data.depositPercent}
+              counter={counter}
+              acknowledge={data.shafts.map((s) => ({
+                name: s.name,
+                items: [...(counter ? failedChecks(s.checks) : []), ...warningsToAcknowledge(s.checks)],
+              }))}
+            />
+          </>
         )}
         <p className="text-xs text-ink-muted">
           Engineering results are estimates for the shop’s use and do not replace a qualified engineer or the

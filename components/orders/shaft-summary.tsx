@@ -1,4 +1,4 @@
-import { AlertTriangle } from "lucide-react";
+import { AlertTriangle, ShieldAlert } from "lucide-react";
 import type { ShaftView } from "@/lib/orders/queries";
 import { USE_LABEL } from "@/lib/orders/labels";
 import { formatMoney } from "@/lib/pricing/price-book";
@@ -29,6 +29,16 @@ export function ShaftSummary({
         </div>
         <CheckBadge status={shaft.overall} />
       </div>
+      {shaft.needsSignoff && (
+        <p
+          className="mt-3 flex gap-2 rounded-md border border-fail bg-fail-soft p-3 text-sm font-semibold text-fail"
+          data-testid="needs-signoff"
+        >
+          <ShieldAlert className="mt-0.5 size-4 shrink-0" aria-hidden="true" />
+          Needs the owner&apos;s engineering sign-off: a check fails, and the shaft is not built until the
+          owner has reviewed it.
+        </p>
+      )}
       <dl className="mt-4 grid grid-cols-1 gap-x-6 gap-y-2 text-sm sm:grid-cols-2">
         {shaft.facts.map((f) => (
           <div key={f.label} className="flex justify-between gap-3 border-b border-dashed border-line py-1">
@@ -53,6 +63,22 @@ export function ShaftSummary({
           <AlertTriangle className="mt-0.5 size-4 shrink-0" aria-hidden="true" />
           {shaft.cautions[shaft.cautions.length - 1]}
         </p>
+      )}
+      {shaft.warningAcknowledgements.length > 0 && (
+        <section className="mt-4 text-sm" aria-label={`Warnings acknowledged for ${shaft.name}`}>
+          <h4 className="font-semibold">Warnings acknowledged when ordering</h4>
+          <ul className="mt-1 space-y-1">
+            {shaft.warningAcknowledgements.map((a) => (
+              <li key={a.checkId} className="border-l-2 border-warn pl-2">
+                <span className="block">{a.message}</span>
+                <span className="text-xs text-ink-muted">
+                  Acknowledged by {a.byName} {a.channel === "counter" ? "(counter, by phone)" : "(online)"} on{" "}
+                  <time dateTime={a.at}>{a.at.slice(0, 16).replace("T", " ")} UTC</time>
+                </span>
+              </li>
+            ))}
+          </ul>
+        </section>
       )}
       <table className="mt-4 w-full text-sm">
         <caption className="sr-only">Price of {shaft.name}</caption>

@@ -1,6 +1,6 @@
 "use client";
 
-import { useDeferredValue, useMemo, useRef, useState, useSyncExternalStore } from "react";
+import { useDeferredValue, useEffect, useMemo, useRef, useState, useSyncExternalStore } from "react";
 import { useRouter } from "next/navigation";
 import { Controller, useForm, useWatch, type Path, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -54,6 +54,15 @@ export interface ShaftBuilderProps {
   initialUnits?: UnitSystem;
   /** How the shop picks a tube the customer leaves to Yokeline (its price book's setting). */
   tubePreference?: TubePreference;
+  /**
+   * The counter's compact, keyboard-first layout: the fields in the order of a paper measuring
+   * sheet (use and vehicle, length, angles, torque, speed, tube, then the order details with the
+   * quote button), the first field focused, no measuring guides in the tab order, and Enter in a
+   * field never submitting by surprise.
+   */
+  compact?: boolean;
+  /** Counter: a design that fails a check may still be quoted (the order then needs the owner's sign-off). */
+  allowFailing?: boolean;
 }
 
 type SaveState =
@@ -86,6 +95,13 @@ const keyOf = (v: unknown) =>
   JSON.stringify(v, (_k, x) => (typeof x === "number" && Number.isNaN(x) ? NAN : x));
 const fromKey = (key: string) => JSON.parse(key, (_k, x) => (x === NAN ? NaN : x)) as BuilderForm;
 
+/** Compact layout: Enter in a one-line field does not submit the form (only its buttons do). */
+function keepEnterFromSubmitting(e: React.KeyboardEvent<HTMLFormElement>) {
+  const t = e.target;
+  if (e.key === "Enter" && t instanceof HTMLInputElement && !["submit", "button"].includes(t.type))
+    e.preventDefault();
+}
+
 const near = (a: number, b: number, tol = 0.01) => Math.abs(a - b) < tol;
 const nearest = (values: number[], to: SiNumber) =>
   values.reduce(
@@ -117,6 +133,8 @@ export function ShaftBuilder({
   draftHref = (id) => `?draft=${id}`,
   initialUnits = "imperial",
   tubePreference = "lightest",
+  compact = false,
+  allowFailing = false,
 }: ShaftBuilderProps) {
   const router = useRouter();
   const [system, setSystem] = useState<UnitSystem>(initialUnits);
@@ -175,6 +193,16 @@ export function ShaftBuilder({
   const stale = evaluation === null;
   const errs = validation.fieldErrors;
 
+  // At the counter the staff know how to measure; the guides stay out of the tab order there.
+  const guide = (topic: GuideTopic) => (compact ? null : <MeasuringGuide topic={topic} />);
+
+  const section = compact ? "space-y-3 card p-3" : "space-y-4 card p-4";
+
+  // The counter starts typing straight away: focus the first field of the measuring sheet.
+  useEffect(() => {
+    if (compact) document.querySelector<HTMLElement>("[data-autofocus]")?.focus();
+  }, [compact]);
+
   const markChanged = () => saveState.kind === "saved" && setSaveState({ kind: "idle" });
 
   const num = (
@@ -202,7 +230,7 @@ export function ShaftBuilder({
           hint={opts.hint}
           error={opts.error ?? errs[name]}
         >
-          {opts.guide && <MeasuringGuide topic={opts.guide} />}
+          {opts.guide && guide(opts.guide)}
         </NumberField>
       )}
     />
@@ -354,9 +382,38 @@ export function ShaftBuilder({
   const report = shown?.report ?? null;
   const quoteBlocked = !evaluation
     ? "Fix the highlighted fields first."
-    : evaluation.report.overall === "fail"
+    : evaluation.report.overall === "fail" && !allowFailing
       ? "A check fails: change the design (or take the suggested tube) until nothing fails."
       : null;
+  const quoteNote =
+    evaluation?.report.overall === "fail"
+      ? "A check FAILS. The quote shows the failure; an order placed from it waits for the owner's engineering sign-off."
+      : "Saves the draft and takes you to the price and delivery date.";
+  const quoteButton = (
+    <>
+      <button
+        type="button"
+        className="btn-accent"
+        onClick={() => void getQuote()}
+        disabled={quoteBlocked !== null || quoting}
+        aria-describedby={quoteBlocked ? "quote-reason" : "quote-note"}
+      >
+        <Send className="size-4" aria-hidden="true" /> {quoting ? "Saving…" : "Get a quote"}
+      </button>
+      {quoteBlocked ? (
+        <p id="quote-reason" className="text-sm text-ink-soft">
+          {quoteBlocked}
+        </p>
+      ) : (
+        <p
+          id="quote-note"
+          className={`text-sm ${evaluation?.report.overall === "fail" ? "font-semibold text-fail" : "text-ink-soft"}`}
+        >
+          {quoteNote}
+        </p>
+      )}
+    </>
+  );
 
   // Tube choice from the catalogue: material, then outside diameter, then wall.
   const materials = catalogue.materials.filter((m) => catalogue.tubes.some((t) => t.materialId === m.id));
@@ -462,6 +519,37 @@ export function ShaftBuilder({
       <span className="text-ink-muted">Not saved yet</span>
     );
 
+  const saveBar = (
+    <>
+      <button type="submit" className="btn-primary" disabled={saveState.kind === "saving"}>
+        <Save className="size-4" aria-hidden="true" /> {draftId ? "Save draft" : "Save as draft"}
+      </button>
+      <span role="status" aria-live="polite" className="text-sm" data-testid="save-status">
+        {statusLine}
+      </span>
+      {draftId && (
+        <button type="button" className="ml-auto btn-quiet" onClick={newDesign}>
+          Start a new design
+        </button>
+      )}
+    </>
+  );
+
+  const nameField = (
+    <div>
+      <label htmlFor="design-name" className="field-label">
+        Design name
+      </label>
+      <input
+        id="design-name"
+        className="field-input"
+        aria-invalid={formState.errors.name ? true : undefined}
+        {...register("name", { onChange: markChanged })}
+      />
+      {formState.errors.name && <p className="field-error">name: {formState.errors.name.message}</p>}
+    </div>
+  );
+
   return (
     <div className="space-y-6 pb-16 lg:pb-0 print:pb-0" data-builder-ready={ready || undefined}>
       <div className="no-print flex flex-wrap items-center justify-between gap-4 card p-4">
@@ -542,23 +630,13 @@ export function ShaftBuilder({
           noValidate
           aria-label="Shaft design"
           onSubmit={handleSubmit(() => void save())}
+          onKeyDown={compact ? keepEnterFromSubmitting : undefined}
         >
-          <section className="space-y-4 card p-4" aria-labelledby="s-app">
+          <section className={section} aria-labelledby="s-app">
             <h2 id="s-app" className="text-lg font-semibold">
               1. What the shaft is for
             </h2>
-            <div>
-              <label htmlFor="design-name" className="field-label">
-                Design name
-              </label>
-              <input
-                id="design-name"
-                className="field-input"
-                aria-invalid={formState.errors.name ? true : undefined}
-                {...register("name", { onChange: markChanged })}
-              />
-              {formState.errors.name && <p className="field-error">name: {formState.errors.name.message}</p>}
-            </div>
+            {!compact && nameField}
             <div>
               <label htmlFor="app-use" className="field-label">
                 Use
@@ -566,6 +644,7 @@ export function ShaftBuilder({
               <select
                 id="app-use"
                 className="field-input"
+                data-autofocus={compact || undefined}
                 {...register("application.use", { onChange: markChanged })}
               >
                 {SHAFT_USES.map((u) => (
@@ -592,7 +671,7 @@ export function ShaftBuilder({
             </div>
           </section>
 
-          <section className="space-y-4 card p-4" aria-labelledby="s-len">
+          <section className={section} aria-labelledby="s-len">
             <h2 id="s-len" className="text-lg font-semibold">
               2. Length and ends
             </h2>
@@ -604,10 +683,10 @@ export function ShaftBuilder({
               {endSelect("front")}
               {endSelect("rear")}
             </div>
-            <MeasuringGuide topic="ends" />
+            {guide("ends")}
           </section>
 
-          <section className="space-y-4 card p-4" aria-labelledby="s-ang">
+          <section className={section} aria-labelledby="s-ang">
             <h2 id="s-ang" className="text-lg font-semibold">
               3. Angles, side view
             </h2>
@@ -615,15 +694,17 @@ export function ShaftBuilder({
               Degrees, positive when the part points down toward the rear (the pinion: nose up toward the
               front).
             </p>
-            {num("geometry.transmission.verticalDeg", "Transmission angle", null, {
-              unit: "°",
-              guide: "transmission",
-            })}
-            {num("geometry.driveshaft.verticalDeg", "Driveshaft angle", null, {
-              unit: "°",
-              guide: "driveshaft",
-            })}
-            {num("geometry.pinion.verticalDeg", "Pinion angle", null, { unit: "°", guide: "pinion" })}
+            <div className={compact ? "grid gap-3 sm:grid-cols-3" : "space-y-4"}>
+              {num("geometry.transmission.verticalDeg", "Transmission angle", null, {
+                unit: "°",
+                guide: "transmission",
+              })}
+              {num("geometry.driveshaft.verticalDeg", "Driveshaft angle", null, {
+                unit: "°",
+                guide: "driveshaft",
+              })}
+              {num("geometry.pinion.verticalDeg", "Pinion angle", null, { unit: "°", guide: "pinion" })}
+            </div>
             <label className="flex items-center gap-2 text-sm font-medium">
               <input
                 type="checkbox"
@@ -642,12 +723,12 @@ export function ShaftBuilder({
                 })}
                 {num("geometry.driveshaft.horizontalDeg", "Driveshaft angle, top view", null, { unit: "°" })}
                 {num("geometry.pinion.horizontalDeg", "Pinion angle, top view", null, { unit: "°" })}
-                <MeasuringGuide topic="offset" />
+                {guide("offset")}
               </div>
             )}
           </section>
 
-          <section className="space-y-4 card p-4" aria-labelledby="s-tq">
+          <section className={section} aria-labelledby="s-tq">
             <h2 id="s-tq" className="text-lg font-semibold">
               4. Torque and gearing
             </h2>
@@ -671,10 +752,10 @@ export function ShaftBuilder({
                 </strong>
               </p>
             )}
-            <MeasuringGuide topic="torque" />
+            {guide("torque")}
           </section>
 
-          <section className="space-y-4 card p-4" aria-labelledby="s-sp">
+          <section className={section} aria-labelledby="s-sp">
             <h2 id="s-sp" className="text-lg font-semibold">
               5. Shaft speed
             </h2>
@@ -713,7 +794,7 @@ export function ShaftBuilder({
             )}
           </section>
 
-          <section className="space-y-4 card p-4" aria-labelledby="s-tube">
+          <section className={section} aria-labelledby="s-tube">
             <h2 id="s-tube" className="text-lg font-semibold">
               6. Tube
             </h2>
@@ -817,7 +898,7 @@ export function ShaftBuilder({
                 </div>
               </div>
             )}
-            <MeasuringGuide topic="tube" />
+            {guide("tube")}
           </section>
 
           {otherIssues.length > 0 && (
@@ -830,19 +911,18 @@ export function ShaftBuilder({
             </Alert>
           )}
 
-          <div className="flex flex-wrap items-center gap-3 card p-4">
-            <button type="submit" className="btn-primary" disabled={saveState.kind === "saving"}>
-              <Save className="size-4" aria-hidden="true" /> {draftId ? "Save draft" : "Save as draft"}
-            </button>
-            <span role="status" aria-live="polite" className="text-sm" data-testid="save-status">
-              {statusLine}
-            </span>
-            {draftId && (
-              <button type="button" className="ml-auto btn-quiet" onClick={newDesign}>
-                Start a new design
-              </button>
-            )}
-          </div>
+          {compact ? (
+            <section className={section} aria-labelledby="s-order">
+              <h2 id="s-order" className="text-lg font-semibold">
+                7. Order details
+              </h2>
+              {nameField}
+              <div className="flex flex-wrap items-center gap-3">{quoteButton}</div>
+              <div className="flex flex-wrap items-center gap-3 border-t border-line pt-3">{saveBar}</div>
+            </section>
+          ) : (
+            <div className="flex flex-wrap items-center gap-3 card p-4">{saveBar}</div>
+          )}
 
           <section className="card p-4" aria-labelledby="s-drafts">
             <h2 id="s-drafts" className="flex items-center gap-2 text-lg font-semibold">
@@ -909,26 +989,9 @@ export function ShaftBuilder({
               onUseTube={useTube}
               tubePreference={tubePreference}
               footer={
-                <div className="no-print flex flex-wrap items-center gap-3 card p-4">
-                  <button
-                    type="button"
-                    className="btn-accent"
-                    onClick={() => void getQuote()}
-                    disabled={quoteBlocked !== null || quoting}
-                    aria-describedby={quoteBlocked ? "quote-reason" : undefined}
-                  >
-                    <Send className="size-4" aria-hidden="true" /> {quoting ? "Saving…" : "Get a quote"}
-                  </button>
-                  {quoteBlocked ? (
-                    <p id="quote-reason" className="text-sm text-ink-soft">
-                      {quoteBlocked}
-                    </p>
-                  ) : (
-                    <p className="text-sm text-ink-soft">
-                      Saves the draft and takes you to the price and delivery date.
-                    </p>
-                  )}
-                </div>
+                compact ? undefined : (
+                  <div className="no-print flex flex-wrap items-center gap-3 card p-4">{quoteButton}</div>
+                )
               }
             />
           ) : (

@@ -17,6 +17,14 @@ import { getShopEngineering, type ShopEngineering } from "@/lib/shop/config";
 import { linkCustomerToUser } from "@/lib/customers";
 import { afterCommit, notifyOrderReceived } from "./notify";
 import type { PlaceOrderBody } from "./schemas";
+import {
+  failedChecks,
+  missingAcknowledgements,
+  needsEngineeringSignoff,
+  warningsToAcknowledge,
+  type AckItem,
+} from "./acknowledgements";
+import type { WarningAcknowledgement } from "@/entities";
 
 /** What a quote is made from: a saved design, or a design file sent as is. */
 export type QuoteSource = Pick<Design, "name" | "design"> & Partial<Pick<Design, "id" | "application">>;
@@ -101,6 +109,58 @@ async function nextOrderNumber(em: EntityManager, at: Date): Promise<string> {
 }
 
 /**
+ * Checks that every warning of each shaft's fresh evaluation was acknowledged (and, at the counter,
+ * every failed check); customers online cannot order a shaft that fails a check. Returns what is
+ * stored with each shaft. Refuses with 422 naming `shafts.<i>.acknowledgements`.
+ */
+function checkAcknowledgements(
+  shafts: QuotedShaft[],
+  body: PlaceOrderBody,
+  user: CurrentUser,
+  counter: boolean,
+  now: Date,
+): { warnings: WarningAcknowledgement[]; failures: AckItem[] }[] {
+  const failing = shafts.filter((s) => s.report.overall === "fail");
+  if (failing.length > 0 && !counter) {
+    throw new AppError(
+      "invalid",
+      `A shaft that fails a check cannot be ordered online: ${failing.map((s) => `"${s.design.name}"`).join(", ")}. Fix it in the shaft builder, or phone the shop.`,
+    );
+  }
+  const fields: Record<string, string> = {};
+  const out = shafts.map((s, i) => {
+    const given = body.shafts?.[i]?.acknowledgements ?? [];
+    const warnings = warningsToAcknowledge(s.report.checks);
+    const failures = counter ? failedChecks(s.report.checks) : [];
+    const missing = missingAcknowledgements([...failures, ...warnings], given);
+    if (missing.length > 0) {
+      fields[`shafts.${i}.acknowledgements`] =
+        `Acknowledge each ${missing.some((m) => m.status === "fail") ? "failed check and warning" : "warning"} of "${s.design.name}": ${missing.map((m) => m.message).join("; ")}`;
+    }
+    return {
+      failures,
+      warnings: warnings.map((w): WarningAcknowledgement => ({
+        checkId: w.checkId,
+        message: w.message,
+        byUserId: user.id,
+        byName: user.name,
+        channel: counter ? "counter" : "online",
+        at: now.toISOString(),
+      })),
+    };
+  });
+  const missingCount = Object.keys(fields).length;
+  if (missingCount > 0) {
+    throw new AppError(
+      "invalid",
+      `Acknowledge each warning before ordering (${missingCount === 1 ? "one shaft has" : `${missingCount} shafts have`} some not yet acknowledged).`,
+      fields,
+    );
+  }
+  return out;
+}
+
+/**
  * Places an order: each shaft keeps a frozen copy of its design, evaluation and price; the
  * order gets its promised date from the lead time and what the policy asks up front.
  */
@@ -118,20 +178,14 @@ export async function placeOrder(user: CurrentUser, body: PlaceOrderBody): Promi
     const ordered = body.designIds.map((id) => designs.find((d) => d.id === id)!);
 
     const { shafts, quote } = quoteDesigns(ordered, shop, body.fulfilment);
-    const failing = shafts.filter((s) => s.report.overall === "fail");
-    if (failing.length > 0) {
-      throw new AppError(
-        "invalid",
-        `A shaft that fails a check cannot be ordered: ${failing.map((s) => `"${s.design.name}"`).join(", ")}. Fix it in the shaft builder or ask the shop.`,
-      );
-    }
-
+    const counter = can(user.role, "orders.desk");
     const now = new Date();
+    const acknowledgements = checkAcknowledgements(shafts, body, user, counter, now);
     const order = em.create(Order, {
       number: await nextOrderNumber(em, now),
       customer,
       placedBy: em.getReference(User, user.id),
-      channel: can(user.role, "orders.desk") ? "counter" : "online",
+      channel: counter ? "counter" : "online",
       status: "awaiting_payment",
       paymentState: "unpaid",
       fulfilment: body.fulfilment,
@@ -158,8 +212,10 @@ export async function placeOrder(user: CurrentUser, body: PlaceOrderBody): Promi
         overall: s.report.overall,
         priceLines: s.lines,
         priceCents: s.priceCents,
+        warningAcknowledgements: acknowledgements[i]!.warnings,
       }),
     );
+    const signoff = shafts.filter((s) => needsEngineeringSignoff(s.report.checks));
     em.create(OrderEvent, {
       order,
       kind: "received",
@@ -167,13 +223,33 @@ export async function placeOrder(user: CurrentUser, body: PlaceOrderBody): Promi
       actor: em.getReference(User, user.id),
       at: now,
     });
+    if (signoff.length > 0) {
+      em.create(OrderEvent, {
+        order,
+        kind: "note",
+        label: `Placed by the counter with a failed check (${signoff.map((s) => s.design.name).join(", ")}): needs the owner's engineering sign-off`,
+        actor: em.getReference(User, user.id),
+        at: now,
+        public: false,
+      });
+    }
     await recordAudit(
       {
         actorId: user.id,
         action: "order.place",
         subjectType: "order",
         subjectId: order.id,
-        details: { number: order.number, totalCents: order.totalCents },
+        details: {
+          number: order.number,
+          totalCents: order.totalCents,
+          // What was acknowledged on ordering: warnings (also kept on each shaft) and, at the counter, failures.
+          acknowledged: acknowledgements.map((a, i) => ({
+            position: i + 1,
+            warnings: a.warnings.map((w) => w.checkId),
+            failures: a.failures.map((f) => f.checkId),
+          })),
+          needsEngineeringSignoff: signoff.length > 0,
+        },
       },
       em,
     );

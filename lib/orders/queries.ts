@@ -1,4 +1,4 @@
-import { Order, type OrderStatus, type PaymentState } from "@/entities";
+import { Order, type OrderStatus, type PaymentState, type WarningAcknowledgement } from "@/entities";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { CurrentUser } from "@/lib/auth/guard";
 import type { QuoteLine } from "@/lib/pricing/price-book";
@@ -6,6 +6,7 @@ import type { EvaluationReport } from "@/lib/driveline";
 import { seesAllOrders } from "./access";
 import { orderStatusLabel, type FloorProgress } from "./labels";
 import { nextPaymentKind, amountDue } from "./payments";
+import { needsEngineeringSignoff } from "./acknowledgements";
 
 export interface OrderRow {
   id: string;
@@ -91,6 +92,10 @@ export interface ShaftView {
   facts: { label: string; value: string }[];
   checks: { id: string; status: string; message: string }[];
   cautions: string[];
+  /** Who acknowledged each warning when the order was placed (none on a quote). */
+  warningAcknowledgements: WarningAcknowledgement[];
+  /** A check fails and the owner has not accepted it for this order. */
+  needsSignoff: boolean;
 }
 
 export interface OrderView extends OrderRow {
@@ -135,6 +140,8 @@ export interface ShaftSource {
   priceLines: QuoteLine[];
   priceCents: number;
   evaluation: unknown;
+  warningAcknowledgements?: WarningAcknowledgement[];
+  failedCheckAcceptances?: { checkId: string }[];
 }
 
 /** A shaft's key numbers, checks and price, as plain data for the screens. */
@@ -173,6 +180,8 @@ export function shaftView(s: ShaftSource): ShaftView {
     ],
     checks: (r.checks ?? []).map((c) => ({ id: c.id, status: c.status, message: c.message })),
     cautions: [...(r.cautions ?? [])],
+    warningAcknowledgements: s.warningAcknowledgements ?? [],
+    needsSignoff: needsEngineeringSignoff(r.checks ?? [], s.failedCheckAcceptances),
   };
 }
 

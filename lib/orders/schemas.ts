@@ -12,8 +12,26 @@ export const placeOrderBodySchema = z
     notes: z.string().trim().max(2000).optional(),
     /** Counter only: the customer the order is for. */
     customerId: z.uuid().optional(),
+    /**
+     * Per design, in the order of `designIds`: the ids of the checks the customer (online) or the
+     * counter (on the phone) acknowledged. Every warning must be among them, and at the counter
+     * every failed check too; the server re-evaluates to know which those are.
+     */
+    shafts: z
+      .array(
+        z.object({
+          acknowledgements: z
+            .array(z.string().trim().min(1).max(200), { error: "Acknowledge the warnings as a list." })
+            .max(50),
+        }),
+      )
+      .max(10)
+      .optional(),
   })
   .superRefine((v, ctx) => {
+    if (v.shafts && v.shafts.length > v.designIds.length) {
+      ctx.addIssue({ code: "custom", path: ["shafts"], message: "One entry per shaft of the order." });
+    }
     if (v.fulfilment === "ship" && (!v.shipTo || v.shipTo.length < 8)) {
       ctx.addIssue({ code: "custom", path: ["shipTo"], message: "Enter the full shipping address." });
     }
