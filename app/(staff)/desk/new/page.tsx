@@ -5,10 +5,10 @@ import { isUuid } from "@/lib/http/known-errors";
 import { requirePermission } from "@/lib/auth/guard";
 import { getEm } from "@/lib/db/orm";
 import { Customer } from "@/entities";
-import { listCustomers } from "@/lib/customers";
 import { findDraft, listDrafts } from "@/lib/designs/drafts";
 import { getShopEngineering } from "@/lib/shop/config";
 import { PageHeader } from "@/components/ui/page-header";
+import { InviteButton } from "@/components/customers/invite-button";
 import { CustomerPicker } from "./_components/customer-picker";
 import { CounterBuilder } from "./_components/counter-builder";
 
@@ -24,9 +24,9 @@ export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/de
       <>
         <PageHeader
           title="New phone order"
-          description="Who is the order for? Then enter their measurements with the same builder customers use online."
+          description="Who is the order for? Find them as you type, or enter a new customer; then take their measurements in the order of the measuring sheet."
         />
-        <CustomerPicker customers={await listCustomers()} />
+        <CustomerPicker />
       </>
     );
   }
@@ -46,9 +46,12 @@ export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/de
         title={`Phone order for ${customer.name}`}
         description={[customer.company, customer.email, customer.phone].filter(Boolean).join(" · ")}
         actions={
-          <Link href="/desk/new" className="btn-quiet no-underline">
-            Change customer
-          </Link>
+          <>
+            {!customer.user && <InviteButton customerId={customer.id} />}
+            <Link href="/desk/new" className="btn-quiet no-underline">
+              Change customer
+            </Link>
+          </>
         }
       />
       <CounterBuilder
