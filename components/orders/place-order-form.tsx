@@ -19,7 +19,7 @@ interface Props {
   acknowledge?: { name: string; items: AckItem[] }[];
 }
 
-const ackField = (i: number) => `shafts.${i}.acknowledgements`;
+const ackField = (i: number) => `shafts[${i}].acknowledgements`;
 
 /** Pickup or shipping, then place the order and go to the payment page. */
 export function PlaceOrderForm({
@@ -91,7 +91,7 @@ export function PlaceOrderForm({
     const body = await res.json().catch(() => null);
     if (!res.ok) {
       const fields = (body?.error?.fields ?? {}) as Record<string, string>;
-      const fromServer = Object.fromEntries(Object.entries(fields).filter(([k]) => k.startsWith("shafts.")));
+      const fromServer = Object.fromEntries(Object.entries(fields).filter(([k]) => k.startsWith("shafts[")));
       setAckErrors(fromServer);
       setError(body?.error?.message ?? "The order could not be placed. Nothing was charged.");
       if (Object.keys(fromServer).length > 0) focusFirstUnticked();

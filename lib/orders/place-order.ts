@@ -111,7 +111,7 @@ async function nextOrderNumber(em: EntityManager, at: Date): Promise<string> {
 /**
  * Checks that every warning of each shaft's fresh evaluation was acknowledged (and, at the counter,
  * every failed check); customers online cannot order a shaft that fails a check. Returns what is
- * stored with each shaft. Refuses with 422 naming `shafts.<i>.acknowledgements`.
+ * stored with each shaft. Refuses with 422 naming `shafts[<i>].acknowledgements` (the house form of a field path).
  */
 function checkAcknowledgements(
   shafts: QuotedShaft[],
@@ -134,7 +134,7 @@ function checkAcknowledgements(
     const failures = counter ? failedChecks(s.report.checks) : [];
     const missing = missingAcknowledgements([...failures, ...warnings], given);
     if (missing.length > 0) {
-      fields[`shafts.${i}.acknowledgements`] =
+      fields[`shafts[${i}].acknowledgements`] =
         `Acknowledge each ${missing.some((m) => m.status === "fail") ? "failed check and warning" : "warning"} of "${s.design.name}": ${missing.map((m) => m.message).join("; ")}`;
     }
     return {
