@@ -31,19 +31,17 @@ export function PlaceOrderForm({
   acknowledge = [],
 }: Props) {
   const [error, setError] = useState<string | null>(null);
-  // Ticked check ids per shaft; the server re-evaluates and refuses any warning left out.
-  const [acked, setAcked] = useState<string[][]>(() => designIds.map(() => []));
+  // Ticked check ids per design (by id: removing a shaft from the quote never moves a tick to
+  // another); the server re-evaluates and refuses any warning left out.
+  const [ackedById, setAcked] = useState<Record<string, string[]>>({});
+  const acked = designIds.map((id) => ackedById[id] ?? []);
   const [ackErrors, setAckErrors] = useState<Record<string, string>>({});
   const toggle = (i: number, checkId: string, on: boolean) => {
-    setAcked((all) =>
-      all.map((ids, j) =>
-        j !== i
-          ? ids
-          : on
-            ? [...ids.filter((x) => x !== checkId), checkId]
-            : ids.filter((x) => x !== checkId),
-      ),
-    );
+    const id = designIds[i]!;
+    setAcked((all) => {
+      const ids = (all[id] ?? []).filter((x) => x !== checkId);
+      return { ...all, [id]: on ? [...ids, checkId] : ids };
+    });
     setAckErrors((errs) => {
       const { [ackField(i)]: _drop, ...rest } = errs;
       return rest;
@@ -107,7 +105,15 @@ export function PlaceOrderForm({
   const quote = quotes[fulfilment];
   const { currency } = quote;
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-5">
+    <form
+      onSubmit={onSubmit}
+      // Enter on a choice or a checkbox never places the order by surprise: only the button does.
+      onKeyDown={(e) => {
+        if (e.key === "Enter" && e.target instanceof HTMLInputElement) e.preventDefault();
+      }}
+      noValidate
+      className="space-y-5"
+    >
       <Totals
         currency={currency}
         subtotalCents={quote.subtotalCents}
