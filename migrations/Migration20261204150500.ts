@@ -7,7 +7,9 @@ import { Migration } from "@mikro-orm/migrations";
  */
 export class Migration20261204150500 extends Migration {
   override async up(): Promise<void> {
-    this.addSql(`alter table "order_shaft" add column "warning_acknowledgements" jsonb not null default '[]';`);
+    this.addSql(
+      `alter table "order_shaft" add column "warning_acknowledgements" jsonb not null default '[]';`,
+    );
     this.addSql(`create extension if not exists pg_trgm;`);
     this.addSql(
       `create index "customer_search_trgm_index" on "customer" using gin ((lower(name || ' ' || email || ' ' || coalesce(company, '') || ' ' || coalesce(phone, ''))) gin_trgm_ops);`,

@@ -13,7 +13,8 @@ export const POST = route({ permission: null }, async ({ req, user }) => {
   const signoff = order.shafts
     .getItems()
     .some((s) => needsEngineeringSignoff((s.evaluation.checks ?? []) as CheckLike[]));
-  if (signoff) return json({ id: order.id, number: order.number, checkoutUrl: null, needsSignoff: true }, 201);
+  if (signoff)
+    return json({ id: order.id, number: order.number, checkoutUrl: null, needsSignoff: true }, 201);
   // The order stands even if the payment provider is unreachable; the order page offers to pay again.
   const checkoutUrl = await startCheckout(order.id, user).then(
     (payment) => payment.checkoutUrl,

@@ -170,7 +170,7 @@ export function CustomerPicker() {
 
   return (
     <div className="grid gap-6 lg:grid-cols-2">
-      <section className="card p-5" aria-labelledby="existing">
+      <section className="min-w-0 card p-5" aria-labelledby="existing">
         <h2 id="existing" className="text-lg font-semibold">
           An existing customer
         </h2>
@@ -260,7 +260,7 @@ export function CustomerPicker() {
           )}
         </ul>
       </section>
-      <section className="card p-5" aria-labelledby="new-customer">
+      <section className="min-w-0 card p-5" aria-labelledby="new-customer">
         <h2 id="new-customer" className="text-lg font-semibold">
           A new customer
         </h2>
