@@ -1,12 +1,24 @@
-import { Check, Entity, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { Check, Entity, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import type { QuoteLine } from "../lib/pricing/price-book";
+
+/** An owner's acceptance of one failed engineering check, for this one order shaft only. */
+export interface FailedCheckAcceptance {
+  checkId: string;
+  reason: string;
+  byUserId: string;
+  byName: string;
+  /** ISO date-time. */
+  at: string;
+}
 
 /** One shaft of an order, with frozen copies of its design, its evaluation and its price. */
 @Entity({ tableName: "order_shaft" })
 @Check({ name: "order_shaft_price_nonnegative_check", expression: "price_cents >= 0" })
 export class OrderShaft {
+  [OptionalProps]?: "failedCheckAcceptances";
+
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
 
@@ -37,4 +49,11 @@ export class OrderShaft {
 
   @Property({ type: "integer" })
   priceCents!: number;
+
+  /**
+   * Failed checks an owner accepted for this shaft (lib/orders/engineering-signoff.ts). The shop's
+   * limits are unchanged; the frozen evaluation still says "fail".
+   */
+  @Property({ type: "json", defaultRaw: `'[]'` })
+  failedCheckAcceptances: FailedCheckAcceptance[] = [];
 }
