@@ -1,4 +1,4 @@
-import { Order, type OrderStatus, type PaymentState } from "@/entities";
+import { Order, type OrderStatus, type PaymentMethod, type PaymentState } from "@/entities";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { CurrentUser } from "@/lib/auth/guard";
 import type { QuoteLine } from "@/lib/pricing/price-book";
@@ -6,6 +6,8 @@ import type { EvaluationReport } from "@/lib/driveline";
 import { seesAllOrders } from "./access";
 import { orderStatusLabel, type FloorProgress } from "./labels";
 import { nextPaymentKind, amountDue } from "./payments";
+import { notesFor, type OrderNoteView } from "./notes";
+import { needsSignoff } from "./engineering-signoff";
 
 export interface OrderRow {
   id: string;
@@ -113,8 +115,17 @@ export interface OrderView extends OrderRow {
     createdAt: string;
     paidAt: string | null;
     failureMessage: string | null;
-    checkoutUrl: string;
+    checkoutUrl: string | null;
+    /** How it was paid: the online checkout, or at the counter (cash, cheque, card terminal). */
+    method: PaymentMethod;
+    /** Counter payments: the cheque number or terminal reference. */
+    reference: string | null;
   }[];
+  /** Notes from the shop: every note for staff, only customer-visible ones for the customer. */
+  shopNotes: OrderNoteView[];
+  /** A shaft fails a check no owner has accepted: no payment or release until an owner reviews it. */
+  needsSignoff: boolean;
+  cancelReason: string | null;
   events: { id: string; at: string; kind: string; label: string }[];
   /** Every shaft passed final inspection: the as-built certificate can be downloaded. */
   asBuiltReady: boolean;
@@ -201,8 +212,13 @@ export function orderView(order: Order, user: CurrentUser): OrderView {
       createdAt: p.createdAt.toISOString(),
       paidAt: p.paidAt?.toISOString() ?? null,
       failureMessage: p.failureMessage ?? null,
-      checkoutUrl: p.checkoutUrl,
+      checkoutUrl: p.checkoutUrl ?? null,
+      method: p.method,
+      reference: p.reference ?? null,
     })),
+    shopNotes: order.orderNotes.isInitialized() ? notesFor(order.orderNotes.getItems(), staff) : [],
+    needsSignoff: order.status !== "cancelled" && order.shafts.getItems().some(needsSignoff),
+    cancelReason: order.cancelReason ?? null,
     events: order.events
       .getItems()
       .filter((e) => staff || e.public)
@@ -217,6 +233,6 @@ export function orderView(order: Order, user: CurrentUser): OrderView {
 
 /** Loads everything an order page needs in one go. */
 export async function populateOrder(em: EntityManager, order: Order): Promise<Order> {
-  await em.populate(order, ["customer", "shafts", "payments", "events", "workOrders"]);
+  await em.populate(order, ["customer", "shafts", "payments", "events", "workOrders", "orderNotes"]);
   return order;
 }
