@@ -31,8 +31,8 @@ export function PaymentLinkEmail(p: PaymentLinkProps) {
       </Heading>
       <Paragraph>
         Hello {p.customerName}, as agreed on the phone, here is the link to pay the{" "}
-        {p.paymentLabel.toLowerCase()} of <strong>{p.amountDue}</strong> on order <strong>{p.orderNumber}</strong>{" "}
-        by card:
+        {p.paymentLabel.toLowerCase()} of <strong>{p.amountDue}</strong> on order{" "}
+        <strong>{p.orderNumber}</strong> by card:
       </Paragraph>
       <ActionButton href={p.payUrl}>{`Pay ${p.amountDue}`}</ActionButton>
       <Facts

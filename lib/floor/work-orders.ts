@@ -240,7 +240,11 @@ export function assertCurrentRevision(wo: { serial: string; revision: number }, 
 }
 
 /** A work order of a cancelled order: every code of its traveller is refused. */
-export function assertNotVoided(wo: { serial: string; voidedAt?: Date | null; voidReason?: string | null }): void {
+export function assertNotVoided(wo: {
+  serial: string;
+  voidedAt?: Date | null;
+  voidReason?: string | null;
+}): void {
   if (wo.voidedAt)
     throw new AppError(
       "conflict",

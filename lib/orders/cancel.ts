@@ -85,7 +85,8 @@ export async function cancelOrder(
   const reason = input.reason.trim();
   const result = await inTransaction(async (em) => {
     const order = await lockOrder(em, input.orderId);
-    if (order.status === "cancelled") throw new AppError("conflict", `Order ${order.number} is already cancelled.`);
+    if (order.status === "cancelled")
+      throw new AppError("conflict", `Order ${order.number} is already cancelled.`);
     if (order.status === "shipped")
       throw new AppError("conflict", `Order ${order.number} has left the shop; it cannot be cancelled.`);
     const quote = await quoteFor(em, order);
@@ -114,7 +115,12 @@ export async function cancelOrder(
 
     const refundNote = `Order cancelled: ${reason}`;
     let left = quote.refundCents;
-    const refunds: { paymentId: string; method: Payment["method"]; amountCents: number; providerRefundId: string | null }[] = [];
+    const refunds: {
+      paymentId: string;
+      method: Payment["method"];
+      amountCents: number;
+      providerRefundId: string | null;
+    }[] = [];
     const paid = await em.find(
       Payment,
       { order: order.id, status: "succeeded" },
@@ -160,7 +166,10 @@ export async function cancelOrder(
     if (left > 0) {
       // Cannot happen while payments add up to what the order counts as paid; leave a trace, refund nothing silently.
       logger.error({ order: order.id, left }, "cancellation refund could not be placed on a payment");
-      throw new AppError("conflict", "The order's payments do not add up to what it counts as paid; ask an owner.");
+      throw new AppError(
+        "conflict",
+        "The order's payments do not add up to what it counts as paid; ask an owner.",
+      );
     }
 
     const voided = await em.find(WorkOrder, { order: order.id, voidedAt: null });
@@ -212,6 +221,9 @@ export async function cancelOrder(
     return { refundCents: quote.refundCents, feeCents: quote.feeCents, currency: order.currency };
   });
   await afterCommit();
-  logger.info({ order: input.orderId, refund: formatMoney(result.refundCents, result.currency) }, "order cancelled");
+  logger.info(
+    { order: input.orderId, refund: formatMoney(result.refundCents, result.currency) },
+    "order cancelled",
+  );
   return { refundCents: result.refundCents, feeCents: result.feeCents };
 }

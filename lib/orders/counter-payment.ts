@@ -9,12 +9,19 @@ import { formatMoney } from "@/lib/pricing/price-book";
 import { releaseAfterPayment } from "@/lib/floor/hooks";
 import { assertSignedOff } from "./engineering-signoff";
 import { afterCommit, notifyPaymentReceived } from "./notify";
-import { CANCELLED_NO_PAYMENT, lockOrder, methodLabel, refreshPaymentState } from "./payments";
+import {
+  CANCELLED_NO_PAYMENT,
+  amountDue,
+  lockOrder,
+  methodLabel,
+  nextPaymentKind,
+  refreshPaymentState,
+} from "./payments";
 
 export interface CounterPaymentInput {
   orderId: string;
   method: Exclude<PaymentMethod, "checkout">;
-  /** Defaults to everything still owed. */
+  /** Defaults to what the order asks for next (the deposit, the balance or all of it). */
   amountCents?: number;
   /** Required for a cheque (its number) and the card terminal (its receipt reference). */
   reference?: string | null;
@@ -35,7 +42,12 @@ export async function recordCounterPayment(user: CurrentUser, input: CounterPaym
     throw new AppError(
       "invalid",
       input.method === "cheque" ? "Enter the cheque number." : "Enter the terminal's receipt reference.",
-      { reference: input.method === "cheque" ? "The cheque number is required." : "The terminal reference is required." },
+      {
+        reference:
+          input.method === "cheque"
+            ? "The cheque number is required."
+            : "The terminal reference is required.",
+      },
     );
   let release: string | null = null;
   const payment = await inTransaction(async (em) => {
@@ -45,7 +57,9 @@ export async function recordCounterPayment(user: CurrentUser, input: CounterPaym
     await assertSignedOff(em, order, "it can take a payment");
     const owedCents = Math.max(0, order.totalCents - order.paidCents);
     if (owedCents <= 0) throw new AppError("conflict", "Nothing is owed on this order.");
-    const amountCents = input.amountCents ?? owedCents;
+    // Left out, the amount is what the order asks for next (the deposit, then the balance).
+    const next = nextPaymentKind(order);
+    const amountCents = input.amountCents ?? (next ? amountDue(order, next) : owedCents);
     if (amountCents > owedCents)
       throw new AppError("invalid", `Only ${formatMoney(owedCents, order.currency)} is owed on this order.`, {
         amountCents: `At most ${formatMoney(owedCents, order.currency)} (what is still owed).`,

@@ -14,7 +14,7 @@ export const recordCounterPaymentSchema = z
   .object({
     orderId,
     method: z.enum(["cash", "cheque", "terminal"], { error: "Choose cash, cheque or card terminal." }),
-    /** Integer cents; left out, it is everything still owed. */
+    /** Integer cents; left out, it is what the order asks for next. */
     amountCents: z
       .number({ error: "Enter the amount taken." })
       .int({ error: "Enter the amount in cents." })

@@ -25,8 +25,7 @@ function frozenChecks(shaft: Pick<OrderShaft, "evaluation">): FrozenCheck[] {
   const checks = (shaft.evaluation as { checks?: unknown }).checks;
   if (!Array.isArray(checks)) return [];
   return checks.filter(
-    (c): c is FrozenCheck =>
-      typeof c === "object" && c !== null && typeof (c as FrozenCheck).id === "string",
+    (c): c is FrozenCheck => typeof c === "object" && c !== null && typeof (c as FrozenCheck).id === "string",
   );
 }
 

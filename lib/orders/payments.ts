@@ -464,7 +464,12 @@ export async function refundPayment(
       by: em.getReference(User, user.id),
       createdAt: new Date(),
     });
-    applyRefund(em, payment, result.amountCents, byHand ? `${input.reason} (${methodLabel(payment.method)} refunded by hand)` : input.reason);
+    applyRefund(
+      em,
+      payment,
+      result.amountCents,
+      byHand ? `${input.reason} (${methodLabel(payment.method)} refunded by hand)` : input.reason,
+    );
     await recordAudit(
       {
         actorId: user.id,

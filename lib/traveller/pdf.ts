@@ -268,7 +268,8 @@ function exceptionsBlock(w: Writer, view: TravellerView, top: number, left: numb
     },
   ]);
   // Measure first (wrap draws), so the box is drawn around what follows: draw the box last, as a border.
-  for (const line of lines) y = w.wrap(line.text, left + pad, y, width - 2 * pad, 8, line.bold ? f.bold : f.regular, 3);
+  for (const line of lines)
+    y = w.wrap(line.text, left + pad, y, width - 2 * pad, 8, line.bold ? f.bold : f.regular, 3);
   const bottom = y + 2;
   page.drawRectangle({
     x: left,

@@ -52,8 +52,10 @@ export interface TravellerView {
   steps: TravellerStep[];
 }
 
-export interface TravellerViewInput
-  extends Omit<TravellerView, "steps" | "serialQrText" | "voidedBy" | "acceptedExceptions"> {
+export interface TravellerViewInput extends Omit<
+  TravellerView,
+  "steps" | "serialQrText" | "voidedBy" | "acceptedExceptions"
+> {
   steps: readonly StepSpec[];
   acceptedExceptions?: AcceptedException[];
   serialQrText?: string;
