@@ -155,7 +155,7 @@ export function TakePayment({
         </fieldset>
         <div>
           <label htmlFor="counter-amount" className="field-label">
-            Amount ({currency})
+            Amount taken ({currency})
           </label>
           <input
             id="counter-amount"
