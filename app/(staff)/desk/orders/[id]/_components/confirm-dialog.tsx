@@ -1,5 +1,5 @@
 "use client";
-import { useEffect, useRef } from "react";
+import { useEffect, useId, useRef } from "react";
 
 /**
  * A modal confirmation (the native dialog: focus stays inside, Escape cancels). Used before every
@@ -25,6 +25,7 @@ export function ConfirmDialog({
   onCancel: () => void;
 }) {
   const ref = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
   useEffect(() => {
     const dialog = ref.current;
     if (!dialog) return;
@@ -34,7 +35,7 @@ export function ConfirmDialog({
   return (
     <dialog
       ref={ref}
-      aria-labelledby="confirm-title"
+      aria-labelledby={titleId}
       onCancel={(e) => {
         e.preventDefault();
         if (!busy) onCancel();
@@ -42,7 +43,7 @@ export function ConfirmDialog({
       className="m-auto w-[min(28rem,calc(100vw-2rem))] rounded-card border border-line bg-paper-raised p-0 text-ink shadow-card backdrop:bg-black/40"
     >
       <div className="space-y-4 p-5">
-        <h2 id="confirm-title" className="text-lg font-semibold">
+        <h2 id={titleId} className="text-lg font-semibold">
           {title}
         </h2>
         <div className="space-y-2 text-sm">{children}</div>
