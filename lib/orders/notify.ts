@@ -33,6 +33,9 @@ async function shaftLines(em: EntityManager, order: Order): Promise<EmailLine[]>
 
 const money = (order: Order, cents: number) => formatMoney(cents, order.currency);
 
+const paymentLabel = (kind: Payment["kind"]) =>
+  kind === "deposit" ? "Deposit" : kind === "balance" ? "Balance" : "Payment in full";
+
 /**
  * The e-mails an order sends. Each writes an outbox row in the caller's transaction; delivery
  * happens afterwards (afterCommit), so a failed send never blocks the order.
@@ -103,9 +106,6 @@ export async function notifyBalanceDue(em: EntityManager, order: Order, payment:
     },
   });
 }
-
-const paymentLabel = (kind: Payment["kind"]) =>
-  kind === "deposit" ? "Deposit" : kind === "balance" ? "Balance" : "Payment in full";
 
 /** The counter e-mails a link to pay what is due now (the payment's hosted checkout). */
 export async function notifyPaymentLink(em: EntityManager, order: Order, payment: Payment): Promise<void> {

@@ -53,14 +53,6 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
           {order.customer.name} has no account yet. <InviteButton customerId={order.customer.id} />
         </p>
       )}
-      {cancelled && (
-        <div className="mb-4">
-          <Alert tone="warning" title="Cancelled">
-            {order.cancelReason ?? "This order is cancelled."}
-            {order.cancelledAt ? ` (${order.cancelledAt.toISOString().slice(0, 10)})` : ""}
-          </Alert>
-        </div>
-      )}
       {signoff.length > 0 && !cancelled && (
         <div className="mb-6">
           <SignoffPanel
