@@ -1,4 +1,3 @@
-import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { OrderEvent, Payment, Refund, User, WorkOrder, type Order } from "@/entities";
 import type { CurrentUser } from "@/lib/auth/guard";
