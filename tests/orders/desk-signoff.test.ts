@@ -1,5 +1,5 @@
 import { execFileSync } from "node:child_process";
-import { mkdtempSync, writeFileSync } from "node:fs";
+import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { randomUUID } from "node:crypto";
@@ -82,9 +82,13 @@ async function failingOrder() {
 }
 
 function pdfText(pdf: Uint8Array): string {
-  const file = path.join(mkdtempSync(path.join(tmpdir(), "desk-traveller-")), "t.pdf");
-  writeFileSync(file, pdf);
-  return execFileSync("pdftotext", ["-raw", file, "-"], { encoding: "utf8" });
+  const dir = mkdtempSync(path.join(tmpdir(), "desk-traveller-"));
+  try {
+    writeFileSync(path.join(dir, "t.pdf"), pdf);
+    return execFileSync("pdftotext", ["-raw", path.join(dir, "t.pdf"), "-"], { encoding: "utf8" });
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
 }
 
 describe("engineering sign-off", () => {
