@@ -5,6 +5,7 @@ import { Design } from "./design.entity";
 import { EmailMessage } from "./email-message.entity";
 import { Order } from "./order.entity";
 import { OrderEvent } from "./order-event.entity";
+import { OrderNote } from "./order-note.entity";
 import { OrderShaft } from "./order-shaft.entity";
 import { Payment } from "./payment.entity";
 import { RateLimit } from "./rate-limit.entity";
@@ -29,6 +30,7 @@ export {
   EmailMessage,
   Order,
   OrderEvent,
+  OrderNote,
   OrderShaft,
   Payment,
   RateLimit,
@@ -48,6 +50,9 @@ export {
 export type { OrderStatus, PaymentState } from "./order.entity";
 export type { OrderEventKind } from "./order-event.entity";
 export type { WarningAcknowledgement } from "./order-shaft.entity";
+export type { NoteVisibility } from "./order-note.entity";
+export type { PaymentMethod } from "./payment.entity";
+export type { FailedCheckAcceptance } from "./order-shaft.entity";
 export type { WorkOrderState } from "./work-order.entity";
 export type { StepState, StepCompletion } from "./work-order-step.entity";
 export type { StepOutcome } from "./step-record.entity";
@@ -71,6 +76,7 @@ export const entities = [
   Refund,
   WebhookEvent,
   OrderEvent,
+  OrderNote,
   EmailMessage,
   Upload,
   WorkOrder,

@@ -4,7 +4,16 @@ import type { Order } from "./order.entity";
 import { User } from "./user.entity";
 
 export type OrderEventKind =
-  "received" | "paid" | "payment_failed" | "step" | "ready" | "shipped" | "refunded" | "note" | "file";
+  | "received"
+  | "paid"
+  | "payment_failed"
+  | "step"
+  | "ready"
+  | "shipped"
+  | "refunded"
+  | "note"
+  | "file"
+  | "cancelled";
 
 /** One entry of an order's timeline, as the customer sees it. */
 @Entity({ tableName: "order_event" })

@@ -15,11 +15,21 @@ export interface WarningAcknowledgement {
   at: string;
 }
 
+/** An owner's acceptance of one failed engineering check, for this one order shaft only. */
+export interface FailedCheckAcceptance {
+  checkId: string;
+  reason: string;
+  byUserId: string;
+  byName: string;
+  /** ISO date-time. */
+  at: string;
+}
+
 /** One shaft of an order, with frozen copies of its design, its evaluation and its price. */
 @Entity({ tableName: "order_shaft" })
 @Check({ name: "order_shaft_price_nonnegative_check", expression: "price_cents >= 0" })
 export class OrderShaft {
-  [OptionalProps]?: "warningAcknowledgements";
+  [OptionalProps]?: "warningAcknowledgements" | "failedCheckAcceptances";
 
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
@@ -55,4 +65,11 @@ export class OrderShaft {
   /** Each warning of the frozen evaluation, acknowledged by the customer (online) or the counter (Migration20261204150500). */
   @Property({ type: "json", defaultRaw: `'[]'` })
   warningAcknowledgements: WarningAcknowledgement[] = [];
+
+  /**
+   * Failed checks an owner accepted for this shaft (lib/orders/engineering-signoff.ts). The shop's
+   * limits are unchanged; the frozen evaluation still says "fail".
+   */
+  @Property({ type: "json", defaultRaw: `'[]'` })
+  failedCheckAcceptances: FailedCheckAcceptance[] = [];
 }

@@ -17,6 +17,7 @@ import { OrderShaft } from "./order-shaft.entity";
 import { Payment } from "./payment.entity";
 import { OrderEvent } from "./order-event.entity";
 import { WorkOrder } from "./work-order.entity";
+import { OrderNote } from "./order-note.entity";
 
 export const ORDER_STATUSES = [
   "awaiting_payment",
@@ -114,6 +115,17 @@ export class Order {
 
   @OneToMany(() => OrderEvent, (e) => e.order, { orderBy: { at: "asc" } })
   events = new Collection<OrderEvent>(this);
+
+  /** Notes from the shop: staff-only or shown to the customer (lib/orders/notes.ts). */
+  @OneToMany(() => OrderNote, (n) => n.order, { orderBy: { createdAt: "asc" } })
+  orderNotes = new Collection<OrderNote>(this);
+
+  /** Set when the order is cancelled (lib/orders/cancel.ts), with the reason given. */
+  @Property({ type: "Date", nullable: true })
+  cancelledAt?: Date | null;
+
+  @Property({ type: "text", nullable: true })
+  cancelReason?: string | null;
 
   /** One per shaft once released to the shop (lib/floor). */
   @OneToMany(() => WorkOrder, (w) => w.order)

@@ -3,15 +3,26 @@ import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import { User } from "./user.entity";
 
-/** One request for money on an order (deposit, balance or full), through a hosted checkout. */
+export const PAYMENT_METHODS = ["checkout", "cash", "cheque", "terminal"] as const;
+/** How the money came in: the hosted card checkout, or at the counter (cash, cheque, card terminal). */
+export type PaymentMethod = (typeof PAYMENT_METHODS)[number];
+
+/**
+ * Money on an order (deposit, balance or full): a request through a hosted checkout, or a payment
+ * the counter took in person (recorded as succeeded, with its reference; no provider involved).
+ */
 @Entity({ tableName: "payment" })
+@Check({
+  name: "payment_checkout_has_session_check",
+  expression: "method <> 'checkout' or (checkout_session_id is not null and checkout_url is not null)",
+})
 @Check({ name: "payment_amount_positive_check", expression: "amount_cents > 0" })
 @Check({
   name: "payment_refunded_within_amount_check",
   expression: "refunded_cents >= 0 and refunded_cents <= amount_cents",
 })
 export class Payment {
-  [OptionalProps]?: "status" | "refundedCents" | "createdAt";
+  [OptionalProps]?: "status" | "refundedCents" | "createdAt" | "method";
 
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
@@ -32,11 +43,19 @@ export class Payment {
   @Enum({ items: ["open", "succeeded", "failed", "expired"], nativeEnumName: "payment_status" })
   status: "open" | "succeeded" | "failed" | "expired" = "open";
 
-  @Property({ type: "text", unique: true })
-  checkoutSessionId!: string;
+  @Enum({ items: () => PAYMENT_METHODS, nativeEnumName: "payment_method", default: "checkout" })
+  method: PaymentMethod = "checkout";
 
-  @Property({ type: "text" })
-  checkoutUrl!: string;
+  /** Counter payments: the cheque number or the terminal's receipt reference (cash: optional). */
+  @Property({ type: "text", nullable: true })
+  reference?: string | null;
+
+  /** Hosted checkout only (null for a payment taken at the counter). */
+  @Property({ type: "text", unique: true, nullable: true })
+  checkoutSessionId?: string | null;
+
+  @Property({ type: "text", nullable: true })
+  checkoutUrl?: string | null;
 
   @Property({ type: "text", nullable: true })
   paymentIntentId?: string | null;

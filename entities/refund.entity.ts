@@ -3,7 +3,7 @@ import { randomUUID } from "node:crypto";
 import { Payment } from "./payment.entity";
 import { User } from "./user.entity";
 
-/** Money given back on a payment, by an owner. */
+/** Money given back on a payment, by an owner (at the provider, or by hand for a counter payment). */
 @Entity({ tableName: "refund" })
 @Check({ name: "refund_amount_positive_check", expression: "amount_cents > 0" })
 export class Refund {
@@ -18,8 +18,9 @@ export class Refund {
   @Property({ type: "integer" })
   amountCents!: number;
 
-  @Property({ type: "text", unique: true })
-  providerRefundId!: string;
+  /** The provider's refund id; null when a counter payment was given back by hand (cash, cheque, terminal). */
+  @Property({ type: "text", unique: true, nullable: true })
+  providerRefundId?: string | null;
 
   @Property({ type: "text" })
   reason!: string;

@@ -67,6 +67,13 @@ export class WorkOrder {
   @Property({ type: "text", nullable: true })
   releaseReason?: string | null;
 
+  /** Set when the order was cancelled after release: every code of this traveller is refused. */
+  @Property({ type: "Date", nullable: true })
+  voidedAt?: Date | null;
+
+  @Property({ type: "text", nullable: true })
+  voidReason?: string | null;
+
   @OneToMany(() => WorkOrderStep, (s) => s.workOrder, { orderBy: { revision: "asc", position: "asc" } })
   steps = new Collection<WorkOrderStep>(this);
 

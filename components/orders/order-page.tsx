@@ -15,6 +15,14 @@ const PAYMENT_STATUS: Record<string, string> = {
   expired: "expired",
 };
 const KIND_LABEL = { deposit: "deposit", balance: "balance", full: "payment" } as const;
+const METHOD_LABEL: Record<string, string> = {
+  checkout: "card online",
+  cash: "cash at the shop",
+  cheque: "cheque",
+  terminal: "card at the shop",
+};
+const noteDate = (iso: string) =>
+  new Date(iso).toLocaleDateString("en-US", { dateStyle: "medium", timeZone: "UTC" });
 
 /** The body of an order page, for the customer and (with `staffActions`) for the shop. */
 export function OrderPage({
@@ -65,6 +73,14 @@ export function OrderPage({
           a moment.
         </Alert>
       )}
+      {order.status === "cancelled" && (
+        <Alert tone="warning" title="This order is cancelled">
+          {order.cancelReason ?? "The shop cancelled this order."}
+          {order.refundedCents > 0
+            ? ` ${formatMoney(order.refundedCents, order.currency)} was refunded.`
+            : ""}
+        </Alert>
+      )}
       {lastFailure && (
         <Alert tone="error" title="The last card payment was declined">
           {lastFailure.failureMessage} Try another card.
@@ -89,6 +105,23 @@ export function OrderPage({
               <ShaftSummary key={s.id} shaft={s} currency={order.currency} />
             ))}
           </section>
+          {!staffActions && order.shopNotes.length > 0 && (
+            <section aria-labelledby="shop-notes" className="space-y-3">
+              <h2 id="shop-notes" className="text-lg font-semibold">
+                Notes from the shop
+              </h2>
+              <ul className="space-y-3 card p-5">
+                {order.shopNotes.map((n) => (
+                  <li key={n.id} className="text-sm">
+                    <p className="whitespace-pre-wrap">{n.body}</p>
+                    <p className="mt-1 text-xs text-ink-muted">
+                      {n.byName} · <time dateTime={n.at}>{noteDate(n.at)}</time>
+                    </p>
+                  </li>
+                ))}
+              </ul>
+            </section>
+          )}
           {files}
         </div>
         <aside className={`space-y-4 ${order.due ? "order-first lg:order-none" : ""}`}>
@@ -114,7 +147,12 @@ export function OrderPage({
                 </div>
               )}
             </Totals>
-            {order.due && order.status !== "cancelled" && (
+            {order.due && order.status !== "cancelled" && order.needsSignoff && (
+              <p className="text-sm text-ink-muted">
+                The shop is reviewing this design before taking payment; we will be in touch.
+              </p>
+            )}
+            {order.due && order.status !== "cancelled" && !order.needsSignoff && (
               <div className="no-print">
                 <PayButton
                   orderId={order.id}
@@ -126,7 +164,13 @@ export function OrderPage({
               <ul className="divide-y divide-line text-sm">
                 {order.payments.map((p) => (
                   <li key={p.id} className="flex justify-between gap-2 py-1.5">
-                    <span className="capitalize">{p.kind}</span>
+                    <span>
+                      <span className="capitalize">{p.kind}</span>
+                      <span className="block text-xs text-ink-muted">
+                        {METHOD_LABEL[p.method] ?? p.method}
+                        {p.reference ? ` · ${p.reference}` : ""}
+                      </span>
+                    </span>
                     <span className="text-ink-muted">
                       {PAYMENT_STATUS[p.status] ?? p.status}
                       {p.paidAt ? ` ${p.paidAt.slice(0, 10)}` : ""}

@@ -1,4 +1,5 @@
 import {
+  Ban,
   CircleCheck,
   CircleDot,
   CreditCard,
@@ -21,17 +22,20 @@ const ICON = {
   refunded: RotateCcw,
   file: FileImage,
   note: CircleCheck,
+  cancelled: Ban,
 } as const;
 
 /** The order's story so far, oldest first, with what is still to come greyed at the end. */
 export function OrderTimeline({ order }: { order: OrderView }) {
+  // A cancelled order has nothing to come.
   const upcoming = [
-    !order.events.some((e) => e.kind === "paid") && "Paid",
-    !["in_shop", "ready", "shipped"].includes(order.status) &&
+    order.status !== "cancelled" && !order.events.some((e) => e.kind === "paid") && "Paid",
+    !["in_shop", "ready", "shipped", "cancelled"].includes(order.status) &&
       "In the shop: cut, weld and phase, balance, inspect",
-    !["ready", "shipped"].includes(order.status) &&
+    !["ready", "shipped", "cancelled"].includes(order.status) &&
       (order.fulfilment === "ship" ? "Ready to ship" : "Ready for pickup"),
-    order.status !== "shipped" && (order.fulfilment === "ship" ? "Shipped" : "Picked up"),
+    !["shipped", "cancelled"].includes(order.status) &&
+      (order.fulfilment === "ship" ? "Shipped" : "Picked up"),
   ].filter((x): x is string => Boolean(x));
   return (
     <ol className="relative space-y-4 border-l-2 border-line pl-6" aria-label="Order timeline">

@@ -9,6 +9,8 @@ export type Permission =
   | "shop.manage" // catalogue, prices, settings
   | "staff.manage" // create staff accounts
   | "payments.refund"
+  | "orders.cancel-released" // cancel an order already released to the shop
+  | "engineering.signoff" // accept a failed engineering check for one order
   | "mail.outbox"; // see what the app has sent (demo mode)
 
 /** The one table of who may do what. Checked on the server only. */
@@ -23,6 +25,8 @@ export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
     "shop.manage",
     "staff.manage",
     "payments.refund",
+    "orders.cancel-released",
+    "engineering.signoff",
     "mail.outbox",
   ],
 };

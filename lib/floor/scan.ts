@@ -6,7 +6,7 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { StepRecord, WorkOrder, WorkOrderStep, type WorkOrderState } from "@/entities";
 import { AppError } from "@/lib/http/errors";
-import { assertCurrentRevision } from "./work-orders";
+import { assertCurrentRevision, assertNotVoided } from "./work-orders";
 import { getShopEngineering } from "@/lib/shop/config";
 import { normaliseCode, parseSerial, parseStepCode } from "@/lib/traveller/codes";
 import { describeLimit, type Failure } from "@/lib/traveller/measure";
@@ -120,6 +120,7 @@ export async function scanCode(em: EntityManager, raw: string): Promise<ScanResu
   );
   if (!wo) throw new AppError("not_found", `No shaft with serial ${asStep.serial}.`);
   assertCurrentRevision(wo, asStep.revision);
+  assertNotVoided(wo);
   const [steps, { floor }] = await Promise.all([
     em.find(WorkOrderStep, { workOrder: wo.id, revision: wo.revision }, { orderBy: { position: "asc" } }),
     getShopEngineering(),

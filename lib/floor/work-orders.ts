@@ -30,6 +30,7 @@ import { checkMeasurements, type Failure, type SiValues } from "@/lib/traveller/
 import type { FloorSettings } from "@/lib/traveller/settings";
 import { deriveSteps, type StepSpec } from "@/lib/traveller/steps";
 import { buildTravellerView, type TravellerView } from "@/lib/traveller/view";
+import { acceptedExceptions, assertSignedOff } from "@/lib/orders/engineering-signoff";
 import {
   newAfterCommit,
   onFinalInspectionPassed,
@@ -115,6 +116,7 @@ async function release(orderId: string, by: CurrentUser | null, note: string | n
     if ((await em.count(WorkOrder, { order: order.id })) > 0) {
       throw new AppError("conflict", `Order ${order.number} is already released to the shop.`);
     }
+    await assertSignedOff(em, order, "it can be released to the shop");
     if (order.paymentState === "unpaid" && !note) {
       throw new AppError("invalid", "The deposit is not paid: give a reason to release by hand.", {
         reason: "required when the deposit is not paid",
@@ -237,12 +239,26 @@ export function assertCurrentRevision(wo: { serial: string; revision: number }, 
   }
 }
 
+/** A work order of a cancelled order: every code of its traveller is refused. */
+export function assertNotVoided(wo: {
+  serial: string;
+  voidedAt?: Date | null;
+  voidReason?: string | null;
+}): void {
+  if (wo.voidedAt)
+    throw new AppError(
+      "conflict",
+      `This traveller is void: ${wo.serial} — ${wo.voidReason ?? "the order was cancelled"}. Do not work on this shaft.`,
+    );
+}
+
 async function lockForCode(em: EntityManager, code: string) {
   const parsed = parseStepCode(code);
   if (!parsed.ok) throw new AppError("invalid", parsed.message, { code: parsed.message });
   const wo = await em.findOne(WorkOrder, { serial: parsed.serial }, { lockMode: LockMode.PESSIMISTIC_WRITE });
   if (!wo) throw new AppError("not_found", `No shaft with serial ${parsed.serial}.`);
   assertCurrentRevision(wo, parsed.revision);
+  assertNotVoided(wo);
   const steps = await stepsFor(em, wo);
   const step = steps.find((s) => s.code === parsed.step);
   if (!step) throw new AppError("not_found", `${wo.serial} has no step ${parsed.step}.`);
@@ -593,6 +609,7 @@ export async function travellerViewFor(
     },
     floor: engineering.floor,
     report: shaft.evaluation as unknown as EvaluationReport,
+    acceptedExceptions: acceptedExceptions(shaft),
     steps: steps.map((s) => s.spec),
   });
 }

@@ -8,6 +8,12 @@ import {
   type PaymentReceiptProps,
 } from "@/emails/payment-receipt";
 import { BalanceDueEmail, balanceDueSubject, type BalanceDueProps } from "@/emails/balance-due";
+import { PaymentLinkEmail, paymentLinkSubject, type PaymentLinkProps } from "@/emails/payment-link";
+import {
+  OrderCancelledEmail,
+  orderCancelledSubject,
+  type OrderCancelledProps,
+} from "@/emails/order-cancelled";
 import { ShaftReadyEmail, shaftReadySubject, type ShaftReadyProps } from "@/emails/shaft-ready";
 import { ShaftShippedEmail, shaftShippedSubject, type ShaftShippedProps } from "@/emails/shaft-shipped";
 import { VerifyEmail, verifyEmailSubject, type VerifyEmailProps } from "@/emails/verify-email";
@@ -22,6 +28,8 @@ export interface TemplateProps {
   "order-received": Omit<OrderReceivedProps, "shop">;
   "payment-receipt": Omit<PaymentReceiptProps, "shop">;
   "balance-due": Omit<BalanceDueProps, "shop">;
+  "payment-link": Omit<PaymentLinkProps, "shop">;
+  "order-cancelled": Omit<OrderCancelledProps, "shop">;
   "shaft-ready": Omit<ShaftReadyProps, "shop">;
   "shaft-shipped": Omit<ShaftShippedProps, "shop">;
   "verify-email": Omit<VerifyEmailProps, "shop">;
@@ -42,6 +50,11 @@ const TEMPLATES: { [N in TemplateName]: TemplateDefinition<TemplateProps[N]> } =
     subject: paymentReceiptSubject,
   },
   "balance-due": { element: (p) => createElement(BalanceDueEmail, p), subject: balanceDueSubject },
+  "payment-link": { element: (p) => createElement(PaymentLinkEmail, p), subject: paymentLinkSubject },
+  "order-cancelled": {
+    element: (p) => createElement(OrderCancelledEmail, p),
+    subject: orderCancelledSubject,
+  },
   "shaft-ready": { element: (p) => createElement(ShaftReadyEmail, p), subject: shaftReadySubject },
   "shaft-shipped": { element: (p) => createElement(ShaftShippedEmail, p), subject: shaftShippedSubject },
   "verify-email": { element: (p) => createElement(VerifyEmail, p), subject: verifyEmailSubject },

@@ -33,6 +33,9 @@ async function shaftLines(em: EntityManager, order: Order): Promise<EmailLine[]>
 
 const money = (order: Order, cents: number) => formatMoney(cents, order.currency);
 
+const paymentLabel = (kind: Payment["kind"]) =>
+  kind === "deposit" ? "Deposit" : kind === "balance" ? "Balance" : "Payment in full";
+
 /**
  * The e-mails an order sends. Each writes an outbox row in the caller's transaction; delivery
  * happens afterwards (afterCommit), so a failed send never blocks the order.
@@ -70,8 +73,7 @@ export async function notifyPaymentReceived(
     props: {
       orderNumber: order.number,
       customerName: order.customer.name,
-      paymentLabel:
-        payment.kind === "deposit" ? "Deposit" : payment.kind === "balance" ? "Balance" : "Payment in full",
+      paymentLabel: paymentLabel(payment.kind),
       amountPaid: money(order, payment.amountCents),
       paidOn: (payment.paidAt ?? new Date()).toLocaleDateString("en-US", {
         dateStyle: "long",
@@ -97,8 +99,55 @@ export async function notifyBalanceDue(em: EntityManager, order: Order, payment:
       balanceDue: money(order, payment.amountCents),
       total: money(order, order.totalCents),
       paidSoFar: money(order, order.paidCents),
-      payUrl: payment.checkoutUrl,
+      payUrl: payment.checkoutUrl ?? `${appUrl()}/orders/${order.id}`,
       promisedDate: longDate(order.promisedDate),
+      lines: await shaftLines(em, order),
+      orderUrl: `${appUrl()}/orders/${order.id}`,
+    },
+  });
+}
+
+/** The counter e-mails a link to pay what is due now (the payment's hosted checkout). */
+export async function notifyPaymentLink(em: EntityManager, order: Order, payment: Payment): Promise<void> {
+  const orderUrl = `${appUrl()}/orders/${order.id}`;
+  await queueEmail(em, {
+    template: "payment-link",
+    to: order.customer.email,
+    orderId: order.id,
+    props: {
+      orderNumber: order.number,
+      customerName: order.customer.name,
+      paymentLabel: paymentLabel(payment.kind),
+      amountDue: money(order, payment.amountCents),
+      total: money(order, order.totalCents),
+      paidSoFar: money(order, order.paidCents),
+      payUrl: payment.checkoutUrl ?? orderUrl,
+      promisedDate: longDate(order.promisedDate),
+      lines: await shaftLines(em, order),
+      orderUrl,
+    },
+  });
+}
+
+/** The order was cancelled: the reason, what was paid, kept and refunded. */
+export async function notifyOrderCancelled(
+  em: EntityManager,
+  order: Order,
+  money_: { paidCents: number; feeCents: number; refundCents: number; refundHow: string | null },
+  reason: string,
+): Promise<void> {
+  await queueEmail(em, {
+    template: "order-cancelled",
+    to: order.customer.email,
+    orderId: order.id,
+    props: {
+      orderNumber: order.number,
+      customerName: order.customer.name,
+      reason,
+      paid: money(order, money_.paidCents),
+      refund: money(order, money_.refundCents),
+      kept: money_.feeCents > 0 ? money(order, money_.feeCents) : null,
+      refundHow: money_.refundCents > 0 ? money_.refundHow : null,
       lines: await shaftLines(em, order),
       orderUrl: `${appUrl()}/orders/${order.id}`,
     },

@@ -13,7 +13,11 @@ import { can } from "@/lib/auth/permissions";
 import { appUrl } from "@/lib/http/app-url";
 import { formatMoney } from "@/lib/pricing/price-book";
 import { releaseAfterPayment } from "@/lib/floor/hooks";
-import { afterCommit, notifyBalanceDue, notifyPaymentReceived } from "./notify";
+import { afterCommit, notifyBalanceDue, notifyPaymentLink, notifyPaymentReceived } from "./notify";
+import { assertSignedOff } from "./engineering-signoff";
+
+/** What a cancelled order answers to every way of paying. */
+export const CANCELLED_NO_PAYMENT = "This order is cancelled; it takes no payment.";
 
 /** What is still owed for each kind of request, given what has been paid. */
 export function amountDue(order: Order, kind: Payment["kind"]): number {
@@ -57,7 +61,7 @@ async function provider<T>(call: () => Promise<T>, message = UNAVAILABLE): Promi
  * order's money takes this lock first, so checkouts, webhooks and refunds of one order run one
  * after the other (and always in the same lock order: order, then its payments).
  */
-async function lockOrder(em: EntityManager, orderId: string): Promise<Order> {
+export async function lockOrder(em: EntityManager, orderId: string): Promise<Order> {
   const order = await em.findOneOrFail(
     Order,
     { id: orderId },
@@ -82,8 +86,8 @@ export async function startCheckout(
     throw new AppError("forbidden", "Only the customer, the counter or an owner can take a payment.");
   return inTransaction(async (em) => {
     const order = await lockOrder(em, orderId);
-    if (order.status === "cancelled")
-      throw new AppError("conflict", "This order is cancelled; it takes no payment.");
+    if (order.status === "cancelled") throw new AppError("conflict", CANCELLED_NO_PAYMENT);
+    await assertSignedOff(em, order, "it can take a payment");
     const want = kind ?? nextPaymentKind(order);
     if (!want) throw new AppError("conflict", "Nothing is owed on this order.");
     if (want === "balance" && (order.paidCents === 0 || order.paidCents < order.depositCents))
@@ -95,7 +99,8 @@ export async function startCheckout(
     const reuse = open.find((p) => p.kind === want && p.amountCents === amountCents);
     for (const stale of open) {
       if (stale === reuse) continue;
-      const closed = await provider(() => payments().expireCheckout(stale.checkoutSessionId));
+      const sessionId = stale.checkoutSessionId;
+      const closed = sessionId ? await provider(() => payments().expireCheckout(sessionId)) : "expired";
       if (closed === "completed")
         throw new AppError(
           "conflict",
@@ -163,7 +168,39 @@ export async function requestBalance(orderId: string, by: CurrentUser | null): P
   return payment;
 }
 
-function refreshPaymentState(order: Order): void {
+/**
+ * The counter e-mails the customer a link to pay what the order asks for next (the deposit, the
+ * balance or all of it): the same one open checkout per order, an outbox e-mail, a note and an audit row.
+ */
+export async function sendPaymentLink(orderId: string, by: CurrentUser): Promise<Payment> {
+  const payment = await startCheckout(orderId, by);
+  await inTransaction(async (em) => {
+    const order = await em.findOneOrFail(Order, { id: orderId }, { populate: ["customer"] });
+    em.create(OrderEvent, {
+      order,
+      kind: "note",
+      label: `Payment link for ${formatMoney(payment.amountCents, order.currency)} e-mailed to ${order.customer.email}`,
+      public: false,
+      actor: em.getReference(User, by.id),
+      at: new Date(),
+    });
+    await recordAudit(
+      {
+        actorId: by.id,
+        action: "payment.link-sent",
+        subjectType: "order",
+        subjectId: order.id,
+        details: { paymentId: payment.id, kind: payment.kind, amountCents: payment.amountCents },
+      },
+      em,
+    );
+    await notifyPaymentLink(em, order, em.merge(payment));
+  });
+  await afterCommit();
+  return payment;
+}
+
+export function refreshPaymentState(order: Order): void {
   if (order.refundedCents > 0)
     order.paymentState = order.refundedCents >= order.paidCents ? "refunded" : "partially_refunded";
   else if (order.paidCents >= order.totalCents) order.paymentState = "paid";
@@ -298,7 +335,12 @@ export async function applyPaymentEvent(event: PaymentEvent): Promise<ApplyOutco
   return outcome;
 }
 
-function applyRefund(em: EntityManager, payment: Payment, amountCents: number, reason: string): void {
+/** How a payment came in, in words. */
+export function methodLabel(method: Payment["method"]): string {
+  return { checkout: "card online", cash: "cash", cheque: "cheque", terminal: "card terminal" }[method];
+}
+
+export function applyRefund(em: EntityManager, payment: Payment, amountCents: number, reason: string): void {
   const order = payment.order;
   payment.refundedCents += amountCents;
   order.refundedCents += amountCents;
@@ -387,7 +429,8 @@ export async function refundPayment(
     if (!found) throw new AppError("not_found", "No such payment.");
     await lockOrder(em, found.order.id);
     const payment = await em.findOneOrFail(Payment, { id: found.id }, { refresh: true, populate: ["order"] });
-    if (payment.status !== "succeeded" || !payment.paymentIntentId)
+    const byHand = payment.method !== "checkout";
+    if (payment.status !== "succeeded" || (!byHand && !payment.paymentIntentId))
       throw new AppError("conflict", "Only a completed payment can be refunded.");
     const refundable = payment.amountCents - payment.refundedCents;
     if (input.amountCents > refundable) {
@@ -399,17 +442,20 @@ export async function refundPayment(
         },
       );
     }
-    const paymentIntentId = payment.paymentIntentId;
-    const result = await provider(
-      () =>
-        payments().refund({
-          paymentIntentId,
-          amountCents: input.amountCents,
-          reason: input.reason,
-          idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${input.amountCents}`,
-        }),
-      REFUND_UNAVAILABLE,
-    );
+    // A payment taken at the counter is given back by hand (cash, cheque, the terminal): recorded, no provider call.
+    const paymentIntentId = payment.paymentIntentId ?? "";
+    const result = byHand
+      ? { id: null, amountCents: input.amountCents }
+      : await provider(
+          () =>
+            payments().refund({
+              paymentIntentId,
+              amountCents: input.amountCents,
+              reason: input.reason,
+              idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${input.amountCents}`,
+            }),
+          REFUND_UNAVAILABLE,
+        );
     const refund = em.create(Refund, {
       payment,
       amountCents: result.amountCents,
@@ -418,11 +464,16 @@ export async function refundPayment(
       by: em.getReference(User, user.id),
       createdAt: new Date(),
     });
-    applyRefund(em, payment, result.amountCents, input.reason);
+    applyRefund(
+      em,
+      payment,
+      result.amountCents,
+      byHand ? `${input.reason} (${methodLabel(payment.method)} refunded by hand)` : input.reason,
+    );
     await recordAudit(
       {
         actorId: user.id,
-        action: "payment.refund",
+        action: byHand ? "payment.refund-recorded" : "payment.refund",
         subjectType: "order",
         subjectId: payment.order.id,
         details: {
@@ -430,6 +481,7 @@ export async function refundPayment(
           amountCents: result.amountCents,
           reason: input.reason,
           providerRefundId: result.id,
+          method: payment.method,
         },
       },
       em,

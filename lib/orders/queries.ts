@@ -1,4 +1,10 @@
-import { Order, type OrderStatus, type PaymentState, type WarningAcknowledgement } from "@/entities";
+import {
+  Order,
+  type OrderStatus,
+  type PaymentMethod,
+  type PaymentState,
+  type WarningAcknowledgement,
+} from "@/entities";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { CurrentUser } from "@/lib/auth/guard";
 import type { QuoteLine } from "@/lib/pricing/price-book";
@@ -7,6 +13,8 @@ import { seesAllOrders } from "./access";
 import { orderStatusLabel, type FloorProgress } from "./labels";
 import { nextPaymentKind, amountDue } from "./payments";
 import { needsEngineeringSignoff } from "./acknowledgements";
+import { notesFor, type OrderNoteView } from "./notes";
+import { frozenChecks } from "./engineering-signoff";
 
 export interface OrderRow {
   id: string;
@@ -118,8 +126,17 @@ export interface OrderView extends OrderRow {
     createdAt: string;
     paidAt: string | null;
     failureMessage: string | null;
-    checkoutUrl: string;
+    checkoutUrl: string | null;
+    /** How it was paid: the online checkout, or at the counter (cash, cheque, card terminal). */
+    method: PaymentMethod;
+    /** Counter payments: the cheque number or terminal reference. */
+    reference: string | null;
   }[];
+  /** Notes from the shop: every note for staff, only customer-visible ones for the customer. */
+  shopNotes: OrderNoteView[];
+  /** A shaft fails a check no owner has accepted: no payment or release until an owner reviews it. */
+  needsSignoff: boolean;
+  cancelReason: string | null;
   events: { id: string; at: string; kind: string; label: string }[];
   /** Every shaft passed final inspection: the as-built certificate can be downloaded. */
   asBuiltReady: boolean;
@@ -210,8 +227,15 @@ export function orderView(order: Order, user: CurrentUser): OrderView {
       createdAt: p.createdAt.toISOString(),
       paidAt: p.paidAt?.toISOString() ?? null,
       failureMessage: p.failureMessage ?? null,
-      checkoutUrl: p.checkoutUrl,
+      checkoutUrl: p.checkoutUrl ?? null,
+      method: p.method,
+      reference: p.reference ?? null,
     })),
+    shopNotes: order.orderNotes.isInitialized() ? notesFor(order.orderNotes.getItems(), staff) : [],
+    needsSignoff: order.status !== "cancelled" && order.shafts
+        .getItems()
+        .some((s) => needsEngineeringSignoff(frozenChecks(s), s.failedCheckAcceptances)),
+    cancelReason: order.cancelReason ?? null,
     events: order.events
       .getItems()
       .filter((e) => staff || e.public)
@@ -226,6 +250,6 @@ export function orderView(order: Order, user: CurrentUser): OrderView {
 
 /** Loads everything an order page needs in one go. */
 export async function populateOrder(em: EntityManager, order: Order): Promise<Order> {
-  await em.populate(order, ["customer", "shafts", "payments", "events", "workOrders"]);
+  await em.populate(order, ["customer", "shafts", "payments", "events", "workOrders", "orderNotes"]);
   return order;
 }

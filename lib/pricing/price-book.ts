@@ -19,6 +19,8 @@ export const priceBookSchema = z.object({
   leadTimeWorkingDays: z.number().int().min(0).max(120),
   /** When the customer leaves the tube to Yokeline: the cheapest or the lightest that passes every check. */
   tubePreference: z.enum(["cheapest", "lightest"]).default("cheapest"),
+  /** The share of the deposit the shop keeps when an order is cancelled before release (0 refunds it all). */
+  cancellationFeePercent: z.number().int().min(0).max(100).default(0),
 });
 export type PriceBook = z.infer<typeof priceBookSchema>;
 
@@ -34,6 +36,7 @@ export const defaultPriceBook: PriceBook = {
   depositPercent: 50,
   leadTimeWorkingDays: 5,
   tubePreference: "cheapest",
+  cancellationFeePercent: 0,
 };
 
 export interface QuoteLine {

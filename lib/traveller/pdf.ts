@@ -252,6 +252,36 @@ function stepBlock(
   w.text(step.barcodeText, bx + (drawn - lw) / 2, top - height + 6, 7, f.mono);
 }
 
+/**
+ * Failed checks an owner accepted for this one shaft, boxed and marked so nobody takes them for a
+ * pass: the check as the evaluation says it, the owner's reason, who and when.
+ */
+function exceptionsBlock(w: Writer, view: TravellerView, top: number, left: number, width: number): number {
+  const { f, page } = w;
+  const pad = 6;
+  let y = top - pad - 8;
+  const lines: { text: string; bold: boolean }[] = view.acceptedExceptions.flatMap((a) => [
+    { text: `ACCEPTED EXCEPTION - check "${a.checkId}" FAILED: ${a.message}`, bold: true },
+    {
+      text: `Reason: ${a.reason} - accepted by ${a.byName} on ${a.at.slice(0, 10)} for this order only; the shop's limits are unchanged.`,
+      bold: false,
+    },
+  ]);
+  // Measure first (wrap draws), so the box is drawn around what follows: draw the box last, as a border.
+  for (const line of lines)
+    y = w.wrap(line.text, left + pad, y, width - 2 * pad, 8, line.bold ? f.bold : f.regular, 3);
+  const bottom = y + 2;
+  page.drawRectangle({
+    x: left,
+    y: bottom,
+    width,
+    height: top - bottom,
+    borderColor: BLACK,
+    borderWidth: 1.6,
+  });
+  return bottom;
+}
+
 /** Draws one shaft's traveller on a new page of `doc`. */
 async function addTravellerPage(doc: PDFDocument, view: TravellerView, f: Fonts): Promise<void> {
   const [pw, ph] = PAGE[view.floor.paperSize];
@@ -299,6 +329,7 @@ async function addTravellerPage(doc: PDFDocument, view: TravellerView, f: Fonts)
   w.rule(left, y, left + width, 1.2);
   y = shaftBlock(w, view, y - 12, left, width);
   y -= 4;
+  if (view.acceptedExceptions.length) y = exceptionsBlock(w, view, y, left, width) - 4;
 
   // Steps fill the rest of the page.
   const bottom = MARGIN;

@@ -12,6 +12,17 @@ export interface TravellerStep extends StepSpec {
   barcodeText: string;
 }
 
+/** A failed engineering check an owner accepted for this one order shaft (printed as "Accepted exception"). */
+export interface AcceptedException {
+  checkId: string;
+  /** The check's message from the frozen evaluation (it still reads "fail"). */
+  message: string;
+  reason: string;
+  byName: string;
+  /** ISO date-time. */
+  at: string;
+}
+
 export interface TravellerView {
   shop: { name: string; phone: string | null };
   serial: string;
@@ -36,11 +47,17 @@ export interface TravellerView {
   /** The floor settings the steps were derived with (paper size, units, limits). */
   floor: FloorSettings;
   report: EvaluationReport;
+  /** Failed checks an owner accepted for this shaft; none for a shaft that passed. */
+  acceptedExceptions: AcceptedException[];
   steps: TravellerStep[];
 }
 
-export interface TravellerViewInput extends Omit<TravellerView, "steps" | "serialQrText" | "voidedBy"> {
+export interface TravellerViewInput extends Omit<
+  TravellerView,
+  "steps" | "serialQrText" | "voidedBy" | "acceptedExceptions"
+> {
   steps: readonly StepSpec[];
+  acceptedExceptions?: AcceptedException[];
   serialQrText?: string;
   voidedBy?: number | null;
 }
@@ -51,6 +68,7 @@ export function buildTravellerView(input: TravellerViewInput): TravellerView {
     ...input,
     serialQrText: input.serialQrText ?? input.serial,
     voidedBy: input.voidedBy ?? null,
+    acceptedExceptions: input.acceptedExceptions ?? [],
     steps: input.steps.map((s) => ({
       ...s,
       barcodeText: formatStepCode({ serial: input.serial, step: s.code, revision: input.revision }),

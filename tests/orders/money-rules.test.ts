@@ -109,7 +109,7 @@ describe("at most one open checkout per order", () => {
       code: "conflict",
     });
     // The deposit checkout is untouched and still the only one.
-    expect(await sessionStatus(deposit.checkoutSessionId)).toBe("open");
+    expect(await sessionStatus(deposit.checkoutSessionId!)).toBe("open");
     expect((await reload(order.id)).payments.getItems().map((p) => p.status)).toEqual(["open"]);
   });
 
@@ -124,7 +124,7 @@ describe("at most one open checkout per order", () => {
     expect(legacy.amountCents).toBe(order.totalCents - order.depositCents); // what is owed now
     const balance = await requestBalance(order.id, null);
     expect(balance.id).not.toBe(legacy.id);
-    expect(await sessionStatus(legacy.checkoutSessionId)).toBe("expired");
+    expect(await sessionStatus(legacy.checkoutSessionId!)).toBe("expired");
     expect((await em.findOneOrFail(Payment, { id: legacy.id })).status).toBe("expired");
     expect(await em.count(Payment, { order: order.id, status: "open" })).toBe(1);
   });
@@ -239,9 +239,9 @@ describe("the payments port closes checkouts", () => {
   dbTest("expireCheckout says expired (also when asked twice) or completed when it was paid", async () => {
     const { user, order } = await placedOrder();
     const first = await startCheckout(order.id, user);
-    expect(await payments().expireCheckout(first.checkoutSessionId)).toBe("expired");
-    expect(await payments().expireCheckout(first.checkoutSessionId)).toBe("expired");
-    expect(await sessionStatus(first.checkoutSessionId)).toBe("expired");
+    expect(await payments().expireCheckout(first.checkoutSessionId!)).toBe("expired");
+    expect(await payments().expireCheckout(first.checkoutSessionId!)).toBe("expired");
+    expect(await sessionStatus(first.checkoutSessionId!)).toBe("expired");
     await harness.fake.idle(10_000); // checkout.session.expired marks our row too
     const em = await getEm();
     expect((await em.findOneOrFail(Payment, { id: first.id })).status).toBe("expired");
@@ -249,7 +249,7 @@ describe("the payments port closes checkouts", () => {
     const second = await startCheckout(order.id, user);
     expect(second.id).not.toBe(first.id);
     await payWithCard(harness.fake, second.checkoutSessionId, "4242424242424242");
-    expect(await payments().expireCheckout(second.checkoutSessionId)).toBe("completed");
+    expect(await payments().expireCheckout(second.checkoutSessionId!)).toBe("completed");
     await harness.fake.idle(10_000);
   });
 });

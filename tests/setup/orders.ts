@@ -100,9 +100,10 @@ export async function startPaymentsHarness(
 /** Pays a checkout session through the fake's control endpoint (same effects as its page). */
 export async function payWithCard(
   fake: StripeFake,
-  sessionId: string,
+  sessionId: string | null | undefined,
   card: string,
 ): Promise<{ status: number; body: unknown }> {
+  if (!sessionId) throw new Error("not a checkout payment (no session id)");
   const res = await fetch(`${fake.url}/_fake/checkout/${sessionId}/pay`, {
     method: "POST",
     headers: { "content-type": "application/json" },

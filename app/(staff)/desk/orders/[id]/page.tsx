@@ -12,8 +12,14 @@ import { OrderPage } from "@/components/orders/order-page";
 import { OrderFilesSection } from "@/components/orders/order-files-section";
 import { InviteButton } from "@/components/customers/invite-button";
 import { orderFloorState } from "@/lib/floor/work-orders";
+import { cancellationQuote } from "@/lib/orders/cancel";
+import { signoffView } from "@/lib/orders/engineering-signoff";
 import { StaffActions } from "./_components/staff-actions";
 import { FloorActions } from "./_components/floor-actions";
+import { TakePayment } from "./_components/take-payment";
+import { OrderNotesPanel } from "./_components/order-notes-panel";
+import { CancelOrderPanel } from "./_components/cancel-order-panel";
+import { SignoffPanel } from "./_components/signoff-panel";
 
 export const metadata: Metadata = { title: "Order" };
 
@@ -26,9 +32,16 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
     throw e;
   });
   await populateOrder(em, order);
-  const floor = await orderFloorState(em, order.id);
+  const [floor, quote] = await Promise.all([orderFloorState(em, order.id), cancellationQuote(em, order)]);
   const view = orderView(order, user);
-  const { placed, paid, cancelled } = await searchParams;
+  const signoff = signoffView(order.shafts.getItems());
+  const cancelled = order.status === "cancelled";
+  const blocked = cancelled
+    ? "This order is cancelled; it takes no payment."
+    : view.needsSignoff
+      ? "A shaft fails an engineering check: an owner must review it before any payment is taken."
+      : null;
+  const { placed, paid, cancelled: leftCheckout } = await searchParams;
   return (
     <>
       <PageHeader
@@ -40,11 +53,20 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
           {order.customer.name} has no account yet. <InviteButton customerId={order.customer.id} />
         </p>
       )}
+      {signoff.length > 0 && !cancelled && (
+        <div className="mb-6">
+          <SignoffPanel
+            orderId={order.id}
+            shafts={signoff}
+            canAccept={can(user.role, "engineering.signoff")}
+          />
+        </div>
+      )}
       {placed && (
         <div className="mb-4">
           <Alert tone="success" title="Order placed">
-            Take the payment now with the button under Payment, or send the customer the link from their order
-            e-mail.
+            Take the payment now under Take payment: record it at the counter, or e-mail the customer a
+            payment link.
           </Alert>
         </div>
       )}
@@ -52,14 +74,25 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
         order={view}
         payVerb="Take"
         returnedFromCheckout={Boolean(paid)}
-        cancelledCheckout={Boolean(cancelled)}
+        cancelledCheckout={Boolean(leftCheckout)}
         files={<OrderFilesSection em={em} order={order} user={user} />}
         staffActions={
           <>
+            <TakePayment
+              orderId={order.id}
+              currency={order.currency}
+              customerEmail={order.customer.email}
+              due={view.due}
+              owedCents={Math.max(0, order.totalCents - order.paidCents)}
+              blocked={blocked}
+            />
             <FloorActions
               orderId={order.id}
               depositPaid={order.paymentState !== "unpaid"}
-              cancelled={order.status === "cancelled"}
+              cancelled={cancelled}
+              blocked={
+                view.needsSignoff ? "An owner must review the failed engineering check before release." : null
+              }
               floor={floor}
             />
             <StaffActions
@@ -69,6 +102,16 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
               canRefund={can(user.role, "payments.refund")}
               payments={view.payments}
             />
+            <OrderNotesPanel orderId={order.id} notes={view.shopNotes} />
+            {quote && (
+              <CancelOrderPanel
+                orderId={order.id}
+                orderNumber={order.number}
+                currency={order.currency}
+                quote={quote}
+                mayCancel={!quote.released || can(user.role, "orders.cancel-released")}
+              />
+            )}
           </>
         }
       />

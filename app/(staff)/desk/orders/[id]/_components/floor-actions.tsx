@@ -13,11 +13,14 @@ export function FloorActions({
   orderId,
   depositPaid,
   cancelled,
+  blocked = null,
   floor,
 }: {
   orderId: string;
   depositPaid: boolean;
   cancelled: boolean;
+  /** Why the order cannot be released now (engineering sign-off), or null. */
+  blocked?: string | null;
   floor: OrderFloorSummary;
 }) {
   const router = useRouter();
@@ -32,7 +35,8 @@ export function FloorActions({
       </h2>
       <p className="font-semibold">{floor.label}</p>
       {message && <Alert tone={message.tone}>{message.text}</Alert>}
-      {!released && !cancelled && (
+      {!released && !cancelled && blocked && <Alert tone="warning">{blocked}</Alert>}
+      {!released && !cancelled && !blocked && (
         <form
           className="space-y-3"
           onSubmit={async (e) => {
@@ -63,7 +67,10 @@ export function FloorActions({
           </button>
         </form>
       )}
-      {released && (
+      {released && cancelled && (
+        <p className="text-sm text-ink-muted">The order is cancelled: its travellers are void.</p>
+      )}
+      {released && !cancelled && (
         <>
           <a
             href={`/desk/orders/${orderId}/traveller`}

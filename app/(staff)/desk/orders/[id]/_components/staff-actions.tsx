@@ -12,7 +12,15 @@ interface PaymentRow {
   amountCents: number;
   refundedCents: number;
   status: string;
+  method: string;
 }
+
+const METHOD: Record<string, string> = {
+  checkout: "card online",
+  cash: "cash",
+  cheque: "cheque",
+  terminal: "card terminal",
+};
 
 /** What the counter and the owner can do to an order's money. */
 export function StaffActions({
@@ -73,9 +81,12 @@ export function StaffActions({
             const amount = Math.round(Number(data.get("amount")) * 100);
             const paymentId = String(data.get("paymentId"));
             const reason = String(data.get("reason") ?? "");
+            const method = refundable.find((p) => p.id === paymentId)?.method ?? "checkout";
             if (
               !window.confirm(
-                `Refund ${formatMoney(amount || 0, currency)}? This sends money back to the customer's card.`,
+                method === "checkout"
+                  ? `Refund ${formatMoney(amount || 0, currency)}? This sends money back to the customer's card.`
+                  : `Record a refund of ${formatMoney(amount || 0, currency)} given back by ${METHOD[method]}? Give the money back by hand.`,
               )
             )
               return;
@@ -105,7 +116,8 @@ export function StaffActions({
             <select id="refund-payment" name="paymentId" className="field-input">
               {refundable.map((p) => (
                 <option key={p.id} value={p.id}>
-                  {p.kind} — {formatMoney(p.amountCents - p.refundedCents, currency)} refundable
+                  {p.kind} ({METHOD[p.method] ?? p.method}) —{" "}
+                  {formatMoney(p.amountCents - p.refundedCents, currency)} refundable
                 </option>
               ))}
             </select>
