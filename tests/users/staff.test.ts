@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, vi } from "vitest";
 import { NextRequest } from "next/server";
+import { Client } from "pg";
 import { AuditEvent, EmailMessage, Session, StaffInvitation, User } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 import { authorize } from "@/lib/auth/guard";
@@ -301,6 +302,35 @@ describe("the last owner", () => {
 
   const activeOwners = async () => (await getEm()).count(User, { role: "owner", deactivatedAt: null });
 
+  /**
+   * Runs both calls so that they truly overlap: a separate connection holds both owners' rows
+   * locked until both calls have started and are waiting, then lets them go at the same moment.
+   */
+  async function atOnce<T>(ids: string[], calls: (() => Promise<T>)[]) {
+    const holder = new Client({ connectionString: process.env.DATABASE_URL });
+    await holder.connect();
+    try {
+      await holder.query("begin");
+      await holder.query("select id from app_user where id = any($1) for update", [ids]);
+      const running = calls.map((call) => call());
+      const settled = Promise.allSettled(running);
+      // Wait until both are blocked inside their transactions (visible in pg_stat_activity).
+      for (let i = 0; i < 100; i++) {
+        // The activity view is a snapshot per transaction unless cleared.
+        await holder.query("select pg_stat_clear_snapshot()");
+        const { rows } = await holder.query<{ n: number }>(
+          "select count(*)::int as n from pg_stat_activity where datname = current_database() and wait_event_type = 'Lock'",
+        );
+        if ((rows[0]?.n ?? 0) >= calls.length) break;
+        await new Promise((r) => setTimeout(r, 50));
+      }
+      await holder.query("commit");
+      return await settled;
+    } finally {
+      await holder.end();
+    }
+  }
+
   dbTest("cannot be demoted or deactivated", async () => {
     const a = await staffMember("owner", "Ada Owner");
     const counter = await staffMember("counter");
@@ -321,10 +351,13 @@ describe("the last owner", () => {
     const a = await staffMember("owner", "Ada Owner");
     const b = await staffMember("owner", "Bo Owner");
     await withOnlyOwners([a.id, b.id], async () => {
-      const results = await Promise.allSettled([
-        changeStaffRole({ userId: b.id, role: "counter" }, a.id),
-        changeStaffRole({ userId: a.id, role: "floor" }, b.id),
-      ]);
+      const results = await atOnce(
+        [a.id, b.id],
+        [
+          () => changeStaffRole({ userId: b.id, role: "counter" }, a.id),
+          () => changeStaffRole({ userId: a.id, role: "floor" }, b.id),
+        ],
+      );
       expect(results.filter((r) => r.status === "fulfilled")).toHaveLength(1);
       const refused = results.find((r) => r.status === "rejected");
       expect(refused?.status === "rejected" && refused.reason).toMatchObject({ code: "conflict" });
@@ -336,11 +369,19 @@ describe("the last owner", () => {
     const a = await staffMember("owner", "Ada Owner");
     const b = await staffMember("owner", "Bo Owner");
     await withOnlyOwners([a.id, b.id], async () => {
-      const results = await Promise.allSettled([
-        setStaffActive({ userId: b.id, active: false }, a.id),
-        setStaffActive({ userId: a.id, active: false }, b.id),
-      ]);
+      const results = await atOnce(
+        [a.id, b.id],
+        [
+          () => setStaffActive({ userId: b.id, active: false }, a.id),
+          () => setStaffActive({ userId: a.id, active: false }, b.id),
+        ],
+      );
       expect(results.filter((r) => r.status === "fulfilled")).toHaveLength(1);
+      const refused = results.find((r) => r.status === "rejected");
+      expect(refused?.status === "rejected" && refused.reason).toMatchObject({
+        code: "conflict",
+        message: expect.stringMatching(/last active owner/),
+      });
       expect(await activeOwners()).toBe(1);
     });
   });
