@@ -77,9 +77,7 @@ describe("seed outside demo mode and the first owner", () => {
         url,
         "select role, email, token_hash from staff_invitation",
       );
-      expect(invitations).toEqual([
-        expect.objectContaining({ role: "owner", email: "boss@shop.example" }),
-      ]);
+      expect(invitations).toEqual([expect.objectContaining({ role: "owner", email: "boss@shop.example" })]);
       expect(invitations[0]!.token_hash).not.toBe(link![1]);
       const again = run("scripts/owner-create.ts", url, {}, ["second@shop.example"]);
       expect(again.status).toBe(1);

@@ -113,7 +113,9 @@ describe("staff invitations", () => {
     // The link works once; the page says why.
     const again = await acceptInvite({ token, name: "Someone Else", password: "another-password-1" });
     expect(again.status).toBe(404);
-    expect(((await again.json()) as { error: { message: string } }).error.message).toMatch(/already been used/);
+    expect(((await again.json()) as { error: { message: string } }).error.message).toMatch(
+      /already been used/,
+    );
     expect(await lookupStaffInvitation(token)).toMatchObject({ state: "used" });
     // Gone from the pending list: resending or withdrawing it is refused.
     const resend = await resendStaffInvitationAction({ invitationId: invitation.id });
@@ -163,33 +165,40 @@ describe("staff invitations", () => {
     });
   });
 
-  dbTest("refuses, naming the e-mail field: a customer's account, a staff member, a pending invitation", async () => {
-    session.cookie = owner.cookie;
-    const customerEmail = uniqueEmail("customer");
-    await signUpVerified({ name: "Cora Customer", email: customerEmail, password: PASSWORD });
-    const asCustomer = await inviteStaffAction({ name: "Cora", email: customerEmail, role: "counter" });
-    expect(asCustomer).toMatchObject({ ok: false, error: { code: "conflict" } });
-    if (asCustomer.ok) return;
-    expect(asCustomer.error.fields?.email).toMatch(/customer account/);
-    // The customer is still a customer.
-    const em = await getEm();
-    expect((await em.findOneOrFail(User, { email: customerEmail })).role).toBe("customer");
+  dbTest(
+    "refuses, naming the e-mail field: a customer's account, a staff member, a pending invitation",
+    async () => {
+      session.cookie = owner.cookie;
+      const customerEmail = uniqueEmail("customer");
+      await signUpVerified({ name: "Cora Customer", email: customerEmail, password: PASSWORD });
+      const asCustomer = await inviteStaffAction({ name: "Cora", email: customerEmail, role: "counter" });
+      expect(asCustomer).toMatchObject({ ok: false, error: { code: "conflict" } });
+      if (asCustomer.ok) return;
+      expect(asCustomer.error.fields?.email).toMatch(/customer account/);
+      // The customer is still a customer.
+      const em = await getEm();
+      expect((await em.findOneOrFail(User, { email: customerEmail })).role).toBe("customer");
 
-    const counter = await staffMember("counter", "Kit Counter");
-    const asStaff = await inviteStaffAction({ name: "Kit", email: counter.email.toUpperCase(), role: "owner" });
-    expect(asStaff).toMatchObject({ ok: false, error: { code: "conflict" } });
-    if (!asStaff.ok) expect(asStaff.error.fields?.email).toMatch(/already on the staff/);
+      const counter = await staffMember("counter", "Kit Counter");
+      const asStaff = await inviteStaffAction({
+        name: "Kit",
+        email: counter.email.toUpperCase(),
+        role: "owner",
+      });
+      expect(asStaff).toMatchObject({ ok: false, error: { code: "conflict" } });
+      if (!asStaff.ok) expect(asStaff.error.fields?.email).toMatch(/already on the staff/);
 
-    const email = uniqueEmail("twice");
-    expect((await inviteStaffAction({ name: "Tam Twice", email, role: "floor" })).ok).toBe(true);
-    const twice = await inviteStaffAction({ name: "Tam Twice", email, role: "floor" });
-    expect(twice).toMatchObject({ ok: false, error: { code: "conflict" } });
-    if (!twice.ok) expect(twice.error.fields?.email).toMatch(/already pending/);
+      const email = uniqueEmail("twice");
+      expect((await inviteStaffAction({ name: "Tam Twice", email, role: "floor" })).ok).toBe(true);
+      const twice = await inviteStaffAction({ name: "Tam Twice", email, role: "floor" });
+      expect(twice).toMatchObject({ ok: false, error: { code: "conflict" } });
+      if (!twice.ok) expect(twice.error.fields?.email).toMatch(/already pending/);
 
-    const bad = await inviteStaffAction({ name: "", email: "not-an-address", role: "customer" });
-    expect(bad).toMatchObject({ ok: false, error: { code: "invalid" } });
-    if (!bad.ok) expect(Object.keys(bad.error.fields ?? {}).sort()).toEqual(["email", "name", "role"]);
-  });
+      const bad = await inviteStaffAction({ name: "", email: "not-an-address", role: "customer" });
+      expect(bad).toMatchObject({ ok: false, error: { code: "invalid" } });
+      if (!bad.ok) expect(Object.keys(bad.error.fields ?? {}).sort()).toEqual(["email", "name", "role"]);
+    },
+  );
 
   dbTest("the accept endpoint refuses bad input (422 naming fields) and other sites (403)", async () => {
     const bad = await acceptInvite({ token: "x".repeat(30), name: "A", password: "short" });
@@ -219,61 +228,78 @@ describe("roles and deactivation", () => {
     // The same session now has the counter's rights, not the floor's.
     expect(await authorize(null, new Headers({ cookie: floor.cookie }))).toMatchObject({ role: "counter" });
     const bad = await changeStaffRoleAction({ userId: floor.id, role: "customer" });
-    expect(bad).toMatchObject({ ok: false, error: { code: "invalid", fields: { role: expect.any(String) } } });
+    expect(bad).toMatchObject({
+      ok: false,
+      error: { code: "invalid", fields: { role: expect.any(String) } },
+    });
     const notUuid = await changeStaffRoleAction({ userId: "nobody", role: "floor" });
-    expect(notUuid).toMatchObject({ ok: false, error: { code: "invalid", fields: { userId: expect.any(String) } } });
+    expect(notUuid).toMatchObject({
+      ok: false,
+      error: { code: "invalid", fields: { userId: expect.any(String) } },
+    });
     const missing = await changeStaffRoleAction({ userId: crypto.randomUUID(), role: "floor" });
     expect(missing).toMatchObject({ ok: false, error: { code: "not_found" } });
   });
 
-  dbTest("deactivation ends the sessions and refuses sign-in clearly; reactivation lets them back", async () => {
-    session.cookie = owner.cookie;
-    const counter = await staffMember("counter");
-    const em = await getEm();
-    expect(await em.count(Session, { user: counter.id })).toBe(1);
+  dbTest(
+    "deactivation ends the sessions and refuses sign-in clearly; reactivation lets them back",
+    async () => {
+      session.cookie = owner.cookie;
+      const counter = await staffMember("counter");
+      const em = await getEm();
+      expect(await em.count(Session, { user: counter.id })).toBe(1);
 
-    const res = await setStaffActiveAction({ userId: counter.id, active: false });
-    expect(res).toMatchObject({ ok: true, data: { active: false, changed: true, sessionsRevoked: 1 } });
-    expect(await em.count(Session, { user: counter.id })).toBe(0);
-    await expect(authorize(null, new Headers({ cookie: counter.cookie }))).rejects.toMatchObject({
-      status: 401,
-    });
-    const [audit] = await auditOf(counter.id, "staff.deactivate");
-    expect(audit?.actor?.id).toBe(owner.id);
-    expect(audit?.details).toMatchObject({ before: { active: true }, after: { active: false } });
+      const res = await setStaffActiveAction({ userId: counter.id, active: false });
+      expect(res).toMatchObject({ ok: true, data: { active: false, changed: true, sessionsRevoked: 1 } });
+      expect(await em.count(Session, { user: counter.id })).toBe(0);
+      await expect(authorize(null, new Headers({ cookie: counter.cookie }))).rejects.toMatchObject({
+        status: 401,
+      });
+      const [audit] = await auditOf(counter.id, "staff.deactivate");
+      expect(audit?.actor?.id).toBe(owner.id);
+      expect(audit?.details).toMatchObject({ before: { active: true }, after: { active: false } });
 
-    // The right password: refused with its own reason, and no session made.
-    const direct = await authRequest("/sign-in/email", { email: counter.email, password: PASSWORD });
-    expect(direct.status).toBe(403);
-    expect(await direct.json()).toMatchObject({ code: "ACCOUNT_DEACTIVATED" });
-    expect(await em.count(Session, { user: counter.id })).toBe(0);
-    // The sign-in form's own route sends them back with the message.
-    const form = await signInPost(
-      new NextRequest(`${appUrl()}/api/sign-in`, {
-        method: "POST",
-        headers: { "content-type": "application/x-www-form-urlencoded", origin: appUrl() },
-        body: new URLSearchParams({ email: counter.email, password: PASSWORD }).toString(),
-      }),
-    );
-    expect(form.status).toBe(303);
-    expect(form.headers.get("location")).toMatch(/^\/sign-in\?error=deactivated/);
-    // A wrong password learns nothing more than for anyone else.
-    const wrong = await authRequest("/sign-in/email", { email: counter.email, password: "wrong-password-1" });
-    expect(wrong.status).toBe(401);
+      // The right password: refused with its own reason, and no session made.
+      const direct = await authRequest("/sign-in/email", { email: counter.email, password: PASSWORD });
+      expect(direct.status).toBe(403);
+      expect(await direct.json()).toMatchObject({ code: "ACCOUNT_DEACTIVATED" });
+      expect(await em.count(Session, { user: counter.id })).toBe(0);
+      // The sign-in form's own route sends them back with the message.
+      const form = await signInPost(
+        new NextRequest(`${appUrl()}/api/sign-in`, {
+          method: "POST",
+          headers: { "content-type": "application/x-www-form-urlencoded", origin: appUrl() },
+          body: new URLSearchParams({ email: counter.email, password: PASSWORD }).toString(),
+        }),
+      );
+      expect(form.status).toBe(303);
+      expect(form.headers.get("location")).toMatch(/^\/sign-in\?error=deactivated/);
+      // A wrong password learns nothing more than for anyone else.
+      const wrong = await authRequest("/sign-in/email", {
+        email: counter.email,
+        password: "wrong-password-1",
+      });
+      expect(wrong.status).toBe(401);
 
-    const back = await setStaffActiveAction({ userId: counter.id, active: true });
-    expect(back).toMatchObject({ ok: true, data: { active: true, changed: true } });
-    expect((await auditOf(counter.id, "staff.reactivate"))[0]?.details).toMatchObject({
-      before: { active: false },
-      after: { active: true },
-    });
-    expect((await authRequest("/sign-in/email", { email: counter.email, password: PASSWORD })).status).toBe(200);
-  });
+      const back = await setStaffActiveAction({ userId: counter.id, active: true });
+      expect(back).toMatchObject({ ok: true, data: { active: true, changed: true } });
+      expect((await auditOf(counter.id, "staff.reactivate"))[0]?.details).toMatchObject({
+        before: { active: false },
+        after: { active: true },
+      });
+      expect((await authRequest("/sign-in/email", { email: counter.email, password: PASSWORD })).status).toBe(
+        200,
+      );
+    },
+  );
 
   dbTest("an owner can neither change their own role nor deactivate themselves", async () => {
     session.cookie = owner.cookie;
     const own = await changeStaffRoleAction({ userId: owner.id, role: "counter" });
-    expect(own).toMatchObject({ ok: false, error: { code: "forbidden", fields: { role: expect.any(String) } } });
+    expect(own).toMatchObject({
+      ok: false,
+      error: { code: "forbidden", fields: { role: expect.any(String) } },
+    });
     const off = await setStaffActiveAction({ userId: owner.id, active: false });
     expect(off).toMatchObject({ ok: false, error: { code: "forbidden" } });
     const em = await getEm();
@@ -391,9 +417,17 @@ describe("only owners manage staff", () => {
   dbTest("counter, floor, customer and anonymous callers are refused every staff action", async () => {
     const target = await staffMember("floor");
     const customerEmail = uniqueEmail("cust");
-    const customerCookie = await signUpVerified({ name: "Cus Tomer", email: customerEmail, password: PASSWORD });
+    const customerCookie = await signUpVerified({
+      name: "Cus Tomer",
+      email: customerEmail,
+      password: PASSWORD,
+    });
     session.cookie = owner.cookie;
-    const invited = await inviteStaffAction({ name: "Pending Person", email: uniqueEmail("p"), role: "floor" });
+    const invited = await inviteStaffAction({
+      name: "Pending Person",
+      email: uniqueEmail("p"),
+      role: "floor",
+    });
     if (!invited.ok) throw new Error(invited.error.message);
     const callers = {
       counter: (await staffMember("counter")).cookie,

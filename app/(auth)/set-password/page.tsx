@@ -43,8 +43,8 @@ export default async function SetPasswordPage({ searchParams }: PageProps<"/set-
     <div className="card p-6 md:p-8">
       <h1 className="text-2xl font-bold">Choose your password</h1>
       <p className="mt-1 mb-6 text-sm text-ink-muted">
-        You are invited to the staff as <strong className="text-ink">{ROLE_LABEL[invitation.role]}</strong>{" "}
-        ({ROLE_DUTIES[invitation.role]}). The link works once.
+        You are invited to the staff as <strong className="text-ink">{ROLE_LABEL[invitation.role]}</strong> (
+        {ROLE_DUTIES[invitation.role]}). The link works once.
       </p>
       <AcceptStaffInviteForm token={token} name={invitation.name} email={invitation.email} />
     </div>

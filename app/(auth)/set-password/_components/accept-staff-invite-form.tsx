@@ -12,7 +12,15 @@ interface ServerError {
 }
 
 /** The invitee confirms their name and chooses a password; on success they land on their role's home. */
-export function AcceptStaffInviteForm({ token, name, email }: { token: string; name: string; email: string }) {
+export function AcceptStaffInviteForm({
+  token,
+  name,
+  email,
+}: {
+  token: string;
+  name: string;
+  email: string;
+}) {
   const [formError, setFormError] = useState<string | null>(null);
   const {
     register,

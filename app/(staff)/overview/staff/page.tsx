@@ -78,7 +78,7 @@ export default async function StaffPage() {
             <PendingInvitations invitations={invitationViews} />
           </section>
         </div>
-        <section className="card h-fit p-5" aria-labelledby="new-staff">
+        <section className="h-fit card p-5" aria-labelledby="new-staff">
           <h2 id="new-staff" className="text-lg font-semibold">
             Invite a staff member
           </h2>

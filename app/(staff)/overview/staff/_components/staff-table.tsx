@@ -87,11 +87,7 @@ export function StaffTable({ members, roles }: { members: StaffMemberView[]; rol
     ) : (
       <div className="flex flex-wrap justify-end gap-2">
         {m.active && (
-          <RolePicker
-            member={m}
-            roles={roles}
-            onPick={(role) => open({ kind: "role", member: m, role })}
-          />
+          <RolePicker member={m} roles={roles} onPick={(role) => open({ kind: "role", member: m, role })} />
         )}
         <button
           type="button"
