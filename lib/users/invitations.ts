@@ -318,7 +318,11 @@ export async function acceptStaffInvitation(
     if (!invitation || state) throw new AppError("not_found", closedInvitationMessage(state ?? "unknown"));
     const existing = await accountWithEmail(em, invitation.email);
     if (refusalFor(existing)) {
-      throw new AppError("conflict", "An account with this e-mail already exists. Sign in instead.");
+      // Someone made an account with this address after the invitation was sent.
+      throw new AppError(
+        "conflict",
+        "An account with this e-mail already exists, so this invitation cannot make another. Ask the shop's owner.",
+      );
     }
     invitation.acceptedAt = new Date();
     return { id: invitation.id, email: invitation.email, role: invitation.role, squatter: existing?.id };

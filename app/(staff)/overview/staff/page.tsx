@@ -4,7 +4,7 @@ import { requirePermission } from "@/lib/auth/guard";
 import { isStaffRole, STAFF_ROLES } from "@/lib/auth/roles";
 import { ROLE_LABEL } from "@/lib/navigation";
 import { listStaff } from "@/lib/users/staff";
-import { listOpenInvitations, ROLE_DUTIES } from "@/lib/users/invitations";
+import { listOpenInvitations } from "@/lib/users/invitations";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
 import { InviteStaffForm } from "./_components/invite-staff-form";
@@ -13,9 +13,16 @@ import { StaffTable, type StaffMemberView } from "./_components/staff-table";
 
 export const metadata: Metadata = { title: "Staff" };
 
+/** What each role may do, short enough for the role picker on a phone. */
+const ROLE_SHORT = {
+  counter: "orders, payments",
+  floor: "scans, measurements",
+  owner: "everything",
+} as const;
+
 // Times as the order timeline shows them (UTC, the server's clock).
 const when = (iso: string) =>
-  new Date(iso).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
+  `${new Date(iso).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" })} UTC`;
 const day = (iso: string) =>
   new Date(iso).toLocaleDateString("en-US", { dateStyle: "medium", timeZone: "UTC" });
 
@@ -86,7 +93,7 @@ export default async function StaffPage() {
             They get an e-mail with a link to choose their own password (valid seven days, once).
           </p>
           <InviteStaffForm
-            roles={STAFF_ROLES.map((r) => ({ value: r, label: `${ROLE_LABEL[r]} — ${ROLE_DUTIES[r]}` }))}
+            roles={STAFF_ROLES.map((r) => ({ value: r, label: `${ROLE_LABEL[r]} — ${ROLE_SHORT[r]}` }))}
           />
         </section>
       </div>

@@ -85,7 +85,7 @@ export function StaffTable({ members, roles }: { members: StaffMemberView[]; rol
     m.isSelf ? (
       <span className="text-xs text-ink-muted">Your own account</span>
     ) : (
-      <div className="flex flex-wrap justify-end gap-2">
+      <div className="flex flex-wrap justify-end gap-2 md:flex-nowrap">
         {m.active && (
           <RolePicker member={m} roles={roles} onPick={(role) => open({ kind: "role", member: m, role })} />
         )}
@@ -144,7 +144,7 @@ export function StaffTable({ members, roles }: { members: StaffMemberView[]; rol
         >
           {members.map((m) => (
             <tr key={m.id} className={m.active ? undefined : "text-ink-muted"}>
-              <td className={`${CELL} font-medium`}>
+              <td className={`${CELL} font-medium whitespace-nowrap`}>
                 {m.name} {m.isSelf && <span className="text-xs font-normal text-ink-muted">(you)</span>}
               </td>
               <td className={CELL}>{m.email}</td>
