@@ -21,6 +21,7 @@ import { WebhookEvent } from "./webhook-event.entity";
 import { WorkOrder } from "./work-order.entity";
 import { WorkOrderStep } from "./work-order-step.entity";
 import { StepRecord } from "./step-record.entity";
+import { StaffInvitation } from "./staff-invitation.entity";
 
 export {
   Account,
@@ -46,6 +47,7 @@ export {
   WorkOrder,
   WorkOrderStep,
   StepRecord,
+  StaffInvitation,
 };
 export type { OrderStatus, PaymentState } from "./order.entity";
 export type { OrderEventKind } from "./order-event.entity";
@@ -82,4 +84,5 @@ export const entities = [
   WorkOrder,
   WorkOrderStep,
   StepRecord,
+  StaffInvitation,
 ];

@@ -22,6 +22,14 @@ export class User {
   @Enum({ items: () => ROLES, nativeEnumName: "user_role", default: "customer" })
   role: Role = "customer";
 
+  /** Set by an owner: no sign-in, no sessions (lib/users/staff.ts). */
+  @Property({ type: "Date", nullable: true })
+  deactivatedAt?: Date | null;
+
+  /** The newest session's start (lib/auth/server.ts), for the staff table. */
+  @Property({ type: "Date", nullable: true })
+  lastSignInAt?: Date | null;
+
   @Property({ type: "Date", defaultRaw: "now()" })
   createdAt: Date = new Date();
 

@@ -1,5 +1,5 @@
-// `npm run owner:create -- EMAIL [NAME]` — makes the shop's first owner and prints a one-time link
-// to choose the password. Needs the app's DATABASE_URL and APP_URL; refuses when an owner exists.
+// `npm run owner:create -- EMAIL [NAME]` — invites the shop's first owner and prints a one-time link
+// to choose the password (the account is made when it is used). Needs the app's DATABASE_URL and APP_URL; refuses when an owner exists.
 import "reflect-metadata";
 import { getOrm } from "@/lib/db/orm";
 import { createFirstOwner } from "@/lib/auth/first-owner";
@@ -13,7 +13,7 @@ async function main() {
   try {
     const { link, expiresAt } = await createFirstOwner(email, name.join(" "));
     console.log(
-      `Owner ${email.toLowerCase()} created. Open this link to choose the password (once, until ${expiresAt.toISOString()}):`,
+      `Owner ${email.toLowerCase()} invited. Open this link to choose the password and sign in (once, until ${expiresAt.toISOString()}):`,
     );
     console.log(link);
     return 0;

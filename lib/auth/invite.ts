@@ -1,18 +1,17 @@
-import { createHash, randomBytes } from "node:crypto";
 import { Customer } from "@/entities";
 import { recordAudit } from "@/lib/audit";
 import { getEm } from "@/lib/db/orm";
 import { appUrl } from "@/lib/http/app-url";
 import { AppError } from "@/lib/http/errors";
 import { sendAccountEmail } from "./auth-mail";
+import { hashOneTimeToken, isOneTimeTokenShape, newOneTimeToken } from "./one-time-token";
 import type { AcceptInviteBody } from "./schemas";
 import { auth } from "./server";
 
 const INVITE_DAYS = 7;
 
 /** Only a hash is stored, so the token table does not hold working links. */
-const identifierOf = (token: string) =>
-  `customer-invite:${createHash("sha256").update(token).digest("base64url")}`;
+const identifierOf = (token: string) => `customer-invite:${hashOneTimeToken(token)}`;
 
 /**
  * The counter invites a customer it knows (a phone customer, no account yet): a one-time sign-up
@@ -29,9 +28,9 @@ export async function inviteCustomer(customerId: string, actorId: string): Promi
   if (existing?.user.emailVerified) {
     throw new AppError("conflict", "Someone already has an account with this customer's e-mail.");
   }
-  const token = randomBytes(32).toString("base64url");
+  const { token, hash } = newOneTimeToken();
   await ctx.internalAdapter.createVerificationValue({
-    identifier: identifierOf(token),
+    identifier: `customer-invite:${hash}`,
     value: customer.id,
     expiresAt: new Date(Date.now() + INVITE_DAYS * 24 * 3600_000),
   });
@@ -57,7 +56,7 @@ export interface OpenInvite {
 
 /** The customer an unused, unexpired invitation is for; null otherwise. */
 export async function findInvite(token: string): Promise<OpenInvite | null> {
-  if (!/^[A-Za-z0-9_-]{20,200}$/.test(token)) return null;
+  if (!isOneTimeTokenShape(token)) return null;
   const ctx = await auth.$context;
   const row = await ctx.internalAdapter.findVerificationValue(identifierOf(token));
   if (!row || row.expiresAt < new Date()) return null;

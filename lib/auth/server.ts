@@ -28,6 +28,9 @@ const pool = (globalForAuth.yokelineAuthPool ??= new Pool({ connectionString: da
     logger.warn({ code: err.code, message: err.message }, "auth database connection lost"),
 ));
 
+export const ACCOUNT_DEACTIVATED_MESSAGE =
+  "This account has been deactivated. Ask the shop's owner if you need access again.";
+
 /** Sign-in attempts allowed per client and window; a shop setting with a safe default. */
 const signInMax = Number(process.env.AUTH_SIGN_IN_MAX ?? 8);
 
@@ -175,6 +178,30 @@ export const auth = betterAuth({
     }),
   },
   databaseHooks: {
+    session: {
+      create: {
+        // A deactivated account gets no session, whichever way it signs in (lib/users/staff.ts).
+        before: async (session) => {
+          const { rows } = await pool.query<{ deactivated_at: Date | null }>(
+            "select deactivated_at from app_user where id = $1",
+            [session.userId],
+          );
+          if (rows[0]?.deactivated_at) {
+            throw new APIError("FORBIDDEN", {
+              code: "ACCOUNT_DEACTIVATED",
+              message: ACCOUNT_DEACTIVATED_MESSAGE,
+              error: { code: "forbidden", message: ACCOUNT_DEACTIVATED_MESSAGE },
+            });
+          }
+        },
+        after: async (session) => {
+          await pool.query("update app_user set last_sign_in_at = $2 where id = $1", [
+            session.userId,
+            session.createdAt,
+          ]);
+        },
+      },
+    },
     user: {
       create: {
         after: async (user) => {

@@ -22,6 +22,7 @@ import {
   customerInviteSubject,
   type CustomerInviteProps,
 } from "@/emails/customer-invite";
+import { StaffInviteEmail, staffInviteSubject, type StaffInviteProps } from "@/emails/staff-invite";
 
 /** What each template needs from its caller (the shop's details are added by the outbox). */
 export interface TemplateProps {
@@ -34,6 +35,7 @@ export interface TemplateProps {
   "shaft-shipped": Omit<ShaftShippedProps, "shop">;
   "verify-email": Omit<VerifyEmailProps, "shop">;
   "customer-invite": Omit<CustomerInviteProps, "shop">;
+  "staff-invite": Omit<StaffInviteProps, "shop">;
 }
 
 export type TemplateName = keyof TemplateProps;
@@ -62,6 +64,7 @@ const TEMPLATES: { [N in TemplateName]: TemplateDefinition<TemplateProps[N]> } =
     element: (p) => createElement(CustomerInviteEmail, p),
     subject: customerInviteSubject,
   },
+  "staff-invite": { element: (p) => createElement(StaffInviteEmail, p), subject: staffInviteSubject },
 };
 
 export const TEMPLATE_NAMES = Object.keys(TEMPLATES) as TemplateName[];

@@ -72,15 +72,18 @@ describe("seed outside demo mode and the first owner", () => {
       expect(made.status, made.stderr).toBe(0);
       const link = made.stdout.match(/http:\/\/127\.0\.0\.1:3999\/set-password\?token=([\w-]+)/);
       expect(link).not.toBeNull();
-      const [owner] = await query<{ role: string; email_verified: boolean }>(
+      // An invitation for the owner role (its token only hashed); the account is made when it is used.
+      const invitations = await query<{ role: string; email: string; token_hash: string }>(
         url,
-        "select role, email_verified from app_user where email = 'boss@shop.example'",
+        "select role, email, token_hash from staff_invitation",
       );
-      expect(owner).toEqual({ role: "owner", email_verified: true });
+      expect(invitations).toEqual([expect.objectContaining({ role: "owner", email: "boss@shop.example" })]);
+      expect(invitations[0]!.token_hash).not.toBe(link![1]);
       const again = run("scripts/owner-create.ts", url, {}, ["second@shop.example"]);
       expect(again.status).toBe(1);
       expect(again.stderr).toMatch(/already exists/);
-      expect(await query(url, "select count(*)::int as n from app_user")).toEqual([{ n: 1 }]);
+      expect(await query(url, "select count(*)::int as n from staff_invitation")).toEqual([{ n: 1 }]);
+      expect(await query(url, "select count(*)::int as n from app_user")).toEqual([{ n: 0 }]);
     },
     120_000,
   );

@@ -98,4 +98,12 @@ export const SAMPLE_PROPS: { [N in TemplateName]: TemplateProps[N] } = {
     customerName: "Marisol Ortiz",
     url: "http://127.0.0.1:3000/sign-up?invite=sample",
   },
+  "staff-invite": {
+    name: "Marisol Ortiz",
+    roleLabel: "Floor",
+    roleDuties: "scans travellers and records measurements",
+    invitedBy: "Dana Whitlock",
+    url: "http://127.0.0.1:3000/set-password?token=sample",
+    expiresOn: "11 December 2026",
+  },
 };

@@ -10,7 +10,7 @@ const shop = {
 };
 
 /** Account e-mails carry no order; they are checked on their own below. */
-const ACCOUNT_TEMPLATES = ["verify-email", "customer-invite"] as const;
+const ACCOUNT_TEMPLATES = ["verify-email", "customer-invite", "staff-invite"] as const;
 const ORDER_TEMPLATES = TEMPLATE_NAMES.filter((n) => !(ACCOUNT_TEMPLATES as readonly string[]).includes(n));
 
 describe("e-mail templates", () => {

@@ -65,6 +65,7 @@ export async function POST(req: NextRequest) {
   }
   if (res.status === 403) {
     const body = (await res.json().catch(() => ({}))) as { code?: string };
+    if (body.code === "ACCOUNT_DEACTIVATED") return back("deactivated");
     if (body.code === "EMAIL_NOT_VERIFIED") {
       return seeOther(`/check-email?${new URLSearchParams({ email: parsed.data.email, from: "sign-in" })}`);
     }

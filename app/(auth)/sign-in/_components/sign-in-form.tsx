@@ -16,6 +16,7 @@ const MESSAGES: Record<string, string> = {
   "too-many": "Too many sign-in attempts. Wait a minute, then try again.",
   invalid: "Enter your e-mail address and password.",
   locked: "Too many wrong passwords for this account. Wait 15 minutes, then try again.",
+  deactivated: "This account has been deactivated. Ask the shop’s owner if you need access again.",
 };
 
 /**

@@ -1,17 +1,63 @@
 import type { Metadata } from "next";
+import { UserPlus } from "lucide-react";
 import { requirePermission } from "@/lib/auth/guard";
-import { listStaff } from "@/lib/users/staff";
+import { isStaffRole, STAFF_ROLES } from "@/lib/auth/roles";
 import { ROLE_LABEL } from "@/lib/navigation";
-import { isRole } from "@/lib/auth/roles";
-import { CELL, TableCard } from "@/components/ui/table-card";
+import { listStaff } from "@/lib/users/staff";
+import { listOpenInvitations } from "@/lib/users/invitations";
 import { PageHeader } from "@/components/ui/page-header";
-import { CreateStaffForm } from "./_components/create-staff-form";
+import { EmptyState } from "@/components/ui/empty-state";
+import { InviteStaffForm } from "./_components/invite-staff-form";
+import { PendingInvitations, type InvitationView } from "./_components/pending-invitations";
+import { StaffTable, type StaffMemberView } from "./_components/staff-table";
 
 export const metadata: Metadata = { title: "Staff" };
 
+/** What each role may do, short enough for the role picker on a phone. */
+const ROLE_SHORT = {
+  counter: "orders, payments",
+  floor: "scans, measurements",
+  owner: "everything",
+} as const;
+
+// Times as the order timeline shows them (UTC, the server's clock).
+const when = (iso: string) =>
+  `${new Date(iso).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" })} UTC`;
+const day = (iso: string) =>
+  new Date(iso).toLocaleDateString("en-US", { dateStyle: "medium", timeZone: "UTC" });
+
 export default async function StaffPage() {
-  await requirePermission("staff.manage", "/overview/staff");
-  const staff = await listStaff();
+  const me = await requirePermission("staff.manage", "/overview/staff");
+  const [staff, invitations] = await Promise.all([listStaff(), listOpenInvitations()]);
+  const roles = STAFF_ROLES.map((r) => ({ value: r, label: ROLE_LABEL[r] }));
+  const members: StaffMemberView[] = staff.flatMap((s) =>
+    isStaffRole(s.role)
+      ? [
+          {
+            id: s.id,
+            name: s.name,
+            email: s.email,
+            role: s.role,
+            roleLabel: ROLE_LABEL[s.role],
+            active: !s.deactivatedAt,
+            lastSignIn: s.lastSignInAt ? when(s.lastSignInAt) : null,
+            isSelf: s.id === me.id,
+          },
+        ]
+      : [],
+  );
+  const invitationViews: InvitationView[] = invitations.map((i) => ({
+    id: i.id,
+    name: i.name,
+    email: i.email,
+    roleLabel: ROLE_LABEL[i.role],
+    sent: day(i.sentAt),
+    sendCount: i.sendCount,
+    expires: day(i.expiresAt),
+    expired: i.expired,
+    invitedBy: i.invitedBy,
+  }));
+
   return (
     <>
       <PageHeader
@@ -19,22 +65,36 @@ export default async function StaffPage() {
         description="Counter, floor and owner accounts. Customers create their own."
       />
       <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
-        <TableCard caption="Staff accounts" headings={["Name", "Role", "E-mail", "Since"]}>
-          {staff.map((s) => (
-            <tr key={s.id}>
-              <td className={`${CELL} font-medium`}>{s.name}</td>
-              <td className={CELL}>{isRole(s.role) ? ROLE_LABEL[s.role] : s.role}</td>
-              <td className={CELL}>{s.email}</td>
-              <td className={CELL}>{s.createdAt.slice(0, 10)}</td>
-            </tr>
-          ))}
-        </TableCard>
-        <section className="card p-5" aria-labelledby="new-staff">
+        <div className="min-w-0 space-y-8">
+          <section aria-labelledby="staff-accounts">
+            <h2 id="staff-accounts" className="mb-3 text-lg font-semibold">
+              Accounts
+            </h2>
+            {members.length === 0 ? (
+              <EmptyState icon={UserPlus} title="No staff yet">
+                Invite the people who take orders and work the floor.
+              </EmptyState>
+            ) : (
+              <StaffTable members={members} roles={roles} />
+            )}
+          </section>
+          <section aria-labelledby="staff-invitations">
+            <h2 id="staff-invitations" className="mb-3 text-lg font-semibold">
+              Pending invitations
+            </h2>
+            <PendingInvitations invitations={invitationViews} />
+          </section>
+        </div>
+        <section className="h-fit card p-5" aria-labelledby="new-staff">
           <h2 id="new-staff" className="text-lg font-semibold">
-            Add a staff member
+            Invite a staff member
           </h2>
-          <p className="field-hint mb-4">Give them the password in person; they sign in with their e-mail.</p>
-          <CreateStaffForm />
+          <p className="field-hint mb-4">
+            They get an e-mail with a link to choose their own password (valid seven days, once).
+          </p>
+          <InviteStaffForm
+            roles={STAFF_ROLES.map((r) => ({ value: r, label: `${ROLE_LABEL[r]} — ${ROLE_SHORT[r]}` }))}
+          />
         </section>
       </div>
     </>

@@ -1,0 +1,77 @@
+"use client";
+import { useEffect, useId, useRef } from "react";
+
+/**
+ * A modal confirmation on the browser's own <dialog>: focus moves into it, Escape cancels, and
+ * focus returns to the button that opened it.
+ */
+export function ConfirmDialog({
+  open,
+  title,
+  children,
+  confirmLabel,
+  tone = "primary",
+  busy = false,
+  error,
+  onConfirm,
+  onClose,
+}: {
+  open: boolean;
+  title: string;
+  children?: React.ReactNode;
+  confirmLabel: string;
+  tone?: "primary" | "danger";
+  busy?: boolean;
+  error?: string | null;
+  onConfirm: () => void;
+  onClose: () => void;
+}) {
+  const ref = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
+  useEffect(() => {
+    const dialog = ref.current;
+    if (!dialog) return;
+    if (open && !dialog.open) dialog.showModal();
+    if (!open && dialog.open) dialog.close();
+  }, [open]);
+
+  return (
+    <dialog
+      ref={ref}
+      aria-labelledby={titleId}
+      onClose={onClose}
+      className="m-auto w-[min(28rem,calc(100vw-2rem))] rounded-card border border-line bg-paper-raised p-0 text-ink shadow-card backdrop:bg-ink/40"
+    >
+      <form
+        method="dialog"
+        className="space-y-4 p-5"
+        onSubmit={(e) => {
+          e.preventDefault();
+          onConfirm();
+        }}
+      >
+        <h2 id={titleId} className="text-lg font-semibold">
+          {title}
+        </h2>
+        {children && <div className="space-y-3 text-sm">{children}</div>}
+        {error && (
+          <p role="alert" className="rounded-md border border-fail/30 bg-fail-soft p-3 text-sm text-fail">
+            {error}
+          </p>
+        )}
+        <div className="flex flex-wrap justify-end gap-2">
+          <button type="button" className="btn-quiet" onClick={onClose}>
+            Cancel
+          </button>
+          <button
+            type="submit"
+            className={tone === "danger" ? "btn bg-fail text-white hover:opacity-90" : "btn-primary"}
+            disabled={busy}
+          >
+            {busy ? "Working…" : confirmLabel}
+          </button>
+        </div>
+      </form>
+    </dialog>
+  );
+}
