@@ -2,7 +2,13 @@
  * Between what is stored (the catalogue, limit overrides, the price book, the floor document) and
  * what the owner edits (every limit resolved with its value and source). Pure.
  */
-import { defaultSettings, resolveSettings, type Catalogue, type Limit, type SettingKey } from "@/lib/driveline";
+import {
+  defaultSettings,
+  resolveSettings,
+  type Catalogue,
+  type Limit,
+  type SettingKey,
+} from "@/lib/driveline";
 import { priceBookSchema, type PriceBook } from "@/lib/pricing/price-book";
 import {
   defaultFloorLimits,
@@ -41,12 +47,16 @@ export function toEditable(stored: StoredShopConfig): ShopConfigDocument {
 }
 
 /** Only what differs from a default (value or source) is kept as an override. */
-function overrides<K extends string>(all: Record<K, Limit>, defaults: Record<K, Limit>): Partial<Record<K, Limit>> {
+function overrides<K extends string>(
+  all: Record<K, Limit>,
+  defaults: Record<K, Limit>,
+): Partial<Record<K, Limit>> {
   const out: Partial<Record<K, Limit>> = {};
   for (const key of Object.keys(all) as K[]) {
     const l = all[key];
     const d = defaults[key];
-    if (!d || l.value !== d.value || l.source.trim() !== d.source) out[key] = { value: l.value, source: l.source.trim() };
+    if (!d || l.value !== d.value || l.source.trim() !== d.source)
+      out[key] = { value: l.value, source: l.source.trim() };
   }
   return out;
 }

@@ -40,7 +40,13 @@ export const LIMIT_META: Record<SettingKey, LimitMeta> = {
     minExclusive: true,
     max: 1,
   },
-  maxEquivalentAngleDeg: { label: "Largest equivalent angle", unit: "°", min: 0, minExclusive: true, max: 20 },
+  maxEquivalentAngleDeg: {
+    label: "Largest equivalent angle",
+    unit: "°",
+    min: 0,
+    minExclusive: true,
+    max: 20,
+  },
   maxCriticalSpeedRatio: {
     label: "Largest service / critical speed",
     unit: "",
@@ -59,7 +65,13 @@ export const LIMIT_META: Record<SettingKey, LimitMeta> = {
   // ISO 21940-11 grades run from G 0.4 to G 4000.
   balanceGradeMmS: { label: "Balance grade G", unit: "mm/s", min: 0.4, max: 4_000 },
   slipOutMinMm: { label: "Slip yoke out at ride height, least", unit: "mm", min: 0, max: 500 },
-  slipOutMaxMm: { label: "Slip yoke out at ride height, most", unit: "mm", min: 0, minExclusive: true, max: 500 },
+  slipOutMaxMm: {
+    label: "Slip yoke out at ride height, most",
+    unit: "mm",
+    min: 0,
+    minExclusive: true,
+    max: 500,
+  },
   slipMinReserveMm: { label: "Spline engagement kept at full droop", unit: "mm", min: 0, max: 500 },
   lengthToleranceMm: {
     label: "Length tolerance after welding, ±",

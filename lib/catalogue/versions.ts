@@ -156,7 +156,7 @@ export async function versionHistory(limit = 20, em?: EntityManager): Promise<Ve
       })
     : [];
   const changesOf = new Map(
-    audits.map((a) => [a.subjectId, ((a.details?.changes as ConfigChange[] | undefined) ?? [])]),
+    audits.map((a) => [a.subjectId, (a.details?.changes as ConfigChange[] | undefined) ?? []]),
   );
   return rows.map((r) => ({
     version: r.version,

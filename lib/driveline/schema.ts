@@ -256,7 +256,8 @@ const sourceText = (message: string) =>
   z.string({ error: message }).refine((t) => t.trim().length > 0, { error: message });
 
 /** The message when a limit or a material's figures do not say where they come from. */
-export const SOURCE_REQUIRED = "must name its source (a standard, a handbook, the maker's sheet or “common shop practice”)";
+export const SOURCE_REQUIRED =
+  "must name its source (a standard, a handbook, the maker's sheet or “common shop practice”)";
 
 export const limitSchema = object({
   value: z.number({ error: NUMBER }),
@@ -376,7 +377,9 @@ export const catalogueSchema = object({
   id: id(),
   name: name(),
   demo: z.boolean({ error: "must be true or false" }),
-  materials: z.array(materialEntrySchema, { error: "must be a list" }).min(1, { error: "must hold at least one material" }),
+  materials: z
+    .array(materialEntrySchema, { error: "must be a list" })
+    .min(1, { error: "must hold at least one material" }),
   tubes: z.array(tubeEntrySchema, { error: "must be a list" }),
   endFittings: z.array(endFittingEntrySchema, { error: "must be a list" }),
   jointSeries: z.array(jointSeriesEntrySchema, { error: "must be a list" }),

@@ -43,7 +43,9 @@ export const priceBookSchema = z.object({
     .min(0, { error: "must be between 0 and 120 working days" })
     .max(120, { error: "must be between 0 and 120 working days" }),
   /** When the customer leaves the tube to Yokeline: the cheapest or the lightest that passes every check. */
-  tubePreference: z.enum(["cheapest", "lightest"], { error: "must be cheapest or lightest" }).default("cheapest"),
+  tubePreference: z
+    .enum(["cheapest", "lightest"], { error: "must be cheapest or lightest" })
+    .default("cheapest"),
   /** Share of the deposit the shop keeps when an order is cancelled before release (0: all refunded). */
   cancellationFeePercent: wholePercent(0, 100).default(0),
 });

@@ -1,6 +1,12 @@
 import { ShopConfig } from "@/entities";
 import { getEm } from "@/lib/db/orm";
-import { defaultCatalogue, resolveSettings, type Catalogue, type Limit, type ShopSettings } from "@/lib/driveline";
+import {
+  defaultCatalogue,
+  resolveSettings,
+  type Catalogue,
+  type Limit,
+  type ShopSettings,
+} from "@/lib/driveline";
 import { defaultPriceBook, priceBookSchema, type PriceBook } from "@/lib/pricing/price-book";
 import { resolveFloorSettings, type FloorSettings } from "@/lib/traveller/settings";
 

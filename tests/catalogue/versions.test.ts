@@ -76,69 +76,70 @@ describe("the owner's catalogue and price book editor", () => {
     const owner = await staffCookie("owner");
     const { version, doc } = await editable();
     const tube = doc.catalogue.tubes[3]!;
-    const cases: { name: string; change: (d: ShopConfigDocument) => void; field: string; message: RegExp }[] = [
-      {
-        name: "a tube whose wall is half its diameter",
-        change: (d) => (d.catalogue.tubes[3]!.wallMm = tube.odMm / 2),
-        field: "catalogue.tubes.3.wallMm",
-        message: /less than half the outside diameter/,
-      },
-      {
-        name: "a negative tube price",
-        change: (d) => (d.catalogue.tubes[0]!.pricePerMetreCents = -100),
-        field: "catalogue.tubes.0.pricePerMetreCents",
-        message: /negative/,
-      },
-      {
-        name: "a negative labour price",
-        change: (d) => (d.priceBook.labourPerShaftCents = -1),
-        field: "priceBook.labourPerShaftCents",
-        message: /negative/,
-      },
-      {
-        name: "a limit without a source",
-        change: (d) => (d.settings.balanceGradeMmS = { value: 6.3, source: "  " }),
-        field: "settings.balanceGradeMmS.source",
-        message: /source/,
-      },
-      {
-        name: "a floor tolerance without a source",
-        change: (d) => (d.floor.limits.cutLengthToleranceMm.source = ""),
-        field: "floor.limits.cutLengthToleranceMm.source",
-        message: /source/,
-      },
-      {
-        name: "a material's constants without a source",
-        change: (d) => (d.catalogue.materials[0] = { ...d.catalogue.materials[0]!, source: "" }),
-        field: "catalogue.materials.0.source",
-        message: /source/,
-      },
-      {
-        name: "two tubes with one id",
-        change: (d) => (d.catalogue.tubes[2] = { ...d.catalogue.tubes[2]!, id: d.catalogue.tubes[1]!.id }),
-        field: "catalogue.tubes.2.id",
-        message: /unique/,
-      },
-      {
-        name: "a tube of a material that does not exist",
-        change: (d) => (d.catalogue.tubes[1] = { ...d.catalogue.tubes[1]!, materialId: "unobtainium" }),
-        field: "catalogue.tubes.1.materialId",
-        message: /unobtainium/,
-      },
-      {
-        name: "a number that is not finite (NaN reaches JSON as null)",
-        change: (d) => (d.catalogue.endFittings[0]!.massKg = Number.NaN),
-        field: "catalogue.endFittings.0.massKg",
-        message: /number/,
-      },
-      {
-        // ISO 21940-11 grades stop at G 4000.
-        name: "a balance grade past the coarsest ISO 21940-11 grade",
-        change: (d) => (d.settings.balanceGradeMmS.value = 5000),
-        field: "settings.balanceGradeMmS.value",
-        message: /4000/,
-      },
-    ];
+    const cases: { name: string; change: (d: ShopConfigDocument) => void; field: string; message: RegExp }[] =
+      [
+        {
+          name: "a tube whose wall is half its diameter",
+          change: (d) => (d.catalogue.tubes[3]!.wallMm = tube.odMm / 2),
+          field: "catalogue.tubes.3.wallMm",
+          message: /less than half the outside diameter/,
+        },
+        {
+          name: "a negative tube price",
+          change: (d) => (d.catalogue.tubes[0]!.pricePerMetreCents = -100),
+          field: "catalogue.tubes.0.pricePerMetreCents",
+          message: /negative/,
+        },
+        {
+          name: "a negative labour price",
+          change: (d) => (d.priceBook.labourPerShaftCents = -1),
+          field: "priceBook.labourPerShaftCents",
+          message: /negative/,
+        },
+        {
+          name: "a limit without a source",
+          change: (d) => (d.settings.balanceGradeMmS = { value: 6.3, source: "  " }),
+          field: "settings.balanceGradeMmS.source",
+          message: /source/,
+        },
+        {
+          name: "a floor tolerance without a source",
+          change: (d) => (d.floor.limits.cutLengthToleranceMm.source = ""),
+          field: "floor.limits.cutLengthToleranceMm.source",
+          message: /source/,
+        },
+        {
+          name: "a material's constants without a source",
+          change: (d) => (d.catalogue.materials[0] = { ...d.catalogue.materials[0]!, source: "" }),
+          field: "catalogue.materials.0.source",
+          message: /source/,
+        },
+        {
+          name: "two tubes with one id",
+          change: (d) => (d.catalogue.tubes[2] = { ...d.catalogue.tubes[2]!, id: d.catalogue.tubes[1]!.id }),
+          field: "catalogue.tubes.2.id",
+          message: /unique/,
+        },
+        {
+          name: "a tube of a material that does not exist",
+          change: (d) => (d.catalogue.tubes[1] = { ...d.catalogue.tubes[1]!, materialId: "unobtainium" }),
+          field: "catalogue.tubes.1.materialId",
+          message: /unobtainium/,
+        },
+        {
+          name: "a number that is not finite (NaN reaches JSON as null)",
+          change: (d) => (d.catalogue.endFittings[0]!.massKg = Number.NaN),
+          field: "catalogue.endFittings.0.massKg",
+          message: /number/,
+        },
+        {
+          // ISO 21940-11 grades stop at G 4000.
+          name: "a balance grade past the coarsest ISO 21940-11 grade",
+          change: (d) => (d.settings.balanceGradeMmS.value = 5000),
+          field: "settings.balanceGradeMmS.value",
+          message: /4000/,
+        },
+      ];
     for (const c of cases) {
       const d = structuredClone(doc);
       c.change(d);
@@ -192,12 +193,16 @@ describe("the owner's catalogue and price book editor", () => {
         version: version + 1,
         basedOnVersion: version,
         note: "Steel went up",
-        changes: [{ path: `catalogue.tubes.${tubeId}.pricePerMetreCents`, before: oldPrice, after: newPrice }],
+        changes: [
+          { path: `catalogue.tubes.${tubeId}.pricePerMetreCents`, before: oldPrice, after: newPrice },
+        ],
       });
       // Every version is kept: the starting one and the new one.
       const kept = await check.find(ShopConfigVersion, {}, { orderBy: { version: "asc" } });
       expect(kept.map((v) => v.version)).toEqual(expect.arrayContaining([version, version + 1]));
-      expect(kept.find((v) => v.version === version)!.catalogue.tubes[index]!.pricePerMetreCents).toBe(oldPrice);
+      expect(kept.find((v) => v.version === version)!.catalogue.tubes[index]!.pricePerMetreCents).toBe(
+        oldPrice,
+      );
       expect(kept.find((v) => v.version === version + 1)!.createdByName).toBe("Olive Owner");
 
       // The order keeps what it was priced with.
