@@ -131,10 +131,16 @@ export function describeChange(change: ConfigChange, currency = "USD"): ChangeIn
       : change.after === null && typeof change.before === "object" && change.before !== null
         ? "removed"
         : "changed";
-  return {
-    where: describePath(change.at),
-    before: describeValue(field, change.before, currency),
-    after: describeValue(field, change.after, currency),
-    kind,
+  // A limit's value carries its unit from the limit's own description.
+  const meta =
+    change.at[0] === "settings"
+      ? LIMIT_META[change.at[1] as keyof typeof LIMIT_META]
+      : change.at[0] === "floor" && change.at[1] === "limits"
+        ? FLOOR_LIMIT_META[change.at[2] as keyof typeof FLOOR_LIMIT_META]
+        : undefined;
+  const word = (v: unknown) => {
+    const text = describeValue(field, v, currency);
+    return meta?.unit && field === "value" && typeof v === "number" ? `${text} ${meta.unit}` : text;
   };
+  return { where: describePath(change.at), before: word(change.before), after: word(change.after), kind };
 }

@@ -64,13 +64,15 @@ export default async function CataloguePage({ searchParams }: PageProps<"/overvi
           </a>
         ))}
       </nav>
-      <CatalogueEditor
-        key={version}
-        version={version}
-        document={document}
-        currency={document.priceBook.currency}
-      />
-      <VersionHistory versions={versions} currency={document.priceBook.currency} />
+      <div className="space-y-10 pb-24">
+        <CatalogueEditor
+          key={version}
+          version={version}
+          document={document}
+          currency={document.priceBook.currency}
+        />
+        <VersionHistory versions={versions} currency={document.priceBook.currency} />
+      </div>
     </>
   );
 }

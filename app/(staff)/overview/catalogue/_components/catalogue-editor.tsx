@@ -1,7 +1,7 @@
 "use client";
 import { useEffect, useState } from "react";
 import { useRouter } from "next/navigation";
-import { FormProvider, useForm, type FieldErrors } from "react-hook-form";
+import { FormProvider, useForm, useFormContext, useFormState, type FieldErrors } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Alert } from "@/components/ui/alert";
 import { describeChange, describePath } from "@/lib/catalogue/describe";
@@ -61,7 +61,7 @@ export function CatalogueEditor({
     mode: "onSubmit",
     reValidateMode: "onChange",
   });
-  const { formState, handleSubmit, setError, setFocus, getValues } = form;
+  const { handleSubmit, setError } = form;
   const [problem, setProblem] = useState<Problem>(null);
   const [pending, setPending] = useState<{ doc: ShopConfigDocument; changes: ConfigChange[] } | null>(null);
   const [note, setNote] = useState("");
@@ -73,21 +73,6 @@ export function CatalogueEditor({
     close: () => (document.getElementById(DIALOG_ID) as HTMLDialogElement | null)?.close(),
   };
   const focusSummary = () => setTimeout(() => document.getElementById(SUMMARY_ID)?.focus(), 0);
-
-  // Leaving with unsaved changes asks first.
-  useEffect(() => {
-    if (!formState.isDirty) return;
-    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
-    window.addEventListener("beforeunload", warn);
-    return () => window.removeEventListener("beforeunload", warn);
-  }, [formState.isDirty]);
-
-  const rowName = (listPath: string, index: number) => {
-    const row = getValues(`${listPath}.${index}` as Path) as { id?: string; code?: string } | undefined;
-    const name = row?.id || row?.code;
-    return name ? String(name) : `row ${index + 1}`;
-  };
-  const errorList = flatten(formState.errors as FieldErrors);
 
   const review = handleSubmit(
     (doc) => {
@@ -105,11 +90,8 @@ export function CatalogueEditor({
       setNoteError(null);
       dialog.open();
     },
-    () => {
-      setProblem(null);
-      // Let the list render, then bring it into view for keyboard and screen-reader users.
-      focusSummary();
-    },
+    // The error summary brings itself into view (see ErrorSummary).
+    () => setProblem(null),
   );
 
   async function save() {
@@ -170,34 +152,14 @@ export function CatalogueEditor({
 
   return (
     <FormProvider {...form}>
-      <form onSubmit={review} noValidate className="space-y-10 pb-24">
+      <form onSubmit={review} noValidate className="space-y-10">
         <div id={SUMMARY_ID} tabIndex={-1} className="space-y-3 outline-none">
           {problem && (
             <Alert tone="error" title={problem.title}>
               {problem.text}
             </Alert>
           )}
-          {errorList.length > 0 && (
-            <Alert
-              tone="error"
-              title={`${errorList.length} ${errorList.length === 1 ? "field needs" : "fields need"} fixing before saving`}
-            >
-              <ul className="mt-1 max-h-48 list-disc space-y-0.5 overflow-y-auto pl-5">
-                {errorList.slice(0, 50).map((e) => (
-                  <li key={e.at.join(".")}>
-                    <button
-                      type="button"
-                      className="text-left underline underline-offset-2"
-                      onClick={() => setFocus(e.at.join(".") as Path)}
-                    >
-                      {describePath(e.at, rowName)}
-                    </button>
-                    : {e.message}
-                  </li>
-                ))}
-              </ul>
-            </Alert>
-          )}
+          <ErrorSummary />
         </div>
 
         <PolicySection currency={currency} />
@@ -208,17 +170,7 @@ export function CatalogueEditor({
         <LimitsSection />
         <FloorSection />
 
-        <div className="no-print fixed inset-x-0 bottom-0 z-20 border-t border-line bg-paper-raised/95 backdrop-blur">
-          <div className="mx-auto flex max-w-7xl flex-wrap items-center justify-between gap-3 px-4 py-3">
-            <p className="text-sm text-ink-muted" aria-live="polite">
-              Editing version {version}.{" "}
-              {formState.isDirty ? <strong className="text-ink">Unsaved changes.</strong> : "No changes yet."}
-            </p>
-            <button type="submit" className="btn-primary" disabled={saving}>
-              Save as new version…
-            </button>
-          </div>
-        </div>
+        <SaveBar version={version} saving={saving} />
       </form>
 
       <dialog
@@ -308,5 +260,70 @@ export function CatalogueEditor({
         )}
       </dialog>
     </FormProvider>
+  );
+}
+
+/** Every field to fix, each a button that takes the cursor there (its own component: it re-renders alone). */
+function ErrorSummary() {
+  const { control, getValues, setFocus } = useFormContext<ShopConfigDocumentInput>();
+  const { errors, submitCount } = useFormState({ control });
+  const list = flatten(errors as FieldErrors);
+  const shown = list.length > 0;
+  // After a refused save, move to the list for keyboard and screen-reader users.
+  useEffect(() => {
+    if (submitCount > 0 && shown) document.getElementById(SUMMARY_ID)?.focus();
+  }, [submitCount, shown]);
+  if (!shown) return null;
+  const rowName = (listPath: string, index: number) => {
+    const row = getValues(`${listPath}.${index}` as Path) as { id?: string; code?: string } | undefined;
+    const name = row?.id || row?.code;
+    return name ? String(name) : `row ${index + 1}`;
+  };
+  return (
+    <Alert
+      tone="error"
+      title={`${list.length} ${list.length === 1 ? "field needs" : "fields need"} fixing before saving`}
+    >
+      <ul className="mt-1 max-h-48 list-disc space-y-0.5 overflow-y-auto pl-5">
+        {list.slice(0, 50).map((e) => (
+          <li key={e.at.join(".")}>
+            <button
+              type="button"
+              className="text-left underline underline-offset-2"
+              onClick={() => setFocus(e.at.join(".") as Path)}
+            >
+              {describePath(e.at, rowName)}
+            </button>
+            : {e.message}
+          </li>
+        ))}
+      </ul>
+    </Alert>
+  );
+}
+
+/** The bar at the bottom: which version is being edited, whether anything changed, and Save. */
+function SaveBar({ version, saving }: { version: number; saving: boolean }) {
+  const { control } = useFormContext<ShopConfigDocumentInput>();
+  const { isDirty } = useFormState({ control });
+  // Leaving with unsaved changes asks first.
+  useEffect(() => {
+    if (!isDirty) return;
+    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
+    window.addEventListener("beforeunload", warn);
+    return () => window.removeEventListener("beforeunload", warn);
+  }, [isDirty]);
+  return (
+    <div className="no-print fixed inset-x-0 bottom-0 z-20 border-t border-line bg-paper-raised/95 backdrop-blur">
+      <div className="mx-auto flex max-w-7xl flex-wrap items-center justify-between gap-3 px-4 py-3">
+        <p className="text-sm text-ink-muted" aria-live="polite">
+          Editing version {version}.{" "}
+          {isDirty ? <strong className="text-ink">Unsaved changes.</strong> : "No changes yet."}
+        </p>
+        <button type="submit" className="btn-primary" disabled={saving}>
+          Save as new version…
+        </button>
+      </div>
+    </div>
   );
 }

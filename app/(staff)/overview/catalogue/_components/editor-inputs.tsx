@@ -248,10 +248,10 @@ export function LinesInput({ name, label }: { name: Path; label: string }) {
         id={id}
         ref={ref}
         name={fieldName}
-        rows={Math.min(4, Math.max(2, lines.length))}
+        rows={Math.min(5, Math.max(2, lines.length + 1))}
         aria-label={label}
         aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : `${id}-hint`}
+        aria-describedby={error ? `${id}-error` : undefined}
         className={`${CELL_INPUT} min-w-64 text-left`}
         value={text}
         onChange={(e) => {
@@ -265,7 +265,7 @@ export function LinesInput({ name, label }: { name: Path; label: string }) {
         }}
         onBlur={onBlur}
       />
-      <FieldMessage id={id} error={error} hint="One instruction per line, at most 6." />
+      <FieldMessage id={id} error={error} />
     </div>
   );
 }

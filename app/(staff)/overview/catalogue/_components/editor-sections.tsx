@@ -1,6 +1,6 @@
 "use client";
 import { ArrowDown, ArrowUp, Plus, RotateCcw, Trash2 } from "lucide-react";
-import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
+import { get, useFieldArray, useFormContext, useFormState, useWatch } from "react-hook-form";
 import { defaultSettings, mmToIn, type SettingKey } from "@/lib/driveline";
 import { FLOOR_LIMIT_META, LIMIT_META, type LimitMeta } from "@/lib/catalogue/limits";
 import type { ShopConfigDocumentInput } from "@/lib/catalogue/schemas";
@@ -715,8 +715,10 @@ export function FloorSection() {
   const { fields, append, remove, move } = useFieldArray<ShopConfigDocumentInput, "floor.routing">({
     name: "floor.routing",
   });
-  const { formState, getFieldState } = useFormContext<ShopConfigDocumentInput>();
-  const routingError = getFieldState("floor.routing", formState).error;
+  const { control } = useFormContext<ShopConfigDocumentInput>();
+  const { errors } = useFormState({ control, name: "floor.routing" });
+  const routingError = get(errors, "floor.routing") as
+    { message?: string; root?: { message?: string } } | undefined;
   const routingMessage = routingError?.message ?? routingError?.root?.message;
   return (
     <Section
@@ -791,7 +793,7 @@ export function FloorSection() {
           "Code",
           "Kind",
           "Name",
-          "Instructions",
+          "Instructions (one per line, at most 6)",
           { label: "Move or remove", srOnly: true },
         ]}
       >
