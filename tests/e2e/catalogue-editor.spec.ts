@@ -8,6 +8,8 @@ const streetTruck = JSON.parse(readFileSync("examples/street-truck.json", "utf8"
 test("the owner changes a tube's price: a new version with its audit entry; a placed order keeps its total", async ({
   page,
 }) => {
+  // A thousand inputs on one page: give a loaded machine time.
+  test.setTimeout(180_000);
   // The tube Yokeline picks for the README street truck (a demo order is one), and its price in a quote now.
   const report = (await (await page.request.post("/api/designs/evaluate", { data: streetTruck })).json()) as {
     tube: { tubeId: string };

@@ -1,5 +1,5 @@
 "use client";
-import { useEffect, useState } from "react";
+import { memo, useEffect, useState } from "react";
 import { useRouter } from "next/navigation";
 import { FormProvider, useForm, useFormContext, useFormState, type FieldErrors } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -162,13 +162,7 @@ export function CatalogueEditor({
           <ErrorSummary />
         </div>
 
-        <PolicySection currency={currency} />
-        <MaterialsSection />
-        <TubesSection />
-        <FittingsSection />
-        <JointsSection />
-        <LimitsSection />
-        <FloorSection />
+        <Sections currency={currency} />
 
         <SaveBar version={version} saving={saving} />
       </form>
@@ -327,3 +321,21 @@ function SaveBar({ version, saving }: { version: number; saving: boolean }) {
     </div>
   );
 }
+
+/**
+ * The sections, memoised: the editor's own state (the dialog, the note, a problem) changes without
+ * re-rendering a thousand inputs; each input follows its own field through the form's context.
+ */
+const Sections = memo(function Sections({ currency }: { currency: string }) {
+  return (
+    <>
+      <PolicySection currency={currency} />
+      <MaterialsSection />
+      <TubesSection />
+      <FittingsSection />
+      <JointsSection />
+      <LimitsSection />
+      <FloorSection />
+    </>
+  );
+});
