@@ -61,7 +61,7 @@ test("the owner changes a tube's price: a new version with its audit entry; a pl
   await dialog.getByLabel("Note for the history").fill("Steel price list, December");
   await dialog.getByRole("button", { name: `Save version ${version + 1}` }).click();
 
-  await expect(page.getByText(`Saved as version ${version + 1}`)).toBeVisible();
+  await expect(page.getByText(`Saved as version ${version + 1}`)).toBeVisible({ timeout: 45_000 });
   await expect(page.getByText(`Editing version ${version + 1}.`)).toBeVisible();
   const entry = page
     .getByRole("listitem")
