@@ -14,6 +14,7 @@ import { Session } from "./session.entity";
 import { Shop } from "./shop.entity";
 import { SignInFailure } from "./sign-in-failure.entity";
 import { ShopConfig } from "./shop-config.entity";
+import { ShopConfigVersion } from "./shop-config-version.entity";
 import { Upload } from "./upload.entity";
 import { User } from "./user.entity";
 import { Verification } from "./verification.entity";
@@ -39,6 +40,7 @@ export {
   Session,
   Shop,
   ShopConfig,
+  ShopConfigVersion,
   SignInFailure,
   Upload,
   User,
@@ -69,6 +71,7 @@ export const entities = [
   SignInFailure,
   Shop,
   ShopConfig,
+  ShopConfigVersion,
   Customer,
   AuditEvent,
   Design,

@@ -104,6 +104,10 @@ export class Order {
   @Property({ type: "date" })
   promisedDate!: string;
 
+  /** The shop configuration version (catalogue, limits, price book) it was priced and engineered with. */
+  @Property({ type: "integer", nullable: true })
+  configVersion?: number | null;
+
   @Property({ type: "text", nullable: true })
   notes?: string | null;
 

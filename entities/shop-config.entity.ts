@@ -1,5 +1,5 @@
 import { Entity, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
-import type { Catalogue, SettingKey } from "../lib/driveline";
+import type { Catalogue, Limit, SettingKey } from "../lib/driveline";
 import type { PriceBook } from "../lib/pricing/price-book";
 import type { FloorSettingsDocument } from "../lib/traveller/settings";
 
@@ -9,7 +9,7 @@ import type { FloorSettingsDocument } from "../lib/traveller/settings";
  */
 @Entity({ tableName: "shop_config" })
 export class ShopConfig {
-  [OptionalProps]?: "updatedAt" | "settings" | "floor";
+  [OptionalProps]?: "updatedAt" | "settings" | "floor" | "version";
 
   @PrimaryKey({ type: "integer", autoincrement: false })
   id: number = 1;
@@ -19,7 +19,7 @@ export class ShopConfig {
 
   /** Overrides of the engineering limits (missing keys use the reference defaults). */
   @Property({ type: "json" })
-  settings: Partial<Record<SettingKey, number>> = {};
+  settings: Partial<Record<SettingKey, number | Limit>> = {};
 
   @Property({ type: "json" })
   priceBook!: PriceBook;
@@ -27,6 +27,10 @@ export class ShopConfig {
   /** The shop floor's routing, tolerances, paper size and units (lib/traveller/settings.ts fills in missing keys). */
   @Property({ type: "json", defaultRaw: `'{}'` })
   floor: FloorSettingsDocument = {};
+
+  /** The version these documents are (shop_config_version keeps every one; 1 is the starting configuration). */
+  @Property({ type: "integer", default: 1 })
+  version: number = 1;
 
   @Property({ type: "Date", defaultRaw: "now()", onUpdate: () => new Date() })
   updatedAt: Date = new Date();

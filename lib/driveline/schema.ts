@@ -251,9 +251,17 @@ export function parseDesign(input: unknown, options?: { catalogue?: Catalogue })
   return issues.length ? { ok: false, issues } : { ok: true, design: result.data };
 }
 
-const limitSchema = object({
+/** Text that must say something (not empty, not only spaces). */
+const sourceText = (message: string) =>
+  z.string({ error: message }).refine((t) => t.trim().length > 0, { error: message });
+
+/** The message when a limit or a material's figures do not say where they come from. */
+export const SOURCE_REQUIRED =
+  "must name its source (a standard, a handbook, the maker's sheet or “common shop practice”)";
+
+export const limitSchema = object({
   value: z.number({ error: NUMBER }),
-  source: z.string({ error: "must be text" }).min(1),
+  source: sourceText(SOURCE_REQUIRED),
 });
 
 /** A shop's settings file: any subset of the limits, each a number or { value, source }. */
@@ -262,72 +270,148 @@ export const shopSettingsSchema = z.partialRecord(
   z.union([z.number({ error: NUMBER }), limitSchema], { error: "must be a number or { value, source }" }),
 );
 
+const name = () =>
+  z
+    .string({ error: "must be text" })
+    .refine((t) => t.trim().length > 0, { error: "must not be empty" })
+    .refine((t) => t.length <= 200, { error: "must be at most 200 characters" });
+
 const materialEntrySchema = object({
   id: id(),
-  name: z.string({ error: "must be text" }),
-  elasticModulusGPa: positive(),
-  densityKgM3: positive(),
-  tensileYieldMPa: positive(),
-  shearYieldMPa: positive(),
+  name: name(),
+  elasticModulusGPa: bounded(PHYSICAL_MAX.elasticModulusGPa, "GPa"),
+  densityKgM3: bounded(PHYSICAL_MAX.densityKgM3, "kg/m³"),
+  tensileYieldMPa: bounded(PHYSICAL_MAX.shearYieldMPa, "MPa"),
+  shearYieldMPa: bounded(PHYSICAL_MAX.shearYieldMPa, "MPa"),
   weldFamily: z.enum(["steel", "aluminium", "composite"], { error: "must be steel, aluminium or composite" }),
-  source: z.string({ error: "must be text" }),
+  source: sourceText(SOURCE_REQUIRED),
 });
+
+/** Largest single price the catalogue takes: $1,000,000 in cents (a typo guard, not a policy). */
+export const MAX_PRICE_CENTS = 100_000_000;
 
 const cents = () =>
   z
-    .number({ error: "must be a whole number of cents" })
+    .number({ error: "must be an amount of money" })
+    .min(0, { error: "must not be negative" })
     .int({ error: "must be a whole number of cents" })
-    .min(0, { error: "must be a whole number of cents" });
+    .max(MAX_PRICE_CENTS, { error: "must be at most 1,000,000.00" });
 
-/** A shop catalogue (same shape as `defaultCatalogue`). */
+const fittingKinds = ["weld-yoke", "slip-yoke-assembly", "flange-yoke"] as const;
+
+const tubeEntrySchema = object({
+  id: id(),
+  materialId: id(),
+  odMm: bounded(PHYSICAL_MAX.tubeOdMm, "mm"),
+  wallMm: bounded(PHYSICAL_MAX.tubeWallMm, "mm"),
+  maxLengthMm: bounded(PHYSICAL_MAX.lengthMm, "mm"),
+  pricePerMetreCents: cents(),
+}).check((ctx) => {
+  const t = ctx.value;
+  if (t.wallMm * 2 >= t.odMm) {
+    ctx.issues.push({
+      code: "custom",
+      input: t.wallMm,
+      path: ["wallMm"],
+      message: "must be less than half the outside diameter",
+    });
+  }
+});
+
+const endFittingEntrySchema = object({
+  id: id(),
+  name: name(),
+  kind: z.enum(fittingKinds, { error: "must be weld-yoke, slip-yoke-assembly or flange-yoke" }),
+  jointSeriesId: id(),
+  tubeOdMm: bounded(PHYSICAL_MAX.tubeOdMm, "mm"),
+  weldFamily: z.enum(["steel", "aluminium", "composite"], {
+    error: "must be steel, aluminium or composite",
+  }),
+  jointCentreToWeldSeatMm: bounded(PHYSICAL_MAX.slipMm, "mm"),
+  massKg: bounded(1_000, "kg"),
+  torqueRatingNm: bounded(PHYSICAL_MAX.torqueNm, "N·m"),
+  priceCents: cents(),
+  fastenerTorqueNm: bounded(PHYSICAL_MAX.torqueNm, "N·m").optional(),
+  fastenerTorqueSource: z.string({ error: "must be text" }).optional(),
+}).check((ctx) => {
+  const f = ctx.value;
+  if (f.fastenerTorqueNm != null && !f.fastenerTorqueSource?.trim()) {
+    ctx.issues.push({ code: "custom", input: f, path: ["fastenerTorqueSource"], message: SOURCE_REQUIRED });
+  }
+});
+
+const jointSeriesEntrySchema = object({
+  id: id(),
+  name: name(),
+  torqueRatingNm: bounded(PHYSICAL_MAX.torqueNm, "N·m"),
+  maxWorkingAngleDeg: bounded(90, "°"),
+  massKg: bounded(1_000, "kg"),
+  priceCents: cents(),
+  strapTorqueNm: bounded(PHYSICAL_MAX.torqueNm, "N·m").optional(),
+  strapTorqueSource: z.string({ error: "must be text" }).optional(),
+}).check((ctx) => {
+  const j = ctx.value;
+  if (j.strapTorqueNm != null && !j.strapTorqueSource?.trim()) {
+    ctx.issues.push({ code: "custom", input: j, path: ["strapTorqueSource"], message: SOURCE_REQUIRED });
+  }
+});
+
+/** For each row whose id repeats an earlier row's: its index and that earlier row's index. */
+function repeatedIds(list: readonly { id: string }[]): { index: number; first: number; id: string }[] {
+  const first = new Map<string, number>();
+  const out: { index: number; first: number; id: string }[] = [];
+  list.forEach((row, index) => {
+    const seen = first.get(row.id);
+    if (seen === undefined) first.set(row.id, index);
+    else out.push({ index, first: seen, id: row.id });
+  });
+  return out;
+}
+
+/**
+ * A shop catalogue (same shape as `defaultCatalogue`): every figure in range, a tube's wall less
+ * than half its diameter, ids unique per list, and every reference to a material or joint series
+ * pointing at one that exists.
+ */
 export const catalogueSchema = object({
   id: id(),
-  name: z.string({ error: "must be text" }),
+  name: name(),
   demo: z.boolean({ error: "must be true or false" }),
-  materials: z.array(materialEntrySchema, { error: "must be a list" }),
-  tubes: z.array(
-    object({
-      id: id(),
-      materialId: id(),
-      odMm: positive(),
-      wallMm: positive(),
-      maxLengthMm: positive(),
-      pricePerMetreCents: cents(),
-    }),
-    { error: "must be a list" },
-  ),
-  endFittings: z.array(
-    object({
-      id: id(),
-      name: z.string({ error: "must be text" }),
-      kind: z.enum(["weld-yoke", "slip-yoke-assembly", "flange-yoke"], {
-        error: "must be weld-yoke, slip-yoke-assembly or flange-yoke",
-      }),
-      jointSeriesId: id(),
-      tubeOdMm: positive(),
-      weldFamily: z.enum(["steel", "aluminium", "composite"], {
-        error: "must be steel, aluminium or composite",
-      }),
-      jointCentreToWeldSeatMm: positive(),
-      massKg: positive(),
-      torqueRatingNm: positive(),
-      priceCents: cents(),
-      fastenerTorqueNm: positive().optional(),
-      fastenerTorqueSource: z.string({ error: "must be text" }).optional(),
-    }),
-    { error: "must be a list" },
-  ),
-  jointSeries: z.array(
-    object({
-      id: id(),
-      name: z.string({ error: "must be text" }),
-      torqueRatingNm: positive(),
-      maxWorkingAngleDeg: positive(),
-      massKg: positive(),
-      priceCents: cents(),
-      strapTorqueNm: positive().optional(),
-      strapTorqueSource: z.string({ error: "must be text" }).optional(),
-    }),
-    { error: "must be a list" },
-  ),
+  materials: z
+    .array(materialEntrySchema, { error: "must be a list" })
+    .min(1, { error: "must hold at least one material" }),
+  tubes: z.array(tubeEntrySchema, { error: "must be a list" }),
+  endFittings: z.array(endFittingEntrySchema, { error: "must be a list" }),
+  jointSeries: z.array(jointSeriesEntrySchema, { error: "must be a list" }),
+}).check((ctx) => {
+  const c = ctx.value;
+  for (const key of ["materials", "tubes", "endFittings", "jointSeries"] as const) {
+    for (const r of repeatedIds(c[key]))
+      ctx.issues.push({
+        code: "custom",
+        input: c,
+        path: [key, r.index, "id"],
+        message: `must be unique (row ${r.first + 1} already uses "${r.id}")`,
+      });
+  }
+  const materials = new Set(c.materials.map((m) => m.id));
+  c.tubes.forEach((t, i) => {
+    if (!materials.has(t.materialId))
+      ctx.issues.push({
+        code: "custom",
+        input: c,
+        path: ["tubes", i, "materialId"],
+        message: `must be a material in this catalogue (no material "${t.materialId}")`,
+      });
+  });
+  const series = new Set(c.jointSeries.map((j) => j.id));
+  c.endFittings.forEach((f, i) => {
+    if (!series.has(f.jointSeriesId))
+      ctx.issues.push({
+        code: "custom",
+        input: c,
+        path: ["endFittings", i, "jointSeriesId"],
+        message: `must be a joint series in this catalogue (no series "${f.jointSeriesId}")`,
+      });
+  });
 }) satisfies z.ZodType<Catalogue>;

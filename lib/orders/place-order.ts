@@ -197,6 +197,7 @@ export async function placeOrder(user: CurrentUser, body: PlaceOrderBody): Promi
       totalCents: quote.totalCents,
       depositCents: quote.dueNowCents,
       promisedDate: promisedDate(now, shop.priceBook.leadTimeWorkingDays),
+      configVersion: shop.version,
       notes: body.notes ?? null,
       createdAt: now,
       updatedAt: now,

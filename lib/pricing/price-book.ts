@@ -1,26 +1,53 @@
 import { addBusinessDays, formatISO } from "date-fns";
 import { z } from "zod";
 
+const money = () =>
+  z
+    .number({ error: "must be an amount of money" })
+    .min(0, { error: "must not be negative" })
+    .int({ error: "must be a whole number of cents" })
+    .max(100_000_000, { error: "must be at most 1,000,000.00" });
+const percent = (min: number, max: number) =>
+  z
+    .number({ error: "must be a percentage" })
+    .min(min, { error: `must be between ${min} and ${max} %` })
+    .max(max, { error: `must be between ${min} and ${max} %` });
+const wholePercent = (min: number, max: number) =>
+  percent(min, max).int({ error: `must be a whole percentage between ${min} and ${max}` });
+const millimetres = (max: number) =>
+  z
+    .number({ error: "must be a length in mm" })
+    .min(0, { error: "must not be negative" })
+    .max(max, { error: `must be at most ${max} mm` });
+
 /** A price book: what the shop charges beyond the catalogue's parts. Money in integer cents. */
 export const priceBookSchema = z.object({
-  currency: z.string().length(3),
+  currency: z.string({ error: "must be a three-letter currency code" }).regex(/^[A-Z]{3}$/, {
+    error: "must be a three-letter currency code",
+  }),
   /** Cutting, welding, phasing and straightening one shaft. */
-  labourPerShaftCents: z.number().int().nonnegative(),
-  balancingPerShaftCents: z.number().int().nonnegative(),
+  labourPerShaftCents: money(),
+  balancingPerShaftCents: money(),
   /** Tube is charged on the cut length plus this allowance for facing and waste. */
-  tubeAllowanceMm: z.number().nonnegative(),
+  tubeAllowanceMm: millimetres(1_000),
   /** Shortest length of tube charged. */
-  minimumTubeChargeMm: z.number().nonnegative(),
-  taxRatePercent: z.number().min(0).max(50),
-  shippingCents: z.number().int().nonnegative(),
+  minimumTubeChargeMm: millimetres(10_000),
+  taxRatePercent: percent(0, 50),
+  shippingCents: money(),
   /** 0 < deposit < 100 asks a deposit and the balance at final inspection; 100 asks everything up front. */
-  depositPercent: z.number().int().min(1).max(100),
+  depositPercent: wholePercent(1, 100),
   /** Working days from order to the promised date. */
-  leadTimeWorkingDays: z.number().int().min(0).max(120),
+  leadTimeWorkingDays: z
+    .number({ error: "must be a number of working days" })
+    .int({ error: "must be a whole number of working days" })
+    .min(0, { error: "must be between 0 and 120 working days" })
+    .max(120, { error: "must be between 0 and 120 working days" }),
   /** When the customer leaves the tube to Yokeline: the cheapest or the lightest that passes every check. */
-  tubePreference: z.enum(["cheapest", "lightest"]).default("cheapest"),
-  /** The share of the deposit the shop keeps when an order is cancelled before release (0 refunds it all). */
-  cancellationFeePercent: z.number().int().min(0).max(100).default(0),
+  tubePreference: z
+    .enum(["cheapest", "lightest"], { error: "must be cheapest or lightest" })
+    .default("cheapest"),
+  /** Share of the deposit the shop keeps when an order is cancelled before release (0: all refunded). */
+  cancellationFeePercent: wholePercent(0, 100).default(0),
 });
 export type PriceBook = z.infer<typeof priceBookSchema>;
 

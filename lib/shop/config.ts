@@ -1,6 +1,12 @@
 import { ShopConfig } from "@/entities";
 import { getEm } from "@/lib/db/orm";
-import { defaultCatalogue, resolveSettings, type Catalogue, type ShopSettings } from "@/lib/driveline";
+import {
+  defaultCatalogue,
+  resolveSettings,
+  type Catalogue,
+  type Limit,
+  type ShopSettings,
+} from "@/lib/driveline";
 import { defaultPriceBook, priceBookSchema, type PriceBook } from "@/lib/pricing/price-book";
 import { resolveFloorSettings, type FloorSettings } from "@/lib/traveller/settings";
 
@@ -8,10 +14,12 @@ export interface ShopEngineering {
   catalogue: Catalogue;
   settings: ShopSettings;
   /** The raw overrides, as stored (for screens that show what the shop changed). */
-  settingOverrides: Record<string, number>;
+  settingOverrides: Record<string, number | Limit>;
   priceBook: PriceBook;
   /** The shop floor's routing, tolerances, paper size and units. */
   floor: FloorSettings;
+  /** Which saved version this is (1: the starting configuration); orders record it when placed. */
+  version: number;
 }
 
 const CACHE_MS = 5_000;
@@ -28,9 +36,10 @@ export async function getShopEngineering(): Promise<ShopEngineering> {
   const value: ShopEngineering = {
     catalogue: row?.catalogue ?? defaultCatalogue,
     settings: resolveSettings(row?.settings ?? {}),
-    settingOverrides: (row?.settings ?? {}) as Record<string, number>,
+    settingOverrides: (row?.settings ?? {}) as Record<string, number | Limit>,
     priceBook: row ? priceBookSchema.parse(row.priceBook) : defaultPriceBook,
     floor: resolveFloorSettings(row?.floor),
+    version: row?.version ?? 1,
   };
   cached = { at: Date.now(), value };
   return value;

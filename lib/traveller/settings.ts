@@ -110,8 +110,16 @@ export const floorSettingsSchema = z.object({
     .min(1)
     .refine((steps) => new Set(steps.map((s) => s.code)).size === steps.length, "step codes must be unique")
     .default(() => defaultRouting.map((s) => ({ ...s, instructions: [...s.instructions] }))),
-  /** Overrides of defaultFloorLimits (bare numbers). */
-  limits: z.record(z.string(), z.number().positive()).default({}),
+  /** Overrides of defaultFloorLimits: a bare number ("shop setting") or { value, source }. */
+  limits: z
+    .record(
+      z.string(),
+      z.union([
+        z.number().positive(),
+        z.object({ value: z.number().positive(), source: z.string().trim().min(1) }),
+      ]),
+    )
+    .default({}),
   /** Phase index tolerance at the floor; absent: the engineering setting in the report. */
   phasingToleranceDeg: z.number().positive().max(10).nullable().default(null),
 });
@@ -131,7 +139,8 @@ export function resolveFloorSettings(doc?: unknown): FloorSettings {
   const parsed = floorSettingsSchema.parse(doc ?? {});
   const limits: Record<string, Limit> = { ...defaultFloorLimits };
   for (const [key, value] of Object.entries(parsed.limits)) {
-    if (key in defaultFloorLimits) limits[key] = { value, source: "shop setting" };
+    if (key in defaultFloorLimits)
+      limits[key] = typeof value === "number" ? { value, source: "shop setting" } : value;
   }
   return { ...parsed, limits: limits as FloorLimits };
 }
