@@ -10,7 +10,7 @@
 import { randomUUID } from "node:crypto";
 import type { ClientBase } from "pg";
 import { addBusinessDays } from "date-fns";
-import { formatMoney, quoteOrder, type PriceBook } from "@/lib/pricing/price-book";
+import { quoteOrder, type PriceBook } from "@/lib/pricing/price-book";
 import type { ShopEngineering } from "@/lib/shop/config";
 import { formatSerial } from "@/lib/traveller/codes";
 import { checkMeasurements, type Failure, type SiValues } from "@/lib/traveller/measure";
@@ -54,6 +54,8 @@ export interface GenerateOptions {
   seed?: number;
   /** A share of the orders placed in the last few days (a busy spell: work in hand in every state). */
   recent?: { days: number; share: number };
+  /** The newest orders show the states a shop has only briefly (paid and not yet released, a hold). */
+  showcase?: boolean;
   /** Add each order's timeline (order_event rows); default true. */
   events?: boolean;
   /** Orders per batch written; default 2,000. */
@@ -75,6 +77,13 @@ export interface GenerateResult {
   events: number;
   byStatus: Record<string, number>;
 }
+
+const USD = new Intl.NumberFormat("en-US", { style: "currency", currency: "USD" });
+/** As formatMoney (lib/pricing/price-book.ts), with one formatter for the whole run. */
+const formatMoney = (cents: number, currency: string) =>
+  currency === "USD"
+    ? USD.format(cents / 100)
+    : new Intl.NumberFormat("en-US", { style: "currency", currency }).format(cents / 100);
 
 /** A small, fast, seeded random sequence (mulberry32). */
 export function randomSequence(seed: number): () => number {
@@ -340,6 +349,13 @@ function drawPlan(rnd: () => number, created: number, now: number): Plan {
   return plan;
 }
 
+/** What the newest orders do in a showcase (by age: 0 = the newest). */
+const SHOWCASE: Record<number, Partial<Plan>> = {
+  0: { payH: 0.3, releaseH: 10_000, cancel: null }, // paid; the desk has not released it yet
+  1: { payH: null, cancel: null }, // awaiting its deposit
+  3: { payH: 0.3, releaseH: 0.02, cancel: null, hold: { step: 0, reworkH: Infinity }, slow: 0.2 }, // on hold at the saw
+};
+
 interface Sim {
   orderId: string;
   status: string;
@@ -429,8 +445,8 @@ export async function generateShop(db: ClientBase, opts: GenerateOptions): Promi
   let rows = emptyRows();
 
   // One order, simulated from its plan up to now (closure over this batch's rows).
-  async function simulateOrder(createdAt: number): Promise<Sim> {
-    const plan = drawPlan(rnd, createdAt, now);
+  async function simulateOrder(createdAt: number, showcase?: Partial<Plan>): Promise<Sim> {
+    const plan = { ...drawPlan(rnd, createdAt, now), ...showcase };
     const customer = opts.customers[Math.floor(rnd() * opts.customers.length)]!;
     const online = customer.userId != null && rnd() < 0.7;
     const fulfilment: "pickup" | "ship" = rnd() < 0.45 ? "ship" : "pickup";
@@ -756,7 +772,7 @@ export async function generateShop(db: ClientBase, opts: GenerateOptions): Promi
     rows = emptyRows();
     const end = Math.min(opts.orders, start + batch);
     for (let i = start; i < end; i++) {
-      const sim = await simulateOrder(created[i]!);
+      const sim = await simulateOrder(created[i]!, opts.showcase ? SHOWCASE[opts.orders - 1 - i] : undefined);
       result.byStatus[sim.status] = (result.byStatus[sim.status] ?? 0) + 1;
     }
     await writeBatch(db, rows);

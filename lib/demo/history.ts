@@ -16,6 +16,14 @@ export const DEMO_HISTORY_ORDERS = 320;
 /** Invented phone customers added beside the named ones. */
 export const DEMO_EXTRA_CUSTOMERS = 24;
 
+/** How the demo history is spread: 20 weeks, with a busy spell in the last nine days (demo data). */
+export const DEMO_HISTORY_SHAPE = {
+  weeks: 20,
+  recent: { days: 9, share: 0.14 },
+  seed: 20_261_204,
+  showcase: true,
+} as const;
+
 /** Writes the demo shop's history in one transaction (after its users and customers exist). */
 export async function seedDemoHistory(now = new Date()): Promise<GenerateResult> {
   const em = (await getEm()).fork();
@@ -44,9 +52,7 @@ export async function seedDemoHistory(now = new Date()): Promise<GenerateResult>
       },
       shop,
       now,
-      weeks: 20,
-      recent: { days: 9, share: 0.14 },
-      seed: 20_261_204,
+      ...DEMO_HISTORY_SHAPE,
     });
     await db.query("commit");
     return result;

@@ -40,6 +40,8 @@ export async function generateLargeShop(opts: LargeShopOptions): Promise<Generat
   await db.connect();
   try {
     const { rows } = await db.query<{ n: string }>("select count(*) as n from customer");
+    // Generated data can be made again: no need to wait for each batch's commit to reach the disk.
+    await db.query("set synchronous_commit = off");
     await db.query("begin");
     const count = Math.max(1, Math.ceil(opts.orders / (opts.ordersPerCustomer ?? 25)));
     const customers = await insertCustomers(db, count, new Date(), opts.seed ?? 5, Number(rows[0]?.n ?? 0));
