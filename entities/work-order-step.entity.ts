@@ -13,8 +13,8 @@ export type StepCompletion = "pass" | "rework" | "concession";
 @Unique({ properties: ["workOrder", "revision", "position"] })
 // Throughput, time per step and days to ship on the owner's overview (Migration20261204150200).
 @Index({
-  name: "work_order_step_done_at_index",
-  expression: `create index "work_order_step_done_at_index" on "work_order_step" ("completed_at") include ("work_order_id", "revision", "position", "code") where state = 'done'`,
+  name: "work_order_step_done_code_index",
+  expression: `create index "work_order_step_done_code_index" on "work_order_step" ("code", "completed_at") include ("work_order_id", "revision", "position") where state = 'done'`,
 })
 export class WorkOrderStep {
   [OptionalProps]?: "state" | "completion" | "completedAt" | "completedBy";

@@ -11,7 +11,7 @@ export const OVERVIEW_INDEXES = {
   shop_order_owed_index: `create index "shop_order_owed_index" on "shop_order" ("status") include ("total_cents", "paid_cents") where paid_cents < total_cents and status <> 'cancelled'`,
   payment_succeeded_paid_at_index: `create index "payment_succeeded_paid_at_index" on "payment" ("paid_at") include ("kind", "amount_cents") where status = 'succeeded'`,
   refund_created_at_index: `create index "refund_created_at_index" on "refund" ("created_at") include ("amount_cents")`,
-  work_order_step_done_at_index: `create index "work_order_step_done_at_index" on "work_order_step" ("completed_at") include ("work_order_id", "revision", "position", "code") where state = 'done'`,
+  work_order_step_done_code_index: `create index "work_order_step_done_code_index" on "work_order_step" ("code", "completed_at") include ("work_order_id", "revision", "position") where state = 'done'`,
 } as const;
 
 export class Migration20261204150200 extends Migration {

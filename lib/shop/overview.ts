@@ -203,6 +203,7 @@ export function overviewContext(
     today: now.toISOString().slice(0, 10),
     chartsSince: new Date(`${lastWeeks(now, CHART_WEEKS)[0]}T00:00:00Z`),
     averagesSince: new Date(now.getTime() - AVERAGE_WINDOW_DAYS * DAY_MS),
+    routingCodes: floor.routing.map((s) => s.code),
     inspectionCodes: codes("final-inspection"),
     dispatchCodes: codes("dispatch"),
     stepSeconds: averages.map((a) => ({ code: a.code, seconds: a.hours * HOUR_S })),
