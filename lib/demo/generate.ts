@@ -344,6 +344,8 @@ function drawPlan(rnd: () => number, created: number, now: number): Plan {
     refundAfterShip: rnd() < 0.03,
     shafts: rnd() < 0.55 ? 1 : rnd() < 0.75 ? 2 : 3,
   };
+  // An order never paid is cancelled by the desk after ten days (common shop practice).
+  if (plan.payH == null && !plan.cancel && ageH > 24 * 10) plan.cancel = { afterH: 24 * 10, keepShare: 0 };
   // Old orders were settled long ago: an endless hold only on recent ones.
   if (plan.hold && plan.hold.reworkH === Infinity && ageH > 24 * 21) plan.hold.reworkH = 30;
   return plan;

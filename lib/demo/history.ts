@@ -19,7 +19,7 @@ export const DEMO_EXTRA_CUSTOMERS = 24;
 /** How the demo history is spread: 20 weeks, with a busy spell in the last nine days (demo data). */
 export const DEMO_HISTORY_SHAPE = {
   weeks: 20,
-  recent: { days: 9, share: 0.14 },
+  recent: { days: 9, share: 0.1 },
   seed: 20_261_204,
   showcase: true,
 } as const;
