@@ -228,7 +228,8 @@ export const OVERVIEW_QUERIES = {
     // index on a big shop, or by hashing a small table whole: the planner's choice either way.
     indexes: ["work_order_step_done_code_index"],
     sql: `select c.code, count(s.completed_at)::int as samples,
-            avg(extract(epoch from (s.completed_at - coalesce(p.completed_at, w.created_at))))::float8 as seconds
+            avg(extract(epoch from (s.completed_at - coalesce(p.completed_at,
+              (select w.created_at from work_order w where w.id = s.work_order_id)))))::float8 as seconds
           from unnest(?::text[]) as c(code)
           cross join lateral (
             select x.work_order_id, x.revision, x.position, x.completed_at from work_order_step x
@@ -237,7 +238,6 @@ export const OVERVIEW_QUERIES = {
           ) s
           left join work_order_step p
             on s.position > 1 and p.work_order_id = s.work_order_id and p.revision = s.revision and p.position = s.position - 1
-          left join work_order w on s.position = 1 and w.id = s.work_order_id
           group by c.code`,
     params: (c) => [pgArray(c.routingCodes), c.averagesSince.toISOString()],
   },
