@@ -4,6 +4,7 @@ import { benchApi } from "./api";
 import { benchTraveller } from "./traveller";
 import { benchFloor } from "./floor";
 import { benchScan } from "./scan";
+import { benchOverview } from "./overview";
 
 async function main(): Promise<void> {
   await benchDriveline();
@@ -16,6 +17,8 @@ async function main(): Promise<void> {
     console.log(
       "\nAPI latency and the scan route: skipped (run through `npm run bench`, which starts the app).",
     );
+  // Last: it fills the bench database with a large shop.
+  await benchOverview();
 }
 
 main().catch((error: unknown) => {

@@ -42,6 +42,19 @@ export type PaymentState = (typeof PAYMENT_STATES)[number];
 @Check({ name: "shop_order_deposit_within_total_check", expression: "deposit_cents <= total_cents" })
 @Check({ name: "shop_order_paid_within_total_check", expression: "paid_cents <= total_cents" })
 @Check({ name: "shop_order_refunded_within_paid_check", expression: "refunded_cents <= paid_cents" })
+// The owner's overview (Migration20261204150200, lib/shop/overview-queries.ts).
+@Index({
+  name: "shop_order_status_money_index",
+  expression: `create index "shop_order_status_money_index" on "shop_order" ("status") include ("total_cents")`,
+})
+@Index({
+  name: "shop_order_open_promised_index",
+  expression: `create index "shop_order_open_promised_index" on "shop_order" ("promised_date") include ("status", "customer_id", "total_cents", "paid_cents", "refunded_cents") where status not in ('shipped', 'cancelled')`,
+})
+@Index({
+  name: "shop_order_owed_index",
+  expression: `create index "shop_order_owed_index" on "shop_order" ("status") include ("total_cents", "paid_cents") where paid_cents < total_cents and status <> 'cancelled'`,
+})
 export class Order {
   [OptionalProps]?: "status" | "paymentState" | "paidCents" | "refundedCents" | "createdAt" | "updatedAt";
 

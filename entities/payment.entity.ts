@@ -21,6 +21,11 @@ export type PaymentMethod = (typeof PAYMENT_METHODS)[number];
   name: "payment_refunded_within_amount_check",
   expression: "refunded_cents >= 0 and refunded_cents <= amount_cents",
 })
+// Money taken by week on the owner's overview (Migration20261204150200).
+@Index({
+  name: "payment_succeeded_paid_at_index",
+  expression: `create index "payment_succeeded_paid_at_index" on "payment" ("paid_at") include ("kind", "amount_cents") where status = 'succeeded'`,
+})
 export class Payment {
   [OptionalProps]?: "status" | "refundedCents" | "createdAt" | "method";
 

@@ -1,4 +1,4 @@
-import { Check, Entity, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
+import { Check, Entity, ManyToOne, OptionalProps, PrimaryKey, Property, Index } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import { Payment } from "./payment.entity";
 import { User } from "./user.entity";
@@ -6,6 +6,11 @@ import { User } from "./user.entity";
 /** Money given back on a payment, by an owner (at the provider, or by hand for a counter payment). */
 @Entity({ tableName: "refund" })
 @Check({ name: "refund_amount_positive_check", expression: "amount_cents > 0" })
+// Refunds by week on the owner's overview (Migration20261204150200).
+@Index({
+  name: "refund_created_at_index",
+  expression: `create index "refund_created_at_index" on "refund" ("created_at") include ("amount_cents")`,
+})
 export class Refund {
   [OptionalProps]?: "createdAt";
 

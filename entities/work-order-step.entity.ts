@@ -1,4 +1,4 @@
-import { Entity, Enum, ManyToOne, OptionalProps, PrimaryKey, Property, Unique } from "@mikro-orm/core";
+import { Entity, Enum, ManyToOne, OptionalProps, PrimaryKey, Property, Unique, Index } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import type { StepSpec } from "../lib/traveller/steps";
 import { User } from "./user.entity";
@@ -11,6 +11,11 @@ export type StepCompletion = "pass" | "rework" | "concession";
 /** One routing step of one traveller revision, with its record sheet and limits frozen. */
 @Entity({ tableName: "work_order_step" })
 @Unique({ properties: ["workOrder", "revision", "position"] })
+// Throughput, time per step and days to ship on the owner's overview (Migration20261204150200).
+@Index({
+  name: "work_order_step_done_code_index",
+  expression: `create index "work_order_step_done_code_index" on "work_order_step" ("code", "completed_at") include ("work_order_id", "revision", "position") where state = 'done'`,
+})
 export class WorkOrderStep {
   [OptionalProps]?: "state" | "completion" | "completedAt" | "completedBy";
 

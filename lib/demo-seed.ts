@@ -10,6 +10,7 @@ import { createStaffUser } from "@/lib/users/staff";
 import { auth } from "@/lib/auth/server";
 import { DEMO_CUSTOMERS, DEMO_PASSWORD, DEMO_PHONE_CUSTOMERS, DEMO_STAFF } from "@/lib/demo";
 import { isDemo } from "@/lib/shop/shop";
+import { seedDemoHistory } from "@/lib/demo/history";
 
 /** Outside demo mode: neutral details the owner replaces under Overview. */
 const PLACEHOLDER_SHOP = {
@@ -29,7 +30,8 @@ const DEMO_SHOP = {
 /**
  * Seeds an empty database. Always the shop row and its configuration; in demo mode
  * (YOKELINE_DEMO=1) also the invented demo shop's details, one user per staff role with the
- * published demo password, customers with accounts, one known only by phone, and two orders.
+ * published demo password, customers with accounts, one known only by phone, a few hundred
+ * orders of past months in every state (lib/demo/history.ts) and two new orders.
  * Outside demo mode no account exists afterwards: the first owner comes from `npm run owner:create`.
  * Does nothing when a shop exists. Returns whether it seeded.
  */
@@ -81,6 +83,7 @@ export async function seedDemoShop(demo: boolean = isDemo()): Promise<boolean> {
     fill.create(Customer, { ...c, createdAt: new Date() });
   }
   await fill.flush();
+  await seedDemoHistory();
   await seedDemoOrders();
   return true;
 }
