@@ -12,6 +12,11 @@ import { User } from "./user.entity";
   name: "customer_email_lower_unique",
   expression: `create unique index "customer_email_lower_unique" on "customer" (lower(email)) where email <> ''`,
 })
+// The customers table sorts by name, whatever its capitals (Migration20261204150300).
+@Index({
+  name: "customer_lower_name_index",
+  expression: `create index "customer_lower_name_index" on "customer" (lower(name))`,
+})
 export class Customer {
   [OptionalProps]?: "createdAt";
 

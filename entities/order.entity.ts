@@ -41,6 +41,11 @@ export type PaymentState = (typeof PAYMENT_STATES)[number];
 @Check({ name: "shop_order_deposit_within_total_check", expression: "deposit_cents <= total_cents" })
 @Check({ name: "shop_order_paid_within_total_check", expression: "paid_cents <= total_cents" })
 @Check({ name: "shop_order_refunded_within_paid_check", expression: "refunded_cents <= paid_cents" })
+// The staff tables' "late" and "open" filters (Migration20261204150300).
+@Index({
+  name: "shop_order_open_promised_index",
+  expression: `create index "shop_order_open_promised_index" on "shop_order" ("promised_date") where status not in ('shipped', 'cancelled')`,
+})
 export class Order {
   [OptionalProps]?: "status" | "paymentState" | "paidCents" | "refundedCents" | "createdAt" | "updatedAt";
 
@@ -100,6 +105,7 @@ export class Order {
   @Property({ type: "integer", default: 0 })
   refundedCents: number = 0;
 
+  @Index()
   @Property({ type: "date" })
   promisedDate!: string;
 

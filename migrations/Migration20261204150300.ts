@@ -1,0 +1,30 @@
+import { Migration } from "@mikro-orm/migrations";
+
+/**
+ * Indexes for the staff tables' filters and sorts (lib/tables): orders by promised date (all, and
+ * the open ones that "late" and "open" look at), customers by name, shafts on hold per order, step
+ * records by time and by who signed them.
+ */
+export class Migration20261204150300 extends Migration {
+  override async up(): Promise<void> {
+    this.addSql(`create index "shop_order_promised_date_index" on "shop_order" ("promised_date");`);
+    this.addSql(
+      `create index "shop_order_open_promised_index" on "shop_order" ("promised_date") where status not in ('shipped', 'cancelled');`,
+    );
+    this.addSql(`create index "customer_lower_name_index" on "customer" (lower(name));`);
+    this.addSql(
+      `create index "work_order_on_hold_order_index" on "work_order" ("order_id") where state = 'on_hold';`,
+    );
+    this.addSql(`create index "step_record_at_index" on "step_record" ("at");`);
+    this.addSql(`create index "step_record_by_id_at_index" on "step_record" ("by_id", "at");`);
+  }
+
+  override async down(): Promise<void> {
+    this.addSql(`drop index if exists "step_record_by_id_at_index";`);
+    this.addSql(`drop index if exists "step_record_at_index";`);
+    this.addSql(`drop index if exists "work_order_on_hold_order_index";`);
+    this.addSql(`drop index if exists "customer_lower_name_index";`);
+    this.addSql(`drop index if exists "shop_order_open_promised_index";`);
+    this.addSql(`drop index if exists "shop_order_promised_date_index";`);
+  }
+}
