@@ -1,7 +1,5 @@
 import "server-only";
-import { once } from "node:events";
-import { Readable } from "node:stream";
-import { stringify } from "csv-stringify";
+import { stringify } from "csv-stringify/sync";
 import { logger } from "@/lib/logger";
 import type { ColumnSpec } from "./columns";
 import type { Page } from "./sql";
@@ -37,9 +35,10 @@ export async function* allRows<R>(
 }
 
 /**
- * A CSV download streamed with csv-stringify: a header row of the columns' labels, then each row's
- * cells. The first batch is read before the answer starts, so a database that is down is a 503,
- * not a cut-off file.
+ * A CSV download streamed batch by batch (csv-stringify writes each batch; the next batch is read
+ * only when the client has taken the last one, and a client that goes away stops the reading):
+ * a header row of the columns' labels, then each row's cells. The first batch is read before the
+ * answer starts, so a database that is down is a 503, not a cut-off file.
  */
 export async function csvResponse<R>(
   filename: string,
@@ -47,21 +46,30 @@ export async function csvResponse<R>(
   fetchPage: (limit: number, offset: number) => Promise<Page<R>>,
 ): Promise<Response> {
   const first = await fetchPage(EXPORT_BATCH, 0);
-  const csv = stringify({ header: true, columns: columns.map((c) => c.label), bom: false });
-  void (async () => {
-    try {
-      for await (const batch of allRows(fetchPage, first)) {
-        for (const row of batch) {
-          if (!csv.write(columns.map((c) => safeCell(c.csv(row))))) await once(csv, "drain");
-        }
+  const batches = allRows(fetchPage, first);
+  const encoder = new TextEncoder();
+  let header = true;
+  const body = new ReadableStream<Uint8Array>({
+    async pull(controller) {
+      try {
+        const next = await batches.next();
+        const records = next.done ? [] : next.value.map((row) => columns.map((c) => safeCell(c.csv(row))));
+        if (records.length || header)
+          controller.enqueue(
+            encoder.encode(stringify(records, { header, columns: columns.map((c) => c.label) })),
+          );
+        header = false;
+        if (next.done) controller.close();
+      } catch (err) {
+        logger.error({ err }, "CSV export failed while streaming");
+        controller.error(err);
       }
-      csv.end();
-    } catch (err) {
-      logger.error({ err }, "CSV export failed while streaming");
-      csv.destroy(err as Error);
-    }
-  })();
-  return new Response(Readable.toWeb(csv) as ReadableStream<Uint8Array>, {
+    },
+    async cancel() {
+      await batches.return(undefined);
+    },
+  });
+  return new Response(body, {
     headers: {
       "content-type": "text/csv; charset=utf-8",
       "content-disposition": `attachment; filename="${filename}"`,
