@@ -24,6 +24,9 @@ export function hideableIds<R>(columns: readonly ColumnSpec<R>[]): [string, ...s
 }
 
 /** The columns a file gets: the ones shown on screen (the same `hide` list). */
-export function visibleColumns<R>(columns: readonly ColumnSpec<R>[], hide: readonly string[]): ColumnSpec<R>[] {
+export function visibleColumns<R>(
+  columns: readonly ColumnSpec<R>[],
+  hide: readonly string[],
+): ColumnSpec<R>[] {
   return columns.filter((c) => !c.hideable || !hide.includes(c.id));
 }

@@ -32,9 +32,22 @@ export const CUSTOMER_COLUMNS: readonly ColumnSpec<CustomerTableRow>[] = [
     csv: (r) => (r.hasAccount ? "Yes" : "By phone"),
   },
   { id: "orders", label: "Orders", sortable: true, hideable: true, align: "right", csv: (r) => r.orderCount },
-  { id: "open", label: "Open", sortable: false, hideable: true, align: "right", csv: (r) => r.openOrderCount },
+  {
+    id: "open",
+    label: "Open",
+    sortable: false,
+    hideable: true,
+    align: "right",
+    csv: (r) => r.openOrderCount,
+  },
   { id: "last", label: "Last order", sortable: true, hideable: true, csv: (r) => r.lastOrderOn },
-  { id: "created", label: "Customer since", sortable: true, hideable: true, csv: (r) => shortTimestamp(r.createdAt) },
+  {
+    id: "created",
+    label: "Customer since",
+    sortable: true,
+    hideable: true,
+    csv: (r) => shortTimestamp(r.createdAt),
+  },
 ];
 
 /** GET /desk/customers, /api/exports/customers read the same query. Newest first: the one just entered is on top. */

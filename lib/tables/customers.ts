@@ -71,7 +71,9 @@ export async function customerTablePage(
         .orWhereRaw("c.company ilike ?", [like])
         .orWhereRaw("c.phone ilike ?", [like]);
       if (digits.length >= 3)
-        w.orWhereRaw("regexp_replace(coalesce(c.phone, ''), '\\D', '', 'g') like ?", [containsPattern(digits)]);
+        w.orWhereRaw("regexp_replace(coalesce(c.phone, ''), '\\D', '', 'g') like ?", [
+          containsPattern(digits),
+        ]);
     });
   }
   const nulls = q.sort === "company" || q.sort === "last" ? " nulls last" : "";

@@ -3,7 +3,15 @@ import { z } from "zod";
 import type { OrderStatus, PaymentState } from "@/entities";
 import { ORDER_STATUS_LABEL, PAYMENT_STATE_LABEL } from "@/lib/orders/labels";
 import { csvMoney, hideableIds, shortTimestamp, type ColumnSpec } from "./columns";
-import { dateRangeRefine, flagParam, hideParam, isoDateParam, pagingShape, searchParam, sortParam } from "./params";
+import {
+  dateRangeRefine,
+  flagParam,
+  hideParam,
+  isoDateParam,
+  pagingShape,
+  searchParam,
+  sortParam,
+} from "./params";
 
 export const ORDER_STATUS_VALUES = Object.keys(ORDER_STATUS_LABEL) as [OrderStatus, ...OrderStatus[]];
 export const PAYMENT_STATE_VALUES = Object.keys(PAYMENT_STATE_LABEL) as [PaymentState, ...PaymentState[]];
@@ -99,7 +107,9 @@ export const listOrdersQuerySchema = z
     sort: sortParam(ORDER_SORTS, "created"),
     ...pagingShape("desc"),
     q: searchParam.optional(),
-    status: z.enum(ORDER_STATUS_FILTERS, { message: `must be one of ${ORDER_STATUS_FILTERS.join(", ")}` }).optional(),
+    status: z
+      .enum(ORDER_STATUS_FILTERS, { message: `must be one of ${ORDER_STATUS_FILTERS.join(", ")}` })
+      .optional(),
     payment: z
       .enum(PAYMENT_STATE_VALUES, { message: `must be one of ${PAYMENT_STATE_VALUES.join(", ")}` })
       .optional(),

@@ -37,9 +37,13 @@ const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
 export const isoDateParam = z
   .string()
   .regex(ISO_DATE, "must be a date written yyyy-mm-dd")
-  .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s), {
-    message: "is not a real date",
-  });
+  .refine(
+    (s) =>
+      !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s),
+    {
+      message: "is not a real date",
+    },
+  );
 
 /** A "1" flag (`?late=1`); anything else is a mistake the notice names. */
 export const flagParam = z.literal("1", { message: 'must be "1" or left out' });

@@ -61,6 +61,9 @@ export function tableNamed(name: string): (typeof TABLES)[TableName] | null {
 }
 
 /** The columns a table's file holds for a query (those shown on screen). */
-export function exportColumns<Q extends { hide: string[] }, R>(d: { columns: readonly ColumnSpec<R>[] }, q: Q) {
+export function exportColumns<Q extends { hide: string[] }, R>(
+  d: { columns: readonly ColumnSpec<R>[] },
+  q: Q,
+) {
   return visibleColumns(d.columns, q.hide);
 }

@@ -53,17 +53,32 @@ export const SHAFT_COLUMNS: readonly ColumnSpec<ShaftTableRow>[] = [
   { id: "customer", label: "Customer", sortable: true, hideable: true, csv: (r) => r.customerName },
   { id: "shaft", label: "Shaft", sortable: false, hideable: true, csv: (r) => r.shaftName },
   { id: "step", label: "Current step", sortable: true, hideable: true, csv: stepText },
-  { id: "state", label: "State", sortable: true, hideable: true, csv: (r) => WORK_ORDER_STATE_LABEL[r.state] },
+  {
+    id: "state",
+    label: "State",
+    sortable: true,
+    hideable: true,
+    csv: (r) => WORK_ORDER_STATE_LABEL[r.state],
+  },
   {
     id: "hold",
     label: "Hold",
     sortable: false,
     hideable: true,
-    csv: (r) => (r.onHold ? `On hold at ${r.holdStep ?? "a step"}${r.holdSince ? ` since ${shortTimestamp(r.holdSince)}` : ""}` : ""),
+    csv: (r) =>
+      r.onHold
+        ? `On hold at ${r.holdStep ?? "a step"}${r.holdSince ? ` since ${shortTimestamp(r.holdSince)}` : ""}`
+        : "",
   },
   { id: "tube", label: "Tube", sortable: false, hideable: true, csv: (r) => r.tube },
   { id: "promised", label: "Promised", sortable: true, hideable: true, csv: (r) => r.promisedDate },
-  { id: "released", label: "Released", sortable: true, hideable: true, csv: (r) => shortTimestamp(r.releasedAt) },
+  {
+    id: "released",
+    label: "Released",
+    sortable: true,
+    hideable: true,
+    csv: (r) => shortTimestamp(r.releasedAt),
+  },
 ];
 
 /** `?step=CUT` (the step a shaft waits for) or `?step=done` (every step signed). */

@@ -79,7 +79,10 @@ export async function shaftTablePage(
     .join("shop_order as o", "o.id", "w.order_id")
     .join("customer as c", "c.id", "o.customer_id")
     .leftJoin("work_order_step as cs", (j) =>
-      j.on("cs.work_order_id", "w.id").andOn("cs.revision", "w.revision").andOn("cs.position", "w.current_position"),
+      j
+        .on("cs.work_order_id", "w.id")
+        .andOn("cs.revision", "w.revision")
+        .andOn("cs.position", "w.current_position"),
     );
   if (q.step === "DONE") base.whereNull("cs.id");
   else if (q.step) base.where("cs.code", q.step);
@@ -129,7 +132,10 @@ export async function shaftTablePage(
       holdSince: r.hold_since ? new Date(r.hold_since).toISOString() : null,
       tube: tubeText(r),
       promisedDate: r.promised_date,
-      late: !["shipped", "picked_up"].includes(r.state) && !["shipped", "cancelled"].includes(r.order_status) && r.promised_date < today,
+      late:
+        !["shipped", "picked_up"].includes(r.state) &&
+        !["shipped", "cancelled"].includes(r.order_status) &&
+        r.promised_date < today,
       releasedAt: new Date(r.created_at).toISOString(),
     })),
   };

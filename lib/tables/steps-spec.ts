@@ -42,9 +42,28 @@ export const STEP_COLUMNS: readonly ColumnSpec<StepTableRow>[] = [
     hideable: true,
     csv: (r) => `${r.position} ${r.stepCode} ${r.stepName}`,
   },
-  { id: "result", label: "Result", sortable: true, hideable: true, csv: (r) => STEP_OUTCOME_LABEL[r.outcome] },
-  { id: "user", label: "Signed by", sortable: true, hideable: true, csv: (r) => r.byName ?? "(removed user)" },
-  { id: "revision", label: "Traveller rev", sortable: false, hideable: true, align: "right", csv: (r) => r.revision },
+  {
+    id: "result",
+    label: "Result",
+    sortable: true,
+    hideable: true,
+    csv: (r) => STEP_OUTCOME_LABEL[r.outcome],
+  },
+  {
+    id: "user",
+    label: "Signed by",
+    sortable: true,
+    hideable: true,
+    csv: (r) => r.byName ?? "(removed user)",
+  },
+  {
+    id: "revision",
+    label: "Traveller rev",
+    sortable: false,
+    hideable: true,
+    align: "right",
+    csv: (r) => r.revision,
+  },
   { id: "notes", label: "Notes", sortable: false, hideable: true, csv: (r) => r.notes },
 ];
 

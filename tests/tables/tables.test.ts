@@ -45,10 +45,9 @@ async function cookieFor(role: "owner" | "counter" | "floor") {
 }
 
 const call = (handler: typeof exportGet, table: string, search: string, cookie?: string) =>
-  handler(
-    new NextRequest(`${BASE}/api/x/${table}?${search}`, { headers: cookie ? { cookie } : {} }),
-    { params: Promise.resolve({ table }) },
-  );
+  handler(new NextRequest(`${BASE}/api/x/${table}?${search}`, { headers: cookie ? { cookie } : {} }), {
+    params: Promise.resolve({ table }),
+  });
 
 describe.skipIf(!hasDatabase)("the staff tables on known data", () => {
   let customerName = "";
@@ -104,7 +103,9 @@ describe.skipIf(!hasDatabase)("the staff tables on known data", () => {
   });
 
   dbTest("late: promised before today and not shipped or cancelled", async () => {
-    const page = await orderTablePage(await getEm(), q(`q=${tag}&late=1&sort=promised&dir=asc`), { today: TODAY });
+    const page = await orderTablePage(await getEm(), q(`q=${tag}&late=1&sort=promised&dir=asc`), {
+      today: TODAY,
+    });
     expect(numbers(page.rows)).toEqual([`${tag}-01`, `${tag}-02`]);
     expect(page.total).toBe(2);
     expect(page.rows.every((r) => r.late)).toBe(true);
@@ -112,7 +113,10 @@ describe.skipIf(!hasDatabase)("the staff tables on known data", () => {
 
   dbTest("status, payment, channel, promised range and the search each narrow the rows", async () => {
     const em = await getEm();
-    const nums = async (s: string) => numbers((await orderTablePage(em, q(`q=${tag}&size=100&sort=number&dir=asc&${s}`), { today: TODAY })).rows);
+    const nums = async (s: string) =>
+      numbers(
+        (await orderTablePage(em, q(`q=${tag}&size=100&sort=number&dir=asc&${s}`), { today: TODAY })).rows,
+      );
     expect(await nums("status=shipped")).toEqual([`${tag}-03`]);
     expect(await nums("payment=paid")).toEqual([`${tag}-03`, `${tag}-06`]);
     expect(await nums("channel=counter")).toEqual([`${tag}-02`, `${tag}-04`, `${tag}-06`]);
@@ -121,13 +125,18 @@ describe.skipIf(!hasDatabase)("the staff tables on known data", () => {
     // The search finds the order number, the customer's name, e-mail and company.
     expect(await nums("")).toHaveLength(36);
     for (const text of [`Ada ${tag}`, `ada-${tag}@test`, `GEARWORKS ${tag}`])
-      expect(numbers((await orderTablePage(em, q(`q=${encodeURIComponent(text)}&size=100`))).rows)).toHaveLength(36);
+      expect(
+        numbers((await orderTablePage(em, q(`q=${encodeURIComponent(text)}&size=100`))).rows),
+      ).toHaveLength(36);
     expect(numbers((await orderTablePage(em, q(`q=${tag}-06`))).rows)).toEqual([`${tag}-06`]);
   });
 
   dbTest("sorting by total both ways, and pages of 25 that add up", async () => {
     const em = await getEm();
-    const byTotal = await orderTablePage(em, q(`q=${tag}&status=shipped,cancelled&sort=total&dir=desc&payment=paid`));
+    const byTotal = await orderTablePage(
+      em,
+      q(`q=${tag}&status=shipped,cancelled&sort=total&dir=desc&payment=paid`),
+    );
     // `status` takes one value: the list is dropped (and named), the payment filter still applies.
     expect(numbers(byTotal.rows)).toEqual([`${tag}-06`, `${tag}-03`]);
     const desc = await orderTablePage(em, q(`q=${tag}&sort=total&dir=desc&size=25`));
@@ -150,14 +159,19 @@ describe.skipIf(!hasDatabase)("the staff tables on known data", () => {
   dbTest("customers: found by name, company, e-mail and phone digits, with their order counts", async () => {
     const em = await getEm();
     for (const text of [`ada ${tag}`, `gearworks ${tag}`, `ada-${tag}`]) {
-      const page = await customerTablePage(
-        em,
-        parseTableQuery(listCustomersQuerySchema, { q: text }).query,
-      );
+      const page = await customerTablePage(em, parseTableQuery(listCustomersQuerySchema, { q: text }).query);
       expect(page.rows.map((r) => r.name)).toEqual([customerName]);
-      expect(page.rows[0]).toMatchObject({ orderCount: 36, openOrderCount: 34, hasAccount: false, phone: "555-0142" });
+      expect(page.rows[0]).toMatchObject({
+        orderCount: 36,
+        openOrderCount: 34,
+        hasAccount: false,
+        phone: "555-0142",
+      });
     }
-    const byDigits = await customerTablePage(em, parseTableQuery(listCustomersQuerySchema, { q: "5550142" }).query);
+    const byDigits = await customerTablePage(
+      em,
+      parseTableQuery(listCustomersQuerySchema, { q: "5550142" }).query,
+    );
     expect(byDigits.rows.map((r) => r.name)).toContain(customerName);
   });
 
@@ -170,7 +184,9 @@ describe.skipIf(!hasDatabase)("the staff tables on known data", () => {
       const res = await call(exportGet, "orders", search, counter);
       expect(res.status).toBe(200);
       expect(res.headers.get("content-type")).toMatch(/^text\/csv/);
-      expect(res.headers.get("content-disposition")).toMatch(/attachment; filename="orders-\d{4}-\d{2}-\d{2}\.csv"/);
+      expect(res.headers.get("content-disposition")).toMatch(
+        /attachment; filename="orders-\d{4}-\d{2}-\d{2}\.csv"/,
+      );
       const [header, ...rows] = readCsv(await res.text());
       expect(header).toEqual([
         "Order",
@@ -193,7 +209,15 @@ describe.skipIf(!hasDatabase)("the staff tables on known data", () => {
       expect(rows.map((r) => r[0])).toEqual(numbers([...first.rows, ...second.rows]));
       expect(rows).toHaveLength(36);
       const six = rows.find((r) => r[0] === `${tag}-06`)!;
-      expect(six.slice(1, 8)).toEqual([`Ada ${tag}`, "", "Ready for pickup", "Paid in full", "Counter", "1500.00", "0.00"]);
+      expect(six.slice(1, 8)).toEqual([
+        `Ada ${tag}`,
+        "",
+        "Ready for pickup",
+        "Paid in full",
+        "Counter",
+        "1500.00",
+        "0.00",
+      ]);
     },
   );
 
@@ -210,19 +234,22 @@ describe.skipIf(!hasDatabase)("the staff tables on known data", () => {
     expect(row?.[0]).toBe(`'${evil.name}`);
   });
 
-  dbTest("bad parameters: the page falls back, the export and JSON answer 422 naming each field", async () => {
-    const counter = await cookieFor("counter");
-    for (const handler of [exportGet, tableGet]) {
-      const res = await call(handler, "orders", "sort=drop%20table&page=0&from=2026-13-01", counter);
-      expect(res.status).toBe(422);
-      const body = (await res.json()) as { error: { code: string; fields: Record<string, string> } };
-      expect(body.error.code).toBe("invalid");
-      expect(Object.keys(body.error.fields).sort()).toEqual(["from", "page", "sort"]);
-    }
-    expect((await call(exportGet, "invoices", "", counter)).status).toBe(404);
-    const ok = await call(tableGet, "orders", `q=${tag}&late=1`, counter);
-    expect(ok.status).toBe(200);
-  });
+  dbTest(
+    "bad parameters: the page falls back, the export and JSON answer 422 naming each field",
+    async () => {
+      const counter = await cookieFor("counter");
+      for (const handler of [exportGet, tableGet]) {
+        const res = await call(handler, "orders", "sort=drop%20table&page=0&from=2026-13-01", counter);
+        expect(res.status).toBe(422);
+        const body = (await res.json()) as { error: { code: string; fields: Record<string, string> } };
+        expect(body.error.code).toBe("invalid");
+        expect(Object.keys(body.error.fields).sort()).toEqual(["from", "page", "sort"]);
+      }
+      expect((await call(exportGet, "invoices", "", counter)).status).toBe(404);
+      const ok = await call(tableGet, "orders", `q=${tag}&late=1`, counter);
+      expect(ok.status).toBe(200);
+    },
+  );
 
   dbTest(
     "who may see which table: anonymous 401; customer and floor 403; counter the desk's tables only",
@@ -236,10 +263,34 @@ describe.skipIf(!hasDatabase)("the staff tables on known data", () => {
         await cookieFor("owner"),
       ];
       const expected: Record<string, [string | undefined, number][]> = {
-        orders: [[undefined, 401], [customer, 403], [floor, 403], [counter, 200], [owner, 200]],
-        customers: [[undefined, 401], [customer, 403], [floor, 403], [counter, 200], [owner, 200]],
-        shafts: [[undefined, 401], [customer, 403], [floor, 403], [counter, 403], [owner, 200]],
-        steps: [[undefined, 401], [customer, 403], [floor, 403], [counter, 403], [owner, 200]],
+        orders: [
+          [undefined, 401],
+          [customer, 403],
+          [floor, 403],
+          [counter, 200],
+          [owner, 200],
+        ],
+        customers: [
+          [undefined, 401],
+          [customer, 403],
+          [floor, 403],
+          [counter, 200],
+          [owner, 200],
+        ],
+        shafts: [
+          [undefined, 401],
+          [customer, 403],
+          [floor, 403],
+          [counter, 403],
+          [owner, 200],
+        ],
+        steps: [
+          [undefined, 401],
+          [customer, 403],
+          [floor, 403],
+          [counter, 403],
+          [owner, 200],
+        ],
       };
       for (const [table, cases] of Object.entries(expected))
         for (const [cookie, status] of cases)
@@ -279,14 +330,24 @@ describe.skipIf(!hasDatabase)("the staff tables on known data", () => {
         holdStep: "Straighten and runout",
       });
       expect(shafts.rows[0]!.tube).toMatch(/^YL-T-DOM-3500-083 \(88\.9 × 2\.11 mm\)$/); // README street truck
-      const held = await shaftTablePage(em, parseTableQuery(listShaftsQuerySchema, { hold: "1", step: "run", size: "100" }).query);
+      const held = await shaftTablePage(
+        em,
+        parseTableQuery(listShaftsQuerySchema, { hold: "1", step: "run", size: "100" }).query,
+      );
       expect(held.rows.map((r) => r.serial)).toContain(serial);
-      const cut = await shaftTablePage(em, parseTableQuery(listShaftsQuerySchema, { q: serial, step: "CUT" }).query);
+      const cut = await shaftTablePage(
+        em,
+        parseTableQuery(listShaftsQuerySchema, { q: serial, step: "CUT" }).query,
+      );
       expect(cut.total).toBe(0);
 
       // The hold shows on the orders table too.
       const orders = await orderTablePage(em, q(`q=${order.number}&hold=1`));
-      expect(orders.rows[0]).toMatchObject({ number: order.number, onHold: true, statusLabel: "On hold — step 3 of 6" });
+      expect(orders.rows[0]).toMatchObject({
+        number: order.number,
+        onHold: true,
+        statusLabel: "On hold — step 3 of 6",
+      });
 
       const steps = (s: Record<string, string>) =>
         stepTablePage(em, parseTableQuery(listStepsQuerySchema, { user: floor.id, ...s }).query);
