@@ -1,4 +1,4 @@
-import { Check, Entity, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
+import { Check, Entity, Index, ManyToOne, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import type { QuoteLine } from "../lib/pricing/price-book";
@@ -10,6 +10,7 @@ export class OrderShaft {
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
 
+  @Index()
   @ManyToOne("Order", { deleteRule: "cascade" })
   order!: Order;
 

@@ -1,12 +1,14 @@
 import { Migration } from "@mikro-orm/migrations";
 
 /**
- * Indexes for the staff tables' filters and sorts (lib/tables): orders by promised date (all, and
- * the open ones that "late" and "open" look at), customers by name, shafts on hold per order, step
- * records by time and by who signed them.
+ * Indexes for the staff tables' filters and sorts (lib/tables): an order's shafts by order, orders
+ * by promised date (all, and the open ones that "late" and "open" look at), customers by name,
+ * shafts on hold per order, step records by time and by who signed them.
  */
 export class Migration20261204150300 extends Migration {
   override async up(): Promise<void> {
+    // An order's shafts are looked up by order on every listing (there was no index on it).
+    this.addSql(`create index if not exists "order_shaft_order_id_index" on "order_shaft" ("order_id");`);
     this.addSql(`create index "shop_order_promised_date_index" on "shop_order" ("promised_date");`);
     this.addSql(
       `create index "shop_order_open_promised_index" on "shop_order" ("promised_date") where status not in ('shipped', 'cancelled');`,
@@ -26,5 +28,6 @@ export class Migration20261204150300 extends Migration {
     this.addSql(`drop index if exists "customer_lower_name_index";`);
     this.addSql(`drop index if exists "shop_order_open_promised_index";`);
     this.addSql(`drop index if exists "shop_order_promised_date_index";`);
+    this.addSql(`drop index if exists "order_shaft_order_id_index";`);
   }
 }

@@ -4,13 +4,13 @@ import type { CustomerTableRow, ListCustomersQuery } from "./customers-spec";
 import { containsPattern } from "./params";
 import { pagedSelect, type Page } from "./sql";
 
-const ORDER_BY: Record<ListCustomersQuery["sort"], string> = {
-  name: "lower(c.name)",
-  company: "lower(c.company)",
-  email: "c.email",
-  created: "c.created_at",
-  orders: "coalesce(oc.order_count, 0)",
-  last: "oc.last_order_on",
+const ORDER_BY: Record<ListCustomersQuery["sort"], string[]> = {
+  name: ["lower(c.name)"],
+  company: ["lower(c.company)"],
+  email: ["c.email"],
+  created: ["c.created_at"],
+  orders: ["coalesce(oc.order_count, 0)"],
+  last: ["oc.last_order_on"],
 };
 
 interface RawCustomerRow {
@@ -24,7 +24,6 @@ interface RawCustomerRow {
   order_count: number;
   open_order_count: number;
   last_order_on: string | null;
-  total: number;
 }
 
 /**
@@ -76,10 +75,12 @@ export async function customerTablePage(
         ]);
     });
   }
-  const nulls = q.sort === "company" || q.sort === "last" ? " nulls last" : "";
   const page = await pagedSelect<RawCustomerRow>(em, {
     base,
-    orderBy: `${ORDER_BY[q.sort]} ${q.dir}${nulls}, c.id ${q.dir}`,
+    idColumn: "c.id",
+    sortKeys: ORDER_BY[q.sort],
+    dir: q.dir,
+    nullsLast: true,
     limit: options.limit ?? q.size,
     offset: options.offset ?? (q.page - 1) * q.size,
   });

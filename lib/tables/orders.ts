@@ -8,16 +8,16 @@ import { containsPattern } from "./params";
 import { pagedSelect, type Page, todayIso } from "./sql";
 
 /** The SQL each sort column orders by (never user text); the order's id breaks ties. */
-const ORDER_BY: Record<ListOrdersQuery["sort"], string> = {
-  number: "o.number",
-  customer: "lower(c.name)",
-  created: "o.created_at",
-  promised: "o.promised_date",
-  status: "o.status",
-  payment: "o.payment_state",
-  channel: "o.channel",
-  total: "o.total_cents",
-  balance: "(o.total_cents - o.paid_cents)",
+const ORDER_BY: Record<ListOrdersQuery["sort"], string[]> = {
+  number: ["o.number"],
+  customer: ["lower(c.name)"],
+  created: ["o.created_at"],
+  promised: ["o.promised_date"],
+  status: ["o.status"],
+  payment: ["o.payment_state"],
+  channel: ["o.channel"],
+  total: ["o.total_cents"],
+  balance: ["(o.total_cents - o.paid_cents)"],
 };
 
 const CLOSED: OrderStatus[] = ["shipped", "cancelled"];
@@ -69,7 +69,6 @@ interface RawOrderRow {
   floor_k: number | null;
   floor_n: number | null;
   on_hold: boolean | null;
-  total: number;
 }
 
 function toRow(r: RawOrderRow, today: string): OrderTableRow {
@@ -133,10 +132,17 @@ export async function orderTablePage(
     .from("shop_order as o")
     .join("customer as c", "c.id", "o.customer_id");
   applyFilters(base, q, today);
+  // Every order has its customer (a required key): the count joins them only to search them.
+  const countBase = knex.from("shop_order as o");
+  if (q.q) countBase.join("customer as c", "c.id", "o.customer_id");
+  applyFilters(countBase, q, today);
 
-  const rows = await pagedSelect<RawOrderRow>(em, {
+  const page = await pagedSelect<RawOrderRow>(em, {
     base,
-    orderBy: `${ORDER_BY[q.sort]} ${q.dir}, o.id ${q.dir}`,
+    countBase,
+    idColumn: "o.id",
+    sortKeys: ORDER_BY[q.sort],
+    dir: q.dir,
     limit: options.limit ?? q.size,
     offset: options.offset ?? (q.page - 1) * q.size,
     // Per page row: its shafts and its floor progress.
@@ -153,5 +159,5 @@ export async function orderTablePage(
       ) w on true`,
     enrichColumns: "s.shafts, coalesce(s.shaft_count, 0) as shaft_count, w.floor_k, w.floor_n, w.on_hold",
   });
-  return { rows: rows.rows.map((r) => toRow(r, today)), total: rows.total };
+  return { rows: page.rows.map((r) => toRow(r, today)), total: page.total };
 }

@@ -5,14 +5,14 @@ import type { ListShaftsQuery, ShaftTableRow } from "./shafts-spec";
 import { containsPattern } from "./params";
 import { pagedSelect, todayIso, type Page } from "./sql";
 
-const ORDER_BY: Record<ListShaftsQuery["sort"], string> = {
-  serial: "w.serial_year, w.serial_sequence",
-  order: "o.number",
-  customer: "lower(c.name)",
-  promised: "o.promised_date",
-  state: "w.state",
-  step: "w.current_position",
-  released: "w.created_at",
+const ORDER_BY: Record<ListShaftsQuery["sort"], string[]> = {
+  serial: ["w.serial_year", "w.serial_sequence"],
+  order: ["o.number"],
+  customer: ["lower(c.name)"],
+  promised: ["o.promised_date"],
+  state: ["w.state"],
+  step: ["w.current_position"],
+  released: ["w.created_at"],
 };
 
 interface RawShaftRow {
@@ -36,7 +36,6 @@ interface RawShaftRow {
   tube_wall: string | null;
   hold_step: string | null;
   hold_since: Date | null;
-  total: number;
 }
 
 function tubeText(r: RawShaftRow): string {
@@ -95,7 +94,9 @@ export async function shaftTablePage(
   }
   const page = await pagedSelect<RawShaftRow>(em, {
     base,
-    orderBy: `${ORDER_BY[q.sort]} ${q.dir}, w.id ${q.dir}`,
+    idColumn: "w.id",
+    sortKeys: ORDER_BY[q.sort],
+    dir: q.dir,
     limit: options.limit ?? q.size,
     offset: options.offset ?? (q.page - 1) * q.size,
     enrich: `

@@ -12,16 +12,24 @@ export interface Page<R> {
 export const todayIso = () => new Date().toISOString().slice(0, 10);
 
 /**
- * Runs a table's filtered `base` select as one statement: sorted, counted (a window over every
- * matching row), cut to `limit`/`offset`, and only then joined to `enrich` (lateral look-ups per
- * page row, aliased against the page as `p`). Past the last page a plain count tells the total.
- * `orderBy` is SQL from a fixed map of the table's sort columns, never user text.
+ * Runs a table's filtered `base` select as ONE statement: the page (sorted by `sortKeys` then the
+ * row's id, cut to `limit`/`offset`, so an index on the sort column serves it), the count of every
+ * matching row beside it, and only then `enrich` (lateral look-ups per page row, aliased against
+ * the page as `p`) — never a query per row. The sort keys are SQL from a fixed map of the table's
+ * columns, never user text; they are selected as `_s0…` so the page keeps its order after the joins.
  */
-export async function pagedSelect<R extends { total: number }>(
+export async function pagedSelect<R>(
   em: EntityManager,
   spec: {
     base: Knex.QueryBuilder;
-    orderBy: string;
+    /** The same filters without the joins only the page needs (the count is then cheaper). */
+    countBase?: Knex.QueryBuilder;
+    /** The row's id column, e.g. "o.id" (selected as `id`): the last tie-breaker. */
+    idColumn: string;
+    sortKeys: string[];
+    dir: "asc" | "desc";
+    /** Rows without a value last, whichever the direction. */
+    nullsLast?: boolean;
     limit: number;
     offset: number;
     enrich?: string;
@@ -29,20 +37,28 @@ export async function pagedSelect<R extends { total: number }>(
   },
 ): Promise<Page<R>> {
   const knex = em.getKnex();
-  const countOnly = spec.base.clone().clearSelect().clearOrder().count({ n: "*" });
-  spec.base
-    .select(
-      knex.raw("count(*) over ()::int as total"),
-      knex.raw(`row_number() over (order by ${spec.orderBy}) as rn`),
+  const nulls = spec.nullsLast ? " nulls last" : "";
+  const count = (spec.countBase ?? spec.base.clone().clearSelect().clearOrder()).select(
+    knex.raw("count(*)::int as n"),
+  );
+  const page = spec.base
+    .clone()
+    .select(spec.sortKeys.map((k, i) => knex.raw(`${k} as _s${i}`)))
+    .orderByRaw(
+      [...spec.sortKeys.map((k) => `${k} ${spec.dir}${nulls}`), `${spec.idColumn} ${spec.dir}`].join(", "),
     )
-    .orderBy("rn")
     .limit(spec.limit)
     .offset(spec.offset);
-  const columns = spec.enrichColumns ? `p.*, ${spec.enrichColumns}` : "p.*";
-  const rows = await em.execute<R[]>(
-    knex.raw(`with p as (?) select ${columns} from p ${spec.enrich ?? ""} order by p.rn`, [spec.base]),
+  const outerOrder = [
+    ...spec.sortKeys.map((_, i) => `p._s${i} ${spec.dir}${nulls}`),
+    `p.id ${spec.dir}`,
+  ].join(", ");
+  const columns = ["p.*", "n.n as total", spec.enrichColumns].filter(Boolean).join(", ");
+  const rows = await em.execute<(R & { id: string | null; total: number })[]>(
+    knex.raw(
+      `with p as (?), n as (?) select ${columns} from n left join p on true ${spec.enrich ?? ""} order by ${outerOrder}`,
+      [page, count],
+    ),
   );
-  if (rows.length || spec.offset === 0) return { rows, total: rows[0]?.total ?? 0 };
-  const [count] = await em.execute<{ n: string }[]>(countOnly);
-  return { rows, total: Number(count?.n ?? 0) };
+  return { rows: rows.filter((r) => r.id != null), total: rows[0]?.total ?? 0 };
 }

@@ -4,12 +4,12 @@ import type { StepOutcome } from "@/entities";
 import type { ListStepsQuery, StepTableRow } from "./steps-spec";
 import { pagedSelect, type Page } from "./sql";
 
-const ORDER_BY: Record<ListStepsQuery["sort"], string> = {
-  at: "r.at",
-  serial: "w.serial_year, w.serial_sequence",
-  step: "s.position",
-  result: "r.outcome",
-  user: "lower(u.name)",
+const ORDER_BY: Record<ListStepsQuery["sort"], string[]> = {
+  at: ["r.at"],
+  serial: ["w.serial_year", "w.serial_sequence", "r.at"],
+  step: ["s.position", "r.at"],
+  result: ["r.outcome", "r.at"],
+  user: ["lower(u.name)", "r.at"],
 };
 
 interface RawStepRow {
@@ -25,7 +25,6 @@ interface RawStepRow {
   outcome: StepOutcome;
   by_name: string | null;
   notes: string | null;
-  total: number;
 }
 
 /** One page of step records and how many match (one statement; names and failures for the page only). */
@@ -60,10 +59,12 @@ export async function stepTablePage(
   // Whole UTC days, the `to` day included.
   if (q.from) base.where("r.at", ">=", knex.raw("?::date", [q.from]));
   if (q.to) base.where("r.at", "<", knex.raw("?::date + 1", [q.to]));
-  const nulls = q.sort === "user" ? " nulls last" : "";
   const page = await pagedSelect<RawStepRow>(em, {
     base,
-    orderBy: `${ORDER_BY[q.sort]} ${q.dir}${nulls}, r.at ${q.dir}, r.id ${q.dir}`,
+    idColumn: "r.id",
+    sortKeys: ORDER_BY[q.sort],
+    dir: q.dir,
+    nullsLast: q.sort === "user",
     limit: options.limit ?? q.size,
     offset: options.offset ?? (q.page - 1) * q.size,
     enrich: `
