@@ -1,26 +1,7 @@
 "use client";
 import { Search } from "lucide-react";
+import { filterKeys as names, filterNames, type FilterSpec } from "@/lib/tables/filters";
 import { useTableUrl } from "./use-table-url";
-
-/** One filter of a table, as plain data (the server page describes them). */
-export type FilterSpec =
-  | { kind: "search"; name: string; label: string; placeholder?: string }
-  | {
-      kind: "select";
-      name: string;
-      label: string;
-      allLabel: string;
-      options: { value: string; label: string }[];
-    }
-  | { kind: "flag"; name: string; label: string }
-  | { kind: "date-range"; label: string; from: string; to: string };
-
-const names = (f: FilterSpec) => (f.kind === "date-range" ? [f.from, f.to] : [f.name]);
-
-/** Every query key the filters own (cleared by "Clear filters"). */
-export function filterNames(filters: FilterSpec[]): string[] {
-  return filters.flatMap(names);
-}
 
 /**
  * The filters above a table, in one form: a choice in a list or a tick applies at once; typed

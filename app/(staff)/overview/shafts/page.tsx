@@ -10,7 +10,8 @@ import {
   WORK_ORDER_STATE_VALUES,
 } from "@/lib/tables/shafts-spec";
 import { PageHeader } from "@/components/ui/page-header";
-import { FilterBar, filterNames, type FilterSpec } from "@/components/data-table/filter-bar";
+import { FilterBar } from "@/components/data-table/filter-bar";
+import { filterNames, type FilterSpec } from "@/lib/tables/filters";
 import { QueryNotice } from "@/components/data-table/query-notice";
 import { TableLinks } from "@/components/data-table/table-links";
 import { ShaftsTable } from "./_components/shafts-table";
