@@ -17,6 +17,8 @@ export function tableColumns<R>(
 ): ColumnDef<R>[] {
   return specs.map((spec) => ({
     id: spec.id,
+    // The file's text: TanStack sorts only columns with an accessor (the server does the sorting).
+    accessorFn: (row: R) => spec.csv(row),
     header: spec.label,
     enableSorting: spec.sortable,
     enableHiding: spec.hideable,

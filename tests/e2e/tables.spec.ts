@@ -47,7 +47,7 @@ test("the owner filters the orders table to late orders, goes back, and exports 
   await seedOrders();
   await signIn(page, ACCOUNTS.owner);
   await page.goto("/desk");
-  await page.getByRole("link", { name: "All orders" }).click();
+  await page.getByRole("link", { name: "All orders", exact: true }).click();
   await expect(page).toHaveURL(/\/desk\/orders$/);
   const table = page.getByRole("table", { name: "Orders" });
   await expect(table.getByRole("link", { name: `${tag}-3` })).toBeVisible();

@@ -42,7 +42,7 @@ export default async function OrderDeskPage() {
         <>
           <p className="no-print mb-2 text-sm text-ink-muted">
             To sort, filter, search past orders or export a file, open{" "}
-            <Link href="/desk/orders">all orders</Link>.
+            <Link href="/desk/orders">the orders table</Link>.
           </p>
           <TableCard
             caption="Open orders"
