@@ -1,5 +1,5 @@
 "use client";
-import { useMemo } from "react";
+import { useMemo, useState } from "react";
 import {
   flexRender,
   getCoreRowModel,
@@ -56,9 +56,13 @@ export function DataTable<R>({
 }) {
   const { navigate, pending, searchParams } = useTableUrl();
   const sorting: SortingState = useMemo(() => [{ id: query.sort, desc: query.dir === "desc" }], [query]);
+  // A column switched off disappears at once; the URL (replaced, not pushed) catches up.
+  const urlHide = query.hide.join(",");
+  const [chosen, setChosen] = useState<{ base: string; hide: string[] } | null>(null);
+  const hide = chosen && chosen.base === urlHide ? chosen.hide : query.hide;
   const columnVisibility: VisibilityState = useMemo(
-    () => Object.fromEntries(query.hide.map((id) => [id, false])),
-    [query.hide],
+    () => Object.fromEntries(hide.map((id) => [id, false])),
+    [hide],
   );
   const pageCount = Math.max(1, Math.ceil(total / query.size));
 
@@ -88,6 +92,7 @@ export function DataTable<R>({
       const hidden = Object.entries(next)
         .filter(([, visible]) => !visible)
         .map(([id]) => id);
+      setChosen({ base: urlHide, hide: hidden });
       navigate({ hide: hidden.length ? hidden.join(",") : null }, { replace: true, keepPage: true });
     },
   });
