@@ -59,6 +59,8 @@ export function DataTable<R>({
   // A column switched off disappears at once; the URL (replaced, not pushed) catches up.
   const urlHide = query.hide.join(",");
   const [chosen, setChosen] = useState<{ base: string; hide: string[] } | null>(null);
+  // Once the URL has moved on, it alone says which columns are hidden (back and forward included).
+  if (chosen && chosen.base !== urlHide) setChosen(null);
   const hide = chosen && chosen.base === urlHide ? chosen.hide : query.hide;
   const columnVisibility: VisibilityState = useMemo(
     () => Object.fromEntries(hide.map((id) => [id, false])),
