@@ -13,6 +13,9 @@ const columns = tableColumns<OrderTableRow>(ORDER_COLUMNS, {
     </Link>
   ),
   customer: (r) => <span className="whitespace-nowrap">{r.customerName}</span>,
+  company: (r) => (r.customerCompany ? <span className="whitespace-nowrap">{r.customerCompany}</span> : "—"),
+  email: (r) => <span className="whitespace-nowrap">{r.customerEmail}</span>,
+  shafts: (r) => <span className="block min-w-48">{r.shafts || "—"}</span>,
   status: (r) => <OrderStatusBadge status={r.status} label={r.statusLabel} onHold={r.onHold} />,
   payment: (r) => <PaymentBadge state={r.paymentState} />,
   total: (r) => formatMoney(r.totalCents, r.currency),
