@@ -5,6 +5,7 @@ import { benchTraveller } from "./traveller";
 import { benchFloor } from "./floor";
 import { benchScan } from "./scan";
 import { benchOverview } from "./overview";
+import { benchTables } from "./tables";
 
 async function main(): Promise<void> {
   await benchDriveline();
@@ -13,6 +14,7 @@ async function main(): Promise<void> {
   if (process.env.BENCH_BASE_URL) {
     await benchApi(process.env.BENCH_BASE_URL);
     await benchScan(process.env.BENCH_BASE_URL, floor?.scanCode ?? null);
+    await benchTables(process.env.BENCH_BASE_URL);
   } else
     console.log(
       "\nAPI latency and the scan route: skipped (run through `npm run bench`, which starts the app).",

@@ -21,6 +21,11 @@ import { User } from "./user.entity";
   name: "customer_phone_digits_trgm_index",
   expression: `create index "customer_phone_digits_trgm_index" on "customer" using gin ((regexp_replace(coalesce(phone, ''), '[^0-9]', '', 'g')) gin_trgm_ops)`,
 })
+// The customers table sorts by name, whatever its capitals (Migration20261204150300).
+@Index({
+  name: "customer_lower_name_index",
+  expression: `create index "customer_lower_name_index" on "customer" (lower(name))`,
+})
 export class Customer {
   [OptionalProps]?: "createdAt";
 

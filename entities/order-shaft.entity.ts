@@ -1,4 +1,4 @@
-import { Check, Entity, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
+import { Check, Entity, Index, ManyToOne, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import type { QuoteLine } from "../lib/pricing/price-book";
@@ -34,6 +34,7 @@ export class OrderShaft {
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
 
+  @Index()
   @ManyToOne("Order", { deleteRule: "cascade" })
   order!: Order;
 

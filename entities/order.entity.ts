@@ -42,7 +42,8 @@ export type PaymentState = (typeof PAYMENT_STATES)[number];
 @Check({ name: "shop_order_deposit_within_total_check", expression: "deposit_cents <= total_cents" })
 @Check({ name: "shop_order_paid_within_total_check", expression: "paid_cents <= total_cents" })
 @Check({ name: "shop_order_refunded_within_paid_check", expression: "refunded_cents <= paid_cents" })
-// The owner's overview (Migration20261204150200, lib/shop/overview-queries.ts).
+// The owner's overview (Migration20261204150200, lib/shop/overview-queries.ts); the open-orders index also
+// serves the staff tables' "late" and "open" filters.
 @Index({
   name: "shop_order_status_money_index",
   expression: `create index "shop_order_status_money_index" on "shop_order" ("status") include ("total_cents")`,
@@ -114,6 +115,7 @@ export class Order {
   @Property({ type: "integer", default: 0 })
   refundedCents: number = 0;
 
+  @Index()
   @Property({ type: "date" })
   promisedDate!: string;
 

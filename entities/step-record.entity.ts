@@ -10,6 +10,8 @@ export type StepOutcome = (typeof STEP_OUTCOMES)[number];
 
 /** One submission at a station (or an owner's concession): who, when, what was measured, the outcome. Rows are only added. */
 @Entity({ tableName: "step_record" })
+// The step records table: newest first, and by who signed (Migration20261204150300).
+@Index({ properties: ["by", "at"] })
 export class StepRecord {
   [OptionalProps]?: "at" | "failures" | "reason" | "completionOf";
 
@@ -30,6 +32,7 @@ export class StepRecord {
   @ManyToOne(() => User, { nullable: true, deleteRule: "set null" })
   by?: User | null;
 
+  @Index()
   @Property({ type: "Date", defaultRaw: "now()" })
   at: Date = new Date();
 

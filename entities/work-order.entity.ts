@@ -23,6 +23,11 @@ export type WorkOrderState = (typeof WORK_ORDER_STATES)[number];
 /** One shaft of a released order on the shop floor: its serial for life, its traveller revision, where it is. */
 @Entity({ tableName: "work_order" })
 @Unique({ properties: ["serialYear", "serialSequence"] })
+// The orders table's "on hold" filter (Migration20261204150300).
+@Index({
+  name: "work_order_on_hold_order_index",
+  expression: `create index "work_order_on_hold_order_index" on "work_order" ("order_id") where state = 'on_hold'`,
+})
 export class WorkOrder {
   [OptionalProps]?: "revision" | "state" | "currentPosition" | "releaseReason" | "createdAt" | "updatedAt";
 

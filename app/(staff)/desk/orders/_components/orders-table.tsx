@@ -1,0 +1,54 @@
+"use client";
+import Link from "next/link";
+import { DataTable, type TableQueryState } from "@/components/data-table/data-table";
+import { tableColumns } from "@/components/data-table/columns";
+import { OrderStatusBadge, PaymentBadge } from "@/components/orders/status-badge";
+import { formatMoney } from "@/lib/pricing/price-book";
+import { ORDER_COLUMNS, type OrderTableRow } from "@/lib/tables/orders-spec";
+
+const columns = tableColumns<OrderTableRow>(ORDER_COLUMNS, {
+  number: (r) => (
+    <Link href={`/desk/orders/${r.id}`} className="font-mono font-semibold whitespace-nowrap">
+      {r.number}
+    </Link>
+  ),
+  customer: (r) => <span className="whitespace-nowrap">{r.customerName}</span>,
+  company: (r) => (r.customerCompany ? <span className="whitespace-nowrap">{r.customerCompany}</span> : "—"),
+  email: (r) => <span className="whitespace-nowrap">{r.customerEmail}</span>,
+  shafts: (r) => <span className="block min-w-48">{r.shafts || "—"}</span>,
+  status: (r) => <OrderStatusBadge status={r.status} label={r.statusLabel} onHold={r.onHold} />,
+  payment: (r) => <PaymentBadge state={r.paymentState} />,
+  total: (r) => formatMoney(r.totalCents, r.currency),
+  balance: (r) => (r.balanceCents ? formatMoney(r.balanceCents, r.currency) : "—"),
+  created: (r) => <span className="whitespace-nowrap">{r.createdAt.slice(0, 10)}</span>,
+  promised: (r) => <span className="whitespace-nowrap">{r.promisedDate}</span>,
+  late: (r) => (r.late ? <span className="font-semibold text-fail">Late</span> : ""),
+});
+
+export function OrdersTable(props: {
+  rows: OrderTableRow[];
+  total: number;
+  query: TableQueryState;
+  filtered: boolean;
+}) {
+  return (
+    <DataTable
+      caption="Orders"
+      columns={columns}
+      rows={props.rows}
+      total={props.total}
+      query={props.query}
+      defaults={{ sort: "created", dir: "desc" }}
+      getRowId={(r) => r.id}
+      exportHref="/api/exports/orders"
+      rowClassName={(r) => (r.late ? "bg-fail-soft/40" : undefined)}
+      empty={{
+        title: props.filtered ? "No orders match these filters" : "No orders yet",
+        text: props.filtered
+          ? "Loosen a filter or clear them all to see more."
+          : "Orders placed online and by phone are listed here.",
+        filtered: props.filtered,
+      }}
+    />
+  );
+}

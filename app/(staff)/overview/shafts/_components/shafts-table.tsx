@@ -1,0 +1,83 @@
+"use client";
+import Link from "next/link";
+import { DataTable, type TableQueryState } from "@/components/data-table/data-table";
+import { tableColumns } from "@/components/data-table/columns";
+import { shortTimestamp } from "@/lib/tables/columns";
+import { SHAFT_COLUMNS, WORK_ORDER_STATE_LABEL, type ShaftTableRow } from "@/lib/tables/shafts-spec";
+
+const pill = "inline-flex items-center rounded-full px-2.5 py-0.5 text-xs font-semibold whitespace-nowrap";
+
+const columns = tableColumns<ShaftTableRow>(SHAFT_COLUMNS, {
+  serial: (r) => (
+    <Link href={`/floor/shafts/${r.serial}`} className="font-mono font-semibold whitespace-nowrap">
+      {r.serial}
+    </Link>
+  ),
+  order: (r) => (
+    <Link href={`/desk/orders/${r.orderId}`} className="font-mono whitespace-nowrap">
+      {r.orderNumber}
+    </Link>
+  ),
+  step: (r) =>
+    r.stepCode ? (
+      <span className="whitespace-nowrap">
+        <span className="font-mono">{r.stepCode}</span> {r.stepName}{" "}
+        <span className="text-ink-muted">
+          ({r.position} of {r.stepCount})
+        </span>
+      </span>
+    ) : (
+      <span className="text-ink-muted">All steps done</span>
+    ),
+  state: (r) => (
+    <span className={`${pill} ${r.onHold ? "bg-warn-soft text-warn" : "bg-steel-50 text-steel-700"}`}>
+      {WORK_ORDER_STATE_LABEL[r.state]}
+    </span>
+  ),
+  hold: (r) =>
+    r.onHold ? (
+      <span className="font-semibold text-warn">
+        At {r.holdStep ?? "a step"}
+        {r.holdSince && (
+          <span className="block text-xs font-normal">since {shortTimestamp(r.holdSince)}</span>
+        )}
+      </span>
+    ) : (
+      ""
+    ),
+  tube: (r) => <span className="font-mono text-xs whitespace-nowrap">{r.tube}</span>,
+  promised: (r) => (
+    <span className={`whitespace-nowrap ${r.late ? "font-semibold text-fail" : ""}`}>
+      {r.promisedDate}
+      {r.late && " late"}
+    </span>
+  ),
+  released: (r) => <span className="whitespace-nowrap">{r.releasedAt.slice(0, 10)}</span>,
+});
+
+export function ShaftsTable(props: {
+  rows: ShaftTableRow[];
+  total: number;
+  query: TableQueryState;
+  filtered: boolean;
+}) {
+  return (
+    <DataTable
+      caption="Shafts"
+      columns={columns}
+      rows={props.rows}
+      total={props.total}
+      query={props.query}
+      defaults={{ sort: "promised", dir: "asc" }}
+      getRowId={(r) => r.workOrderId}
+      exportHref="/api/exports/shafts"
+      empty={{
+        title: props.filtered ? "No shafts match these filters" : "No shafts on the floor yet",
+        text: props.filtered
+          ? "Loosen a filter or clear them all to see more."
+          : "A shaft gets its serial when its order is released to the shop.",
+        filtered: props.filtered,
+      }}
+    />
+  );
+}

@@ -1,0 +1,63 @@
+"use client";
+import Link from "next/link";
+import { DataTable, type TableQueryState } from "@/components/data-table/data-table";
+import { tableColumns } from "@/components/data-table/columns";
+import { shortTimestamp } from "@/lib/tables/columns";
+import { STEP_COLUMNS, STEP_OUTCOME_LABEL, type StepTableRow } from "@/lib/tables/steps-spec";
+
+const pill = "inline-flex items-center rounded-full px-2.5 py-0.5 text-xs font-semibold whitespace-nowrap";
+const TONE: Record<StepTableRow["outcome"], string> = {
+  pass: "bg-pass-soft text-pass",
+  rework: "bg-pass-soft text-pass",
+  hold: "bg-warn-soft text-warn",
+  concession: "bg-steel-50 text-steel-700",
+};
+
+const columns = tableColumns<StepTableRow>(STEP_COLUMNS, {
+  at: (r) => <span className="whitespace-nowrap tabular-nums">{shortTimestamp(r.at)}</span>,
+  serial: (r) => (
+    <Link href={`/floor/shafts/${r.serial}`} className="font-mono whitespace-nowrap">
+      {r.serial}
+    </Link>
+  ),
+  order: (r) => (
+    <Link href={`/desk/orders/${r.orderId}`} className="font-mono whitespace-nowrap">
+      {r.orderNumber}
+    </Link>
+  ),
+  step: (r) => (
+    <span className="whitespace-nowrap">
+      <span className="font-mono">{r.stepCode}</span> {r.stepName}
+    </span>
+  ),
+  result: (r) => <span className={`${pill} ${TONE[r.outcome]}`}>{STEP_OUTCOME_LABEL[r.outcome]}</span>,
+  user: (r) => r.byName ?? <span className="text-ink-muted">(removed user)</span>,
+  notes: (r) => (r.notes ? <span className="block max-w-md text-xs">{r.notes}</span> : ""),
+});
+
+export function StepsTable(props: {
+  rows: StepTableRow[];
+  total: number;
+  query: TableQueryState;
+  filtered: boolean;
+}) {
+  return (
+    <DataTable
+      caption="Step records"
+      columns={columns}
+      rows={props.rows}
+      total={props.total}
+      query={props.query}
+      defaults={{ sort: "at", dir: "desc" }}
+      getRowId={(r) => r.id}
+      exportHref="/api/exports/steps"
+      empty={{
+        title: props.filtered ? "No step records match these filters" : "No steps signed yet",
+        text: props.filtered
+          ? "Loosen a filter or clear them all to see more."
+          : "Each step the floor signs off (and each hold) is recorded here.",
+        filtered: props.filtered,
+      }}
+    />
+  );
+}

@@ -1,0 +1,24 @@
+import { AccessError } from "@/lib/auth/guard";
+import { can } from "@/lib/auth/permissions";
+import { getEm } from "@/lib/db/orm";
+import { AppError } from "@/lib/http/errors";
+import { route } from "@/lib/http/route";
+import { csvResponse } from "@/lib/tables/csv";
+import { tableQueryOrThrow } from "@/lib/tables/http";
+import { exportColumns, tableNamed } from "@/lib/tables/registry";
+import { todayIso } from "@/lib/tables/sql";
+
+export const dynamic = "force-dynamic";
+
+// GET /api/exports/{orders,customers,shafts,steps}?…the table's query… — every matching row as CSV, streamed
+export const GET = route<{ table: string }>({ permission: null }, async ({ req, params, user }) => {
+  const table = tableNamed(params.table);
+  if (!table) throw new AppError("not_found", "No such table.");
+  // The table's own permission: the same as its page's.
+  if (!can(user!.role, table.permission)) throw new AccessError(403);
+  const query = tableQueryOrThrow(table.schema, req.nextUrl.searchParams);
+  const em = await getEm();
+  return csvResponse(`${params.table}-${todayIso()}.csv`, exportColumns(table, query), (limit, offset) =>
+    table.fetch(em, query, { limit, offset }),
+  );
+});
