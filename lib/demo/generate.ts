@@ -525,6 +525,7 @@ export async function generateShop(db: ClientBase, opts: GenerateOptions): Promi
     const cancelAt = plan.cancel ? createdAt + plan.cancel.afterH * HOUR : null;
     const firstKind = quote.dueNowCents >= quote.totalCents ? "full" : "deposit";
     let deposit: Row | null = null;
+    let cancelled: { at: Date; reason: string } | null = null;
 
     if (cancelAt != null && cancelAt <= now) {
       // Cancelled before release: the deposit (if paid first) is refunded per the policy.
@@ -539,13 +540,11 @@ export async function generateShop(db: ClientBase, opts: GenerateOptions): Promi
         );
       }
       status = "cancelled";
-      ev(
-        "note",
-        `Order cancelled: ${CANCEL_REASONS[Math.floor(rnd() * CANCEL_REASONS.length)]}`,
-        cancelAt,
-        true,
-        staff.counterId,
-      );
+      cancelled = {
+        at: new Date(cancelAt),
+        reason: CANCEL_REASONS[Math.floor(rnd() * CANCEL_REASONS.length)]!,
+      };
+      ev("note", `Order cancelled: ${cancelled.reason}`, cancelAt, true, staff.counterId);
       updated = Math.max(updated, cancelAt);
     } else if (payAt != null && payAt <= now) {
       deposit = pay(firstKind, quote.dueNowCents, payAt);
@@ -616,6 +615,9 @@ export async function generateShop(db: ClientBase, opts: GenerateOptions): Promi
       null,
       new Date(createdAt),
       new Date(Math.min(now, updated)),
+      cancelled?.at ?? null,
+      cancelled?.reason ?? null,
+      shop.version,
     ]);
     return { orderId, status };
 
@@ -874,6 +876,9 @@ async function writeBatch(db: ClientBase, rows: BatchRows): Promise<void> {
       col("notes", "text"),
       col("created_at", "timestamptz"),
       col("updated_at", "timestamptz"),
+      col("cancelled_at", "timestamptz"),
+      col("cancel_reason", "text"),
+      col("config_version", "int4"),
     ],
     rows.orders,
   );

@@ -232,9 +232,9 @@ export function orderView(order: Order, user: CurrentUser): OrderView {
       reference: p.reference ?? null,
     })),
     shopNotes: order.orderNotes.isInitialized() ? notesFor(order.orderNotes.getItems(), staff) : [],
-    needsSignoff: order.status !== "cancelled" && order.shafts
-        .getItems()
-        .some((s) => needsEngineeringSignoff(frozenChecks(s), s.failedCheckAcceptances)),
+    needsSignoff:
+      order.status !== "cancelled" &&
+      order.shafts.getItems().some((s) => needsEngineeringSignoff(frozenChecks(s), s.failedCheckAcceptances)),
     cancelReason: order.cancelReason ?? null,
     events: order.events
       .getItems()

@@ -37,6 +37,7 @@ describe.skipIf(!hasDatabase)("the demo history", () => {
         catalogue: defaultCatalogue,
         settings: resolveSettings({}),
         settingOverrides: {},
+        version: 1,
         priceBook: defaultPriceBook,
         floor: defaultFloorSettings,
       },

@@ -44,6 +44,7 @@ describe.skipIf(!hasDatabase)("overview queries use their indexes", () => {
         catalogue: defaultCatalogue,
         settings: resolveSettings({}),
         settingOverrides: {},
+        version: 1,
         priceBook: defaultPriceBook,
         floor: defaultFloorSettings,
       },
