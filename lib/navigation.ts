@@ -14,6 +14,7 @@ export const NAVIGATION: Record<Role, NavItem[]> = {
   counter: [
     { href: "/desk", label: "Order desk" },
     { href: "/desk/new", label: "New phone order" },
+    { href: "/desk/orders", label: "Orders" },
     { href: "/desk/customers", label: "Customers" },
     { href: "/floor/queue", label: "Work queue" },
   ],
@@ -24,7 +25,9 @@ export const NAVIGATION: Record<Role, NavItem[]> = {
   owner: [
     { href: "/overview", label: "Overview" },
     { href: "/desk", label: "Order desk" },
+    { href: "/desk/orders", label: "Orders" },
     { href: "/floor", label: "Floor" },
+    { href: "/overview/shafts", label: "Shafts" },
     { href: "/overview/catalogue", label: "Catalogue & prices" },
     { href: "/overview/staff", label: "Staff" },
   ],
