@@ -3,7 +3,7 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { resendStaffInvitationAction, revokeStaffInvitationAction } from "@/lib/actions/invite-staff";
 import { Alert } from "@/components/ui/alert";
-import { ConfirmDialog } from "./confirm-dialog";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
 /** One open invitation as the list shows it (dates already in words). */
 export interface InvitationView {

@@ -5,7 +5,7 @@ import { changeStaffRoleAction } from "@/lib/actions/change-staff-role";
 import { setStaffActiveAction } from "@/lib/actions/set-staff-active";
 import { CELL, TableCard } from "@/components/ui/table-card";
 import { Alert } from "@/components/ui/alert";
-import { ConfirmDialog } from "./confirm-dialog";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
 export type StaffRoleValue = "counter" | "floor" | "owner";
 

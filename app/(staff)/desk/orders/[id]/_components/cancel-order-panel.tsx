@@ -6,7 +6,7 @@ import type { CancellationQuote } from "@/lib/orders/cancel";
 import { formatMoney } from "@/lib/pricing/price-book";
 import { cancelOrderAction } from "@/lib/actions/cancel-order";
 import { Alert } from "@/components/ui/alert";
-import { ConfirmDialog } from "./confirm-dialog";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
 /**
  * Cancel with a reason. Before release the counter or an owner may; after release only an owner.
@@ -93,9 +93,9 @@ export function CancelOrderPanel({
         confirmLabel={
           quote.refundCents > 0 ? `Cancel and refund ${money(quote.refundCents)}` : "Cancel order"
         }
-        danger
+        tone="danger"
         busy={busy}
-        onCancel={() => setOpen(false)}
+        onClose={() => setOpen(false)}
         onConfirm={async () => {
           setBusy(true);
           const res = await cancelOrderAction({ orderId, reason });

@@ -6,7 +6,7 @@ import type { SignoffShaftView } from "@/lib/orders/engineering-signoff";
 import { acceptFailedCheckAction } from "@/lib/actions/accept-failed-check";
 import { ACCEPTANCE_REASON_MIN_CHARS } from "@/lib/orders/desk-schemas";
 import { Alert } from "@/components/ui/alert";
-import { ConfirmDialog } from "./confirm-dialog";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
 /**
  * The shafts whose frozen evaluation fails a check. Until an owner accepts each one for this
@@ -127,9 +127,9 @@ function AcceptForm({
         open={open}
         title="Accept this failed check?"
         confirmLabel="Accept for this order"
-        danger
+        tone="danger"
         busy={busy}
-        onCancel={() => setOpen(false)}
+        onClose={() => setOpen(false)}
         onConfirm={async () => {
           setBusy(true);
           const res = await acceptFailedCheckAction({ orderId, shaftId, checkId, reason });

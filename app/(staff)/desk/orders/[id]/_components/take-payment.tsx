@@ -6,7 +6,7 @@ import { formatMoney } from "@/lib/pricing/price-book";
 import { sendPaymentLinkAction } from "@/lib/actions/send-payment-link";
 import { recordCounterPaymentAction } from "@/lib/actions/record-counter-payment";
 import { Alert } from "@/components/ui/alert";
-import { ConfirmDialog } from "./confirm-dialog";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
 type Method = "cash" | "cheque" | "terminal";
 const METHODS: { value: Method; label: string; reference: string }[] = [
@@ -201,7 +201,7 @@ export function TakePayment({
         title="E-mail a payment link?"
         confirmLabel="Send the link"
         busy={busy}
-        onCancel={() => setConfirm(null)}
+        onClose={() => setConfirm(null)}
         onConfirm={sendLink}
       >
         <p>
@@ -214,7 +214,7 @@ export function TakePayment({
         title="Record this payment?"
         confirmLabel={`Record ${Number.isFinite(cents) ? money(cents) : ""}`}
         busy={busy}
-        onCancel={() => setConfirm(null)}
+        onClose={() => setConfirm(null)}
         onConfirm={record}
       >
         <p>

@@ -2,8 +2,9 @@
 import { useEffect, useId, useRef } from "react";
 
 /**
- * A modal confirmation on the browser's own <dialog>: focus moves into it, Escape cancels, and
- * focus returns to the button that opened it.
+ * A modal confirmation on the browser's own <dialog>: focus moves into it, Escape cancels (unless
+ * the action is under way), and focus returns to the button that opened it. Used before every action
+ * that moves money, changes someone's access or cannot be undone.
  */
 export function ConfirmDialog({
   open,
@@ -39,6 +40,9 @@ export function ConfirmDialog({
     <dialog
       ref={ref}
       aria-labelledby={titleId}
+      onCancel={(e) => {
+        if (busy) e.preventDefault();
+      }}
       onClose={onClose}
       className="m-auto w-[min(28rem,calc(100vw-2rem))] rounded-card border border-line bg-paper-raised p-0 text-ink shadow-card backdrop:bg-ink/40"
     >
@@ -60,8 +64,8 @@ export function ConfirmDialog({
           </p>
         )}
         <div className="flex flex-wrap justify-end gap-2">
-          <button type="button" className="btn-quiet" onClick={onClose}>
-            Cancel
+          <button type="button" className="btn-quiet" onClick={onClose} disabled={busy}>
+            Go back
           </button>
           <button
             type="submit"
