@@ -53,6 +53,10 @@ export type PaymentState = (typeof PAYMENT_STATES)[number];
   expression: `create index "shop_order_open_promised_index" on "shop_order" ("promised_date") include ("status", "customer_id", "total_cents", "paid_cents", "refunded_cents") where status not in ('shipped', 'cancelled')`,
 })
 @Index({
+  name: "shop_order_shipped_at_index",
+  expression: `create index "shop_order_shipped_at_index" on "shop_order" ("shipped_at") include ("created_at") where shipped_at is not null`,
+})
+@Index({
   name: "shop_order_owed_index",
   expression: `create index "shop_order_owed_index" on "shop_order" ("status") include ("total_cents", "paid_cents") where paid_cents < total_cents and status <> 'cancelled'`,
 })
@@ -118,6 +122,10 @@ export class Order {
   @Index()
   @Property({ type: "date" })
   promisedDate!: string;
+
+  /** When the last shaft left the shop (shipped or picked up); the overview's days to ship read it. */
+  @Property({ type: "Date", nullable: true })
+  shippedAt?: Date | null;
 
   /** The shop configuration version (catalogue, limits, price book) it was priced and engineered with. */
   @Property({ type: "integer", nullable: true })

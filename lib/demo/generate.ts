@@ -526,6 +526,7 @@ export async function generateShop(db: ClientBase, opts: GenerateOptions): Promi
     const firstKind = quote.dueNowCents >= quote.totalCents ? "full" : "deposit";
     let deposit: Row | null = null;
     let cancelled: { at: Date; reason: string } | null = null;
+    let shippedAt: Date | null = null;
 
     if (cancelAt != null && cancelAt <= now) {
       // Cancelled before release: the deposit (if paid first) is refunded per the policy.
@@ -564,6 +565,7 @@ export async function generateShop(db: ClientBase, opts: GenerateOptions): Promi
         }
         if (floor.allDispatched != null) {
           status = "shipped";
+          shippedAt = new Date(floor.allDispatched);
           if (plan.refundAfterShip && paid > 0) {
             const at = floor.allDispatched + 3 * DAY;
             if (at <= now) {
@@ -618,6 +620,7 @@ export async function generateShop(db: ClientBase, opts: GenerateOptions): Promi
       cancelled?.at ?? null,
       cancelled?.reason ?? null,
       shop.version,
+      shippedAt,
     ]);
     return { orderId, status };
 
@@ -879,6 +882,7 @@ async function writeBatch(db: ClientBase, rows: BatchRows): Promise<void> {
       col("cancelled_at", "timestamptz"),
       col("cancel_reason", "text"),
       col("config_version", "int4"),
+      col("shipped_at", "timestamptz"),
     ],
     rows.orders,
   );

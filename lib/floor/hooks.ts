@@ -110,6 +110,7 @@ export async function onShaftDispatched(em: EntityManager, m: Milestone): Promis
   if (!states.every((s) => s === "shipped" || s === "picked_up") || m.order.status === "shipped") return;
   // "shipped" is the order's "has left the shop"; a pickup order shows it as "Picked up".
   m.order.status = "shipped";
+  m.order.shippedAt = m.record.at;
   if (m.order.fulfilment !== "ship") return;
   const others = await em.find(StepRecord, {
     workOrder: { order: m.order.id },

@@ -15,9 +15,8 @@ export interface OverviewQueryContext {
   averagesSince: Date;
   /** Every code of the shop's routing, in order. */
   routingCodes: string[];
-  /** Routing codes of final inspection and of dispatch (from the shop's floor settings). */
+  /** Routing codes of final inspection (from the shop's floor settings). */
   inspectionCodes: string[];
-  dispatchCodes: string[];
   /** Measured (or default) seconds per step code, for the remaining-time estimate. */
   stepSeconds: { code: string; seconds: number }[];
   /** Seconds the whole routing takes (an order not yet released has all of it ahead). */
@@ -203,19 +202,14 @@ export const OVERVIEW_QUERIES = {
   /** Orders that left the shop, by week and whole days from order to the last shaft's dispatch. */
   orderToShip: {
     name: "days from order to ship",
-    indexes: ["work_order_step_done_code_index"],
-    sql: `with left_shop as (
-            select w.order_id, max(s.completed_at) as at
-            from work_order_step s join work_order w on w.id = s.work_order_id
-            where s.state = 'done' and s.code = any(?::text[]) and s.completed_at >= ?
-            group by w.order_id
-          )
-          select to_char(date_trunc('week', l.at at time zone 'UTC'), 'YYYY-MM-DD') as week,
-            floor(extract(epoch from (l.at - o.created_at)) / 86400)::int as days, count(*)::int as orders
-          from left_shop l join shop_order o on o.id = l.order_id
-          where o.status = 'shipped'
+    // shipped_at is set when the last shaft leaves (lib/floor/hooks.ts): one index range, no join.
+    indexes: ["shop_order_shipped_at_index"],
+    sql: `select to_char(date_trunc('week', shipped_at at time zone 'UTC'), 'YYYY-MM-DD') as week,
+            floor(extract(epoch from (shipped_at - created_at)) / 86400)::int as days, count(*)::int as orders
+          from shop_order
+          where shipped_at is not null and shipped_at >= ?
           group by 1, 2 order by 1, 2`,
-    params: (c) => [pgArray(c.dispatchCodes), c.chartsSince.toISOString()],
+    params: (c) => [c.chartsSince.toISOString()],
   },
   /**
    * Measured time per routing step: from the previous sign-off (or the release, for the first

@@ -205,7 +205,6 @@ export function overviewContext(
     averagesSince: new Date(now.getTime() - AVERAGE_WINDOW_DAYS * DAY_MS),
     routingCodes: floor.routing.map((s) => s.code),
     inspectionCodes: codes("final-inspection"),
-    dispatchCodes: codes("dispatch"),
     stepSeconds: averages.map((a) => ({ code: a.code, seconds: a.hours * HOUR_S })),
     routingSeconds: routingHours * HOUR_S,
   };

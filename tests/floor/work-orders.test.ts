@@ -127,7 +127,10 @@ describe("signing off steps", () => {
       const shipped = await submitStep(code(serial, "SHP"), good.SHP!, floor, key());
       expect(shipped).toMatchObject({ outcome: "pass", workOrderState: "shipped", next: null });
       const fresh = em.fork();
-      expect((await fresh.findOneOrFail(Order, { id: order.id })).status).toBe("shipped");
+      const left = await fresh.findOneOrFail(Order, { id: order.id });
+      expect(left.status).toBe("shipped");
+      // The order is stamped with the time it left (the owner's days-to-ship figure reads it).
+      expect(left.shippedAt).toBeInstanceOf(Date);
       expect((await orderFloorState(fresh, order.id)).state).toBe("shipped");
       await expect(submitStep(code(serial, "SHP"), good.SHP!, floor, key())).rejects.toMatchObject({
         code: "conflict",

@@ -157,6 +157,12 @@ describe.skipIf(!hasDatabase)("overview figures on a hand-built shop", () => {
       });
       ids[`S${i + 1}`] = id;
       await workOrder(id, "2026-06-01T00:00:00Z", i === 4 ? [20, ...usual.slice(1)] : usual);
+      // The floor stamps the order when its last shaft leaves (lib/floor/hooks.ts): the SHP sign-off.
+      await db.query(
+        `update shop_order set shipped_at = (select max(s.completed_at) from work_order_step s
+           join work_order w on w.id = s.work_order_id where w.order_id = $1 and s.state = 'done') where id = $1`,
+        [id],
+      );
     }
     // S1's deposit and balance in the window (weeks 06-01 and 06-08), 100 refunded on 06-09; the
     // other shipped orders were paid in January (before the 12 weeks the charts show).
