@@ -46,14 +46,9 @@ export function ConfirmDialog({
       onClose={onClose}
       className="m-auto w-[min(28rem,calc(100vw-2rem))] rounded-card border border-line bg-paper-raised p-0 text-ink shadow-card backdrop:bg-ink/40"
     >
-      <form
-        method="dialog"
-        className="space-y-4 p-5"
-        onSubmit={(e) => {
-          e.preventDefault();
-          onConfirm();
-        }}
-      >
+      {/* No <form> here: the dialog is often opened from inside another form (a nested form's
+          submit would reach that one too). */}
+      <div className="space-y-4 p-5">
         <h2 id={titleId} className="text-lg font-semibold">
           {title}
         </h2>
@@ -68,14 +63,15 @@ export function ConfirmDialog({
             Go back
           </button>
           <button
-            type="submit"
+            type="button"
             className={tone === "danger" ? "btn bg-fail text-white hover:opacity-90" : "btn-primary"}
             disabled={busy}
+            onClick={onConfirm}
           >
             {busy ? "Working…" : confirmLabel}
           </button>
         </div>
-      </form>
+      </div>
     </dialog>
   );
 }
