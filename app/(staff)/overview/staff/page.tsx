@@ -64,7 +64,7 @@ export default async function StaffPage() {
         title="Staff"
         description="Counter, floor and owner accounts. Customers create their own."
       />
-      <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
+      <div className="grid gap-6 2xl:grid-cols-[1fr_22rem]">
         <div className="min-w-0 space-y-8">
           <section aria-labelledby="staff-accounts">
             <h2 id="staff-accounts" className="mb-3 text-lg font-semibold">
@@ -85,7 +85,7 @@ export default async function StaffPage() {
             <PendingInvitations invitations={invitationViews} />
           </section>
         </div>
-        <section className="h-fit card p-5" aria-labelledby="new-staff">
+        <section className="h-fit max-w-xl card p-5 2xl:max-w-none" aria-labelledby="new-staff">
           <h2 id="new-staff" className="text-lg font-semibold">
             Invite a staff member
           </h2>
