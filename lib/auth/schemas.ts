@@ -50,12 +50,6 @@ export const acceptInviteBodySchema = z.object({
 });
 export type AcceptInviteBody = z.infer<typeof acceptInviteBodySchema>;
 
-/** Setting the first password from a one-time link (the first owner). */
-export const setPasswordBodySchema = z.object({
-  password: signUpBodySchema.shape.password,
-});
-export type SetPasswordBody = z.infer<typeof setPasswordBodySchema>;
-
 /** The counter invites a customer it knows to an account of their own. */
 export const inviteCustomerBodySchema = z.object({
   customerId: z.uuid({ error: "Choose a customer." }),
