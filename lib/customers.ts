@@ -2,6 +2,7 @@ import { Customer, User } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 import { recordAudit } from "@/lib/audit";
 import { AppError } from "@/lib/http/errors";
+import { containsPattern, likeEscape } from "@/lib/tables/params";
 
 /**
  * Gives a newly signed-up customer their customer record: the one the counter already keeps
@@ -36,50 +37,45 @@ export interface CustomerRow {
   hasAccount: boolean;
 }
 
-/** Every customer, by name, as plain rows for the screens. */
-export async function listCustomers(): Promise<CustomerRow[]> {
-  const em = await getEm();
-  const rows = await em.find(Customer, {}, { orderBy: { name: "asc" } });
-  return rows.map((c) => ({
-    id: c.id,
-    name: c.name,
-    email: c.email,
-    phone: c.phone ?? null,
-    company: c.company ?? null,
-    hasAccount: c.user != null,
-  }));
-}
-
 /** The text the search matches, as the trigram index `customer_search_trgm_index` has it. */
-const SEARCH_TEXT = `lower(name || ' ' || email || ' ' || coalesce(company, '') || ' ' || coalesce(phone, ''))`;
+const searchText = (c: string) =>
+  `lower(${c}name || ' ' || ${c}email || ' ' || coalesce(${c}company, '') || ' ' || coalesce(${c}phone, ''))`;
 /** The phone's digits alone (index `customer_phone_digits_trgm_index`): "555 0163" finds "(555) 016-3…". */
-const PHONE_DIGITS = `regexp_replace(coalesce(phone, ''), '[^0-9]', '', 'g')`;
-
-const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
+const phoneDigits = (c: string) => `regexp_replace(coalesce(${c}phone, ''), '[^0-9]', '', 'g')`;
 
 /**
- * The counter's customer search, on the server: every word typed must appear somewhere in the
- * name, e-mail, company or phone (any capitals); a word of digits also matches the phone's digits
- * whatever its spacing. Best matches first (name starting with the query, then by name), at most
- * `limit` rows.
+ * Which customers a search text finds (the counter's search and the customers table alike): every
+ * word must appear somewhere in the name, e-mail, company or phone (any capitals); a word of digits
+ * also matches the phone's digits whatever its spacing. SQL with `?` placeholders, served by the
+ * trigram indexes; `alias` names the customer table ("c") when the query joins others. Null when
+ * the text holds no word.
  */
-export async function searchCustomers(query: string, limit = 8): Promise<CustomerRow[]> {
+export function customerMatch(query: string, alias = ""): { sql: string; params: string[] } | null {
+  const c = alias ? `${alias}.` : "";
   const words = query.toLowerCase().split(/\s+/).filter(Boolean).slice(0, 6);
-  if (words.length === 0) return [];
-  const em = await getEm();
+  if (words.length === 0) return null;
   const where: string[] = [];
-  const params: unknown[] = [];
+  const params: string[] = [];
   for (const word of words) {
     const digits = word.replace(/[^0-9]/g, "");
-    params.push(`%${likeEscape(word)}%`);
+    params.push(containsPattern(word));
     if (digits.length >= 3 && /^[0-9()+\-.\s]+$/.test(word)) {
-      params.push(`%${digits}%`);
-      where.push(`(${SEARCH_TEXT} like ? or ${PHONE_DIGITS} like ?)`);
+      params.push(containsPattern(digits));
+      where.push(`(${searchText(c)} like ? or ${phoneDigits(c)} like ?)`);
     } else {
-      where.push(`${SEARCH_TEXT} like ?`);
+      where.push(`${searchText(c)} like ?`);
     }
   }
-  params.push(`${likeEscape(words.join(" "))}%`, Math.min(Math.max(1, limit), 20));
+  return { sql: `(${where.join(" and ")})`, params };
+}
+
+/** The counter's customer search: best matches first (name starting with the text, then by name), at most `limit`. */
+export async function searchCustomers(query: string, limit = 8): Promise<CustomerRow[]> {
+  const match = customerMatch(query);
+  if (!match) return [];
+  const em = await getEm();
+  const words = query.toLowerCase().split(/\s+/).filter(Boolean);
+  const params = [...match.params, `${likeEscape(words.join(" "))}%`, Math.min(Math.max(1, limit), 20)];
   const rows = await em.getConnection().execute<
     {
       id: string;
@@ -91,7 +87,7 @@ export async function searchCustomers(query: string, limit = 8): Promise<Custome
     }[]
   >(
     `select id, name, email, phone, company, user_id from customer
-      where ${where.join(" and ")}
+      where ${match.sql}
       order by (lower(name) like ?) desc, lower(name), email
       limit ?`,
     params,

@@ -1,7 +1,7 @@
 import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { CustomerTableRow, ListCustomersQuery } from "./customers-spec";
-import { containsPattern } from "./params";
+import { customerMatch } from "@/lib/customers";
 import { pagedSelect, type Page } from "./sql";
 
 const ORDER_BY: Record<ListCustomersQuery["sort"], string[]> = {
@@ -61,20 +61,9 @@ export async function customerTablePage(
     );
   if (q.account === "yes") base.whereNotNull("c.user_id");
   if (q.account === "no") base.whereNull("c.user_id");
-  if (q.q) {
-    const like = containsPattern(q.q);
-    const digits = q.q.replace(/\D/g, "");
-    base.where((w) => {
-      w.whereRaw("c.name ilike ?", [like])
-        .orWhereRaw("c.email ilike ?", [like])
-        .orWhereRaw("c.company ilike ?", [like])
-        .orWhereRaw("c.phone ilike ?", [like]);
-      if (digits.length >= 3)
-        w.orWhereRaw("regexp_replace(coalesce(c.phone, ''), '\\D', '', 'g') like ?", [
-          containsPattern(digits),
-        ]);
-    });
-  }
+  // The same match as the counter's search (lib/customers.ts), served by its trigram indexes.
+  const match = q.q ? customerMatch(q.q, "c") : null;
+  if (match) base.whereRaw(match.sql, match.params);
   const page = await pagedSelect<RawCustomerRow>(em, {
     base,
     idColumn: "c.id",

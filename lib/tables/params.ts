@@ -135,5 +135,10 @@ export function parseTableQueryStrict<T>(
 
 /** A LIKE pattern that finds `text` anywhere, its own % _ and \ taken literally. */
 export function containsPattern(text: string): string {
-  return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+  return `%${likeEscape(text)}%`;
+}
+
+/** Text for LIKE with its wildcards (`%`, `_`) and the escape character matched literally. */
+export function likeEscape(text: string): string {
+  return text.replace(/[\\%_]/g, (c) => `\\${c}`);
 }
