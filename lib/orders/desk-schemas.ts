@@ -1,6 +1,6 @@
 import { z } from "zod";
 
-/** The written reason an owner gives for accepting a failed check (kept in step with lib/orders/engineering-signoff.ts). */
+/** The shortest written reason an owner may give for accepting a failed check (form and server alike). */
 export const ACCEPTANCE_REASON_MIN_CHARS = 15;
 
 const orderId = z.uuid({ error: "Not an order id." });

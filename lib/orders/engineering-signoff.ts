@@ -9,9 +9,7 @@ import { AppError } from "@/lib/http/errors";
 import type { AcceptedException } from "@/lib/traveller/view";
 import { needsEngineeringSignoff, type CheckLike } from "./acknowledgements";
 
-/** The shortest written reason an owner may give for accepting a failed check (lib/orders/desk-schemas.ts). */
-export { ACCEPTANCE_REASON_MIN_CHARS as ACCEPTANCE_REASON_MIN } from "./desk-schemas";
-import { ACCEPTANCE_REASON_MIN_CHARS as ACCEPTANCE_REASON_MIN } from "./desk-schemas";
+import { ACCEPTANCE_REASON_MIN_CHARS } from "./desk-schemas";
 
 type FrozenCheck = CheckLike;
 
@@ -107,9 +105,9 @@ export async function acceptFailedCheck(
   if (!can(user.role, "engineering.signoff"))
     throw new AppError("forbidden", "Only an owner can accept a failed engineering check.");
   const reason = input.reason.trim();
-  if (reason.length < ACCEPTANCE_REASON_MIN)
+  if (reason.length < ACCEPTANCE_REASON_MIN_CHARS)
     throw new AppError("invalid", "Write why this check does not apply to this order.", {
-      reason: `At least ${ACCEPTANCE_REASON_MIN} characters.`,
+      reason: `At least ${ACCEPTANCE_REASON_MIN_CHARS} characters.`,
     });
   return inTransaction(async (em) => {
     const order = await em.findOne(
