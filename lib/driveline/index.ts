@@ -51,6 +51,10 @@ export type {
   EndFitting,
   EndFittingKind,
   JointSeries,
+  SlipYoke,
+  CentreBearing,
+  FlangePattern,
+  CapRetention,
 } from "./catalogue/types";
 export { defaultSettings, resolveSettings, type ShopSettings, type Limit, type SettingKey } from "./settings";
 export * from "./units";

@@ -33,7 +33,18 @@ export const PHYSICAL_MAX = {
   /** The coarsest balance grade of ISO 1940-1 (G 4000). */
   balanceGradeMmS: 4_000,
   slipMm: 5_000,
+  axleLoadKg: 50_000,
+  tireLoadedRadiusMm: 2_500,
+  adhesion: 2,
+  splineCount: 100,
+  splineDiameterMm: 500,
+  flangeMm: 1_000,
+  boltCount: 24,
 } as const;
+
+/** What the shaft is used for: selects the shop's service factor and the use-dependent limits. */
+export const USES = ["street", "towing", "off-road", "race", "industrial"] as const;
+export type Use = (typeof USES)[number];
 
 /** A positive number at most `max` (`unit` is shown in the message, e.g. "mm"). */
 const bounded = (max: number, unit: string) => {
@@ -107,6 +118,50 @@ const slipSchema = object({
   droopExtensionMm: nonNegativeMm().nullish(),
   /** Shortening from ride height at full bump (default 0). */
   bumpCompressionMm: nonNegativeMm().nullish(),
+  /** The catalogue slip yoke (its minimum engagement and seal surface apply); absent: matched from `interface`, else the shop's fixed minimum. */
+  slipYokeId: id().nullish(),
+  /** Seal surface already outside the tail bushing with the slip fully collapsed, mm (default 0). */
+  sealOutsideCollapsedMm: nonNegativeMm().nullish(),
+});
+
+const wholeCount = (max: number) =>
+  z
+    .number({ error: `must be a whole number from 1 to ${max}` })
+    .int({ error: `must be a whole number from 1 to ${max}` })
+    .min(1, { error: `must be a whole number from 1 to ${max}` })
+    .max(max, { error: `must be a whole number from 1 to ${max}` });
+
+/** A companion-flange bolt pattern. */
+const flangeSchema = object({
+  boltCount: wholeCount(PHYSICAL_MAX.boltCount),
+  boltCircleMm: bounded(PHYSICAL_MAX.flangeMm, "mm"),
+  pilotMm: bounded(PHYSICAL_MAX.flangeMm, "mm"),
+});
+
+/** How one end of the shaft meets the vehicle: a yoke that takes a joint's caps, or a companion flange. */
+const vehicleEndSchema = object({
+  kind: z.enum(["yoke", "flange"], { error: "must be yoke or flange" }),
+  /** The vehicle yoke's joint series, when known. */
+  jointSeriesId: id().nullish(),
+  /** Or measured: bearing cap diameter and span across the caps, mm. */
+  capDiameterMm: optionalBounded(200, "mm"),
+  capSpanMm: optionalBounded(500, "mm"),
+  retention: z.enum(["strap", "u-bolt", "round"], { error: "must be strap, u-bolt or round" }).nullish(),
+  flange: flangeSchema.nullish(),
+});
+
+/** Interface data, so the shop need not phone: what the shaft's ends meet on the vehicle. */
+const interfaceSchema = object({
+  /** Transmission (or transfer-case) output spline, for a slip yoke. */
+  transmissionOutput: object({
+    splineCount: wholeCount(PHYSICAL_MAX.splineCount),
+    majorDiameterMm: bounded(PHYSICAL_MAX.splineDiameterMm, "mm"),
+  }).nullish(),
+  /** The front end when it is not a slip yoke on an output spline (a yoke or a flange). */
+  front: vehicleEndSchema.nullish(),
+  /** The axle end: the pinion yoke or companion flange. */
+  pinion: vehicleEndSchema.nullish(),
+  lubrication: z.enum(["greaseable", "sealed"], { error: "must be greaseable or sealed" }).nullish(),
 });
 
 /** The design file (contract: /shared/spec/design-file.md). Unknown fields are ignored. */
@@ -128,6 +183,10 @@ export const designFileSchema = object({
     firstGearRatio: optionalBounded(PHYSICAL_MAX.ratio, ""),
     transferCaseLowRatio: optionalBounded(PHYSICAL_MAX.ratio, ""),
     converterStallRatio: optionalBounded(PHYSICAL_MAX.ratio, ""),
+    /** Top gear, for the running torque (engine torque through top gear); falls back to speed.topGearRatio. */
+    topGearRatio: optionalBounded(PHYSICAL_MAX.ratio, ""),
+    /** A machine's rated torque at the shaft (industrial): the running torque when given. */
+    ratedShaftTorqueNm: optionalBounded(PHYSICAL_MAX.torqueNm, "N·m"),
   }),
   speed: object({
     maxShaftRpm: optionalBounded(PHYSICAL_MAX.shaftRpm, "rpm"),
@@ -140,6 +199,31 @@ export const designFileSchema = object({
   balanceGradeMmS: optionalBounded(PHYSICAL_MAX.balanceGradeMmS, "mm/s"),
   ends: object({ front: endSchema.nullish(), rear: endSchema.nullish() }).nullish(),
   slip: slipSchema.nullish(),
+  /** Selects the shop's service factor and use-dependent limits; default street. */
+  use: z.enum(USES, { error: `must be one of ${USES.join(", ")}` }).nullish(),
+  /** Wheel-slip torque: axle load, loaded tire radius, adhesion (default from the shop per use). */
+  traction: object({
+    drivenAxleLoadKg: bounded(PHYSICAL_MAX.axleLoadKg, "kg"),
+    tireLoadedRadiusMm: bounded(PHYSICAL_MAX.tireLoadedRadiusMm, "mm"),
+    adhesion: optionalBounded(PHYSICAL_MAX.adhesion, ""),
+  }).nullish(),
+  interface: interfaceSchema.nullish(),
+  /** The front joint: a single cross (default) or a double-Cardan (constant-velocity) joint. */
+  frontJointType: z.enum(["cross", "double-cardan"], { error: "must be cross or double-cardan" }).nullish(),
+  /** One tube (default), or two pieces with a centre support bearing. */
+  layout: z.enum(["one-piece", "two-piece"], { error: "must be one-piece or two-piece" }).nullish(),
+  /** For a two-piece layout: the catalogue centre bearing and (optionally) where it sits. */
+  centreBearing: object({
+    bearingId: id(),
+    /** Centre joint from the front joint centre along the shaft line, mm (default: half way). */
+    fromFrontMm: optionalBounded(PHYSICAL_MAX.lengthMm, "mm"),
+    /** Drop below the straight joint-to-joint line, mm (default: the shop's centre-joint angle). */
+    dropMm: z
+      .number({ error: "must be a number of mm between −500 and 500" })
+      .min(-500, { error: "must be a number of mm between −500 and 500" })
+      .max(500, { error: "must be a number of mm between −500 and 500" })
+      .nullish(),
+  }).nullish(),
   /** As-built (or planned) index of the rear yoke, deg in (−90, 90]; absent: the best index. */
   phaseIndexDeg: z
     .number({ error: "must be an angle in degrees, more than −90 and at most 90" })
@@ -171,6 +255,9 @@ export const designFileSchema = object({
         `${POSITIVE} unless topSpeedKmh, axleRatio and tireDiameterMm are all given`,
       );
     }
+  }
+  if (d.layout === "two-piece" && !d.centreBearing) {
+    add(["centreBearing"], "is required for a two-piece layout (the catalogue centre bearing)");
   }
   if (d.slip && d.lengthMm != null && d.slip.collapsedLengthMm > d.lengthMm) {
     add(

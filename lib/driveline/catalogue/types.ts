@@ -5,9 +5,16 @@ export interface Material {
   readonly name: string;
   readonly elasticModulusGPa: number;
   readonly densityKgM3: number;
+  /** MINIMUM tensile yield of the condition named (not a typical value), MPa. */
   readonly tensileYieldMPa: number;
   /** Shear yield used in torsion; S_y/√3 (von Mises) unless the shop gives its own. */
   readonly shearYieldMPa: number;
+  /** The condition the figures are for, e.g. "stress-relieved DOM" or "T6, drawn". */
+  readonly condition?: string;
+  /** Minimum tensile yield in the weld-affected zone (welding anneals the tube next to the weld), MPa. */
+  readonly weldZoneTensileYieldMPa?: number;
+  /** Where the weld-zone figure comes from. */
+  readonly weldZoneSource?: string;
   /** Weld family: an end fitting welds only to tubes of its own family. */
   readonly weldFamily: "steel" | "aluminium" | "composite";
   readonly source: string;
@@ -36,6 +43,8 @@ export interface EndFitting {
   /** Joint centre to the weld seat (where the tube end sits), mm. */
   readonly jointCentreToWeldSeatMm: number;
   readonly massKg: number;
+  /** A flange yoke's bolt pattern (matched to the vehicle's companion flange). */
+  readonly flange?: FlangePattern;
   /** Rating of the fitting including its weld (governs at the heat-affected zone). */
   readonly torqueRatingNm: number;
   readonly priceCents: number;
@@ -45,10 +54,32 @@ export interface EndFitting {
   readonly fastenerTorqueSource?: string;
 }
 
+/** A companion-flange bolt pattern. */
+export interface FlangePattern {
+  readonly boltCount: number;
+  readonly boltCircleMm: number;
+  readonly pilotMm: number;
+}
+
+/** How a joint's bearing caps are held in the vehicle's yoke. */
+export type CapRetention = "strap" | "u-bolt" | "round";
+
 export interface JointSeries {
   readonly id: string;
   readonly name: string;
+  /** Peak (static) torque rating, N·m: the design torque must not exceed it. */
   readonly torqueRatingNm: number;
+  /** Continuous (running) torque rating, N·m: the running torque must not exceed it. */
+  readonly continuousTorqueNm?: number;
+  /** Bearing cap diameter and span across the caps, mm (what a vehicle's yoke takes). */
+  readonly capDiameterMm?: number;
+  readonly capSpanMm?: number;
+  readonly retention?: CapRetention;
+  readonly lubrication?: "greaseable" | "sealed";
+  /** A conversion cross: caps of this series on one side, of `otherSeriesId` on the other. */
+  readonly otherSeriesId?: string;
+  /** "double-cardan" for a constant-velocity (double Cardan) joint; default single cross. */
+  readonly kind?: "cross" | "double-cardan";
   readonly maxWorkingAngleDeg: number;
   readonly massKg: number;
   readonly priceCents: number;
@@ -56,6 +87,38 @@ export interface JointSeries {
   readonly strapTorqueNm?: number;
   /** Where that figure comes from (the maker's sheet, or "demo data"). */
   readonly strapTorqueSource?: string;
+}
+
+/** A slip yoke that slides on a transmission's (or transfer case's) output spline. */
+export interface SlipYoke {
+  readonly id: string;
+  readonly name: string;
+  readonly splineCount: number;
+  readonly majorDiameterMm: number;
+  readonly jointSeriesId: string;
+  /** Length of the ground seal surface on the barrel, mm. */
+  readonly sealSurfaceLengthMm: number;
+  /** Least spline engagement the maker allows, mm (replaces the shop's fixed minimum). */
+  readonly minEngagementMm: number;
+  readonly massKg: number;
+  readonly priceCents: number;
+  readonly source: string;
+}
+
+/** A centre support bearing for a two-piece shaft (with its stub and yoke). */
+export interface CentreBearing {
+  readonly id: string;
+  readonly name: string;
+  /** The centre joint's series. */
+  readonly jointSeriesId: string;
+  /** Tube OD the stub's weld seat takes, mm, and its weld family. */
+  readonly tubeOdMm: number;
+  readonly weldFamily: Material["weldFamily"];
+  /** Centre joint centre to the stub's weld seat, mm. */
+  readonly jointCentreToWeldSeatMm: number;
+  readonly massKg: number;
+  readonly priceCents: number;
+  readonly source: string;
 }
 
 export interface Catalogue {
@@ -67,4 +130,7 @@ export interface Catalogue {
   readonly tubes: readonly TubeSize[];
   readonly endFittings: readonly EndFitting[];
   readonly jointSeries: readonly JointSeries[];
+  /** Optional lists (catalogues saved before they existed have none). */
+  readonly slipYokes?: readonly SlipYoke[];
+  readonly centreBearings?: readonly CentreBearing[];
 }
