@@ -17,6 +17,7 @@ import { stopBoss } from "../lib/jobs/boss";
 import { getShopEngineering } from "../lib/shop/config";
 import type { StepSpec } from "../lib/traveller/steps";
 import { fromSi, type FloorUnits } from "../lib/traveller/units";
+import { addRow } from "./table";
 
 const SHAFTS = 20;
 const LOOKUPS = 200;
@@ -162,20 +163,23 @@ export async function benchFloor(): Promise<{ scanCode: string } | null> {
   );
   await (await getEm()).fork().nativeDelete(EmailMessage, { orderId: { $in: orderIds } });
 
-  const line = (label: string, xs: number[], note = "") =>
-    console.log(
-      `  ${label.padEnd(44)} p50 ${pct(xs, 50).toFixed(1).padStart(6)} ms  p99 ${pct(xs, 99).toFixed(1).padStart(6)} ms${note}`,
-    );
+  const ms = (xs: number[]) => `p50 ${pct(xs, 50).toFixed(1)} ms · p99 ${pct(xs, 99).toFixed(1)} ms`;
   const p50 = pct(submits, 50);
   console.log(`\nfloor service (library, one process, ${SHAFTS} shafts × ${submits.length / SHAFTS} steps)`);
-  line("empty transaction (floor)", emptyTx);
-  line(
-    "submitStep: sign off one step",
-    submits,
-    `  (target p50 < ${TARGET_SUBMIT_P50_MS} ms) ${p50 < TARGET_SUBMIT_P50_MS ? "ok" : "OVER TARGET"}`,
-  );
-  line("select 1 (floor)", selectOne);
-  line("asBuiltRecord: look a shaft up by serial", lookups);
+  addRow({
+    what: "submitStep: sign off one step (library)",
+    figure: ms(submits),
+    floor: `empty transaction: ${ms(emptyTx)}`,
+    target: `p50 < ${TARGET_SUBMIT_P50_MS} ms`,
+    met: p50 < TARGET_SUBMIT_P50_MS,
+  });
+  addRow({
+    what: "asBuiltRecord: a shaft by its serial (library)",
+    figure: ms(lookups),
+    floor: `select 1: ${ms(selectOne)}`,
+    target: "",
+    met: null,
+  });
 
   await stopBoss();
   await (await getOrm()).close();

@@ -12,6 +12,7 @@ import { generateLargeShop } from "../lib/demo/large";
 import { getShopEngineering } from "../lib/shop/config";
 import { measuredStepAverages, overviewContext } from "../lib/shop/overview";
 import { OVERVIEW_QUERIES, pgExec } from "../lib/shop/overview-queries";
+import { addRow } from "./table";
 
 const TARGET_MS = 100;
 const RUNS = Number(process.env.BENCH_OVERVIEW_RUNS ?? 30);
@@ -52,14 +53,10 @@ export async function benchOverview(): Promise<void> {
       await db.query(text, params);
       return performance.now() - t0;
     };
-    const line = (label: string, xs: number[], note = "") =>
-      console.log(
-        `  ${label.padEnd(46)} p50 ${pct(xs, 50).toFixed(1).padStart(6)} ms  p99 ${pct(xs, 99).toFixed(1).padStart(6)} ms${note}`,
-      );
+    const ms = (xs: number[]) => `p50 ${pct(xs, 50).toFixed(1)} ms · p99 ${pct(xs, 99).toFixed(1)} ms`;
     const floorMs: number[] = [];
     for (let i = 0; i < 20; i++) await time("select 1", []);
     for (let i = 0; i < RUNS * 3; i++) floorMs.push(await time("select 1", []));
-    line("select 1 (floor)", floorMs);
     const { rows } = await db.query<Record<string, string>>(
       `select (select count(*) from shop_order) as orders, (select count(*) from work_order) as shafts,
          (select count(*) from work_order_step) as steps, (select count(*) from step_record) as records`,
@@ -73,8 +70,13 @@ export async function benchOverview(): Promise<void> {
       for (let i = 0; i < 3; i++) await time(q.sql, params); // warm the cache
       const xs: number[] = [];
       for (let i = 0; i < RUNS; i++) xs.push(await time(q.sql, params));
-      const p99 = pct(xs, 99);
-      line(q.name, xs, `  (target < ${TARGET_MS} ms) ${p99 < TARGET_MS ? "ok" : "OVER TARGET"}`);
+      addRow({
+        what: `overview: ${q.name} (${c.orders} orders)`,
+        figure: ms(xs),
+        floor: `select 1: ${ms(floorMs)}`,
+        target: `p99 < ${TARGET_MS} ms`,
+        met: pct(xs, 99) < TARGET_MS,
+      });
     }
   } finally {
     await db.end();

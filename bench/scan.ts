@@ -6,6 +6,7 @@
  */
 import autocannon from "autocannon";
 import { DEMO_PASSWORD, DEMO_STAFF } from "../lib/demo";
+import { addRow, httpFigure } from "./table";
 
 const RATE = 200;
 const SECONDS = 10;
@@ -30,13 +31,6 @@ async function atRate(url: string, cookie: string, duration = SECONDS) {
   return autocannon({ url, connections: 10, overallRate: RATE, duration, headers: { cookie } });
 }
 
-type Result = Awaited<ReturnType<typeof atRate>>;
-
-const figures = (r: Result) => {
-  const bad = r.non2xx + r.errors + r.timeouts;
-  return `p50 ${String(r.latency.p50).padStart(4)} ms  p99 ${String(r.latency.p99).padStart(4)} ms  ${Math.round(r.requests.average)} req/s  ${bad ? `${bad} failed!` : "all 2xx"}`;
-};
-
 /** Runs against the app at `baseUrl`; `scanCode` is a released shaft's step code (bench/floor.ts). */
 export async function benchScan(baseUrl: string, scanCode: string | null): Promise<void> {
   console.log(`\nscan route at a fixed ${RATE} requests/s, ${SECONDS} s each, against ${baseUrl}`);
@@ -44,7 +38,6 @@ export async function benchScan(baseUrl: string, scanCode: string | null): Promi
   const noop = `${baseUrl}/api/bench/noop`;
   await atRate(noop, cookie, 3); // warm-up
   const floor = await atRate(noop, cookie);
-  console.log(`  ${"GET /api/bench/noop (trivial handler, floor)".padEnd(46)} ${figures(floor)}`);
 
   if (!scanCode) {
     console.log(
@@ -66,8 +59,11 @@ export async function benchScan(baseUrl: string, scanCode: string | null): Promi
   const ratio = result.requests.average / floor.requests.average;
   const ok =
     ratio >= TARGET_RATIO && result.latency.p99 < TARGET_P99_MS && result.non2xx + result.errors === 0;
-  console.log(`  ${"GET /api/floor/scan?code=… (floor user)".padEnd(46)} ${figures(result)}`);
-  console.log(
-    `  ${"".padEnd(46)} throughput ${(ratio * 100).toFixed(0)} % of the trivial handler (target ≥ ${TARGET_RATIO * 100} %), p99 target < ${TARGET_P99_MS} ms: ${ok ? "ok" : "OVER TARGET"}`,
-  );
+  addRow({
+    what: `GET /api/floor/scan?code=… (floor user), ${RATE} req/s`,
+    figure: `${httpFigure(result)} · ${(ratio * 100).toFixed(0)} % of the floor`,
+    floor: `noop at ${RATE} req/s: ${httpFigure(floor)}`,
+    target: `p99 < ${TARGET_P99_MS} ms, ≥ ${TARGET_RATIO * 100} % of the floor's throughput`,
+    met: ok,
+  });
 }

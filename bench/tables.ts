@@ -6,6 +6,7 @@
  */
 import autocannon from "autocannon";
 import { DEMO_PASSWORD, DEMO_STAFF } from "../lib/demo";
+import { addRow, httpFigure } from "./table";
 import { insertBenchOrders } from "./tables-data";
 
 const ORDERS = 10_000;
@@ -30,13 +31,6 @@ async function ownerCookie(baseUrl: string): Promise<string> {
 async function load(url: string, cookie: string, duration = SECONDS) {
   return autocannon({ url, connections: CONNECTIONS, duration, headers: { cookie } });
 }
-
-type Result = Awaited<ReturnType<typeof load>>;
-
-const figures = (r: Result) => {
-  const bad = r.non2xx + r.errors + r.timeouts;
-  return `p50 ${String(r.latency.p50).padStart(4)} ms  p99 ${String(r.latency.p99).padStart(4)} ms  ${Math.round(r.requests.average)} req/s  ${bad ? `${bad} failed!` : "all 2xx"}`;
-};
 
 /** Runs against the app at `baseUrl`, whose database is DATABASE_URL. */
 export async function benchTables(baseUrl: string): Promise<void> {
@@ -69,15 +63,18 @@ export async function benchTables(baseUrl: string): Promise<void> {
     ],
     ["GET /desk/orders (the page, for comparison)", "/desk/orders", false],
   ];
-  let ok = true;
+  let floor = "";
   for (const [title, path, target] of runs) {
     await load(`${baseUrl}${path}`, cookie, 2); // warm-up
     const r = await load(`${baseUrl}${path}`, cookie);
     const pass = r.latency.p99 < TARGET_P99_MS && r.non2xx + r.errors + r.timeouts === 0;
-    if (target) ok &&= pass;
-    console.log(
-      `  ${title.padEnd(50)} ${figures(r)}${target ? `  target p99 < ${TARGET_P99_MS} ms: ${pass ? "ok" : "OVER TARGET"}` : ""}`,
-    );
+    if (!floor) floor = httpFigure(r);
+    addRow({
+      what: `${title}, ${CONNECTIONS} connections, ${ORDERS.toLocaleString("en-US")} orders`,
+      figure: httpFigure(r),
+      floor: path === "/api/bench/noop" ? "(the floor)" : floor,
+      target: target ? `p99 < ${TARGET_P99_MS} ms` : "",
+      met: target ? pass : null,
+    });
   }
-  console.log(`  orders table route: ${ok ? "within target" : "OVER TARGET"}`);
 }
