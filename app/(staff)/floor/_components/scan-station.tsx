@@ -4,6 +4,8 @@ import { useRouter } from "next/navigation";
 import { CheckCircle2, Loader2, PauseCircle, ScanLine, XCircle } from "lucide-react";
 import type { ScanResult, StationField } from "@/lib/floor/scan";
 import type { StepResult } from "@/lib/floor/work-orders";
+import { OutboxPanel } from "@/components/floor/outbox-panel";
+import { enqueueSignOff, postSignOff } from "@/components/floor/step-outbox";
 
 type StepScan = Extract<ScanResult, { kind: "step" }>;
 type ApiError = { error: { code: string; message: string; fields?: Record<string, string> } };
@@ -13,7 +15,8 @@ type View =
   | { kind: "loading"; code: string }
   | { kind: "error"; message: string }
   | { kind: "step"; scan: StepScan; key: string }
-  | { kind: "result"; scan: StepScan; result: StepResult };
+  | { kind: "result"; scan: StepScan; result: StepResult }
+  | { kind: "queued"; scan: StepScan };
 
 const STATUS_TEXT: Record<StepScan["status"], string> = {
   next: "Its turn — record and submit",
@@ -77,6 +80,7 @@ export function ScanStation({ canConcede }: { canConcede: boolean }) {
 
   return (
     <div className="space-y-5">
+      <OutboxPanel />
       <form
         className="card p-4 md:p-5"
         onSubmit={(e) => {
@@ -151,11 +155,24 @@ export function ScanStation({ canConcede }: { canConcede: boolean }) {
               setView({ kind: "result", scan: view.scan, result });
               focusScan();
             }}
+            onQueued={() => {
+              setView({ kind: "queued", scan: view.scan });
+              focusScan();
+            }}
             onCancel={() => {
               setView({ kind: "idle" });
               focusScan();
             }}
           />
+        )}
+        {view.kind === "queued" && (
+          <div role="status" className="card px-6 py-8 text-lg">
+            <p className="text-xl font-bold">Kept on this station</p>
+            <p className="mt-1">
+              {view.scan.serial} step {view.scan.step.position}: {view.scan.step.name} will be sent when the
+              server answers. Carry on with the next step.
+            </p>
+          </div>
         )}
         {view.kind === "result" && <ResultPanel scan={view.scan} result={view.result} />}
       </div>
@@ -186,12 +203,15 @@ function StepPanel({
   idempotencyKey,
   canConcede,
   onDone,
+  onQueued,
   onCancel,
 }: {
   scan: StepScan;
   idempotencyKey: string;
   canConcede: boolean;
   onDone: (r: StepResult) => void;
+  /** The server could not be reached: the sign-off is kept on this station and sent later. */
+  onQueued: () => void;
   onCancel: () => void;
 }) {
   const [values, setValues] = useState<Record<string, unknown>>({});
@@ -205,20 +225,28 @@ function StepPanel({
   async function submit() {
     setBusy(true);
     setError(null);
-    const res = await fetch("/api/floor/steps", {
-      method: "POST",
-      headers: { "content-type": "application/json" },
-      body: JSON.stringify({ code: scan.code, values, idempotencyKey }),
-    }).catch(() => null);
+    const sent = await postSignOff({ code: scan.code, values, idempotencyKey });
     setBusy(false);
-    if (!res) return setError("The server cannot be reached. Submit again: it will not record twice.");
-    if (!res.ok) {
-      const e = await readError(res);
+    if (sent.kind === "unreachable") {
+      enqueueSignOff({
+        code: scan.code,
+        values,
+        idempotencyKey,
+        label: `${scan.serial} · step ${scan.step.position} of ${scan.stepCount}: ${scan.step.name}`,
+        at: new Date().toISOString(),
+      });
+      return onQueued();
+    }
+    if (sent.kind === "refused") {
+      const e = (sent.body as ApiError | null)?.error ?? {
+        code: "internal",
+        message: `The server answered ${sent.status}.`,
+      };
       setFieldErrors(e.fields ?? {});
       setError(e.fields ? "Check the values marked below." : e.message);
       return;
     }
-    onDone((await res.json()) as StepResult);
+    onDone(sent.body as StepResult);
   }
 
   async function concede() {
