@@ -283,7 +283,8 @@ export async function applyPaymentEvent(event: PaymentEvent): Promise<ApplyOutco
         const payment = event.paymentId
           ? await em.findOne(Payment, { id: event.paymentId }, { populate: ["order"] })
           : null;
-        if (!payment) return "ignored";
+        // Late news of a declined attempt never touches a payment that has since succeeded.
+        if (!payment || payment.status !== "open") return "ignored";
         payment.failureMessage = event.message;
         em.create(OrderEvent, {
           order: payment.order,

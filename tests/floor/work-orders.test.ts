@@ -268,14 +268,14 @@ describe("void and reissue", () => {
 
 describe("concurrency", () => {
   dbTest(
-    "20 parallel submissions of one step record exactly one completion",
+    "50 parallel submissions of one step record exactly one completion",
     { timeout: 60_000 },
     async () => {
       const floor = await staff("floor");
       const order = await paidOrder();
       const wo = (await releaseOrder(order.id, await staff("counter"))).workOrders[0]!;
       const settled = await Promise.allSettled(
-        Array.from({ length: 20 }, () => submitStep(code(wo.serial, "CUT"), good.CUT!, floor, key())),
+        Array.from({ length: 50 }, () => submitStep(code(wo.serial, "CUT"), good.CUT!, floor, key())),
       );
       const passed = settled.filter((s) => s.status === "fulfilled");
       const refused = settled.filter((s) => s.status === "rejected");
