@@ -8,6 +8,8 @@ export const JOBS = {
   mailDeliver: "mail.deliver",
   /** Every minute: hand any e-mail still queued after ~30 s to mail.deliver. */
   mailSweep: "mail.sweep",
+  /** Every minute: release orders whose deposit is paid but whose own release failed. */
+  releaseSweep: "floor.release-sweep",
 } as const;
 
 export interface MailDeliverJob {
@@ -41,6 +43,13 @@ function queueOptions(): Record<string, PgBoss.Queue> {
     },
     [JOBS.mailSweep]: {
       name: JOBS.mailSweep,
+      policy: "singleton",
+      retryLimit: 0,
+      expireInSeconds: 60,
+      retentionMinutes: 60,
+    },
+    [JOBS.releaseSweep]: {
+      name: JOBS.releaseSweep,
       policy: "singleton",
       retryLimit: 0,
       expireInSeconds: 60,

@@ -1,4 +1,5 @@
 import { logger } from "@/lib/logger";
+import { registerFloorWorkers } from "@/lib/floor/workers";
 import { startMailWorkers } from "@/lib/mail/workers";
 
 const state = globalThis as unknown as { yokelineJobsStarting?: boolean };
@@ -13,8 +14,8 @@ export function startBackgroundJobs(): void {
   let delayMs = 2_000;
   const attempt = async (): Promise<void> => {
     try {
-      await startMailWorkers();
-      logger.info("background jobs started (mail.deliver, mail.sweep)");
+      await registerFloorWorkers(await startMailWorkers());
+      logger.info("background jobs started (mail.deliver, mail.sweep, floor.release-sweep)");
     } catch (err) {
       logger.warn({ err, retryInMs: delayMs }, "could not start background jobs; trying again");
       setTimeout(() => void attempt(), delayMs).unref();
