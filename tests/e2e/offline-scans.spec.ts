@@ -7,7 +7,7 @@ import { fillStep, scan, traveller } from "./floor-helpers";
 // when the server answers, with the same idempotency key — each is recorded exactly once.
 
 async function stepRecordCount(owner: Page): Promise<number> {
-  const res = await owner.request.get("/api/tables/steps?size=10");
+  const res = await owner.request.get("/api/tables/steps?size=25");
   expect(res.status()).toBe(200);
   return ((await res.json()) as { total: number }).total;
 }
@@ -22,7 +22,8 @@ test("sign-offs taken while the server is unreachable are kept and sent once whe
   await signIn(floor, ACCOUNTS.floor);
 
   // A shaft in the demo shop whose next step is open: from an in-shop order's traveller codes.
-  const list = await owner.request.get("/api/tables/orders?status=in_shop&size=20");
+  const list = await owner.request.get("/api/tables/orders?status=in_shop&size=25");
+  expect(list.status()).toBe(200);
   const { rows } = (await list.json()) as { rows: { id: string }[] };
   let next: string[] = [];
   for (const { id } of rows) {
