@@ -61,7 +61,8 @@ export type PaymentState = (typeof PAYMENT_STATES)[number];
   expression: `create index "shop_order_owed_index" on "shop_order" ("status") include ("total_cents", "paid_cents") where paid_cents < total_cents and status <> 'cancelled'`,
 })
 export class Order {
-  [OptionalProps]?: "status" | "paymentState" | "paidCents" | "refundedCents" | "createdAt" | "updatedAt";
+  [OptionalProps]?:
+    "status" | "paymentState" | "paidCents" | "refundedCents" | "createdAt" | "updatedAt" | "version";
 
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
@@ -126,6 +127,10 @@ export class Order {
   /** When the last shaft left the shop (shipped or picked up); the overview's days to ship read it. */
   @Property({ type: "Date", nullable: true })
   shippedAt?: Date | null;
+
+  /** Bumped by each save of the desk's details form (lib/orders/details.ts): a stale save is refused. */
+  @Property({ type: "integer", default: 1 })
+  version: number = 1;
 
   /** The shop configuration version (catalogue, limits, price book) it was priced and engineered with. */
   @Property({ type: "integer", nullable: true })

@@ -70,3 +70,16 @@ export const acceptFailedCheckSchema = z.object({
     .max(1000, { error: "At most 1,000 characters." }),
 });
 export type AcceptFailedCheckInput = z.infer<typeof acceptFailedCheckSchema>;
+
+/**
+ * The counter edits an order's details: the promised date and where it ships. `version` is the
+ * one the form was opened with: a save based on an older one is refused (409), naming who saved
+ * in between, so two people at the desk never overwrite each other silently.
+ */
+export const updateOrderDetailsSchema = z.object({
+  orderId,
+  version: z.number({ error: "Reload the order." }).int({ error: "Reload the order." }).min(1),
+  promisedDate: z.iso.date({ error: "Enter a date (yyyy-mm-dd)." }),
+  shipTo: z.string().trim().max(500, { error: "At most 500 characters." }).nullable(),
+});
+export type UpdateOrderDetailsInput = z.infer<typeof updateOrderDetailsSchema>;

@@ -27,6 +27,8 @@ import { newCustomer, saveDesign, startPaymentsHarness } from "../setup/orders";
 import { exampleReport } from "../traveller/fixtures";
 import { staff } from "../floor/helpers";
 
+import { updateOrderDetailsAction } from "@/lib/actions/update-order-details";
+
 // Server actions read the session from next/headers; outside a Next request we hand it the cookie.
 const session = vi.hoisted(() => ({ cookie: "" }));
 vi.mock("next/headers", () => ({ headers: async () => new Headers({ cookie: session.cookie }) }));
@@ -215,6 +217,8 @@ describe("the desk's actions refuse who may not use them", () => {
     counterPayment: () => recordCounterPaymentAction({ orderId, method: "cash", amountCents: 100 }),
     note: () => addOrderNoteAction({ orderId, visibility: "customer", body: "Hello there" }),
     cancel: () => cancelOrderAction({ orderId, reason: "Not wanted any more" }),
+    details: () =>
+      updateOrderDetailsAction({ orderId, version: 1, promisedDate: "2027-01-15", shipTo: null }),
   });
 
   dbTest(

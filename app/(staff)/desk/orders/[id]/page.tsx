@@ -20,6 +20,7 @@ import { TakePayment } from "./_components/take-payment";
 import { OrderNotesPanel } from "./_components/order-notes-panel";
 import { CancelOrderPanel } from "./_components/cancel-order-panel";
 import { SignoffPanel } from "./_components/signoff-panel";
+import { OrderDetailsPanel } from "./_components/order-details-panel";
 
 export const metadata: Metadata = { title: "Order" };
 
@@ -102,6 +103,18 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
               canRefund={can(user.role, "payments.refund")}
               payments={view.payments}
             />
+            {!cancelled && order.status !== "shipped" && (
+              <OrderDetailsPanel
+                key={order.version}
+                orderId={order.id}
+                details={{
+                  version: order.version,
+                  promisedDate: order.promisedDate,
+                  shipTo: order.shipTo ?? null,
+                  fulfilment: order.fulfilment,
+                }}
+              />
+            )}
             <OrderNotesPanel orderId={order.id} notes={view.shopNotes} />
             {quote && (
               <CancelOrderPanel
