@@ -79,35 +79,37 @@ export async function postSignOff(
 
 let flushing: Promise<number> | null = null;
 
+async function sendQueued(): Promise<number> {
+  let sent = 0;
+  for (const item of queuedSignOffs()) {
+    const result = await postSignOff(item);
+    if (result.kind === "unreachable") break;
+    write(
+      QUEUE_KEY,
+      queuedSignOffs().filter((q) => q.idempotencyKey !== item.idempotencyKey),
+    );
+    if (result.kind === "sent") sent++;
+    else {
+      const error = (result.body as { error?: { message?: string } } | null)?.error;
+      write(REFUSED_KEY, [
+        ...refusedSignOffs(),
+        { ...item, message: error?.message ?? `The server answered ${result.status}.` },
+      ]);
+    }
+  }
+  return sent;
+}
+
 /**
  * Send every queued sign-off in the order they were taken; stop at the first that cannot reach
  * the server. Refused ones move to the refused list with the server's message. Returns how many
- * were sent. One flush at a time.
+ * were sent. One flush at a time: a call during a flush waits for that one.
  */
 export function flushSignOffs(): Promise<number> {
-  flushing ??= (async () => {
-    let sent = 0;
-    try {
-      for (const item of queuedSignOffs()) {
-        const result = await postSignOff(item);
-        if (result.kind === "unreachable") break;
-        write(
-          QUEUE_KEY,
-          queuedSignOffs().filter((q) => q.idempotencyKey !== item.idempotencyKey),
-        );
-        if (result.kind === "sent") sent++;
-        else {
-          const error = (result.body as { error?: { message?: string } } | null)?.error;
-          write(REFUSED_KEY, [
-            ...refusedSignOffs(),
-            { ...item, message: error?.message ?? `The server answered ${result.status}.` },
-          ]);
-        }
-      }
-    } finally {
-      flushing = null;
-    }
-    return sent;
-  })();
-  return flushing;
+  if (flushing) return flushing;
+  const run = sendQueued().finally(() => {
+    if (flushing === run) flushing = null;
+  });
+  flushing = run;
+  return run;
 }
