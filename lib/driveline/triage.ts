@@ -291,7 +291,6 @@ function unbalanceCause(shaft: TriageShaft, rpm: number, load: ComplaintLoad): T
   const worst = residuals.reduce((a, b) => (b.value / b.limit > a.value / a.limit ? b : a));
   // The worst plane against its own limit, moved to the complaint speed the same way.
   const score = worst.value / ((worst.limit * balance.speedRpm) / rpm);
-  const totalGmm = residuals.reduce((s, r) => s + r.value, 0);
   // Force of a residual U (kg·m) at ω: F = U·ω². g·mm → kg·m is 1e-6.
   const forceHere = worst.value * 1e-6 * omega * omega;
   const forceService = worst.value * 1e-6 * rpmToRadS(shaft.serviceRpm) ** 2;
@@ -325,7 +324,8 @@ function unbalanceCause(shaft: TriageShaft, rpm: number, load: ComplaintLoad): T
       source: "F = U·ω²",
     },
   ];
-  const summary = `The largest residual (${worst.label.toLowerCase()}) is ${f2(score)}× the permissible per plane at ${rpmText(rpm)}: it acts like balance grade G ${f1(effectiveGrade)} against the G ${balance.gradeMmS} built to. Its force grows with speed²: ${f1(forceHere)} N here, ${f1(forceService)} N at ${rpmText(shaft.serviceRpm)} (${totalGmm.toFixed(0)} g·mm over both planes).`;
+  const growth = (shaft.serviceRpm / rpm) ** 2;
+  const summary = `The largest residual (${worst.label.toLowerCase()}) is ${f2(score)}× the permissible per plane at ${rpmText(rpm)}: at this speed it gives balance quality G ${f1(effectiveGrade)} against the G ${balance.gradeMmS} the shaft was built to. Its force grows with speed²${rpm < shaft.serviceRpm ? `: ${f1(growth)}× this at the service speed ${rpmText(shaft.serviceRpm)}` : ""}.`;
   return {
     ...base,
     score,
