@@ -18,10 +18,7 @@
  * (which fits is common shop practice; the 10 % weight is Yokeline's own). Bands: below 0.5
  * "well within", 0.5–1 "toward the limit", from 1 "at or past the limit" (Yokeline's own).
  */
-import {
-  cardanPeakAngularAccelerationRadS2,
-  equivalentAngleRad,
-} from "./cardan";
+import { cardanPeakAngularAccelerationRadS2, equivalentAngleRad } from "./cardan";
 import { normalise, type Vec3 } from "./geometry";
 import { chainResponse, makeChain } from "./phasing";
 import { DISCLAIMER } from "./report";
@@ -104,7 +101,8 @@ export type LoadFit = "fits" | "neutral" | "against";
 export interface TriageFigure {
   readonly label: string;
   readonly value: number;
-  readonly quantity: "rpm" | "hz" | "unbalance" | "runout" | "angle" | "acceleration" | "force" | "ratio" | "pct" | "grade";
+  readonly quantity:
+    "rpm" | "hz" | "unbalance" | "runout" | "angle" | "acceleration" | "force" | "ratio" | "pct" | "grade";
   readonly limit?: number;
   readonly source?: string;
 }
@@ -166,7 +164,9 @@ export function complaintShaftRpm(
   switch (speed.kind) {
     case "road": {
       if (shaft.axleRatio == null || shaft.tireDiameterMm == null) {
-        throw new RangeError("the design gives no axle ratio and tire diameter, so road speed cannot be used");
+        throw new RangeError(
+          "the design gives no axle ratio and tire diameter, so road speed cannot be used",
+        );
       }
       const rpm = shaftRpmAtRoadSpeed(speed.speedKmh, shaft.tireDiameterMm, shaft.axleRatio);
       return {

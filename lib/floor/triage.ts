@@ -3,9 +3,12 @@
  * (the frozen evaluation and design, each step's accepted measurements and frozen limits) and the
  * shop's limits. Plain data, made on the server and handed to the staff page's panel.
  */
+import { z } from "zod";
 import type { EvaluationReport } from "@/lib/driveline/report";
 import type { ShopSettings } from "@/lib/driveline/settings";
-import type { MeasuredValue, TriageShaft } from "@/lib/driveline/triage";
+import type { Complaint, MeasuredValue, TriageShaft } from "@/lib/driveline/triage";
+import { mphToKmh } from "@/lib/driveline/units";
+import type { FloorUnits } from "@/lib/traveller/units";
 import type { FieldSpec } from "@/lib/traveller/steps";
 import type { AsBuiltRecord } from "./queries";
 
@@ -43,7 +46,14 @@ function measured(step: Step, quantity: "runout" | "unbalance"): MeasuredValue[]
   for (const f of step.spec.fields as FieldSpec[]) {
     if (f.type !== "number" || f.quantity !== quantity || f.limit?.max == null) continue;
     const v = acceptedValue(step, f.key);
-    if (v) out.push({ label: f.label, value: v.value, limit: f.limit.max, source: f.limit.source, concession: v.concession });
+    if (v)
+      out.push({
+        label: f.label,
+        value: v.value,
+        limit: f.limit.max,
+        source: f.limit.source,
+        concession: v.concession,
+      });
   }
   return out.length ? out : null;
 }
@@ -85,11 +95,13 @@ export function triageViewFor(record: AsBuiltRecord, settings: ShopSettings): Tr
     if (!found) missing.push({ position: step.position, name: step.spec.name, what: WHAT[kind]! });
   }
 
-  const hasReport = Array.isArray(report?.joints) && report.joints.length >= 2 && report.balance && report.phasing;
+  const hasReport =
+    Array.isArray(report?.joints) && report.joints.length >= 2 && report.balance && report.phasing;
   if (!hasReport || (!runout && !residuals && !phase)) return { shaft: null, missing, roadSpeed };
 
   const limit = phase?.field.limit;
-  const targetDeg = limit?.nominal ?? report.phasing.asSpecified?.phaseIndexDeg ?? report.phasing.phaseIndexDeg;
+  const targetDeg =
+    limit?.nominal ?? report.phasing.asSpecified?.phaseIndexDeg ?? report.phasing.phaseIndexDeg;
   const toleranceDeg =
     limit?.nominal != null && limit.max != null ? limit.max - limit.nominal : report.phasing.toleranceDeg;
   const ratioLimit =
@@ -125,4 +137,66 @@ export function triageViewFor(record: AsBuiltRecord, settings: ShopSettings): Tr
     },
   };
   return { shaft, missing, roadSpeed };
+}
+
+/** Bounds of the complaint form's numbers (beyond any road vehicle; they catch typing slips). */
+const BOUNDS = {
+  roadSpeed: { label: "Road speed", min: 1, max: 400 },
+  engineRpm: { label: "Engine speed", min: 100, max: 20_000 },
+  gearRatio: { label: "Gear ratio", min: 0.2, max: 10 },
+  shaftRpm: { label: "Shaft speed", min: 10, max: 30_000 },
+} as const;
+type NumberField = keyof typeof BOUNDS;
+
+const NEEDS: Record<"road" | "engine" | "shaft", NumberField[]> = {
+  road: ["roadSpeed"],
+  engine: ["engineRpm", "gearRatio"],
+  shaft: ["shaftRpm"],
+};
+
+/** The triage form: where it shakes (one of three ways) and when. Numbers as typed (strings). */
+export const runTriageSchema = z
+  .object({
+    basis: z.enum(["road", "engine", "shaft"], { error: "Choose how you give the speed" }),
+    roadSpeed: z.string().optional(),
+    engineRpm: z.string().optional(),
+    gearRatio: z.string().optional(),
+    shaftRpm: z.string().optional(),
+    load: z.enum(["load", "coast", "both"], { error: "Choose when it shakes" }),
+  })
+  .superRefine((v, ctx) => {
+    for (const field of NEEDS[v.basis]) {
+      const { label, min, max } = BOUNDS[field];
+      const raw = (v[field] ?? "").trim();
+      const n = Number(raw);
+      if (raw === "") ctx.addIssue({ code: "custom", path: [field], message: `${label}: enter a number` });
+      else if (!Number.isFinite(n) || n < min || n > max)
+        ctx.addIssue({
+          code: "custom",
+          path: [field],
+          message: `${label}: enter a number from ${min} to ${max}`,
+        });
+    }
+  });
+export type RunTriageInput = z.infer<typeof runTriageSchema>;
+
+/** The form's values as the core's complaint (road speed in the shop's units: mph for inches). */
+export function complaintFrom(values: RunTriageInput, units: FloorUnits): Complaint {
+  const n = (s: string | undefined) => Number((s ?? "").trim());
+  switch (values.basis) {
+    case "road": {
+      const shown = n(values.roadSpeed);
+      return {
+        speed: { kind: "road", speedKmh: units === "in" ? mphToKmh(shown) : shown },
+        load: values.load,
+      };
+    }
+    case "engine":
+      return {
+        speed: { kind: "engine", engineRpm: n(values.engineRpm), gearRatio: n(values.gearRatio) },
+        load: values.load,
+      };
+    case "shaft":
+      return { speed: { kind: "shaft", shaftRpm: n(values.shaftRpm) }, load: values.load };
+  }
 }

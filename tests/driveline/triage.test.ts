@@ -58,7 +58,10 @@ const atShaftRpm = (rpm: number, load: Complaint["load"] = "both"): Complaint =>
 
 describe("shaft speed at the complaint", () => {
   it("road speed: rpm = mph × 336 × axle ratio / tire diameter in inches (US shop rule, engineering reference §7)", () => {
-    const result = triageVibration(shaft(), { speed: { kind: "road", speedKmh: mphToKmh(60) }, load: "both" });
+    const result = triageVibration(shaft(), {
+      speed: { kind: "road", speedKmh: mphToKmh(60) },
+      load: "both",
+    });
     // 60 mph, 3.73 axle, 28 in tire: 60 × 336 × 3.73 / 28 = 2685.6 rpm; 336 ≈ 63 360/(60π) = 336.13.
     const rule = (60 * 336 * 3.73) / 28;
     expect(Math.abs(result.shaftRpm - rule) / rule).toBeLessThan(0.001);
@@ -228,23 +231,27 @@ describe("ranking, load condition and what is not the shaft", () => {
   it("near-equal scores: under load angles go first, coasting or both the speed-only cause does (common shop practice)", () => {
     // 4° joints at 4500 rpm → α ≈ ω²β² ≈ 1082 rad/s²; a residual that scores about the same.
     const rpm = 4500;
-    const angleScore =
-      triageVibration(
-        shaft({
-          joints: [
-            { position: "front", workingAngleDeg: 4 },
-            { position: "rear", workingAngleDeg: 4 },
-          ],
-        }),
-        atShaftRpm(rpm),
-      ).causes.find((c) => c.id === "angles")!.score!;
+    const angleScore = triageVibration(
+      shaft({
+        joints: [
+          { position: "front", workingAngleDeg: 4 },
+          { position: "rear", workingAngleDeg: 4 },
+        ],
+      }),
+      atShaftRpm(rpm),
+    ).causes.find((c) => c.id === "angles")!.score!;
     const s = shaft({
       joints: [
         { position: "front", workingAngleDeg: 4 },
         { position: "rear", workingAngleDeg: 4 },
       ],
       residuals: [
-        { label: "Residual, front plane", value: 203.7 * angleScore * 1.02, limit: 203.7, source: "ISO 21940-11" },
+        {
+          label: "Residual, front plane",
+          value: 203.7 * angleScore * 1.02,
+          limit: 203.7,
+          source: "ISO 21940-11",
+        },
       ],
     });
     expect(triageVibration(s, atShaftRpm(rpm, "load")).causes[0]!.id).toBe("angles");

@@ -25,35 +25,43 @@ describe("vibration triage from the as-built record", () => {
     expect(view.roadSpeed).toBe(false); // the test order's design gives no vehicle speed data
   });
 
-  dbTest("the accepted measurements (reworked runout, balance, final phase) reach the triage in SI", async () => {
-    const floor = await staff("floor");
-    const order = await paidOrder();
-    const [wo] = (await releaseOrder(order.id, await staff("counter"))).workOrders;
-    const serial = wo!.serial;
-    for (const s of ["CUT", "WLD"]) await submitStep(code(serial, s), good[s]!, floor, key());
-    // A runout hold, then the reworked readings: the triage uses the accepted ones.
-    await submitStep(code(serial, "RUN"), { ...good.RUN!, runoutMidMm: 0.05 }, floor, key());
-    await submitStep(code(serial, "RUN"), good.RUN!, floor, key());
-    await submitStep(code(serial, "BAL"), good.BAL!, floor, key());
+  dbTest(
+    "the accepted measurements (reworked runout, balance, final phase) reach the triage in SI",
+    async () => {
+      const floor = await staff("floor");
+      const order = await paidOrder();
+      const [wo] = (await releaseOrder(order.id, await staff("counter"))).workOrders;
+      const serial = wo!.serial;
+      for (const s of ["CUT", "WLD"]) await submitStep(code(serial, s), good[s]!, floor, key());
+      // A runout hold, then the reworked readings: the triage uses the accepted ones.
+      await submitStep(code(serial, "RUN"), { ...good.RUN!, runoutMidMm: 0.05 }, floor, key());
+      await submitStep(code(serial, "RUN"), good.RUN!, floor, key());
+      await submitStep(code(serial, "BAL"), good.BAL!, floor, key());
 
-    let view = triageViewFor(await asBuiltRecord(await getEm(), serial), defaultSettings);
-    expect(view.missing.map((m) => m.name)).toEqual(["Final inspection"]);
-    const shaft = view.shaft!;
-    expect(shaft.runout!.map((r) => r.value)).toEqual([0.006 * 25.4, 0.012 * 25.4, 0.007 * 25.4].map((v) => expect.closeTo(v, 9)));
-    expect(shaft.residuals!.map((r) => r.value)).toEqual([0.1, 0.12].map((v) => expect.closeTo(v * GMM_PER_OZIN, 6)));
-    expect(shaft.phase.measuredDeg).toBeCloseTo(0.4, 9); // from the weld step until final inspection
+      let view = triageViewFor(await asBuiltRecord(await getEm(), serial), defaultSettings);
+      expect(view.missing.map((m) => m.name)).toEqual(["Final inspection"]);
+      const shaft = view.shaft!;
+      expect(shaft.runout!.map((r) => r.value)).toEqual(
+        [0.006 * 25.4, 0.012 * 25.4, 0.007 * 25.4].map((v) => expect.closeTo(v, 9)),
+      );
+      expect(shaft.residuals!.map((r) => r.value)).toEqual(
+        [0.1, 0.12].map((v) => expect.closeTo(v * GMM_PER_OZIN, 6)),
+      );
+      expect(shaft.phase.measuredDeg).toBeCloseTo(0.4, 9); // from the weld step until final inspection
 
-    // At the service speed the rear plane's 0.12 oz·in is scored against ISO 21940-11:
-    // U_per = 1000·G·m/Ω, half per plane (G and m from the shaft's frozen report).
-    const rpm = shaft.serviceRpm;
-    const perPlane = (1000 * shaft.balance.gradeMmS * shaft.balance.rotorMassKg) / ((rpm * Math.PI) / 30) / 2;
-    const result = triageVibration(shaft, { speed: { kind: "shaft", shaftRpm: rpm }, load: "both" });
-    const unbalance = result.causes.find((c) => c.id === "unbalance")!;
-    expect(unbalance.score).toBeCloseTo((0.12 * GMM_PER_OZIN) / perPlane, 4);
+      // At the service speed the rear plane's 0.12 oz·in is scored against ISO 21940-11:
+      // U_per = 1000·G·m/Ω, half per plane (G and m from the shaft's frozen report).
+      const rpm = shaft.serviceRpm;
+      const perPlane =
+        (1000 * shaft.balance.gradeMmS * shaft.balance.rotorMassKg) / ((rpm * Math.PI) / 30) / 2;
+      const result = triageVibration(shaft, { speed: { kind: "shaft", shaftRpm: rpm }, load: "both" });
+      const unbalance = result.causes.find((c) => c.id === "unbalance")!;
+      expect(unbalance.score).toBeCloseTo((0.12 * GMM_PER_OZIN) / perPlane, 4);
 
-    await submitStep(code(serial, "FIN"), good.FIN!, floor, key());
-    view = triageViewFor(await asBuiltRecord(await getEm(), serial), defaultSettings);
-    expect(view.missing).toEqual([]);
-    expect(view.shaft!.phase.measuredDeg).toBeCloseTo(0.3, 9); // the shaft as it left
-  });
+      await submitStep(code(serial, "FIN"), good.FIN!, floor, key());
+      view = triageViewFor(await asBuiltRecord(await getEm(), serial), defaultSettings);
+      expect(view.missing).toEqual([]);
+      expect(view.shaft!.phase.measuredDeg).toBeCloseTo(0.3, 9); // the shaft as it left
+    },
+  );
 });
