@@ -1,8 +1,8 @@
-import { describe, expect } from "vitest";
+import { describe, expect, it } from "vitest";
 import { getEm } from "@/lib/db/orm";
 import { defaultSettings, triageVibration } from "@/lib/driveline";
 import { asBuiltRecord } from "@/lib/floor/queries";
-import { triageViewFor } from "@/lib/floor/triage";
+import { complaintFrom, runTriageSchema, triageViewFor } from "@/lib/floor/triage";
 import { releaseOrder, submitStep } from "@/lib/floor/work-orders";
 import { dbTest } from "../setup/db";
 import { code, good, key, paidOrder, staff } from "./helpers";
@@ -64,4 +64,30 @@ describe("vibration triage from the as-built record", () => {
       expect(view.shaft!.phase.measuredDeg).toBeCloseTo(0.3, 9); // the shaft as it left
     },
   );
+});
+
+describe("the triage form", () => {
+  it("names the missing or out-of-range field, for the way the speed is given", () => {
+    const bad = runTriageSchema.safeParse({
+      basis: "engine",
+      engineRpm: "3000",
+      gearRatio: "",
+      load: "load",
+    });
+    expect(bad.success).toBe(false);
+    expect(bad.error!.issues.map((i) => [i.path.join("."), i.message])).toEqual([
+      ["gearRatio", "Gear ratio: enter a number"],
+    ]);
+    const fast = runTriageSchema.safeParse({ basis: "shaft", shaftRpm: "90000", load: "both" });
+    expect(fast.error!.issues[0]!.message).toBe("Shaft speed: enter a number from 10 to 30000");
+  });
+
+  it("road speed is in the shop's units: mph when the floor reads inches (1 mile = 1.609344 km exactly)", () => {
+    const values = runTriageSchema.parse({ basis: "road", roadSpeed: "60", load: "coast" });
+    expect(complaintFrom(values, "in")).toEqual({
+      speed: { kind: "road", speedKmh: expect.closeTo(96.56064, 9) },
+      load: "coast",
+    });
+    expect(complaintFrom(values, "mm").speed).toEqual({ kind: "road", speedKmh: 60 });
+  });
 });
