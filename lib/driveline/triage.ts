@@ -312,7 +312,7 @@ function unbalanceCause(shaft: TriageShaft, rpm: number, load: ComplaintLoad): T
       source: "ISO 21940-11: G = e·Ω, e = U/m",
     },
     {
-      label: `Force of the ${worst.label.toLowerCase()} at ${rpmText(rpm)}`,
+      label: `Force of that residual at ${rpmText(rpm)}`,
       value: forceHere,
       quantity: "force",
       source: "F = U·ω² (grows with speed²)",
@@ -325,7 +325,7 @@ function unbalanceCause(shaft: TriageShaft, rpm: number, load: ComplaintLoad): T
     },
   ];
   const growth = (shaft.serviceRpm / rpm) ** 2;
-  const summary = `The largest residual (${worst.label.toLowerCase()}) is ${f2(score)}× the permissible per plane at ${rpmText(rpm)}: at this speed it gives balance quality G ${f1(effectiveGrade)} against the G ${balance.gradeMmS} the shaft was built to. Its force grows with speed²${rpm < shaft.serviceRpm ? `: ${f1(growth)}× this at the service speed ${rpmText(shaft.serviceRpm)}` : ""}.`;
+  const summary = `${worst.label} (the worst plane) is ${f2(score)}× the permissible per plane at ${rpmText(rpm)}: at this speed it gives balance quality G ${f1(effectiveGrade)} against the G ${balance.gradeMmS} the shaft was built to. Its force grows with speed²${rpm < shaft.serviceRpm ? `: ${f1(growth)}× this at the service speed ${rpmText(shaft.serviceRpm)}` : ""}.`;
   return {
     ...base,
     score,
@@ -371,7 +371,7 @@ function runoutCause(shaft: TriageShaft, rpm: number, load: ComplaintLoad): Tria
     score,
     band: band(score),
     rankKey: score * LOAD_WEIGHT[fit.fit],
-    summary: `The largest runout reading (${worst.label.toLowerCase()}) is ${f2(score)}× its limit as built. Runout does not change with speed, but the bent tube's once-per-turn force does, and it grows nearer the critical speed.`,
+    summary: `${worst.label} (the worst reading) is ${f2(score)}× its limit as built. Runout does not change with speed, but the bent tube's once-per-turn force does, and it grows nearer the critical speed.`,
     figures: readings.map((r) => ({
       label: `${r.label} (as built${r.concession ? ", accepted by concession" : ""})`,
       value: r.value,

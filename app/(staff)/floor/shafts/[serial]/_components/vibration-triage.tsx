@@ -10,7 +10,7 @@ import {
   type TriageFigure,
   type TriageResult,
 } from "@/lib/driveline/triage";
-import { KG_PER_LB } from "@/lib/driveline/units";
+import { KG_PER_LB, MM_PER_INCH } from "@/lib/driveline/units";
 import { complaintFrom, runTriageSchema, type RunTriageInput, type TriageView } from "@/lib/floor/triage";
 import { formatQuantity, type FloorUnits } from "@/lib/traveller/units";
 import { Field } from "@/components/ui/field";
@@ -66,7 +66,7 @@ const orderText = (order: number) => (order === 1 ? "once per turn (1× shaft)" 
  */
 export function VibrationTriage({ view, units }: { view: TriageView; units: FloorUnits }) {
   const speedUnit = units === "in" ? "mph" : "km/h";
-  const [result, setResult] = useState<{ out: TriageResult; asked: string } | null>(null);
+  const [result, setResult] = useState<{ out: TriageResult; asked: string; basis: string } | null>(null);
   const [failure, setFailure] = useState<string | null>(null);
   const {
     register,
@@ -92,7 +92,12 @@ export function VibrationTriage({ view, units }: { view: TriageView; units: Floo
             ? `engine ${values.engineRpm} rpm in a ${values.gearRatio} gear`
             : `shaft ${values.shaftRpm} rpm`;
       const when = LOADS.find((l) => l.value === values.load)!.label.toLowerCase();
-      setResult({ out, asked: `Shakes at ${where}, ${when}` });
+      // The core words the basis in SI; the road-speed one is said again in the shop's units.
+      const basisText =
+        values.basis === "road" && shaft.tireDiameterMm != null
+          ? `road speed on ${units === "in" ? `${(shaft.tireDiameterMm / MM_PER_INCH).toFixed(1)} in` : `${Math.round(shaft.tireDiameterMm)} mm`} tires, axle ratio ${shaft.axleRatio} (engineering reference §7)`
+          : out.speedBasis;
+      setResult({ out, asked: `Shakes at ${where}, ${when}`, basis: basisText });
     } catch (e) {
       setResult(null);
       setFailure(e instanceof Error ? e.message : "The triage could not be computed.");
@@ -236,14 +241,26 @@ export function VibrationTriage({ view, units }: { view: TriageView; units: Floo
               <Alert tone="error">{failure}</Alert>
             </div>
           )}
-          {result && <TriageResults result={result.out} asked={result.asked} units={units} />}
+          {result && (
+            <TriageResults result={result.out} asked={result.asked} basis={result.basis} units={units} />
+          )}
         </>
       )}
     </section>
   );
 }
 
-function TriageResults({ result, asked, units }: { result: TriageResult; asked: string; units: FloorUnits }) {
+function TriageResults({
+  result,
+  asked,
+  basis,
+  units,
+}: {
+  result: TriageResult;
+  asked: string;
+  basis: string;
+  units: FloorUnits;
+}) {
   return (
     <div className="mt-5 space-y-4 border-t border-line pt-4" aria-live="polite">
       <div>
@@ -251,7 +268,7 @@ function TriageResults({ result, asked, units }: { result: TriageResult; asked: 
         <p className="text-lg font-semibold">
           Shaft speed {Math.round(result.shaftRpm)} rpm ({result.shaftHz.toFixed(1)} Hz)
         </p>
-        <p className="text-sm text-ink-muted">From {result.speedBasis}.</p>
+        <p className="text-sm text-ink-muted">From {basis}.</p>
         {result.notes.map((n) => (
           <p key={n} className="mt-1 text-sm font-semibold text-warn">
             {n}
