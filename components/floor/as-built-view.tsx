@@ -29,10 +29,13 @@ export function AsBuiltView({
   record,
   units,
   audience,
+  afterDesign,
 }: {
   record: AsBuiltRecord;
   units: FloorUnits;
   audience: "staff" | "customer";
+  /** Shown between the frozen design and the steps (the staff page's vibration triage). */
+  afterDesign?: React.ReactNode;
 }) {
   const r = record.evaluation as unknown as EvaluationReport;
   const len = (mm: number | undefined) =>
@@ -105,6 +108,7 @@ export function AsBuiltView({
           </ul>
         )}
       </section>
+      {afterDesign}
       <section aria-labelledby="ab-steps">
         <h2 id="ab-steps" className="mb-3 text-lg font-semibold">
           Steps and measurements

@@ -80,3 +80,19 @@ export { criticalSpeedRpm, criticalSpeedHandbookRpm, spanForCriticalSpeedMm } fr
 export { torsionShearStressMPa, shearYieldFromTensileMPa } from "./torsion";
 export { serviceSpeed, shaftRpmAtRoadSpeed, designShaftTorqueNm } from "./speed";
 export { permissibleUnbalanceGmm, unbalancePerPlaneGmm } from "./balance";
+export {
+  triageVibration,
+  complaintShaftRpm,
+  chainFromReport,
+  phaseErrorDeg,
+  TRIAGE_CAUTION,
+  TRIAGE_SCORING,
+  type TriageShaft,
+  type TriageResult,
+  type TriageCause,
+  type TriageFigure,
+  type Complaint,
+  type ComplaintSpeed,
+  type ComplaintLoad,
+  type MeasuredValue,
+} from "./triage";

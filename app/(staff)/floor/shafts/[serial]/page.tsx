@@ -7,19 +7,21 @@ import { STAFF_ROLES } from "@/lib/auth/roles";
 import { reorderShaftAction } from "@/lib/actions/reorder-shaft";
 import { getEm } from "@/lib/db/orm";
 import { asBuiltRecord } from "@/lib/floor/queries";
+import { triageViewFor } from "@/lib/floor/triage";
 import { AppError } from "@/lib/http/errors";
 import { getShopEngineering } from "@/lib/shop/config";
 import { PageHeader } from "@/components/ui/page-header";
 import { AsBuiltView } from "@/components/floor/as-built-view";
 import { ReorderButton } from "@/components/floor/reorder-button";
 import { SerialSearch } from "../../_components/serial-search";
+import { VibrationTriage } from "./_components/vibration-triage";
 
 export const metadata: Metadata = { title: "As-built record" };
 
 export default async function StaffAsBuiltPage({ params }: PageProps<"/floor/shafts/[serial]">) {
   const { serial } = await params;
   const user = await requireRole(STAFF_ROLES, `/floor/shafts/${serial}`);
-  const [record, { floor }] = await Promise.all([
+  const [record, { floor, settings }] = await Promise.all([
     getEm()
       .then((em) => asBuiltRecord(em, decodeURIComponent(serial)))
       .catch((e: unknown) => {
@@ -52,7 +54,12 @@ export default async function StaffAsBuiltPage({ params }: PageProps<"/floor/sha
           </>
         }
       />
-      <AsBuiltView record={record} units={floor.units} audience="staff" />
+      <AsBuiltView
+        record={record}
+        units={floor.units}
+        audience="staff"
+        afterDesign={<VibrationTriage view={triageViewFor(record, settings)} units={floor.units} />}
+      />
     </>
   );
 }
