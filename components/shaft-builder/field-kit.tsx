@@ -82,7 +82,7 @@ export function SelectField({
         </p>
       )}
       {message && (
-        <p id={`${id}-error`} className="field-error">
+        <p id={`${id}-error`} className="field-error [overflow-wrap:anywhere]">
           {message}
         </p>
       )}

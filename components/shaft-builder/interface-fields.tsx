@@ -43,23 +43,23 @@ function VehicleEnd({ kit, end, title }: { kit: FieldKit; end: "front" | "pinion
             options={seriesOptions}
             hint="If you know it; otherwise measure the caps."
           />
-          <div className="grid gap-4 sm:grid-cols-3">
-            {kit.num(`${p}.capDiameterMm`, `${title}: cap diameter`, "diameter", { guide: "caps" })}
+          <div className="grid gap-4 sm:grid-cols-2">
+            {kit.num(`${p}.capDiameterMm`, `${title}: cap diameter`, "diameter")}
             {kit.num(`${p}.capSpanMm`, `${title}: span across the caps`, "diameter")}
-            <SelectField
-              kit={kit}
-              name={`${p}.retention`}
-              label={`${title}: caps held by`}
-              options={RETENTION}
-            />
           </div>
+          <SelectField
+            kit={kit}
+            name={`${p}.retention`}
+            label={`${title}: caps held by`}
+            options={RETENTION}
+          />
+          {kit.guide("caps")}
         </>
       )}
       {e?.kind === "flange" && (
         <div className="grid gap-4 sm:grid-cols-3">
           {kit.num(`${p}.flange.boltCount`, `${title}: bolts`, null, {
             unit: "bolts",
-            guide: "flange",
           })}
           {kit.num(`${p}.flange.boltCircleMm`, `${title}: bolt circle`, "diameter", {
             hint: "Diameter through the bolt centres.",
@@ -69,6 +69,7 @@ function VehicleEnd({ kit, end, title }: { kit: FieldKit; end: "front" | "pinion
           })}
         </div>
       )}
+      {e?.kind === "flange" && kit.guide("flange")}
     </fieldset>
   );
 }
@@ -85,8 +86,8 @@ export function InterfaceFields({ kit }: { kit: FieldKit }) {
       !!i.lubrication);
   return (
     <FieldGroup
-      title="Where the shaft meets the vehicle"
-      summary="optional: the shop matches the slip yoke, joints and flanges from these"
+      title="Output spline, pinion yoke or flange"
+      summary="optional: the shop matches the slip yoke, joints and flanges to these"
       filled={filled}
       hasError={anyError(kit.errs, "interface")}
       testId="group-interface"
@@ -97,12 +98,12 @@ export function InterfaceFields({ kit }: { kit: FieldKit }) {
           {kit.num("interface.transmissionOutput.splineCount", "Output spline count", null, {
             unit: "teeth",
             hint: "For a slip yoke on the transmission or transfer case.",
-            guide: "spline",
           })}
           {kit.num("interface.transmissionOutput.majorDiameterMm", "Spline major diameter", "diameter", {
             hint: "Across the tops of the teeth.",
           })}
         </div>
+        {kit.guide("spline")}
       </fieldset>
       <VehicleEnd kit={kit} end="pinion" title="Pinion end" />
       <VehicleEnd kit={kit} end="front" title="Front end" />

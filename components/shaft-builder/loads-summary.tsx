@@ -39,8 +39,8 @@ export function LoadsSummary({
     "use",
     "Use",
     s.serviceFactor != null
-      ? `${USE_WORD[use] ?? use}: service factor ${s.serviceFactor.toFixed(2)} (the shop's figure for this use)`
-      : `${USE_WORD[use] ?? use}`,
+      ? `${(USE_WORD[use] ?? use).replace(/^./, (c) => c.toUpperCase())}: service factor ${s.serviceFactor.toFixed(2)} (the shop's figure for this use)`
+      : `${(USE_WORD[use] ?? use).replace(/^./, (c) => c.toUpperCase())}`,
   );
   if (s.engineTorqueAtShaftNm != null) {
     const slip = s.wheelSlipTorqueNm;

@@ -80,7 +80,6 @@ export function RunningTorqueGroup({ kit }: { kit: FieldKit }) {
       <div className="grid gap-4 sm:grid-cols-3">
         {kit.num("traction.drivenAxleLoadKg", "Driven axle load", "mass", {
           hint: "On the scale, loaded as it works.",
-          guide: "traction",
         })}
         {kit.num("traction.tireLoadedRadiusMm", "Loaded tire radius", "length", {
           hint: "Axle centre to the ground, loaded.",
@@ -89,6 +88,7 @@ export function RunningTorqueGroup({ kit }: { kit: FieldKit }) {
           hint: "Empty: the shop's figure for the use.",
         })}
       </div>
+      {kit.guide("traction")}
     </FieldGroup>
   );
 }

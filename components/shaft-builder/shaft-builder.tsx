@@ -959,7 +959,7 @@ export function ShaftBuilder({
 
           <section className={section} aria-labelledby="s-if">
             <h2 id="s-if" className="text-lg font-semibold">
-              7. The vehicle&rsquo;s end of things
+              7. Where the shaft meets the vehicle
             </h2>
             <InterfaceFields kit={kit} />
           </section>

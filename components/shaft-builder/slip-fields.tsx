@@ -46,7 +46,6 @@ export function SlipFields({ kit }: { kit: FieldKit }) {
       <div className="grid gap-4 sm:grid-cols-2">
         {kit.num("slip.collapsedLengthMm", "Collapsed length", "length", {
           hint: "Slip pushed fully in.",
-          guide: "slip",
         })}
         {kit.num("slip.travelMm", "Slip travel", "length", { hint: "Fully in to fully out." })}
         {kit.num("slip.droopExtensionMm", "Droop extension", "length", {
@@ -56,6 +55,7 @@ export function SlipFields({ kit }: { kit: FieldKit }) {
           hint: "How much shorter at full bump (on the stops).",
         })}
       </div>
+      {kit.guide("slip")}
       <div className="grid gap-4 sm:grid-cols-2">
         <SelectField
           kit={kit}

@@ -20,7 +20,7 @@ test("the builder's new fields (use, traction, engine path, slip, interface, dou
 
   // The use the customer picks is in the results (and, below, in the design file sent).
   await page.getByLabel("Use", { exact: true }).selectOption("towing");
-  await expect(page.getByTestId("loads-use")).toContainText("towing");
+  await expect(page.getByTestId("loads-use")).toContainText("Towing");
 
   // Traction in inches and pounds: converted to SI at the edge.
   await openGroup(page, "group-traction");
