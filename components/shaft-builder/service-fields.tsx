@@ -81,7 +81,7 @@ export function RunningTorqueGroup({ kit }: { kit: FieldKit }) {
         {kit.num("traction.drivenAxleLoadKg", "Driven axle load", "mass", {
           hint: "On the scale, loaded as it works.",
         })}
-        {kit.num("traction.tireLoadedRadiusMm", "Loaded tire radius", "length", {
+        {kit.num("traction.tireLoadedRadiusMm", "Tire radius under load", "length", {
           hint: "Axle centre to the ground, loaded.",
         })}
         {kit.num("traction.adhesion", "Tire grip (adhesion)", null, {

@@ -62,9 +62,10 @@ export interface ShaftBuilderProps {
   tubePreference?: TubePreference;
   /**
    * The counter's compact, keyboard-first layout: the fields in the order of a paper measuring
-   * sheet (use and vehicle, length, angles, torque, speed, tube, then the order details with the
-   * quote button), the first field focused, no measuring guides in the tab order, and Enter in a
-   * field never submitting by surprise.
+   * sheet (use and vehicle, length, angles, torque, speed, tube; then the optional slip, layout
+   * and vehicle-end groups, folded until wanted; then the order details with the quote button),
+   * the first field focused, no measuring guides in the tab order, and Enter in a field never
+   * submitting by surprise.
    */
   compact?: boolean;
   /** Counter: a design that fails a check may still be quoted (the order then needs the owner's sign-off). */
@@ -716,8 +717,6 @@ export function ShaftBuilder({
               {endSelect("rear")}
             </div>
             {guide("ends")}
-            <LayoutFields kit={kit} />
-            <SlipFields kit={kit} />
           </section>
 
           <section className={section} aria-labelledby="s-ang">
@@ -957,9 +956,17 @@ export function ShaftBuilder({
             {guide("tube")}
           </section>
 
+          <section className={section} aria-labelledby="s-slip">
+            <h2 id="s-slip" className="text-lg font-semibold">
+              7. Slip and layout
+            </h2>
+            <SlipFields kit={kit} />
+            <LayoutFields kit={kit} />
+          </section>
+
           <section className={section} aria-labelledby="s-if">
             <h2 id="s-if" className="text-lg font-semibold">
-              7. Where the shaft meets the vehicle
+              8. Where the shaft meets the vehicle
             </h2>
             <InterfaceFields kit={kit} />
           </section>
@@ -977,7 +984,7 @@ export function ShaftBuilder({
           {compact ? (
             <section className={section} aria-labelledby="s-order">
               <h2 id="s-order" className="text-lg font-semibold">
-                8. Order details
+                9. Order details
               </h2>
               {nameField}
               <div className="flex flex-wrap items-center gap-3">{quoteButton}</div>

@@ -25,7 +25,7 @@ test("the builder's new fields (use, traction, engine path, slip, interface, dou
   // Traction in inches and pounds: converted to SI at the edge.
   await openGroup(page, "group-traction");
   await typeInto(page, "Driven axle load", "3968");
-  await typeInto(page, "Loaded tire radius", "16.5");
+  await typeInto(page, "Tire radius under load", "16.5");
   await typeInto(page, "Tire grip (adhesion)", "0.85");
 
   // The engine-speed path: 6000 rpm through a 0.70 overdrive = 8571 rpm at the shaft, faster than
