@@ -12,7 +12,17 @@ export type GuideTopic =
   | "tire"
   | "rpm"
   | "ends"
-  | "tube";
+  | "tube"
+  | "no-shaft"
+  | "weld-to-weld"
+  | "ride-height"
+  | "wrap"
+  | "slip"
+  | "spline"
+  | "caps"
+  | "flange"
+  | "engine"
+  | "traction";
 
 const STROKE = {
   stroke: "currentColor",
@@ -181,6 +191,196 @@ const DRAWINGS: Record<GuideTopic, React.ReactNode> = {
       <line x1="150" y1="48" x2="230" y2="48" {...STROKE} strokeWidth={10} className="text-steel-500" />
     </>
   ),
+  "no-shaft": (
+    <>
+      <Ground />
+      <rect x="10" y="34" width="54" height="26" rx="3" {...STROKE} />
+      <rect x="64" y="41" width="10" height="12" {...STROKE} />
+      <line x1="74" y1="40" x2="74" y2="54" {...STROKE} strokeWidth={3} className="text-brass-600" />
+      <circle cx="192" cy="58" r="5" {...STROKE} />
+      <circle cx="212" cy="60" r="16" {...STROKE} />
+      <line x1="74" y1="47" x2="192" y2="58" {...STROKE} strokeWidth={1} strokeDasharray="4 3" />
+      <g className="text-brass-600">
+        <line x1="74" y1="22" x2="192" y2="22" {...STROKE} />
+        <line x1="192" y1="16" x2="192" y2="52" {...STROKE} strokeWidth={1} />
+        <path d="M80 18 L74 22 L80 26 M186 18 L192 22 L186 26" {...STROKE} />
+      </g>
+      <text x="30" y="80" fontSize="10" fill="currentColor">
+        seal face
+      </text>
+      <text x="150" y="80" fontSize="10" fill="currentColor">
+        pinion joint centre
+      </text>
+    </>
+  ),
+  "weld-to-weld": (
+    <>
+      <line x1="40" y1="48" x2="200" y2="48" {...STROKE} strokeWidth={14} className="text-steel-500" />
+      <path d="M40 36 L22 36 L14 28 M40 60 L22 60 L14 68" {...STROKE} />
+      <path d="M200 36 L218 36 L226 28 M200 60 L218 60 L226 68" {...STROKE} />
+      <g className="text-brass-600">
+        <line x1="40" y1="30" x2="40" y2="66" {...STROKE} strokeWidth={3} />
+        <line x1="200" y1="30" x2="200" y2="66" {...STROKE} strokeWidth={3} />
+        <line x1="40" y1="80" x2="200" y2="80" {...STROKE} />
+        <path d="M46 76 L40 80 L46 84 M194 76 L200 80 L194 84" {...STROKE} />
+      </g>
+      <text x="92" y="20" fontSize="10" fill="currentColor">
+        weld to weld
+      </text>
+    </>
+  ),
+  "ride-height": (
+    <>
+      <Ground />
+      <path d="M30 40 L60 20 L180 20 L214 40 Z" {...STROKE} />
+      <circle cx="60" cy="68" r="18" {...STROKE} />
+      <circle cx="186" cy="68" r="18" {...STROKE} />
+      <rect x="100" y="44" width="40" height="10" {...STROKE} className="text-brass-600" />
+      <path d="M120 30 L120 42 M114 36 L120 42 L126 36" {...STROKE} className="text-brass-600" />
+      <text x="96" y="70" fontSize="10" fill="currentColor">
+        load in
+      </text>
+    </>
+  ),
+  wrap: (
+    <>
+      <Ground />
+      <path d="M40 40 Q120 56 200 40" {...STROKE} />
+      <path d="M40 46 Q120 30 200 50" {...STROKE} strokeDasharray="4 3" className="text-brass-600" />
+      <circle cx="120" cy="62" r="16" {...STROKE} />
+      <line x1="120" y1="62" x2="84" y2="50" {...STROKE} strokeWidth={4} />
+      <line
+        x1="120"
+        y1="62"
+        x2="82"
+        y2="66"
+        {...STROKE}
+        strokeWidth={2}
+        strokeDasharray="3 2"
+        className="text-brass-600"
+      />
+      <path d="M150 30 A 30 30 0 0 0 140 64" {...STROKE} className="text-brass-600" />
+      <path d="M136 58 L140 64 L146 59" {...STROKE} className="text-brass-600" />
+    </>
+  ),
+  slip: (
+    <>
+      <rect x="14" y="34" width="50" height="28" rx="3" {...STROKE} />
+      <rect x="64" y="40" width="60" height="16" rx="2" {...STROKE} className="text-steel-500" />
+      <line x1="100" y1="48" x2="226" y2="48" {...STROKE} strokeWidth={10} className="text-steel-500" />
+      <g className="text-brass-600">
+        <line x1="64" y1="24" x2="124" y2="24" {...STROKE} />
+        <path d="M70 20 L64 24 L70 28 M118 20 L124 24 L118 28" {...STROKE} />
+        <line x1="64" y1="72" x2="92" y2="72" {...STROKE} strokeWidth={1} />
+        <path d="M86 68 L92 72 L86 76" {...STROKE} strokeWidth={1} />
+      </g>
+      <text x="68" y="18" fontSize="10" fill="currentColor">
+        travel
+      </text>
+      <text x="96" y="76" fontSize="10" fill="currentColor">
+        out at ride height
+      </text>
+    </>
+  ),
+  spline: (
+    <>
+      <circle cx="70" cy="48" r="32" {...STROKE} />
+      <circle cx="70" cy="48" r="25" {...STROKE} strokeDasharray="3 3" />
+      <circle cx="70" cy="48" r="8" {...STROKE} strokeWidth={1} />
+      <g className="text-brass-600">
+        <line x1="38" y1="90" x2="102" y2="90" {...STROKE} strokeWidth={1} />
+        <line x1="38" y1="84" x2="38" y2="94" {...STROKE} strokeWidth={1} />
+        <line x1="102" y1="84" x2="102" y2="94" {...STROKE} strokeWidth={1} />
+      </g>
+      <text x="120" y="40" fontSize="10" fill="currentColor">
+        count the teeth;
+      </text>
+      <text x="120" y="54" fontSize="10" fill="currentColor">
+        calliper over the tops
+      </text>
+    </>
+  ),
+  caps: (
+    <>
+      <path d="M40 20 L40 76 M200 20 L200 76" {...STROKE} strokeWidth={6} />
+      <rect x="50" y="36" width="26" height="24" rx="4" {...STROKE} />
+      <rect x="164" y="36" width="26" height="24" rx="4" {...STROKE} />
+      <line x1="76" y1="48" x2="164" y2="48" {...STROKE} strokeWidth={6} className="text-steel-500" />
+      <g className="text-brass-600">
+        <line x1="50" y1="86" x2="190" y2="86" {...STROKE} />
+        <path d="M56 82 L50 86 L56 90 M184 82 L190 86 L184 90" {...STROKE} />
+        <line x1="44" y1="36" x2="44" y2="60" {...STROKE} strokeWidth={1} />
+      </g>
+      <text x="98" y="80" fontSize="10" fill="currentColor">
+        span
+      </text>
+      <text x="4" y="14" fontSize="10" fill="currentColor">
+        cap diameter
+      </text>
+    </>
+  ),
+  flange: (
+    <>
+      <circle cx="80" cy="48" r="40" {...STROKE} />
+      <circle cx="80" cy="48" r="14" {...STROKE} />
+      <circle
+        cx="80"
+        cy="48"
+        r="28"
+        {...STROKE}
+        strokeWidth={1}
+        strokeDasharray="3 3"
+        className="text-brass-600"
+      />
+      <circle cx="108" cy="48" r="4" {...STROKE} />
+      <circle cx="52" cy="48" r="4" {...STROKE} />
+      <circle cx="80" cy="20" r="4" {...STROKE} />
+      <circle cx="80" cy="76" r="4" {...STROKE} />
+      <text x="134" y="40" fontSize="10" fill="currentColor">
+        bolt circle: centre
+      </text>
+      <text x="134" y="54" fontSize="10" fill="currentColor">
+        to opposite centre
+      </text>
+      <text x="134" y="68" fontSize="10" fill="currentColor">
+        pilot: the spigot
+      </text>
+    </>
+  ),
+  engine: (
+    <>
+      <rect x="14" y="28" width="60" height="40" rx="4" {...STROKE} />
+      <rect x="84" y="34" width="56" height="28" rx="3" {...STROKE} />
+      <line x1="74" y1="48" x2="84" y2="48" {...STROKE} />
+      <line x1="140" y1="48" x2="226" y2="48" {...STROKE} strokeWidth={4} className="text-steel-500" />
+      <circle cx="112" cy="48" r="6" {...STROKE} />
+      <circle cx="112" cy="48" r="11" {...STROKE} strokeWidth={1} />
+      <text x="18" y="84" fontSize="10" fill="currentColor">
+        engine rpm
+      </text>
+      <text x="150" y="84" fontSize="10" fill="currentColor">
+        ÷ top gear
+      </text>
+    </>
+  ),
+  traction: (
+    <>
+      <Ground />
+      <circle cx="120" cy="54" r="30" {...STROKE} />
+      <circle cx="120" cy="54" r="3" {...STROKE} />
+      <g className="text-brass-600">
+        <line x1="120" y1="54" x2="120" y2="84" {...STROKE} />
+        <path d="M120 6 L120 22 M114 16 L120 22 L126 16" {...STROKE} />
+        <path d="M84 86 L60 86 M66 82 L60 86 L66 90" {...STROKE} />
+      </g>
+      <text x="128" y="74" fontSize="10" fill="currentColor">
+        loaded radius
+      </text>
+      <text x="130" y="14" fontSize="10" fill="currentColor">
+        axle load
+      </text>
+    </>
+  ),
 };
 
 const TEXT: Record<GuideTopic, { title: string; alt: string; body: React.ReactNode }> = {
@@ -300,6 +500,148 @@ const TEXT: Record<GuideTopic, { title: string; alt: string; body: React.ReactNo
       <p>
         Yokeline picks a tube from the shop&rsquo;s stock that passes every check (the cheapest or the
         lightest, as the shop prefers) and lists the others. Choose one yourself only if you must.
+      </p>
+    ),
+  },
+  "no-shaft": {
+    title: "Length with no shaft yet",
+    alt: "Side view: a tape from the transmission's output seal face to the centre of the pinion joint.",
+    body: (
+      <>
+        <p>
+          With the vehicle at loaded ride height, measure from the face of the transmission&rsquo;s output
+          seal (where the slip yoke enters it) to the centre of the pinion joint&rsquo;s cross (the centre of
+          the caps in the pinion yoke, or the face of a companion flange).
+        </p>
+        <p>
+          Tell the shop that is how you measured: the slip yoke&rsquo;s own length from its joint centre to
+          the point where it should sit in the seal is then taken off by the shop, so the slip ends up part
+          way out.
+        </p>
+      </>
+    ),
+  },
+  "weld-to-weld": {
+    title: "Weld to weld (re-tube)",
+    alt: "A shaft with both end yokes welded to the tube and the tape between the two weld beads.",
+    body: (
+      <>
+        <p>
+          For a new tube in an old shaft, measure the old one on the bench from weld bead to weld bead (the
+          edge of each bead where it meets the tube), and also joint centre to joint centre.
+        </p>
+        <p>
+          Mark the phasing first: a straight line along the tube through both yokes&rsquo; ears, so the new
+          tube goes back with the yokes in the same index.
+        </p>
+      </>
+    ),
+  },
+  "ride-height": {
+    title: "Loaded ride height",
+    alt: "A vehicle standing on its wheels with its load in.",
+    body: (
+      <>
+        <p>
+          Measure with the vehicle standing on its own wheels, with its usual load in (a tow rig hitched, a
+          work truck loaded), on level ground. A vehicle on a lift with the axle hanging is at full droop, not
+          at ride height: every length and angle is different there.
+        </p>
+        <p>
+          Droop: lift the body until the wheels hang on their stops (or shocks) and measure how much longer
+          the joint-to-joint distance gets. Bump: with the springs removed or the axle jacked to the bump
+          stops, measure how much shorter it gets.
+        </p>
+      </>
+    ),
+  },
+  wrap: {
+    title: "Leaf springs wrap under load",
+    alt: "A leaf spring bending into an S under torque and the axle rotating its pinion nose upward.",
+    body: (
+      <>
+        <p>
+          Under hard acceleration, a leaf-sprung axle tries to turn the opposite way to the wheels: the
+          springs bend into a shallow S and the pinion nose climbs. Under braking or on the overrun it drops.
+        </p>
+        <p>
+          So the pinion angle you measure parked is not the one it runs at under load. Common shop practice is
+          to set a leaf-sprung pinion a degree or two nose-down from where the working angles would cancel, so
+          it comes up into line under torque; more for towing and drag use, and traction bars or ladder bars
+          where it wraps a lot. Coil-sprung axles with links move much less.
+        </p>
+      </>
+    ),
+  },
+  slip: {
+    title: "Slip collapsed length and travel",
+    alt: "A slip yoke pushed into the transmission with its travel marked.",
+    body: (
+      <>
+        <p>
+          Collapsed length: push the shaft fully into the transmission (or the slip fully together) and
+          measure joint centre to joint centre. Travel: the spline length from fully in to the end of the
+          spline (the shop can read it off the slip yoke).
+        </p>
+        <p>
+          At ride height the slip should sit part way out (common shop practice: about 3/4 to 1 in out from
+          fully in), so it can shorten at full bump and still keep spline engaged at full droop.
+        </p>
+      </>
+    ),
+  },
+  spline: {
+    title: "Output spline",
+    alt: "An output shaft end: count the teeth and calliper across their tops.",
+    body: (
+      <p>
+        Count the teeth on the transmission (or transfer-case) output shaft, and measure across the tops of
+        the teeth with a calliper (the major diameter). With the old slip yoke in hand, count its internal
+        splines instead and tell the shop.
+      </p>
+    ),
+  },
+  caps: {
+    title: "Cap diameter and span",
+    alt: "A cross with its two bearing caps in a yoke: the cap diameter and the span across them.",
+    body: (
+      <p>
+        Cap diameter: across one bearing cap with a calliper. Span: across the outside of the two caps that
+        sit in the vehicle&rsquo;s yoke (not the pair in the shaft&rsquo;s own yoke). Note how they are held:
+        straps, U-bolts, or round caps clamped in bores.
+      </p>
+    ),
+  },
+  flange: {
+    title: "Companion flange",
+    alt: "A flange face with four bolt holes on a circle and a centring pilot.",
+    body: (
+      <p>
+        Count the bolt holes. The bolt circle is the diameter through their centres: with an even count,
+        measure centre to centre across opposite holes. The pilot is the centring spigot (or the bore that
+        takes it): measure its diameter with a calliper.
+      </p>
+    ),
+  },
+  engine: {
+    title: "Engine-speed path",
+    alt: "Engine and gearbox, with the shaft turning at engine rpm divided by the top gear.",
+    body: (
+      <p>
+        The highest engine speed the vehicle will really see in top gear (the rev limiter if it can reach it),
+        and the top gear ratio from the transmission&rsquo;s build sheet. An overdrive (a ratio below 1) turns
+        the shaft faster than the engine: 6000 rpm through 0.70 is about 8600 rpm at the shaft.
+      </p>
+    ),
+  },
+  traction: {
+    title: "Axle load and loaded radius",
+    alt: "A tire under load: the axle load pressing down and the loaded radius from the axle to the ground.",
+    body: (
+      <p>
+        The axle load is what the driven axle puts on a scale, loaded as it works (a truck scale, or the
+        corner weights added). The loaded radius is from the axle centre to the ground with the vehicle on its
+        wheels; it is a little less than half the tire&rsquo;s diameter.
       </p>
     ),
   },

@@ -6,8 +6,10 @@
 import { z } from "zod";
 import {
   inToMm,
+  kgToLb,
   kmhToMph,
   lbftToNm,
+  lbToKg,
   mmToIn,
   mphToKmh,
   nmToLbft,
@@ -28,6 +30,35 @@ export interface AnglesModel {
   horizontalDeg: SiNumber;
 }
 
+/** Slip-joint data (design file `slip`), mm; the whole group is left out while every field is empty. */
+export interface SlipModel {
+  collapsedLengthMm: SiNumber;
+  travelMm: SiNumber;
+  droopExtensionMm: SiNumber;
+  bumpCompressionMm: SiNumber;
+  /** Catalogue slip yoke id, or "" to let the shop match one. */
+  slipYokeId: string;
+  sealOutsideCollapsedMm: SiNumber;
+}
+
+/** One end where it meets the vehicle: "" not given, a yoke (series or measured caps) or a companion flange. */
+export interface VehicleEndModel {
+  kind: "" | "yoke" | "flange";
+  jointSeriesId: string;
+  capDiameterMm: SiNumber;
+  capSpanMm: SiNumber;
+  retention: "" | "strap" | "u-bolt" | "round";
+  flange: { boltCount: SiNumber; boltCircleMm: SiNumber; pilotMm: SiNumber };
+}
+
+/** Interface data (design file `interface`). */
+export interface InterfaceModel {
+  transmissionOutput: { splineCount: SiNumber; majorDiameterMm: SiNumber };
+  front: VehicleEndModel;
+  pinion: VehicleEndModel;
+  lubrication: "" | "greaseable" | "sealed";
+}
+
 /** Everything the builder edits. Shaped like the design file so field paths line up. */
 export interface BuilderForm {
   name: string;
@@ -43,18 +74,75 @@ export interface BuilderForm {
     firstGearRatio: SiNumber;
     transferCaseLowRatio: SiNumber;
     converterStallRatio: SiNumber;
+    /** Top gear, for the running torque (the core falls back to speed.topGearRatio). */
+    topGearRatio: SiNumber;
+    /** A machine's rated torque at the shaft (industrial). */
+    ratedShaftTorqueNm: SiNumber;
   };
   /** Shaft speed from the vehicle (top speed, tire, axle) or given directly. */
   speedMode: "vehicle" | "rpm";
-  speed: { topSpeedKmh: SiNumber; tireDiameterMm: SiNumber; axleRatio: SiNumber; maxShaftRpm: SiNumber };
+  speed: {
+    topSpeedKmh: SiNumber;
+    tireDiameterMm: SiNumber;
+    axleRatio: SiNumber;
+    maxShaftRpm: SiNumber;
+    /** The engine-speed path beside the others: max engine rpm ÷ top gear. */
+    maxEngineRpm: SiNumber;
+    topGearRatio: SiNumber;
+  };
+  /** Wheel-slip torque inputs; left out while every field is empty. */
+  traction: { drivenAxleLoadKg: SiNumber; tireLoadedRadiusMm: SiNumber; adhesion: SiNumber };
+  slip: SlipModel;
+  interface: InterfaceModel;
+  /** "" = not given (a single cross). */
+  frontJointType: "" | "cross" | "double-cardan";
+  /** "" = not given (one piece). */
+  layout: "" | "one-piece" | "two-piece";
+  centreBearing: { bearingId: string; fromFrontMm: SiNumber; dropMm: SiNumber };
   /** "auto": let Yokeline pick from the catalogue; "chosen": the tube below. */
   tubeMode: "auto" | "chosen";
   tube: { materialId: string; odMm: SiNumber; wallMm: SiNumber };
   /**
-   * Design-file fields the form does not edit (slip, balance grade, phase index, material
+   * Design-file fields the form does not edit (balance grade, phase index, material
    * overrides, …), kept as they came so a downloaded file loses nothing an upload brought.
    */
   extras: Record<string, unknown>;
+}
+
+const emptyEnd = (): VehicleEndModel => ({
+  kind: "",
+  jointSeriesId: "",
+  capDiameterMm: null,
+  capSpanMm: null,
+  retention: "",
+  flange: { boltCount: null, boltCircleMm: null, pilotMm: null },
+});
+
+/** The optional groups, all empty (so the design file leaves them out). */
+export function emptyOptionalGroups(): Pick<
+  BuilderForm,
+  "traction" | "slip" | "interface" | "frontJointType" | "layout" | "centreBearing"
+> {
+  return {
+    traction: { drivenAxleLoadKg: null, tireLoadedRadiusMm: null, adhesion: null },
+    slip: {
+      collapsedLengthMm: null,
+      travelMm: null,
+      droopExtensionMm: null,
+      bumpCompressionMm: null,
+      slipYokeId: "",
+      sealOutsideCollapsedMm: null,
+    },
+    interface: {
+      transmissionOutput: { splineCount: null, majorDiameterMm: null },
+      front: emptyEnd(),
+      pinion: emptyEnd(),
+      lubrication: "",
+    },
+    frontJointType: "",
+    layout: "",
+    centreBearing: { bearingId: "", fromFrontMm: null, dropMm: null },
+  };
 }
 
 /** A typical street truck (the street-truck example, with the shop choosing fittings and tube). */
@@ -70,16 +158,98 @@ export function defaultBuilderForm(): BuilderForm {
       driveshaft: { verticalDeg: 5, horizontalDeg: 0 },
       pinion: { verticalDeg: 3, horizontalDeg: 0 },
     },
-    torque: { engineTorqueNm: 550, firstGearRatio: 3.06, transferCaseLowRatio: 1, converterStallRatio: 2 },
+    torque: {
+      engineTorqueNm: 550,
+      firstGearRatio: 3.06,
+      transferCaseLowRatio: 1,
+      converterStallRatio: 2,
+      topGearRatio: null,
+      ratedShaftTorqueNm: null,
+    },
     speedMode: "vehicle",
-    speed: { topSpeedKmh: 200, tireDiameterMm: 711, axleRatio: 3.73, maxShaftRpm: null },
+    speed: {
+      topSpeedKmh: 200,
+      tireDiameterMm: 711,
+      axleRatio: 3.73,
+      maxShaftRpm: null,
+      maxEngineRpm: null,
+      topGearRatio: null,
+    },
+    ...emptyOptionalGroups(),
     tubeMode: "auto",
     tube: { materialId: "steel-dom", odMm: 88.9, wallMm: 2.108 },
     extras: {},
   };
 }
 
-const DESIGN_KEYS = new Set(["name", "lengthMm", "tube", "geometry", "torque", "speed", "ends"]);
+const DESIGN_KEYS = new Set([
+  "name",
+  "lengthMm",
+  "tube",
+  "geometry",
+  "torque",
+  "speed",
+  "ends",
+  "use",
+  "traction",
+  "slip",
+  "interface",
+  "frontJointType",
+  "layout",
+  "centreBearing",
+]);
+
+/** A number field the user filled (NaN counts: the core must report it). */
+const given = (v: SiNumber) => v != null;
+const text = (v: string) => (v ? v : null);
+
+function vehicleEndToFile(e: VehicleEndModel): Record<string, unknown> | null {
+  if (!e.kind) return null;
+  if (e.kind === "flange")
+    return {
+      kind: "flange",
+      flange: {
+        boltCount: e.flange.boltCount,
+        boltCircleMm: e.flange.boltCircleMm,
+        pilotMm: e.flange.pilotMm,
+      },
+    };
+  return {
+    kind: "yoke",
+    jointSeriesId: text(e.jointSeriesId),
+    capDiameterMm: e.capDiameterMm,
+    capSpanMm: e.capSpanMm,
+    retention: text(e.retention),
+  };
+}
+
+/** The optional groups of the design file; each is left out while all its fields are empty. */
+function optionalGroupsToFile(form: BuilderForm): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  const t = form.traction;
+  if ([t.drivenAxleLoadKg, t.tireLoadedRadiusMm, t.adhesion].some(given)) out.traction = { ...t };
+  const s = form.slip;
+  if (
+    [s.collapsedLengthMm, s.travelMm, s.droopExtensionMm, s.bumpCompressionMm, s.sealOutsideCollapsedMm].some(
+      given,
+    ) ||
+    s.slipYokeId
+  )
+    out.slip = { ...s, slipYokeId: text(s.slipYokeId) };
+  const i = form.interface;
+  const output = [i.transmissionOutput.splineCount, i.transmissionOutput.majorDiameterMm].some(given)
+    ? { ...i.transmissionOutput }
+    : null;
+  const front = vehicleEndToFile(i.front);
+  const pinion = vehicleEndToFile(i.pinion);
+  if (output || front || pinion || i.lubrication)
+    out.interface = { transmissionOutput: output, front, pinion, lubrication: text(i.lubrication) };
+  if (form.frontJointType) out.frontJointType = form.frontJointType;
+  if (form.layout) out.layout = form.layout;
+  if (form.layout === "two-piece" && form.centreBearing.bearingId)
+    out.centreBearing = { ...form.centreBearing };
+  return out;
+}
 
 const angles = (a: AnglesModel, offset: boolean) => ({
   verticalDeg: a.verticalDeg,
@@ -94,12 +264,15 @@ export function formToDesignFile(form: BuilderForm): Record<string, unknown> {
   const { extras } = form;
   const extraGeometry = (extras.geometry ?? {}) as Record<string, unknown>;
   const extraSpeed = (extras.speed ?? {}) as Record<string, unknown>;
+  const engine = { maxEngineRpm: form.speed.maxEngineRpm, topGearRatio: form.speed.topGearRatio };
   const ends: Record<string, { fittingId: string }> = {};
   if (form.ends.front) ends.front = { fittingId: form.ends.front };
   if (form.ends.rear) ends.rear = { fittingId: form.ends.rear };
   const rest = Object.fromEntries(Object.entries(extras).filter(([k]) => !["geometry", "speed"].includes(k)));
   const design: Record<string, unknown> = {
     name: form.name.trim() || null,
+    // The customer's pick reaches the evaluation (street: the shop's base factor and limits).
+    use: form.application.use,
     lengthMm: form.lengthMm,
     ...(form.tubeMode === "chosen"
       ? { tube: { materialId: form.tube.materialId, odMm: form.tube.odMm, wallMm: form.tube.wallMm } }
@@ -115,11 +288,14 @@ export function formToDesignFile(form: BuilderForm): Record<string, unknown> {
       firstGearRatio: form.torque.firstGearRatio,
       transferCaseLowRatio: form.torque.transferCaseLowRatio,
       converterStallRatio: form.torque.converterStallRatio,
+      topGearRatio: form.torque.topGearRatio,
+      ratedShaftTorqueNm: form.torque.ratedShaftTorqueNm,
     },
     speed:
       form.speedMode === "rpm"
         ? {
             ...extraSpeed,
+            ...engine,
             maxShaftRpm: form.speed.maxShaftRpm,
             topSpeedKmh: null,
             axleRatio: null,
@@ -127,12 +303,14 @@ export function formToDesignFile(form: BuilderForm): Record<string, unknown> {
           }
         : {
             ...extraSpeed,
+            ...engine,
             maxShaftRpm: null,
             topSpeedKmh: form.speed.topSpeedKmh,
             axleRatio: form.speed.axleRatio,
             tireDiameterMm: form.speed.tireDiameterMm,
           },
     ...rest,
+    ...optionalGroupsToFile(form),
     ...(Object.keys(ends).length ? { ends } : {}),
   };
   return design;
@@ -140,6 +318,67 @@ export function formToDesignFile(form: BuilderForm): Record<string, unknown> {
 
 const num = (v: unknown): SiNumber => (typeof v === "number" ? v : null);
 const DEG = 180 / Math.PI;
+
+type FileEnd = NonNullable<NonNullable<DesignFile["interface"]>["pinion"]>;
+
+function vehicleEndToForm(e: FileEnd | null | undefined): VehicleEndModel {
+  if (!e) return emptyEnd();
+  return {
+    kind: e.kind,
+    jointSeriesId: e.jointSeriesId ?? "",
+    capDiameterMm: num(e.capDiameterMm),
+    capSpanMm: num(e.capSpanMm),
+    retention: e.retention ?? "",
+    flange: {
+      boltCount: num(e.flange?.boltCount),
+      boltCircleMm: num(e.flange?.boltCircleMm),
+      pilotMm: num(e.flange?.pilotMm),
+    },
+  };
+}
+
+function optionalGroupsToForm(design: DesignFile): ReturnType<typeof emptyOptionalGroups> {
+  const empty = emptyOptionalGroups();
+  const t = design.traction;
+  const s = design.slip;
+  const i = design.interface;
+  const c = design.centreBearing;
+  return {
+    traction: t
+      ? {
+          drivenAxleLoadKg: t.drivenAxleLoadKg,
+          tireLoadedRadiusMm: t.tireLoadedRadiusMm,
+          adhesion: num(t.adhesion),
+        }
+      : empty.traction,
+    slip: s
+      ? {
+          collapsedLengthMm: s.collapsedLengthMm,
+          travelMm: s.travelMm,
+          droopExtensionMm: num(s.droopExtensionMm),
+          bumpCompressionMm: num(s.bumpCompressionMm),
+          slipYokeId: s.slipYokeId ?? "",
+          sealOutsideCollapsedMm: num(s.sealOutsideCollapsedMm),
+        }
+      : empty.slip,
+    interface: i
+      ? {
+          transmissionOutput: {
+            splineCount: num(i.transmissionOutput?.splineCount),
+            majorDiameterMm: num(i.transmissionOutput?.majorDiameterMm),
+          },
+          front: vehicleEndToForm(i.front),
+          pinion: vehicleEndToForm(i.pinion),
+          lubrication: i.lubrication ?? "",
+        }
+      : empty.interface,
+    frontJointType: design.frontJointType ?? "",
+    layout: design.layout ?? "",
+    centreBearing: c
+      ? { bearingId: c.bearingId, fromFrontMm: num(c.fromFrontMm), dropMm: num(c.dropMm) }
+      : empty.centreBearing,
+  };
+}
 
 /**
  * The form for a parsed design file. A design whose driveshaft angle is given only by the
@@ -165,13 +404,12 @@ export function designFileToForm(
   const { transmission: _t, driveshaft: _d, pinion: _p, ...geometryRest } = g;
   if (Object.values(geometryRest).some((v) => v != null)) extras.geometry = geometryRest;
   const s = design.speed;
-  if (s.maxEngineRpm != null || s.topGearRatio != null)
-    extras.speed = { maxEngineRpm: s.maxEngineRpm ?? null, topGearRatio: s.topGearRatio ?? null };
   const vehicle = s.topSpeedKmh != null && s.axleRatio != null && s.tireDiameterMm != null;
   const defaults = defaultBuilderForm();
   return {
     name: design.name ?? defaults.name,
-    application: base.application,
+    // The file's use wins; a file without one keeps the draft's (older drafts kept it beside the design).
+    application: { ...base.application, use: design.use ?? base.application.use },
     lengthMm: design.lengthMm,
     ends: { front: design.ends?.front?.fittingId ?? "", rear: design.ends?.rear?.fittingId ?? "" },
     offset,
@@ -185,6 +423,8 @@ export function designFileToForm(
       firstGearRatio: num(design.torque.firstGearRatio),
       transferCaseLowRatio: num(design.torque.transferCaseLowRatio),
       converterStallRatio: num(design.torque.converterStallRatio),
+      topGearRatio: num(design.torque.topGearRatio),
+      ratedShaftTorqueNm: num(design.torque.ratedShaftTorqueNm),
     },
     speedMode: s.maxShaftRpm != null && !vehicle ? "rpm" : "vehicle",
     speed: {
@@ -192,7 +432,10 @@ export function designFileToForm(
       tireDiameterMm: num(s.tireDiameterMm),
       axleRatio: num(s.axleRatio),
       maxShaftRpm: num(s.maxShaftRpm),
+      maxEngineRpm: num(s.maxEngineRpm),
+      topGearRatio: num(s.topGearRatio),
     },
+    ...optionalGroupsToForm(design),
     tubeMode: design.tube ? "chosen" : "auto",
     tube: design.tube ? { ...design.tube } : defaults.tube,
     extras,
@@ -204,6 +447,7 @@ export function formPathOf(designPath: string): string {
   if (designPath.startsWith("ends.front")) return "ends.front";
   if (designPath.startsWith("ends.rear")) return "ends.rear";
   if (designPath === "tube") return "tube.materialId";
+  if (designPath === "centreBearing") return "centreBearing.bearingId";
   return designPath;
 }
 
@@ -241,7 +485,7 @@ export function builderFormSchema(catalogue: Catalogue) {
 // ————— Units —————
 
 /** Quantities the builder shows in the chosen unit system. */
-export type DisplayQuantity = "length" | "diameter" | "torque" | "speed";
+export type DisplayQuantity = "length" | "diameter" | "torque" | "speed" | "mass";
 
 interface DisplayUnit {
   unit: string;
@@ -268,6 +512,10 @@ export const DISPLAY_UNITS: Record<DisplayQuantity, Record<UnitSystem, DisplayUn
   speed: {
     imperial: { unit: "mph", digits: 1, fromSi: kmhToMph, toSi: mphToKmh },
     metric: { unit: "km/h", digits: 1, fromSi: same, toSi: same },
+  },
+  mass: {
+    imperial: { unit: "lb", digits: 0, fromSi: kgToLb, toSi: lbToKg },
+    metric: { unit: "kg", digits: 0, fromSi: same, toSi: same },
   },
 };
 

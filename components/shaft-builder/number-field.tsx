@@ -93,7 +93,7 @@ export function NumberField({
         </p>
       )}
       {error && (
-        <p id={`${id}-error`} className="field-error">
+        <p id={`${id}-error`} className="field-error [overflow-wrap:anywhere]">
           {error}
         </p>
       )}

@@ -16,6 +16,7 @@ import {
 } from "@/lib/driveline";
 import { DrivelineView } from "./driveline-diagram";
 import { SpeedRatioPlot } from "./speed-ratio-plot";
+import { LoadsSummary } from "./loads-summary";
 import { formatNumber, withUnit, type UnitSystem } from "./model";
 
 const STATUS = {
@@ -235,6 +236,8 @@ export function ResultsPanel({
             ))}
           </dl>
         </section>
+
+        <LoadsSummary report={report} design={design} system={system} catalogue={catalogue} />
 
         <section aria-labelledby="pictures-h" className="card p-4">
           <div className="flex flex-wrap items-center justify-between gap-2">

@@ -20,6 +20,12 @@ import type { DraftSummary, DraftView } from "@/lib/designs/drafts";
 import { Alert } from "@/components/ui/alert";
 import { MeasuringGuide, type GuideTopic } from "./measuring-guide";
 import { NumberField } from "./number-field";
+import type { FieldKit } from "./field-kit";
+import { EngineSpeedField, RunningTorqueGroup, TopGearField } from "./service-fields";
+import { SlipFields } from "./slip-fields";
+import { InterfaceFields } from "./interface-fields";
+import { FrontJointField, LayoutFields } from "./layout-fields";
+import { reportAdditions, speedPathText } from "./report-additions";
 import { ResultsPanel, StatusWord, tubeLabel, type TubeChoice } from "./results-panel";
 import {
   builderFormSchema,
@@ -56,9 +62,10 @@ export interface ShaftBuilderProps {
   tubePreference?: TubePreference;
   /**
    * The counter's compact, keyboard-first layout: the fields in the order of a paper measuring
-   * sheet (use and vehicle, length, angles, torque, speed, tube, then the order details with the
-   * quote button), the first field focused, no measuring guides in the tab order, and Enter in a
-   * field never submitting by surprise.
+   * sheet (use and vehicle, length, angles, torque, speed, tube; then the optional slip, layout
+   * and vehicle-end groups, folded until wanted; then the order details with the quote button),
+   * the first field focused, no measuring guides in the tab order, and Enter in a field never
+   * submitting by surprise.
    */
   compact?: boolean;
   /** Counter: a design that fails a check may still be quoted (the order then needs the owner's sign-off). */
@@ -235,6 +242,20 @@ export function ShaftBuilder({
       )}
     />
   );
+
+  const kit: FieldKit = {
+    num,
+    values,
+    errs,
+    register,
+    setValue,
+    control,
+    guide,
+    markChanged,
+    catalogue,
+    system,
+    compact,
+  };
 
   const useTube = (t: TubeChoice) => {
     setValue("tubeMode", "chosen", { shouldDirty: true });
@@ -464,11 +485,21 @@ export function ShaftBuilder({
     "speed.tireDiameterMm",
     "speed.axleRatio",
     "speed.maxShaftRpm",
+    "speed.maxEngineRpm",
+    "speed.topGearRatio",
+    "torque.topGearRatio",
+    "torque.ratedShaftTorqueNm",
+    "centreBearing.bearingId",
     ...(tubeMode === "chosen" ? ["tube.materialId", "tube.odMm", "tube.wallMm"] : []),
   ]);
+  // The optional groups show every error of theirs beside its field.
+  const groupPrefixes = ["traction.", "slip.", "interface.", "centreBearing."];
   const otherIssues = validation.issues.filter(
-    (i) => !shownPaths.has(i.path.startsWith("ends.") ? i.path.replace(/\.fittingId$/, "") : i.path),
+    (i) =>
+      !shownPaths.has(i.path.startsWith("ends.") ? i.path.replace(/\.fittingId$/, "") : i.path) &&
+      !groupPrefixes.some((p) => i.path.startsWith(p)),
   );
+  const additions = report ? reportAdditions(report) : null;
 
   const endSelect = (end: "front" | "rear") => {
     const label = end === "front" ? "Front end fitting" : "Rear end fitting";
@@ -676,9 +707,11 @@ export function ShaftBuilder({
               2. Length and ends
             </h2>
             {num("lengthMm", "Installed length", "length", {
-              hint: "Joint centre to joint centre, at ride height.",
+              hint: "Joint centre to joint centre, at loaded ride height.",
               guide: "length",
             })}
+            {guide("no-shaft")}
+            {guide("weld-to-weld")}
             <div className="grid gap-4 sm:grid-cols-2">
               {endSelect("front")}
               {endSelect("rear")}
@@ -705,6 +738,7 @@ export function ShaftBuilder({
               })}
               {num("geometry.pinion.verticalDeg", "Pinion angle", null, { unit: "°", guide: "pinion" })}
             </div>
+            {guide("wrap")}
             <label className="flex items-center gap-2 text-sm font-medium">
               <input
                 type="checkbox"
@@ -726,6 +760,7 @@ export function ShaftBuilder({
                 {guide("offset")}
               </div>
             )}
+            <FrontJointField kit={kit} rearWorkingAngleDeg={report?.joints.at(-1)?.workingAngleDeg} />
           </section>
 
           <section className={section} aria-labelledby="s-tq">
@@ -733,7 +768,7 @@ export function ShaftBuilder({
               4. Torque and gearing
             </h2>
             {num("torque.engineTorqueNm", "Engine peak torque", "torque")}
-            <div className="grid gap-4 sm:grid-cols-3">
+            <div className="grid gap-4 sm:grid-cols-2">
               {num("torque.firstGearRatio", "First gear ratio", null, { unit: ": 1" })}
               {num("torque.transferCaseLowRatio", "Transfer-case low", null, {
                 unit: ": 1",
@@ -743,16 +778,27 @@ export function ShaftBuilder({
                 unit: ": 1",
                 hint: "1 for a manual",
               })}
+              <TopGearField kit={kit} />
             </div>
             {values.torque && validation.design && (
               <p className="text-sm text-ink-soft" data-testid="design-torque">
-                Torque at the shaft in first gear:{" "}
+                {additions?.service?.serviceFactor != null
+                  ? "Design torque at the shaft"
+                  : "Torque at the shaft in first gear"}
+                :{" "}
                 <strong className="text-ink">
                   {report ? withUnit(report.service.peakShaftTorqueNm, "torque", system, 0) : "—"}
                 </strong>
+                {additions?.service?.serviceFactor != null && (
+                  <>
+                    {" "}
+                    (service factor {additions.service.serviceFactor.toFixed(2)} for {values.application.use})
+                  </>
+                )}
               </p>
             )}
             {guide("torque")}
+            <RunningTorqueGroup kit={kit} />
           </section>
 
           <section className={section} aria-labelledby="s-sp">
@@ -781,7 +827,10 @@ export function ShaftBuilder({
               </label>
             </fieldset>
             {speedMode === "rpm" ? (
-              num("speed.maxShaftRpm", "Maximum shaft speed", null, { unit: "rpm", guide: "rpm" })
+              <>
+                {num("speed.maxShaftRpm", "Maximum shaft speed", null, { unit: "rpm", guide: "rpm" })}
+                <EngineSpeedField kit={kit} />
+              </>
             ) : (
               <>
                 {num("speed.topSpeedKmh", "Top speed", "speed", { guide: "speed" })}
@@ -790,7 +839,13 @@ export function ShaftBuilder({
                   {num("speed.axleRatio", "Axle ratio", null, { unit: ": 1" })}
                 </div>
                 {errs["speed.maxShaftRpm"] && <p className="field-error">{errs["speed.maxShaftRpm"]}</p>}
+                <EngineSpeedField kit={kit} />
               </>
+            )}
+            {report && (report.service.engineRpm != null || speedMode === "vehicle") && (
+              <p className="text-sm text-ink-soft" data-testid="speed-path">
+                {speedPathText(report.service, system)}
+              </p>
             )}
           </section>
 
@@ -901,6 +956,21 @@ export function ShaftBuilder({
             {guide("tube")}
           </section>
 
+          <section className={section} aria-labelledby="s-slip">
+            <h2 id="s-slip" className="text-lg font-semibold">
+              7. Slip and layout
+            </h2>
+            <SlipFields kit={kit} />
+            <LayoutFields kit={kit} />
+          </section>
+
+          <section className={section} aria-labelledby="s-if">
+            <h2 id="s-if" className="text-lg font-semibold">
+              8. Where the shaft meets the vehicle
+            </h2>
+            <InterfaceFields kit={kit} />
+          </section>
+
           {otherIssues.length > 0 && (
             <Alert tone="error" title="Other fields to fix">
               <ul className="list-disc pl-4">
@@ -914,7 +984,7 @@ export function ShaftBuilder({
           {compact ? (
             <section className={section} aria-labelledby="s-order">
               <h2 id="s-order" className="text-lg font-semibold">
-                7. Order details
+                9. Order details
               </h2>
               {nameField}
               <div className="flex flex-wrap items-center gap-3">{quoteButton}</div>
@@ -1058,6 +1128,7 @@ function PrintedInputs({
         ? `${form.speed.maxShaftRpm ?? "—"} rpm`
         : `${n(form.speed.topSpeedKmh, "speed")}, tire ${n(form.speed.tireDiameterMm, "length")}, axle ${form.speed.axleRatio ?? "—"}`,
     ],
+    ...printedOptionalRows(form, n),
     [
       "Tube",
       form.tubeMode === "auto"
@@ -1081,4 +1152,56 @@ function PrintedInputs({
       ))}
     </dl>
   );
+}
+
+/** On paper: the optional groups, each only when filled in. */
+function printedOptionalRows(
+  form: BuilderForm,
+  n: (v: SiNumber, q: DisplayQuantity) => string,
+): [string, string][] {
+  const rows: [string, string][] = [];
+  const x = (v: SiNumber) => (v == null || Number.isNaN(v) ? "—" : String(v));
+  const s = form.speed;
+  const topGear = form.torque.topGearRatio ?? s.topGearRatio;
+  if (s.maxEngineRpm != null || topGear != null)
+    rows.push(["Engine path", `${x(s.maxEngineRpm)} rpm, top gear ${x(topGear)}`]);
+  if (form.torque.ratedShaftTorqueNm != null)
+    rows.push(["Rated shaft torque", n(form.torque.ratedShaftTorqueNm, "torque")]);
+  const t = form.traction;
+  if ([t.drivenAxleLoadKg, t.tireLoadedRadiusMm, t.adhesion].some((v) => v != null))
+    rows.push([
+      "Traction",
+      `axle load ${n(t.drivenAxleLoadKg, "mass")}, loaded radius ${n(t.tireLoadedRadiusMm, "length")}, adhesion ${x(t.adhesion)}`,
+    ]);
+  const sl = form.slip;
+  if ([sl.collapsedLengthMm, sl.travelMm, sl.droopExtensionMm, sl.bumpCompressionMm].some((v) => v != null))
+    rows.push([
+      "Slip",
+      `collapsed ${n(sl.collapsedLengthMm, "length")}, travel ${n(sl.travelMm, "length")}, droop ${n(sl.droopExtensionMm, "length")}, bump ${n(sl.bumpCompressionMm, "length")}${sl.slipYokeId ? `, slip yoke ${sl.slipYokeId}` : ""}`,
+    ]);
+  const i = form.interface;
+  const o = i.transmissionOutput;
+  if (o.splineCount != null || o.majorDiameterMm != null)
+    rows.push(["Output spline", `${x(o.splineCount)} teeth, ${n(o.majorDiameterMm, "diameter")}`]);
+  for (const [key, label] of [
+    ["pinion", "Pinion end"],
+    ["front", "Front end"],
+  ] as const) {
+    const e = i[key];
+    if (e.kind === "yoke")
+      rows.push([
+        label,
+        `yoke${e.jointSeriesId ? ` ${e.jointSeriesId}` : ""}, caps ${n(e.capDiameterMm, "diameter")} × span ${n(e.capSpanMm, "diameter")}${e.retention ? `, ${e.retention}` : ""}`,
+      ]);
+    if (e.kind === "flange")
+      rows.push([
+        label,
+        `flange, ${x(e.flange.boltCount)} bolts on ${n(e.flange.boltCircleMm, "diameter")}, pilot ${n(e.flange.pilotMm, "diameter")}`,
+      ]);
+  }
+  if (i.lubrication) rows.push(["Joints", i.lubrication]);
+  if (form.frontJointType === "double-cardan") rows.push(["Front joint", "double-Cardan"]);
+  if (form.layout === "two-piece")
+    rows.push(["Layout", `two-piece, centre bearing ${form.centreBearing.bearingId || "—"}`]);
+  return rows;
 }

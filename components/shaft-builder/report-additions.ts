@@ -1,0 +1,103 @@
+/**
+ * The report figures issue 10 adds (design-file.md "Additions"), read through a small optional
+ * type while the core that fills them is merged: each is shown only when present.
+ * TODO(lead, after the loads/fittings/twopiece merge): replace `ReportAdditions` with the
+ * EvaluationReport's own fields and drop `reportAdditions()`.
+ */
+import type { EvaluationReport } from "@/lib/driveline";
+import { formatNumber, withUnit, type UnitSystem } from "./model";
+
+export interface ReportAdditions {
+  service?: {
+    engineTorqueAtShaftNm?: number;
+    wheelSlipTorqueNm?: number | null;
+    serviceFactor?: number;
+    use?: string;
+    runningTorqueNm?: number | null;
+  };
+  torsion?: { weldZoneShearYieldMPa?: number; weldZoneSafetyFactor?: number };
+  criticalSpeedLengthMm?: number;
+  criticalSpeedRatioLimit?: number;
+  slip?: {
+    slipYoke?: { id?: string; name?: string; minEngagementMm?: number } | null;
+  } | null;
+  /** The fittings matched to the interface data (shape set by the fittings branch; read loosely). */
+  interface?: unknown;
+  frontJointType?: string;
+}
+
+const isNum = (x: unknown): x is number => typeof x === "number" && Number.isFinite(x);
+
+/** The additions of a report, each kept only when it holds a finite number (or a known shape). */
+export function reportAdditions(report: EvaluationReport): ReportAdditions {
+  const r = report as unknown as Record<string, unknown> & ReportAdditions;
+  const s = r.service ?? {};
+  const t = r.torsion ?? {};
+  return {
+    service: {
+      engineTorqueAtShaftNm: isNum(s.engineTorqueAtShaftNm) ? s.engineTorqueAtShaftNm : undefined,
+      wheelSlipTorqueNm: isNum(s.wheelSlipTorqueNm) ? s.wheelSlipTorqueNm : undefined,
+      serviceFactor: isNum(s.serviceFactor) ? s.serviceFactor : undefined,
+      use: typeof s.use === "string" ? s.use : undefined,
+      runningTorqueNm: isNum(s.runningTorqueNm) ? s.runningTorqueNm : undefined,
+    },
+    torsion: {
+      weldZoneShearYieldMPa: isNum(t.weldZoneShearYieldMPa) ? t.weldZoneShearYieldMPa : undefined,
+      weldZoneSafetyFactor: isNum(t.weldZoneSafetyFactor) ? t.weldZoneSafetyFactor : undefined,
+    },
+    criticalSpeedLengthMm: isNum(r.criticalSpeedLengthMm) ? r.criticalSpeedLengthMm : undefined,
+    criticalSpeedRatioLimit: isNum(r.criticalSpeedRatioLimit) ? r.criticalSpeedRatioLimit : undefined,
+    slip: r.slip && typeof r.slip === "object" ? { slipYoke: r.slip.slipYoke ?? null } : null,
+    interface: r.interface,
+    frontJointType: typeof r.frontJointType === "string" ? r.frontJointType : undefined,
+  };
+}
+
+const words = (key: string) =>
+  key
+    .replace(/([a-z])([A-Z])/g, "$1 $2")
+    .toLowerCase()
+    .replace(/^./, (c) => c.toUpperCase());
+
+/**
+ * Lines for the report's interface block, whatever its exact shape: a text, a named part
+ * ("Pinion: 1350-series conversion cross") or a message per entry.
+ */
+export function interfaceLines(block: unknown): string[] {
+  if (!block || typeof block !== "object") return [];
+  const lines: string[] = [];
+  const one = (key: string, v: unknown) => {
+    if (typeof v === "string") lines.push(`${words(key)}: ${v}`);
+    else if (v && typeof v === "object") {
+      const o = v as Record<string, unknown>;
+      const text = [o.message, o.name, o.label].find((x) => typeof x === "string") as string | undefined;
+      if (text) lines.push(key === "" ? text : `${words(key)}: ${text}`);
+    }
+  };
+  if (Array.isArray(block)) block.forEach((v) => one("", v));
+  else
+    for (const [k, v] of Object.entries(block)) {
+      if (Array.isArray(v)) v.forEach((x) => one("", x));
+      else one(k, v);
+    }
+  return lines;
+}
+
+/** Which speed path governs, in words, with the others' figures beside it. */
+export function speedPathText(service: EvaluationReport["service"], _system: UnitSystem): string {
+  const rpm = (x: number) => `${formatNumber(x, 0)} rpm`;
+  const road = service.vehicleRpm != null ? `the road speed gives ${rpm(service.vehicleRpm)}` : null;
+  const engine =
+    service.engineRpm != null
+      ? `the engine speed through the top gear gives ${rpm(service.engineRpm)}`
+      : null;
+  if (service.governedBy === "engine")
+    return `The engine path governs: ${rpm(service.maxShaftRpm)} at the shaft (an overdrive turns the shaft faster than the engine)${road ? `; ${road}` : ""}.`;
+  if (service.governedBy === "vehicle")
+    return `The road-speed path governs: ${rpm(service.maxShaftRpm)} at the shaft${engine ? `; ${engine}` : ""}.`;
+  const others = [road, engine].filter(Boolean).join("; ");
+  return `The maximum shaft speed you gave governs: ${rpm(service.maxShaftRpm)}${others ? `; ${others}` : ""}.`;
+}
+
+/** "1,234 N·m (910 lb·ft)"-style torque in the unit system. */
+export const torqueText = (nm: number, system: UnitSystem) => withUnit(nm, "torque", system, 0);
