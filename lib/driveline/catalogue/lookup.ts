@@ -87,14 +87,26 @@ export interface CapSize {
 
 /**
  * Whether two cap sizes are the same part: diameter and span within the measuring tolerances,
- * and the same retention when both say. False when either lacks the diameter or the span.
+ * and a compatible retention when both say. False when either lacks the diameter or the span.
  */
 export function sameCaps(a: CapSize, b: CapSize): boolean {
   if (a.capDiameterMm == null || b.capDiameterMm == null || a.capSpanMm == null || b.capSpanMm == null)
     return false;
   if (Math.abs(a.capDiameterMm - b.capDiameterMm) > CAP_DIAMETER_TOLERANCE_MM) return false;
   if (Math.abs(a.capSpanMm - b.capSpanMm) > CAP_SPAN_TOLERANCE_MM) return false;
-  return a.retention == null || b.retention == null || a.retention === b.retention;
+  return retentionCompatible(a.retention, b.retention);
+}
+
+/**
+ * Straps and U-bolts both clamp the caps into an open saddle and take the same caps; a round
+ * bore takes caps held by snap rings (common shop practice). Unknown retention matches either.
+ */
+export function retentionCompatible(
+  a: JointSeries["retention"] | null | undefined,
+  b: JointSeries["retention"] | null | undefined,
+): boolean {
+  if (a == null || b == null || a === b) return true;
+  return a !== "round" && b !== "round";
 }
 
 /** A single cross (not a double-Cardan joint). */
