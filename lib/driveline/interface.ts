@@ -188,7 +188,7 @@ export function fitInterface(input: InterfaceInput): InterfaceFit {
       if (spec) s.reasons.push(`${FIELD.front} is not used: the front is the slip yoke on the output spline`);
     } else if (spec?.kind === "yoke") {
       s.vehicle = "yoke";
-      identifyYoke(s, spec, p, catalogue, index, lubrication);
+      identifyYoke(s, spec, p, catalogue, index);
     } else if (spec?.kind === "flange") {
       s.vehicle = "flange";
       matchFlange(s, spec.flange ?? null, p, named, input);
@@ -318,7 +318,6 @@ function identifyYoke(
   p: Position,
   catalogue: Catalogue,
   index: CatalogueIndex,
-  lubrication: Lubrication | null,
 ) {
   const field = FIELD[p];
   if (spec.jointSeriesId != null) {
@@ -359,9 +358,11 @@ function identifyYoke(
     );
     return;
   }
+  // Name the vehicle side by the series the shop's yokes are made for (not a lubrication variant).
+  const withFittings = new Set(catalogue.endFittings.map((f) => f.jointSeriesId));
   const best = byKeys(found, (x) => [
-    lubrication && x.lubrication === lubrication ? 0 : 1,
     x.id === s.end?.jointSeriesId ? 0 : 1,
+    withFittings.has(x.id) ? 0 : 1,
     x.id,
   ])[0]!;
   s.vehicleSeries = best;
