@@ -366,7 +366,13 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   const maxAngleDeg =
     maxAngleForAccelerationRad(settings.maxJointAngularAccelerationRadS2.value, omega) * DEG;
   const joints = chain.workingAngleRad.map((b, i) =>
-    jointReport(POSITIONS2[i]!, b, omega, maxAngleDeg, ends[i]?.crossSeriesId ?? ends[i]?.jointSeriesId ?? null),
+    jointReport(
+      POSITIONS2[i]!,
+      b,
+      omega,
+      maxAngleDeg,
+      ends[i]?.crossSeriesId ?? ends[i]?.jointSeriesId ?? null,
+    ),
   );
   // The tube is driven by the front joint alone, so its acceleration does not depend on the index.
   const peakAngularAccelerationRadS2 = omega * omega * (response.tubePeakRatioDerivative[0] ?? 0);
@@ -533,7 +539,9 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
     cautions,
   };
   const doubleCardan = (r: EvaluationReport) =>
-    design.frontJointType === "double-cardan" ? applyDoubleCardan(r, { design, settings, catalogue, index }) : r;
+    design.frontJointType === "double-cardan"
+      ? applyDoubleCardan(r, { design, settings, catalogue, index })
+      : r;
   if (options?.curves) {
     const points = typeof options.curves === "object" ? options.curves.points : 181;
     return doubleCardan({

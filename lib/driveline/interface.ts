@@ -130,7 +130,11 @@ function byKeys<T>(items: readonly T[], key: (t: T) => (number | string)[]): T[]
   });
 }
 
-const capsText = (c: { capDiameterMm?: number | null; capSpanMm?: number | null; retention?: string | null }) =>
+const capsText = (c: {
+  capDiameterMm?: number | null;
+  capSpanMm?: number | null;
+  retention?: string | null;
+}) =>
   `${fmt(c.capDiameterMm ?? NaN, 1)} mm caps × ${fmt(c.capSpanMm ?? NaN, 1)} mm span${c.retention ? `, ${c.retention}` : ""}`;
 
 interface EndState {
@@ -160,7 +164,8 @@ export function fitInterface(input: InterfaceInput): InterfaceFit {
       ? resolveSlipYoke(design, catalogue, index, frontSeries, torqueNm)
       : null;
   const slipYoke = slipChoice?.yoke ?? null;
-  if (slipChoice) checks.push(slipYokeCheck(design, slipChoice.yoke, slipChoice.candidates, slipChoice.unknownId));
+  if (slipChoice)
+    checks.push(slipYokeCheck(design, slipChoice.yoke, slipChoice.candidates, slipChoice.unknownId));
 
   const states: EndState[] = POSITIONS.map((p, i) => ({
     end: input.ends[i] ? { ...input.ends[i]! } : null,
@@ -386,7 +391,9 @@ function matchFlange(
   const field = `${FIELD[p]}.flange`;
   if (!flange) {
     s.status = "warn";
-    s.reasons.push(`the companion flange's pattern is not given: fill ${field} (bolt count, bolt circle, pilot)`);
+    s.reasons.push(
+      `the companion flange's pattern is not given: fill ${field} (bolt count, bolt circle, pilot)`,
+    );
     return;
   }
   const pattern = `${flange.boltCount} bolts on a ${fmt(flange.boltCircleMm, 1)} mm circle, ${fmt(flange.pilotMm, 1)} mm pilot`;
@@ -408,7 +415,10 @@ function matchFlange(
       flangeMatches(f.flange, flange) &&
       fittingFitsTube(f, input.tubeOdMm, input.weldFamily),
   );
-  const best = byKeys(fitting, (f) => [fittingRatingNm(f, input.index) >= input.torqueNm ? 0 : 1, f.priceCents])[0];
+  const best = byKeys(fitting, (f) => [
+    fittingRatingNm(f, input.index) >= input.torqueNm ? 0 : 1,
+    f.priceCents,
+  ])[0];
   if (!best) {
     s.status = "warn";
     s.reasons.push(
@@ -444,7 +454,9 @@ function matchFittingToVehicle(s: EndState, p: Position, named: EndFitting | nul
   if (!best) return;
   const before = s.end!.fittingId;
   s.end = endOf(best, "matched", input.index);
-  s.reasons.push(`${best.id} (${best.jointSeriesId}) used instead of ${before} so the joint takes the vehicle's caps`);
+  s.reasons.push(
+    `${best.id} (${best.jointSeriesId}) used instead of ${before} so the joint takes the vehicle's caps`,
+  );
 }
 
 /** The cross that joins the shaft's fitting to the vehicle side, of the asked lubrication. */
@@ -479,7 +491,11 @@ function chooseCross(s: EndState, p: Position, lubrication: Lubrication | null, 
     );
   }
   if (pick.id !== shaft.id) {
-    s.end = { ...end, crossSeriesId: pick.id, torqueRatingNm: Math.min(end.torqueRatingNm, pick.torqueRatingNm) };
+    s.end = {
+      ...end,
+      crossSeriesId: pick.id,
+      torqueRatingNm: Math.min(end.torqueRatingNm, pick.torqueRatingNm),
+    };
   }
   s.crossSeriesId = pick.id;
   s.crossKind = pick.otherSeriesId ? "conversion" : "cross";
@@ -487,7 +503,8 @@ function chooseCross(s: EndState, p: Position, lubrication: Lubrication | null, 
     s.reasons.push(
       `conversion cross ${pick.id} joins the shaft's ${shaft.id} yoke (${capsText(shaft)}) to the vehicle's ${vehicle.id} (${capsText(vehicle)})`,
     );
-  else if (pick.id !== shaft.id) s.reasons.push(`${pick.id} cross (${pick.lubrication ?? "lubrication not stated"})`);
+  else if (pick.id !== shaft.id)
+    s.reasons.push(`${pick.id} cross (${pick.lubrication ?? "lubrication not stated"})`);
   else s.reasons.push(`plain ${pick.id} cross${pick.lubrication ? ` (${pick.lubrication})` : ""}`);
 }
 

@@ -343,7 +343,10 @@ function fittingReferenceIssues(design: DesignFile, catalogue: Catalogue): Field
     const seriesId = design.interface?.[end]?.jointSeriesId;
     if (seriesId != null && !catalogue.jointSeries.some((j) => j.id === seriesId)) {
       const path = `interface.${end}.jointSeriesId`;
-      issues.push({ path, message: `${path}: must be a joint series in the catalogue (unknown "${seriesId}")` });
+      issues.push({
+        path,
+        message: `${path}: must be a joint series in the catalogue (unknown "${seriesId}")`,
+      });
     }
   }
   return issues;
@@ -626,6 +629,7 @@ export const catalogueSchema = object({
         : other.otherSeriesId != null || other.kind === "double-cardan"
           ? "must be a plain single-cross series"
           : null;
-    if (message) ctx.issues.push({ code: "custom", input: c, path: ["jointSeries", i, "otherSeriesId"], message });
+    if (message)
+      ctx.issues.push({ code: "custom", input: c, path: ["jointSeries", i, "otherSeriesId"], message });
   });
 }) satisfies z.ZodType<Catalogue>;

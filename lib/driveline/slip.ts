@@ -149,7 +149,9 @@ export function slipChecks(slip: SlipReport, settings: ShopSettings): Check[] {
     }),
     checkAtLeast({
       id: "slip-reserve",
-      what: yoke ? `Spline engagement left at full droop (slip yoke ${yoke.id})` : "Spline engagement left at full droop",
+      what: yoke
+        ? `Spline engagement left at full droop (slip yoke ${yoke.id})`
+        : "Spline engagement left at full droop",
       value: slip.reserveAtFullDroopMm,
       unit: " mm",
       digits: 1,

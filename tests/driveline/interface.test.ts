@@ -165,7 +165,11 @@ describe("interface: lubrication", () => {
   });
 
   it("no greaseable cross for a series: a warning naming interface.lubrication", () => {
-    const r = evaluate({ interface: { lubrication: "greaseable" }, ends: { rear: { fittingId: "YL-WY-X48-5000" } }, tube: { materialId: "steel-dom", odMm: inToMm(5), wallMm: inToMm(0.12) } });
+    const r = evaluate({
+      interface: { lubrication: "greaseable" },
+      ends: { rear: { fittingId: "YL-WY-X48-5000" } },
+      tube: { materialId: "steel-dom", odMm: inToMm(5), wallMm: inToMm(0.12) },
+    });
     expect(check(r, "interface.rear")!.status).toBe("warn");
     expect(check(r, "interface.rear")!.message).toContain("interface.lubrication");
   });

@@ -65,7 +65,9 @@ describe("slip yoke from the catalogue", () => {
     const seal = check(ok, "slip-seal")!;
     expect(seal.status).toBe("pass");
     expect(seal.limit).toBe(25.4); // about 1 in, common shop practice (from memory)
-    expect(seal.message).toContain("118.0 mm seal surface − 10.0 mm outside when collapsed − 62.0 mm out at full droop");
+    expect(seal.message).toContain(
+      "118.0 mm seal surface − 10.0 mm outside when collapsed − 62.0 mm out at full droop",
+    );
 
     // 40 mm outside collapsed → 16 mm left: fails.
     const short = evaluate({ slip: { slipYokeId: YOKE, sealOutsideCollapsedMm: 40 } });

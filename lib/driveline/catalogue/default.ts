@@ -5,7 +5,15 @@
  */
 import { shearYieldFromTensileMPa } from "../torsion";
 import { tubeMassKg } from "../section";
-import type { Catalogue, EndFitting, FlangePattern, JointSeries, Material, SlipYoke, TubeSize } from "./types";
+import type {
+  Catalogue,
+  EndFitting,
+  FlangePattern,
+  JointSeries,
+  Material,
+  SlipYoke,
+  TubeSize,
+} from "./types";
 
 const IN = 25.4;
 const MATERIAL_SOURCE = "engineering reference §10, typical values (from memory); shop catalogue overrides";
@@ -274,7 +282,10 @@ function buildFittings(): EndFitting[] {
  * the span across the caps and the retention are typical of the trade (from memory). A shop
  * enters its joint makers' figures.
  */
-const JOINT_CAPS: Record<string, Pick<JointSeries, "capDiameterMm" | "capSpanMm" | "retention" | "lubrication">> = {
+const JOINT_CAPS: Record<
+  string,
+  Pick<JointSeries, "capDiameterMm" | "capSpanMm" | "retention" | "lubrication">
+> = {
   "YL-X28": { capDiameterMm: 28, capSpanMm: 81.8, retention: "strap", lubrication: "sealed" },
   "YL-X30": { capDiameterMm: 30, capSpanMm: 92.1, retention: "strap", lubrication: "sealed" },
   "YL-X35": { capDiameterMm: 35, capSpanMm: 106.4, retention: "strap", lubrication: "sealed" },

@@ -1,5 +1,13 @@
 /** Indexed access to a catalogue, cached per catalogue object (catalogues are immutable). */
-import type { Catalogue, EndFitting, FlangePattern, JointSeries, Material, SlipYoke, TubeSize } from "./types";
+import type {
+  Catalogue,
+  EndFitting,
+  FlangePattern,
+  JointSeries,
+  Material,
+  SlipYoke,
+  TubeSize,
+} from "./types";
 
 export interface CatalogueIndex {
   readonly materials: ReadonlyMap<string, Material>;
