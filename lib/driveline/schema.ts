@@ -506,7 +506,10 @@ const jointSeriesEntrySchema = object({
     .string({ error: "must be a joint series id" })
     .optional()
     .transform((v) => (v?.trim() ? v : undefined)),
-  kind: optionalChoice(["cross", "double-cardan"], "must be cross or double-cardan"),
+  // "cross" is the default: kept as not given, so the editor's blank and a stored "cross" are one.
+  kind: optionalChoice(["cross", "double-cardan"], "must be cross or double-cardan").transform((k) =>
+    k === "double-cardan" ? k : undefined,
+  ),
 }).check((ctx) => {
   const j = ctx.value;
   if (j.strapTorqueNm != null && !j.strapTorqueSource?.trim()) {
