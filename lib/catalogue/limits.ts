@@ -73,6 +73,19 @@ export const LIMIT_META: Record<SettingKey, LimitMeta> = {
     max: 500,
   },
   slipMinReserveMm: { label: "Spline engagement kept at full droop", unit: "mm", min: 0, max: 500 },
+  slipSealMinInBushingMm: {
+    label: "Slip yoke seal surface kept in the tail bushing at full droop",
+    unit: "mm",
+    min: 0,
+    max: 500,
+  },
+  doubleCardanMaxRearAngleDeg: {
+    label: "Largest axle-end angle behind a double-Cardan front joint",
+    unit: "°",
+    min: 0,
+    minExclusive: true,
+    max: 10,
+  },
   lengthToleranceMm: {
     label: "Length tolerance after welding, ±",
     unit: "mm",

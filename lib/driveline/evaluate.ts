@@ -22,7 +22,9 @@ import { checkAtLeast, checkAtMost, checkOf, fmt, worstStatus, type Check } from
 import { criticalSpeedRpm } from "./critical-speed";
 import { sampleChainCurves } from "./curves";
 import { designDirections } from "./design-geometry";
+import { applyDoubleCardan } from "./double-cardan";
 import { add, dot, normalise, scale, sub, type Vec3 } from "./geometry";
+import { fitInterface } from "./interface";
 import { chainResponse, makeChain, phasingResult } from "./phasing";
 import {
   DEMO_CATALOGUE_NOTE,
@@ -32,12 +34,12 @@ import {
   type EvaluationReport,
   type JointReport,
   type PieceReport,
-  type SlipReport,
   type TubeReport,
   type TwoPieceProposal,
 } from "./report";
 import { parseDesign, type DesignFile, type FieldIssue } from "./schema";
 import { tubeMassKg } from "./section";
+import { slipChecks, slipReport } from "./slip";
 import { defaultSettings, type ShopSettings } from "./settings";
 import { designShaftTorqueNm, serviceSpeed } from "./speed";
 import { torsionShearStressMPa } from "./torsion";
@@ -308,12 +310,23 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   const material = resolveMaterial(design, tubeSpec.materialId, index);
   const catalogueTube = tubeSpec.id ? index.tubes.get(tubeSpec.id) : undefined;
 
-  // Ends: named, or suggested for this tube.
-  const ends = namedEnds.map((f) => {
+  // Ends: named, or suggested for this tube; then matched to the vehicle's interface data.
+  const chosenEnds = namedEnds.map((f) => {
     if (f) return endReport(f, "design", index);
     const s = suggestFitting(catalogue, index, tubeSpec.odMm, material.weldFamily, torqueNm);
     return s ? endReport(s, "suggested", index) : null;
   });
+  const fit = fitInterface({
+    design,
+    catalogue,
+    index,
+    ends: chosenEnds,
+    namedEnds,
+    tubeOdMm: tubeSpec.odMm,
+    weldFamily: material.weldFamily,
+    torqueNm,
+  });
+  const ends = fit.ends;
   const front = ends[0] ?? null;
   const rear = ends[1] ?? null;
   const cutLengthMm =
@@ -353,7 +366,13 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   const maxAngleDeg =
     maxAngleForAccelerationRad(settings.maxJointAngularAccelerationRadS2.value, omega) * DEG;
   const joints = chain.workingAngleRad.map((b, i) =>
-    jointReport(POSITIONS2[i]!, b, omega, maxAngleDeg, ends[i]?.jointSeriesId ?? null),
+    jointReport(
+      POSITIONS2[i]!,
+      b,
+      omega,
+      maxAngleDeg,
+      ends[i]?.crossSeriesId ?? ends[i]?.jointSeriesId ?? null,
+    ),
   );
   // The tube is driven by the front joint alone, so its acceleration does not depend on the index.
   const peakAngularAccelerationRadS2 = omega * omega * (response.tubePeakRatioDerivative[0] ?? 0);
@@ -434,8 +453,9 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
     }),
   );
   checks.push(...endChecks(ends, namedEnds, tube, material.weldFamily, torqueNm, index));
+  checks.push(...fit.checks);
   checks.push(...lengthChecks(lengthMm, cutLengthMm, tubeLengthMm, catalogueTube?.maxLengthMm ?? null, tube));
-  const slip = design.slip ? slipReport(design, settings) : null;
+  const slip = design.slip ? slipReport(design, settings, fit.slipYoke) : null;
   if (slip) checks.push(...slipChecks(slip, settings));
   checks.push(
     checkOf(
@@ -499,6 +519,8 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
     ends: { front, rear },
     cutLengthMm,
     slip,
+    interface: fit.report,
+    frontJointType: design.frontJointType ?? "cross",
     shopFloor: {
       lengthToleranceMm: settings.lengthToleranceMm.value,
       runoutEndsMm: settings.runoutEndsMm.value,
@@ -516,17 +538,21 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
     checks,
     cautions,
   };
+  const doubleCardan = (r: EvaluationReport) =>
+    design.frontJointType === "double-cardan"
+      ? applyDoubleCardan(r, { design, settings, catalogue, index })
+      : r;
   if (options?.curves) {
     const points = typeof options.curves === "object" ? options.curves.points : 181;
-    return {
+    return doubleCardan({
       ...report,
       curves: sampleChainCurves(
         design.phaseIndexDeg != null ? makeChain(shafts, [design.phaseIndexDeg * RAD]) : chain,
         points,
       ),
-    };
+    });
   }
-  return report;
+  return doubleCardan(report);
 }
 
 const CATALOGUE_SOURCE = "shop catalogue (maker's rating)";
@@ -615,55 +641,6 @@ function lengthChecks(
     );
   }
   return out;
-}
-
-function slipReport(design: DesignFile, settings: ShopSettings): SlipReport {
-  const s = design.slip!;
-  const out = design.lengthMm - s.collapsedLengthMm;
-  const droop = s.droopExtensionMm ?? 0;
-  const bump = s.bumpCompressionMm ?? 0;
-  return {
-    outAtRideHeightMm: out,
-    outAtFullDroopMm: out + droop,
-    outAtFullBumpMm: out - bump,
-    reserveAtFullDroopMm: s.travelMm - (out + droop),
-    recommendedOutMinMm: settings.slipOutMinMm.value,
-    recommendedOutMaxMm: settings.slipOutMaxMm.value,
-  };
-}
-
-function slipChecks(slip: SlipReport, settings: ShopSettings): Check[] {
-  const lo = settings.slipOutMinMm;
-  const hi = settings.slipOutMaxMm;
-  const out = slip.outAtRideHeightMm;
-  const inBand = out >= lo.value && out <= hi.value;
-  const src = `${lo.source}; ${hi.source}`;
-  return [
-    checkOf(
-      "slip-position",
-      inBand ? "pass" : "warn",
-      `Slip yoke ${fmt(out, 1)} mm out from fully collapsed at ride height; recommended ${fmt(lo.value, 1)}–${fmt(hi.value, 1)} mm — ${src}`,
-      src,
-      out,
-      lo.value,
-    ),
-    checkAtLeast({
-      id: "slip-bump",
-      what: "Slip yoke room left at full bump (out from collapsed)",
-      value: slip.outAtFullBumpMm,
-      unit: " mm",
-      digits: 1,
-      limit: { value: 0, source: "geometry: the slip must not bottom out" },
-    }),
-    checkAtLeast({
-      id: "slip-reserve",
-      what: "Spline engagement left at full droop",
-      value: slip.reserveAtFullDroopMm,
-      unit: " mm",
-      digits: 1,
-      limit: settings.slipMinReserveMm,
-    }),
-  ];
 }
 
 /** Unit vector normal to u in the vertical plane through u, pointing down. */

@@ -33,7 +33,22 @@ export type {
   PieceReport,
   TwoPieceProposal,
 } from "./report";
+export type { SlipYokeSummary } from "./report";
 export { SAFETY_CAUTION, DISCLAIMER, DEMO_CATALOGUE_NOTE } from "./report";
+export { slipReport, slipChecks, resolveSlipYoke, minEngagementLimit } from "./slip";
+export {
+  fitInterface,
+  INTERFACE_SOURCE,
+  type InterfaceReport,
+  type InterfaceEndMatch,
+  type InterfacePart,
+} from "./interface";
+export {
+  makeDoubleCardanChain,
+  doubleCardanCentreAxis,
+  chooseDoubleCardan,
+  type DoubleCardanReport,
+} from "./double-cardan";
 export type { Check, CheckStatus } from "./checks";
 export {
   rankTubes,

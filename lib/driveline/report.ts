@@ -1,6 +1,8 @@
 /** Shape of the evaluation report (contract fields plus additions) and the standing texts. */
 import type { Check, CheckStatus } from "./checks";
 import type { CurveSet } from "./curves";
+import type { DoubleCardanReport } from "./double-cardan";
+import type { InterfaceReport } from "./interface";
 import type { TubeCandidate, TubeSelection } from "./tube-selection";
 
 /** Shown whenever any check warns or fails (engineering reference, "Cautions shown to users"). */
@@ -64,8 +66,13 @@ export interface EndReport {
   readonly massKg: number;
   readonly torqueRatingNm: number;
   readonly priceCents: number;
-  /** "design" when the design names it, "suggested" when Yokeline picked it. */
-  readonly origin: "design" | "suggested";
+  /** "design" when the design names it, "suggested" when Yokeline picked it, "matched" to the vehicle's interface data. */
+  readonly origin: "design" | "suggested" | "matched";
+  /**
+   * The joint fitted at this end when it is not a plain cross of `jointSeriesId`: a conversion
+   * cross, a cross of the asked lubrication, or a double-Cardan joint. The quote prices this one.
+   */
+  readonly crossSeriesId?: string;
 }
 
 export interface TubeReport {
@@ -92,6 +99,32 @@ export interface SlipReport {
   readonly reserveAtFullDroopMm: number;
   readonly recommendedOutMinMm: number;
   readonly recommendedOutMaxMm: number;
+  /** The catalogue slip yoke (named, or matched to the output spline); null when none is known. */
+  readonly slipYokeId?: string | null;
+  readonly slipYoke?: SlipYokeSummary | null;
+  /** Least spline engagement at full droop: the slip yoke's, else the shop's setting, mm. */
+  readonly minEngagementMm?: number;
+  readonly minEngagementSource?: string;
+  /** Seal surface outside the tail bushing with the slip fully collapsed (design; default 0), mm. */
+  readonly sealOutsideCollapsedMm?: number;
+  /** Seal surface left inside the tail bushing at full droop, mm; null without a slip yoke. */
+  readonly sealLeftInBushingMm?: number | null;
+}
+
+/** A catalogue slip yoke as the report gives it. */
+export interface SlipYokeSummary {
+  readonly id: string;
+  readonly name: string;
+  readonly splineCount: number;
+  readonly majorDiameterMm: number;
+  readonly jointSeriesId: string;
+  readonly sealSurfaceLengthMm: number;
+  readonly minEngagementMm: number;
+  readonly massKg: number;
+  readonly priceCents: number;
+  readonly source: string;
+  /** "design" when slip.slipYokeId names it, "matched" from interface.transmissionOutput. */
+  readonly origin: "design" | "matched";
 }
 
 export interface PieceReport {
@@ -155,6 +188,12 @@ export interface EvaluationReport {
   /** Installed length minus each fitting's joint centre to weld seat; null without both fittings. */
   readonly cutLengthMm: number | null;
   readonly slip: SlipReport | null;
+  /** What was matched to the vehicle's interface data and why (null when the design gives none). */
+  readonly interface?: InterfaceReport | null;
+  /** The front joint: a single cross, or a double-Cardan (constant-velocity) joint. */
+  readonly frontJointType?: "cross" | "double-cardan";
+  /** The double-Cardan front joint's figures (present with frontJointType "double-cardan"). */
+  readonly doubleCardan?: DoubleCardanReport | null;
   readonly shopFloor: {
     readonly lengthToleranceMm: number;
     readonly runoutEndsMm: number;

@@ -324,6 +324,31 @@ function catalogueIssues(design: DesignFile, catalogue: Catalogue): FieldIssue[]
       });
     }
   }
+  issues.push(...fittingReferenceIssues(design, catalogue));
+  return issues;
+}
+
+/** The slip yoke and the vehicle-side joint series a design names must be in the catalogue. */
+function fittingReferenceIssues(design: DesignFile, catalogue: Catalogue): FieldIssue[] {
+  const issues: FieldIssue[] = [];
+  const slipYokeId = design.slip?.slipYokeId;
+  if (slipYokeId != null && !(catalogue.slipYokes ?? []).some((y) => y.id === slipYokeId)) {
+    const known = (catalogue.slipYokes ?? []).map((y) => y.id).join(", ") || "none";
+    issues.push({
+      path: "slip.slipYokeId",
+      message: `slip.slipYokeId: must be a slip yoke in the catalogue (unknown "${slipYokeId}"; known: ${known})`,
+    });
+  }
+  for (const end of ["front", "pinion"] as const) {
+    const seriesId = design.interface?.[end]?.jointSeriesId;
+    if (seriesId != null && !catalogue.jointSeries.some((j) => j.id === seriesId)) {
+      const path = `interface.${end}.jointSeriesId`;
+      issues.push({
+        path,
+        message: `${path}: must be a joint series in the catalogue (unknown "${seriesId}")`,
+      });
+    }
+  }
   return issues;
 }
 
@@ -405,6 +430,42 @@ const tubeEntrySchema = object({
   }
 });
 
+/** Blank select in the editor → not given. */
+const optionalChoice = <const T extends readonly [string, ...string[]]>(values: T, message: string) =>
+  z
+    .union([z.literal(""), z.enum(values)], { error: message })
+    .optional()
+    .transform((v) => (v === "" ? undefined : v) as T[number] | undefined);
+
+/**
+ * A flange yoke's bolt pattern: all three figures, or none (the editor's empty boxes give an
+ * object of blanks, which means no pattern).
+ */
+const catalogueFlangeSchema = object({
+  boltCount: wholeCount(PHYSICAL_MAX.boltCount).optional(),
+  boltCircleMm: bounded(PHYSICAL_MAX.flangeMm, "mm").optional(),
+  pilotMm: bounded(PHYSICAL_MAX.flangeMm, "mm").optional(),
+})
+  .check((ctx) => {
+    const f = ctx.value;
+    const given = [f.boltCount, f.boltCircleMm, f.pilotMm].filter((v) => v != null).length;
+    if (given === 0 || given === 3) return;
+    for (const key of ["boltCount", "boltCircleMm", "pilotMm"] as const)
+      if (f[key] == null)
+        ctx.issues.push({
+          code: "custom",
+          input: f,
+          path: [key],
+          message: "must be given with the rest of the bolt pattern (or leave all three empty)",
+        });
+  })
+  .optional()
+  .transform((f) =>
+    f && f.boltCount != null && f.boltCircleMm != null && f.pilotMm != null
+      ? { boltCount: f.boltCount, boltCircleMm: f.boltCircleMm, pilotMm: f.pilotMm }
+      : undefined,
+  );
+
 const endFittingEntrySchema = object({
   id: id(),
   name: name(),
@@ -420,6 +481,7 @@ const endFittingEntrySchema = object({
   priceCents: cents(),
   fastenerTorqueNm: bounded(PHYSICAL_MAX.torqueNm, "N·m").optional(),
   fastenerTorqueSource: z.string({ error: "must be text" }).optional(),
+  flange: catalogueFlangeSchema,
 }).check((ctx) => {
   const f = ctx.value;
   if (f.fastenerTorqueNm != null && !f.fastenerTorqueSource?.trim()) {
@@ -436,11 +498,53 @@ const jointSeriesEntrySchema = object({
   priceCents: cents(),
   strapTorqueNm: bounded(PHYSICAL_MAX.torqueNm, "N·m").optional(),
   strapTorqueSource: z.string({ error: "must be text" }).optional(),
+  capDiameterMm: bounded(200, "mm").optional(),
+  capSpanMm: bounded(500, "mm").optional(),
+  retention: optionalChoice(["strap", "u-bolt", "round"], "must be strap, u-bolt or round"),
+  lubrication: optionalChoice(["greaseable", "sealed"], "must be greaseable or sealed"),
+  otherSeriesId: z
+    .string({ error: "must be a joint series id" })
+    .optional()
+    .transform((v) => (v?.trim() ? v : undefined)),
+  // "cross" is the default: kept as not given, so the editor's blank and a stored "cross" are one.
+  kind: optionalChoice(["cross", "double-cardan"], "must be cross or double-cardan").transform((k) =>
+    k === "double-cardan" ? k : undefined,
+  ),
 }).check((ctx) => {
   const j = ctx.value;
   if (j.strapTorqueNm != null && !j.strapTorqueSource?.trim()) {
     ctx.issues.push({ code: "custom", input: j, path: ["strapTorqueSource"], message: SOURCE_REQUIRED });
   }
+  if (j.otherSeriesId != null) {
+    if (j.kind === "double-cardan")
+      ctx.issues.push({
+        code: "custom",
+        input: j,
+        path: ["otherSeriesId"],
+        message: "must be empty for a double-Cardan joint (a conversion is a single cross)",
+      });
+    for (const key of ["capDiameterMm", "capSpanMm"] as const)
+      if (j[key] == null)
+        ctx.issues.push({
+          code: "custom",
+          input: j,
+          path: [key],
+          message: "must be given for a conversion cross (the caps on its own side)",
+        });
+  }
+});
+
+const slipYokeEntrySchema = object({
+  id: id(),
+  name: name(),
+  splineCount: wholeCount(PHYSICAL_MAX.splineCount),
+  majorDiameterMm: bounded(PHYSICAL_MAX.splineDiameterMm, "mm"),
+  jointSeriesId: id(),
+  sealSurfaceLengthMm: bounded(PHYSICAL_MAX.slipMm, "mm"),
+  minEngagementMm: bounded(PHYSICAL_MAX.slipMm, "mm"),
+  massKg: bounded(1_000, "kg"),
+  priceCents: cents(),
+  source: sourceText(SOURCE_REQUIRED),
 });
 
 /** For each row whose id repeats an earlier row's: its index and that earlier row's index. */
@@ -470,8 +574,16 @@ export const catalogueSchema = object({
   tubes: z.array(tubeEntrySchema, { error: "must be a list" }),
   endFittings: z.array(endFittingEntrySchema, { error: "must be a list" }),
   jointSeries: z.array(jointSeriesEntrySchema, { error: "must be a list" }),
+  slipYokes: z.array(slipYokeEntrySchema, { error: "must be a list" }).optional(),
 }).check((ctx) => {
   const c = ctx.value;
+  for (const r of repeatedIds(c.slipYokes ?? []))
+    ctx.issues.push({
+      code: "custom",
+      input: c,
+      path: ["slipYokes", r.index, "id"],
+      message: `must be unique (row ${r.first + 1} already uses "${r.id}")`,
+    });
   for (const key of ["materials", "tubes", "endFittings", "jointSeries"] as const) {
     for (const r of repeatedIds(c[key]))
       ctx.issues.push({
@@ -500,5 +612,27 @@ export const catalogueSchema = object({
         path: ["endFittings", i, "jointSeriesId"],
         message: `must be a joint series in this catalogue (no series "${f.jointSeriesId}")`,
       });
+  });
+  (c.slipYokes ?? []).forEach((y, i) => {
+    if (!series.has(y.jointSeriesId))
+      ctx.issues.push({
+        code: "custom",
+        input: c,
+        path: ["slipYokes", i, "jointSeriesId"],
+        message: `must be a joint series in this catalogue (no series "${y.jointSeriesId}")`,
+      });
+  });
+  c.jointSeries.forEach((j, i) => {
+    if (j.otherSeriesId == null) return;
+    const other = c.jointSeries.find((o) => o.id === j.otherSeriesId);
+    const message = !other
+      ? `must be a joint series in this catalogue (no series "${j.otherSeriesId}")`
+      : other.id === j.id
+        ? "must be another series (the caps on the conversion's other side)"
+        : other.otherSeriesId != null || other.kind === "double-cardan"
+          ? "must be a plain single-cross series"
+          : null;
+    if (message)
+      ctx.issues.push({ code: "custom", input: c, path: ["jointSeries", i, "otherSeriesId"], message });
   });
 }) satisfies z.ZodType<Catalogue>;

@@ -29,6 +29,16 @@ export const defaultSettings = {
   slipOutMinMm: { value: 19.05, source: `${SHOP} (3/4 in out from fully collapsed at ride height)` },
   slipOutMaxMm: { value: 25.4, source: `${SHOP} (1 in out from fully collapsed at ride height)` },
   slipMinReserveMm: { value: 12.7, source: `${SHOP} (1/2 in spline engagement kept at full droop)` },
+  /** Ground seal surface of the slip yoke left inside the tail bushing at full droop (slip-seal). */
+  slipSealMinInBushingMm: {
+    value: 25.4,
+    source: `${SHOP}, from memory (about 1 in of the slip yoke's seal surface kept in the tail bushing and seal at full droop)`,
+  },
+  /** Largest axle-end working angle behind a double-Cardan front joint (double-cardan.rear-angle). */
+  doubleCardanMaxRearAngleDeg: {
+    value: 1.0,
+    source: `${SHOP} (with a double-Cardan front joint the pinion points at the shaft: about 0.5–1° at the axle joint)`,
+  },
   lengthToleranceMm: { value: 1.6, source: `${SHOP} (±1/16 in joint centre to joint centre after welding)` },
   runoutEndsMm: { value: 0.25, source: `${SHOP} (0.010 in TIR near each end)` },
   runoutCentreMm: { value: 0.38, source: `${SHOP} (0.015 in TIR at the centre)` },

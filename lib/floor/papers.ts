@@ -53,7 +53,7 @@ export async function installSheetView(em: EntityManager, order: Order): Promise
             fittingName: end.name,
             fittingId: end.fittingId,
             kind: end.kind,
-            jointSeriesId: end.jointSeriesId,
+            jointSeriesId: end.crossSeriesId ?? end.jointSeriesId,
             strap:
               series?.strapTorqueNm != null
                 ? { nm: series.strapTorqueNm, source: series.strapTorqueSource ?? "shop catalogue" }

@@ -85,9 +85,19 @@ export interface PricedShaft {
     priceCents?: number | null;
   };
   ends: {
-    front: { name: string; priceCents: number; jointSeriesId: string } | null;
-    rear: { name: string; priceCents: number; jointSeriesId: string } | null;
+    front: PricedEnd | null;
+    rear: PricedEnd | null;
   } | null;
+  /** Parts matched to the vehicle beyond the ends' fittings and joints (the slip yoke). */
+  interface?: { parts?: readonly { name: string; priceCents: number }[] } | null;
+}
+
+/** An end fitting and the joint fitted there (`crossSeriesId`: a conversion cross, a greaseable cross or a double-Cardan joint). */
+export interface PricedEnd {
+  name: string;
+  priceCents: number;
+  jointSeriesId: string;
+  crossSeriesId?: string;
 }
 
 export interface JointPrice {
@@ -127,12 +137,18 @@ export function quoteShaft(
   for (const end of [shaft.ends?.front, shaft.ends?.rear]) {
     if (!end) continue;
     lines.push(line("fitting", end.name, 1, end.priceCents));
-    const joint = joints.find((j) => j.id === end.jointSeriesId);
+    const joint = joints.find((j) => j.id === (end.crossSeriesId ?? end.jointSeriesId));
     if (joint) lines.push(line("joint", `Universal joint ${joint.name}`, 1, joint.priceCents));
   }
+  lines.push(...interfacePartLines(shaft));
   lines.push(line("labour", "Cut, weld, phase and straighten", 1, book.labourPerShaftCents));
   lines.push(line("balance", "Dynamic balance", 1, book.balancingPerShaftCents));
   return lines;
+}
+
+/** The parts matched to the vehicle's interface data (the slip yoke), each a fitting line. */
+export function interfacePartLines(shaft: PricedShaft): QuoteLine[] {
+  return (shaft.interface?.parts ?? []).map((p) => line("fitting", p.name, 1, p.priceCents));
 }
 
 export interface OrderQuote {

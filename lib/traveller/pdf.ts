@@ -110,7 +110,7 @@ function shaftBlock(w: Writer, view: TravellerView, top: number, left: number, w
     const end = report.ends[pos];
     const jointName = report.joints.find((j) => j.position === pos);
     const txt = end
-      ? `${pos === "front" ? "Front" : "Rear"}: ${end.name} (${end.fittingId}), joint ${end.jointSeriesId}`
+      ? `${pos === "front" ? "Front" : "Rear"}: ${end.name} (${end.fittingId}), joint ${end.crossSeriesId ?? end.jointSeriesId}`
       : `${pos === "front" ? "Front" : "Rear"}: as designed`;
     y = w.wrap(
       `${txt}${jointName ? `, working angle ${jointName.workingAngleDeg.toFixed(2)}°` : ""}`,

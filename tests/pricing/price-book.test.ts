@@ -58,6 +58,23 @@ describe("price book", () => {
     expect(q.dueNowCents).toBe(q.totalCents);
   });
 
+  it("prices the joint actually fitted (a conversion cross) and the parts matched to the vehicle (a slip yoke)", () => {
+    // Demo prices (invented).
+    const matched = {
+      ...shaft,
+      ends: { front: shaft.ends!.front, rear: { ...shaft.ends!.rear!, crossSeriesId: "C1" } },
+      interface: { parts: [{ name: "Slip yoke 27 splines", priceCents: 9800 }] },
+    };
+    const all = [...joints, { id: "C1", name: "C1 conversion cross", priceCents: 7900 }];
+    const lines = quoteShaft(matched, defaultPriceBook, 4000, all);
+    expect(lines.filter((l) => l.code === "joint").map((l) => l.unitCents)).toEqual([4500, 7900]);
+    const yoke = lines.find((l) => l.label === "Slip yoke 27 splines")!;
+    expect([yoke.code, yoke.quantity, yoke.totalCents]).toEqual(["fitting", 1, 9800]);
+    const plain = quoteShaft(shaft, defaultPriceBook, 4000, all);
+    const sum = (ls: typeof lines) => ls.reduce((s, l) => s + l.totalCents, 0);
+    expect(sum(lines) - sum(plain)).toBe(9800 + 7900 - 4500);
+  });
+
   it("promises a date in working days, skipping weekends", () => {
     // Friday 4 December 2026 + 1 working day → Monday 7 December.
     expect(promisedDate(new Date("2026-12-04T10:00:00Z"), 1)).toBe("2026-12-07");

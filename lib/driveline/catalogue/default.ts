@@ -5,7 +5,15 @@
  */
 import { shearYieldFromTensileMPa } from "../torsion";
 import { tubeMassKg } from "../section";
-import type { Catalogue, EndFitting, JointSeries, Material, TubeSize } from "./types";
+import type {
+  Catalogue,
+  EndFitting,
+  FlangePattern,
+  JointSeries,
+  Material,
+  SlipYoke,
+  TubeSize,
+} from "./types";
 
 const IN = 25.4;
 const MATERIAL_SOURCE = "engineering reference §10, typical values (from memory); shop catalogue overrides";
@@ -168,6 +176,16 @@ export const defaultJointSeries: readonly JointSeries[] = [
   },
 ];
 
+/**
+ * Companion-flange bolt patterns of the demo flange yokes: demo data, sizes typical of the trade
+ * (from memory) — a shop measures the vehicle's flange (bolt count, bolt circle, pilot).
+ */
+const FLANGE_PATTERNS: Record<string, FlangePattern> = {
+  "YL-X35": { boltCount: 4, boltCircleMm: 3.75 * IN, pilotMm: 2.25 * IN },
+  "YL-X41": { boltCount: 4, boltCircleMm: 4.25 * IN, pilotMm: 2.75 * IN },
+  "YL-X48": { boltCount: 8, boltCircleMm: 6.125 * IN, pilotMm: 4.0 * IN },
+};
+
 /** Per series: joint centre to weld seat (mm), weld-yoke mass (kg), tube ODs (in) taken. */
 const FITTING_SERIES: Record<
   string,
@@ -215,7 +233,9 @@ function buildFittings(): EndFitting[] {
     // Weld-on flange yokes for the three heavier series, largest tube of the series.
     if (series.torqueRatingNm >= 2700) {
       const odIn = f.odsIn[f.odsIn.length - 1]!;
+      const flange = FLANGE_PATTERNS[series.id];
       out.push({
+        ...(flange ? { flange } : {}),
         id: `YL-FY-${code}-${Math.round(odIn * 1000)}`,
         name: `Weld-on flange yoke ${series.id}, ${odIn} in tube`,
         kind: "flange-yoke",
@@ -257,6 +277,136 @@ function buildFittings(): EndFitting[] {
   return out;
 }
 
+/*
+ * Interface data of the joint series (demo data): the caps' diameter follows each series' name,
+ * the span across the caps and the retention are typical of the trade (from memory). A shop
+ * enters its joint makers' figures.
+ */
+const JOINT_CAPS: Record<
+  string,
+  Pick<JointSeries, "capDiameterMm" | "capSpanMm" | "retention" | "lubrication">
+> = {
+  "YL-X28": { capDiameterMm: 28, capSpanMm: 81.8, retention: "strap", lubrication: "sealed" },
+  "YL-X30": { capDiameterMm: 30, capSpanMm: 92.1, retention: "strap", lubrication: "sealed" },
+  "YL-X35": { capDiameterMm: 35, capSpanMm: 106.4, retention: "strap", lubrication: "sealed" },
+  "YL-X41": { capDiameterMm: 41, capSpanMm: 120.7, retention: "u-bolt", lubrication: "sealed" },
+  "YL-X48": { capDiameterMm: 48, capSpanMm: 136.5, retention: "u-bolt", lubrication: "sealed" },
+};
+
+const seriesRow = (id: string): JointSeries => {
+  const base = defaultJointSeries.find((s) => s.id === id)!;
+  return { ...base, ...JOINT_CAPS[id] };
+};
+
+/** A derived row: the base series' figures (incl. its ratings) scaled, with its own id, name and price. */
+const derived = (
+  baseId: string,
+  row: Pick<JointSeries, "id" | "name" | "priceCents" | "massKg"> & Partial<JointSeries>,
+  ratingFactor = 1,
+): JointSeries => {
+  const base = seriesRow(baseId);
+  return {
+    ...base,
+    torqueRatingNm: Math.round(base.torqueRatingNm * ratingFactor),
+    ...(base.continuousTorqueNm != null
+      ? { continuousTorqueNm: Math.round(base.continuousTorqueNm * ratingFactor) }
+      : {}),
+    ...row,
+  };
+};
+
+/**
+ * Greaseable crosses (a grease fitting in the cross): same caps as the sealed ones; rated 10 %
+ * lower for the drilled grease passages (demo data; common shop practice says a greaseable cross
+ * is somewhat weaker — from memory).
+ */
+export const defaultGreaseableCrosses: readonly JointSeries[] = (["YL-X30", "YL-X35", "YL-X41"] as const).map(
+  (id) =>
+    derived(
+      id,
+      {
+        id: `${id}G`,
+        name: `${id}G cross, greaseable, ${JOINT_CAPS[id]!.capDiameterMm} mm caps`,
+        lubrication: "greaseable",
+        massKg: seriesRow(id).massKg,
+        priceCents: Math.round(seriesRow(id).priceCents * 1.1),
+      },
+      0.9,
+    ),
+);
+
+/**
+ * Conversion crosses: caps of the smaller series on one side, of `otherSeriesId` on the other;
+ * rated as the smaller series (demo data).
+ */
+export const defaultConversionCrosses: readonly JointSeries[] = (
+  [
+    ["YL-X28", "YL-X30"],
+    ["YL-X30", "YL-X35"],
+    ["YL-X35", "YL-X41"],
+    ["YL-X41", "YL-X48"],
+  ] as const
+).map(([small, large]) =>
+  derived(small, {
+    id: `YL-C${small.slice(4)}-${large.slice(4)}`,
+    name: `Conversion cross, ${small} caps one side, ${large} caps the other`,
+    otherSeriesId: large,
+    maxWorkingAngleDeg: Math.min(seriesRow(small).maxWorkingAngleDeg, seriesRow(large).maxWorkingAngleDeg),
+    massKg: Math.round(((seriesRow(small).massKg + seriesRow(large).massKg) / 2) * 100) / 100,
+    priceCents: Math.round(seriesRow(large).priceCents * 1.35),
+  }),
+);
+
+/**
+ * Double-Cardan (constant-velocity) joints: two crosses of the series with their centre yoke and
+ * centring ball; the largest angle is the whole joint's (demo data; a shop enters its maker's).
+ */
+export const defaultDoubleCardanJoints: readonly JointSeries[] = (
+  [
+    ["YL-X30", 32, 3.4, 29500],
+    ["YL-X35", 30, 4.6, 38500],
+    ["YL-X41", 28, 6.4, 52000],
+  ] as const
+).map(([id, maxDeg, massKg, priceCents]) =>
+  derived(id, {
+    id: `YL-DC${id.slice(4)}`,
+    name: `YL-DC${id.slice(4)} double-Cardan joint, two ${id} crosses, centring ball`,
+    kind: "double-cardan",
+    lubrication: "greaseable",
+    maxWorkingAngleDeg: maxDeg,
+    massKg,
+    priceCents,
+  }),
+);
+
+const SLIP_YOKE_SOURCE =
+  "demo data (invented part); spline count and major diameter typical of common outputs (from memory) — count and measure the output";
+
+/**
+ * Slip yokes (demo data): output splines typical of the trade, from memory; ears for the series
+ * named; seal surface and least engagement invented but of the usual size.
+ */
+export const defaultSlipYokes: readonly SlipYoke[] = (
+  [
+    [28, 1.2, "YL-X28", 105, 22, 1.6, 8900],
+    [27, 1.25, "YL-X30", 118, 25, 1.9, 9800],
+    [31, 1.375, "YL-X35", 127, 28, 2.4, 12400],
+    [32, 1.5, "YL-X35", 140, 32, 2.8, 13900],
+    [32, 1.5, "YL-X41", 140, 32, 3.3, 16500],
+  ] as const
+).map(([splineCount, diaIn, jointSeriesId, sealSurfaceLengthMm, minEngagementMm, massKg, priceCents]) => ({
+  id: `YL-SY-${splineCount}-${Math.round(diaIn * 1000)}-${jointSeriesId.slice(3)}`,
+  name: `Slip yoke, ${splineCount} splines ${diaIn} in, ${jointSeriesId} ears`,
+  splineCount,
+  majorDiameterMm: diaIn * IN,
+  jointSeriesId,
+  sealSurfaceLengthMm,
+  minEngagementMm,
+  massKg,
+  priceCents,
+  source: SLIP_YOKE_SOURCE,
+}));
+
 /** The built-in demonstration catalogue (demo: true). */
 export const defaultCatalogue: Catalogue = {
   id: "yokeline-demo",
@@ -265,5 +415,11 @@ export const defaultCatalogue: Catalogue = {
   materials: defaultMaterials,
   tubes: buildTubes(),
   endFittings: buildFittings(),
-  jointSeries: defaultJointSeries,
+  jointSeries: [
+    ...defaultJointSeries.map((s) => seriesRow(s.id)),
+    ...defaultGreaseableCrosses,
+    ...defaultConversionCrosses,
+    ...defaultDoubleCardanJoints,
+  ],
+  slipYokes: defaultSlipYokes,
 };

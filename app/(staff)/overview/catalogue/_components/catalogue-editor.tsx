@@ -18,6 +18,7 @@ import {
   LimitsSection,
   MaterialsSection,
   PolicySection,
+  SlipYokesSection,
   TubesSection,
 } from "./editor-sections";
 import type { Path } from "./editor-inputs";
@@ -334,6 +335,7 @@ const Sections = memo(function Sections({ currency }: { currency: string }) {
       <TubesSection />
       <FittingsSection />
       <JointsSection />
+      <SlipYokesSection />
       <LimitsSection />
       <FloorSection />
     </>

@@ -425,6 +425,7 @@ function FittingRow({
           className="w-56"
         />
       </td>
+      <FlangeCells p={p} row={row} />
       <td className={TD}>
         <RemoveButton label={`Remove ${row}`} onClick={onRemove} />
       </td>
@@ -441,7 +442,7 @@ export function FittingsSection() {
     <Section
       id="fittings"
       title={`End fittings (${fields.length})`}
-      description="Yokes welded to the tube: dimensions in millimetres, mass, torque rating including the weld, price. A flange bolt torque, when given, names its source."
+      description="Yokes welded to the tube: dimensions in millimetres, mass, torque rating including the weld, price. A flange bolt torque, when given, names its source. A flange yoke's bolt pattern (bolts, bolt circle, pilot) is matched to the vehicle's companion flange: give all three or none."
       action={
         <AddButton
           label="Add end fitting"
@@ -475,6 +476,7 @@ export function FittingsSection() {
           { label: "Price", right: true },
           { label: "Flange bolt torque (N·m)", right: true },
           "Bolt torque source",
+          ...FLANGE_HEADINGS,
           { label: "Remove", srOnly: true },
         ]}
       >
@@ -486,7 +488,15 @@ export function FittingsSection() {
   );
 }
 
-function JointRow({ index, onRemove }: { index: number; onRemove: () => void }) {
+function JointRow({
+  index,
+  onRemove,
+  series,
+}: {
+  index: number;
+  onRemove: () => void;
+  series: { value: string; label: string }[];
+}) {
   const p = `catalogue.jointSeries.${index}` as const;
   const row = useRowName(`${p}.id`, "joint series", index);
   return (
@@ -525,6 +535,7 @@ function JointRow({ index, onRemove }: { index: number; onRemove: () => void }) 
       <td className={TD}>
         <TextInput name={`${p}.strapTorqueSource`} label={`Strap torque source of ${row}`} className="w-56" />
       </td>
+      <JointInterfaceCells p={p} row={row} series={series} />
       <td className={TD}>
         <RemoveButton label={`Remove ${row}`} onClick={onRemove} />
       </td>
@@ -536,11 +547,12 @@ export function JointsSection() {
   const { fields, append, remove } = useFieldArray<ShopConfigDocumentInput, "catalogue.jointSeries">({
     name: "catalogue.jointSeries",
   });
+  const series = useSeriesOptions();
   return (
     <Section
       id="joints"
       title={`Universal joints (${fields.length})`}
-      description="Joint (cross) series: torque rating, largest working angle, mass, price, and the strap or U-bolt torque with its source."
+      description="Joint (cross) series: torque rating, largest working angle, mass, price, and the strap or U-bolt torque with its source. The caps (diameter, span across them, how the vehicle's yoke holds them) match a vehicle's yoke; a conversion cross has these caps on one side and the other series' on the other; a double-Cardan joint's largest angle is the whole joint's."
       action={
         <AddButton
           label="Add joint series"
@@ -561,13 +573,268 @@ export function JointsSection() {
           { label: "Price", right: true },
           { label: "Strap torque (N·m)", right: true },
           "Strap torque source",
+          ...JOINT_INTERFACE_HEADINGS,
           { label: "Remove", srOnly: true },
         ]}
       >
         {fields.map((f, i) => (
-          <JointRow key={f.id} index={i} onRemove={() => remove(i)} />
+          <JointRow key={f.id} index={i} onRemove={() => remove(i)} series={series} />
         ))}
       </Table>
+    </Section>
+  );
+}
+
+const RETENTIONS = [
+  { value: "", label: "—" },
+  { value: "strap", label: "Straps" },
+  { value: "u-bolt", label: "U-bolts" },
+  { value: "round", label: "Round bores" },
+];
+const LUBRICATIONS = [
+  { value: "", label: "—" },
+  { value: "sealed", label: "Sealed" },
+  { value: "greaseable", label: "Greaseable" },
+];
+const JOINT_KINDS = [
+  { value: "", label: "Single cross" },
+  { value: "double-cardan", label: "Double-Cardan" },
+];
+
+const FLANGE_HEADINGS = [
+  { label: "Flange bolts", right: true },
+  { label: "Bolt circle (mm)", right: true },
+  { label: "Pilot (mm)", right: true },
+];
+
+/** A flange yoke's bolt pattern (matched to the vehicle's companion flange). */
+function FlangeCells({ p, row }: { p: `catalogue.endFittings.${number}`; row: string }) {
+  return (
+    <>
+      <td className={TD}>
+        <NumberInput
+          name={`${p}.flange.boltCount`}
+          label={`Flange bolts of ${row}`}
+          empty={undefined}
+          placeholder="—"
+          className="w-16"
+        />
+      </td>
+      <td className={TD}>
+        <NumberInput
+          name={`${p}.flange.boltCircleMm`}
+          label={`Bolt circle (mm) of ${row}`}
+          empty={undefined}
+          placeholder="—"
+          hint={inches(3)}
+          className="w-24"
+        />
+      </td>
+      <td className={TD}>
+        <NumberInput
+          name={`${p}.flange.pilotMm`}
+          label={`Pilot (mm) of ${row}`}
+          empty={undefined}
+          placeholder="—"
+          hint={inches(3)}
+          className="w-24"
+        />
+      </td>
+    </>
+  );
+}
+
+const JOINT_INTERFACE_HEADINGS = [
+  { label: "Cap diameter (mm)", right: true },
+  { label: "Span across caps (mm)", right: true },
+  "Held by",
+  "Lubrication",
+  "Kind",
+  "Conversion: other side",
+];
+
+/** What a vehicle's yoke takes (caps, span, retention), lubrication, kind and a conversion's other side. */
+function JointInterfaceCells({
+  p,
+  row,
+  series,
+}: {
+  p: `catalogue.jointSeries.${number}`;
+  row: string;
+  series: { value: string; label: string }[];
+}) {
+  return (
+    <>
+      <td className={TD}>
+        <NumberInput
+          name={`${p}.capDiameterMm`}
+          label={`Cap diameter (mm) of ${row}`}
+          empty={undefined}
+          placeholder="—"
+          hint={inches(3)}
+          className="w-20"
+        />
+      </td>
+      <td className={TD}>
+        <NumberInput
+          name={`${p}.capSpanMm`}
+          label={`Span across caps (mm) of ${row}`}
+          empty={undefined}
+          placeholder="—"
+          hint={inches(3)}
+          className="w-24"
+        />
+      </td>
+      <td className={TD}>
+        <SelectInput
+          name={`${p}.retention`}
+          label={`Held by (${row})`}
+          options={RETENTIONS}
+          className="w-32"
+        />
+      </td>
+      <td className={TD}>
+        <SelectInput
+          name={`${p}.lubrication`}
+          label={`Lubrication of ${row}`}
+          options={LUBRICATIONS}
+          className="w-32"
+        />
+      </td>
+      <td className={TD}>
+        <SelectInput name={`${p}.kind`} label={`Kind of ${row}`} options={JOINT_KINDS} className="w-36" />
+      </td>
+      <td className={TD}>
+        <SelectInput
+          name={`${p}.otherSeriesId`}
+          label={`Conversion other side of ${row}`}
+          options={[{ value: "", label: "— (not a conversion)" }, ...series]}
+          className="w-40"
+        />
+      </td>
+    </>
+  );
+}
+
+function SlipYokeRow({
+  index,
+  onRemove,
+  series,
+}: {
+  index: number;
+  onRemove: () => void;
+  series: { value: string; label: string }[];
+}) {
+  const p = `catalogue.slipYokes.${index}` as const;
+  const row = useRowName(`${p}.id`, "slip yoke", index);
+  return (
+    <tr>
+      <td className={TD}>
+        <TextInput name={`${p}.id`} label={`Id of ${row}`} mono className="w-40" />
+      </td>
+      <td className={TD}>
+        <TextInput name={`${p}.name`} label={`Name of ${row}`} className="w-64" />
+      </td>
+      <td className={TD}>
+        <NumberInput name={`${p}.splineCount`} label={`Splines of ${row}`} className="w-16" />
+      </td>
+      <td className={TD}>
+        <NumberInput
+          name={`${p}.majorDiameterMm`}
+          label={`Spline major diameter (mm) of ${row}`}
+          hint={inches(3)}
+          className="w-24"
+        />
+      </td>
+      <td className={TD}>
+        <SelectInput
+          name={`${p}.jointSeriesId`}
+          label={`Ears (joint series) of ${row}`}
+          options={series}
+          className="w-28"
+        />
+      </td>
+      <td className={TD}>
+        <NumberInput
+          name={`${p}.sealSurfaceLengthMm`}
+          label={`Seal surface length (mm) of ${row}`}
+          hint={inches(2)}
+          className="w-24"
+        />
+      </td>
+      <td className={TD}>
+        <NumberInput
+          name={`${p}.minEngagementMm`}
+          label={`Least spline engagement (mm) of ${row}`}
+          hint={inches(2)}
+          className="w-24"
+        />
+      </td>
+      <td className={TD}>
+        <NumberInput name={`${p}.massKg`} label={`Mass (kg) of ${row}`} className="w-20" />
+      </td>
+      <td className={TD}>
+        <NumberInput name={`${p}.priceCents`} label={`Price of ${row}`} money className="w-28" />
+      </td>
+      <td className={TD}>
+        <TextInput name={`${p}.source`} label={`Source of ${row}`} className="w-72" />
+      </td>
+      <td className={TD}>
+        <RemoveButton label={`Remove ${row}`} onClick={onRemove} />
+      </td>
+    </tr>
+  );
+}
+
+/** Slip yokes matched to a transmission's output spline; their least engagement and seal surface are checked. */
+export function SlipYokesSection() {
+  const { fields, append, remove } = useFieldArray<ShopConfigDocumentInput, "catalogue.slipYokes">({
+    name: "catalogue.slipYokes",
+  });
+  const series = useSeriesOptions();
+  return (
+    <Section
+      id="slip-yokes"
+      title={`Slip yokes (${fields.length})`}
+      description="Slip yokes for transmission and transfer-case outputs, matched by spline count and major diameter. The least spline engagement at full droop and the ground seal surface's length come from the maker's sheet; each row names its source."
+      action={
+        <AddButton
+          label="Add slip yoke"
+          onClick={() =>
+            append({ id: "", name: "", jointSeriesId: series[0]?.value ?? "", source: "" } as never, {
+              focusName: `catalogue.slipYokes.${fields.length}.id`,
+            })
+          }
+        />
+      }
+    >
+      {fields.length === 0 ? (
+        <p className="card p-5 text-sm text-ink-muted">
+          No slip yokes yet. Without them the shop&apos;s fixed spline engagement applies and slip yokes are
+          not priced in quotes.
+        </p>
+      ) : (
+        <Table
+          caption="Slip yokes"
+          headings={[
+            "Id",
+            "Name",
+            { label: "Splines", right: true },
+            { label: "Major diameter (mm)", right: true },
+            "Ears (joint series)",
+            { label: "Seal surface (mm)", right: true },
+            { label: "Least engagement (mm)", right: true },
+            { label: "Mass (kg)", right: true },
+            { label: "Price", right: true },
+            "Source",
+            { label: "Remove", srOnly: true },
+          ]}
+        >
+          {fields.map((f, i) => (
+            <SlipYokeRow key={f.id} index={i} onRemove={() => remove(i)} series={series} />
+          ))}
+        </Table>
+      )}
     </Section>
   );
 }
