@@ -89,7 +89,11 @@ function shaftBlock(w: Writer, view: TravellerView, top: number, left: number, w
     f.bold,
   );
   y -= 16;
-  label("Cut length (weld seat to weld seat)", left, y);
+  label(
+    view.retube ? "Cut length (re-tube: the customer's weld-to-weld)" : "Cut length (weld seat to weld seat)",
+    left,
+    y,
+  );
   y -= 15;
   const cut = plusMinus(frozenFields(view.steps, "cut").find((x) => x.key === "cutLengthMm")?.limit) ?? {
     nominal: tubeCutLengthMm(report),
@@ -282,6 +286,29 @@ function exceptionsBlock(w: Writer, view: TravellerView, top: number, left: numb
   return bottom;
 }
 
+/** A re-tube: the customer's shaft, its weld-to-weld and the parts the counter meant to reuse. */
+function retubeLine(
+  w: Writer,
+  retube: NonNullable<TravellerView["retube"]>,
+  units: FloorUnits,
+  left: number,
+  top: number,
+  width: number,
+): number {
+  const reused = retube.reused.length ? retube.reused.join("; ") : "none, all new parts";
+  return (
+    w.wrap(
+      `RE-TUBE of the customer's shaft. Weld-to-weld ${formatQuantity("length", units, retube.weldToWeldMm)} (the cut length). Reused if they pass inspection: ${reused}.`,
+      left,
+      top - 2,
+      width,
+      8,
+      w.f.bold,
+      2,
+    ) - 2
+  );
+}
+
 /** Draws one shaft's traveller on a new page of `doc`. */
 async function addTravellerPage(doc: PDFDocument, view: TravellerView, f: Fonts): Promise<void> {
   const [pw, ph] = PAGE[view.floor.paperSize];
@@ -294,7 +321,7 @@ async function addTravellerPage(doc: PDFDocument, view: TravellerView, f: Fonts)
   // Header: who, what, when; the serial big, with its QR code.
   const qr = 78;
   drawQr(page, view.serialQrText, left + width - qr, y - qr, qr);
-  w.text(`${view.shop.name} · TRAVELLER`, left, y - 9, 9, f.bold);
+  w.text(`${view.shop.name} · TRAVELLER${view.retube ? " · RE-TUBE" : ""}`, left, y - 9, 9, f.bold);
   w.text(view.serial, left, y - 32, 22, f.mono);
   w.text(
     `Revision ${view.revision} · shaft ${view.shaft.position} of ${view.shaft.count} · order ${view.order.number}`,
@@ -326,6 +353,7 @@ async function addTravellerPage(doc: PDFDocument, view: TravellerView, f: Fonts)
     1,
   );
   y -= 96;
+  if (view.retube) y = retubeLine(w, view.retube, view.floor.units, left, y, width);
   w.rule(left, y, left + width, 1.2);
   y = shaftBlock(w, view, y - 12, left, width);
   y -= 4;
