@@ -38,7 +38,11 @@ const partSchema = z
   .object({
     reuse: z.boolean({ error: "must be yes or no" }),
     /** A short condition note, e.g. "bores round, no ear wear". */
-    note: z.string({ error: "must be text" }).trim().max(200, { error: "at most 200 characters" }).default(""),
+    note: z
+      .string({ error: "must be text" })
+      .trim()
+      .max(200, { error: "at most 200 characters" })
+      .default(""),
   })
   .superRefine((p, ctx) => {
     if (p.reuse && p.note.length < 2)
@@ -69,10 +73,7 @@ export type RepairIntake = z.infer<typeof repairIntakeSchema>;
 /** PUT /api/designs/[id]/repair: a new shaft, or a re-tube with the counter's intake. */
 export const saveRepairBodySchema = z.discriminatedUnion(
   "job",
-  [
-    z.object({ job: z.literal("new") }),
-    z.object({ job: z.literal("retube"), repair: repairIntakeSchema }),
-  ],
+  [z.object({ job: z.literal("new") }), z.object({ job: z.literal("retube"), repair: repairIntakeSchema })],
   { error: 'must be "new" or "retube"' },
 );
 export type SaveRepairBody = z.infer<typeof saveRepairBodySchema>;

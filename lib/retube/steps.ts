@@ -5,7 +5,7 @@
  */
 import type { FieldSpec, StepContext } from "@/lib/traveller/steps";
 import type { RoutingStep } from "@/lib/traveller/settings";
-import { RETUBE_PARTS, RETUBE_PART_LABEL, reusedParts, type RetubePart } from "./intake";
+import { RETUBE_PARTS, reusedParts, type RetubePart } from "./intake";
 
 /** The re-tube steps (common shop practice: take the old shaft apart, then inspect what is kept). */
 export const retubeRouting: readonly RoutingStep[] = [
@@ -36,9 +36,19 @@ export function withRetubeSteps(routing: readonly RoutingStep[]): RoutingStep[] 
   return [...retubeRouting, ...routing.filter((s) => !codes.has(s.code))];
 }
 
+/** Short names for the floor's record sheets (the traveller's cells are narrow). */
+const FLOOR_NAME: Record<RetubePart, string> = {
+  frontEnd: "Front end",
+  rearEnd: "Rear end",
+  slipYoke: "Slip yoke",
+  frontJoint: "Front joint",
+  rearJoint: "Rear joint",
+};
+
 const stateKey = (part: RetubePart) => `${part}State`;
 export const passKey = (part: RetubePart) => `${part}Passes`;
-export const findingKey = (part: RetubePart) => `${part}Finding`;
+/** The inspection's findings, part by part: the reason a failed part gives for the hold. */
+export const FINDINGS_KEY = "findings";
 
 /**
  * Teardown: the weld-to-weld as received (checked against the counter's measurement, since the new
@@ -51,7 +61,7 @@ export function teardownFields(ctx: StepContext): FieldSpec[] {
   if (repair) {
     fields.push({
       key: "weldToWeldMm",
-      label: "Weld-to-weld as received",
+      label: "Weld-to-weld",
       type: "number",
       quantity: "length",
       limit: {
@@ -63,26 +73,26 @@ export function teardownFields(ctx: StepContext): FieldSpec[] {
     });
   }
   for (const part of RETUBE_PARTS)
-    fields.push({ key: stateKey(part), label: `${RETUBE_PART_LABEL[part]}: as removed`, type: "text" });
+    fields.push({ key: stateKey(part), label: `${FLOOR_NAME[part]}: state`, type: "text" });
   return fields;
 }
 
 /**
- * Inspection: for each part the counter meant to reuse, a finding and "passes, reuse it"; a "no"
- * holds the step with the finding as the reason. With nothing reused, one confirmation that every
- * part is new.
+ * Inspection: what was found, then "passes, reuse it" for each part the counter meant to reuse; a
+ * "no" holds the step with the findings as the reason. With nothing reused, one confirmation that
+ * every part is new.
  */
 export function inspectionFields(ctx: StepContext): FieldSpec[] {
   const parts = ctx.repair ? reusedParts(ctx.repair) : [];
   if (!parts.length)
-    return [{ key: "allNewParts", label: "Nothing of the customer's reused: new parts fitted", type: "confirm" }];
-  return parts.flatMap((part): FieldSpec[] => [
-    { key: findingKey(part), label: `${RETUBE_PART_LABEL[part]}: what you found`, type: "text" },
-    {
+    return [{ key: "allNewParts", label: "Nothing reused: new parts fitted", type: "confirm" }];
+  return [
+    { key: FINDINGS_KEY, label: "What you found", type: "text" },
+    ...parts.map((part): FieldSpec => ({
       key: passKey(part),
-      label: `${RETUBE_PART_LABEL[part]} passes, reuse it`,
+      label: `${FLOOR_NAME[part]} passes, reuse it`,
       type: "confirm",
-      reasonKey: findingKey(part),
-    },
-  ]);
+      reasonKey: FINDINGS_KEY,
+    })),
+  ];
 }
