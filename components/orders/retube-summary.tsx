@@ -17,7 +17,10 @@ export function RetubeBadge() {
 export function RetubeSummary({ retube, shaftName }: { retube: RetubeView; shaftName: string }) {
   const reused = retube.parts.filter((p) => p.reuse);
   return (
-    <section className="mt-4 rounded-md border border-line bg-paper-sunk p-3 text-sm" aria-label={`Re-tube of ${shaftName}`}>
+    <section
+      className="mt-4 rounded-md border border-line bg-paper-sunk p-3 text-sm"
+      aria-label={`Re-tube of ${shaftName}`}
+    >
       <h4 className="font-semibold">Re-tube of the customer&apos;s shaft</h4>
       <p className="mt-1">
         Weld-to-weld <strong className="tabular-nums">{retube.weldToWeldMm.toFixed(1)} mm</strong>

@@ -267,7 +267,13 @@ export async function placeOrder(user: CurrentUser, body: PlaceOrderBody): Promi
           // Re-tubes: the counter's intake frozen on the shaft (parts reused are not charged).
           retubes: shafts.flatMap((s, i) =>
             s.design.repair
-              ? [{ position: i + 1, weldToWeldMm: s.design.repair.weldToWeldMm, parts: s.design.repair.parts }]
+              ? [
+                  {
+                    position: i + 1,
+                    weldToWeldMm: s.design.repair.weldToWeldMm,
+                    parts: s.design.repair.parts,
+                  },
+                ]
               : [],
           ),
         },

@@ -157,8 +157,7 @@ export function quoteShaft(
           : line("joint", `Universal joint ${joint.name}`, 1, joint.priceCents),
       );
   }
-  if (reused)
-    lines.push(line("teardown", "Re-tube: teardown and inspection", 1, book.teardownPerShaftCents));
+  if (reused) lines.push(line("teardown", "Re-tube: teardown and inspection", 1, book.teardownPerShaftCents));
   lines.push(line("labour", "Cut, weld, phase and straighten", 1, book.labourPerShaftCents));
   lines.push(line("balance", "Dynamic balance", 1, book.balancingPerShaftCents));
   return lines;

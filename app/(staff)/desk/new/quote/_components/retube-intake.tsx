@@ -91,11 +91,15 @@ export function RetubeIntake({ designId, shaftName, job, initial, geometry, unit
       }
       setMessage({
         tone: "success",
-        text: choice === "retube" ? "Saved: the quote is priced as a re-tube." : "Saved: priced as a new shaft.",
+        text:
+          choice === "retube" ? "Saved: the quote is priced as a re-tube." : "Saved: priced as a new shaft.",
       });
       router.refresh();
     } catch {
-      setMessage({ tone: "error", text: "No connection to the shop. Your entries are still here; try again." });
+      setMessage({
+        tone: "error",
+        text: "No connection to the shop. Your entries are still here; try again.",
+      });
     } finally {
       setSaving(false);
     }
@@ -181,9 +185,10 @@ export function RetubeIntake({ designId, shaftName, job, initial, geometry, unit
                 <strong>{show(check.derivedMm)}</strong>
                 {check.disagrees ? (
                   <strong className="block text-warn">
-                    That is {show(Math.abs(check.differenceMm!))} {check.differenceMm! > 0 ? "longer" : "shorter"}{" "}
-                    than the joint-centre length (more than the ± {show(geometry.toleranceMm)} as-welded
-                    tolerance). Measure both again, or check that the design names the customer&apos;s fittings.
+                    That is {show(Math.abs(check.differenceMm!))}{" "}
+                    {check.differenceMm! > 0 ? "longer" : "shorter"} than the joint-centre length (more than
+                    the ± {show(geometry.toleranceMm)} as-welded tolerance). Measure both again, or check that
+                    the design names the customer&apos;s fittings.
                   </strong>
                 ) : (
                   <span className="text-ink-muted"> (within ± {show(geometry.toleranceMm)}).</span>
@@ -220,7 +225,9 @@ export function RetubeIntake({ designId, shaftName, job, initial, geometry, unit
                         className="field-input"
                         name={`repair.parts.${part}.note`}
                         aria-label={`${RETUBE_PART_LABEL[part]}: condition`}
-                        placeholder={parts[part].reuse ? "Condition, e.g. bores round, no wear" : "Condition (optional)"}
+                        placeholder={
+                          parts[part].reuse ? "Condition, e.g. bores round, no wear" : "Condition (optional)"
+                        }
                         maxLength={200}
                         value={parts[part].note}
                         onChange={(e) => setPart(part, { note: e.target.value })}
