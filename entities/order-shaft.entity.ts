@@ -29,7 +29,7 @@ export interface FailedCheckAcceptance {
 /** One shaft of an order, with frozen copies of its design, its evaluation and its price. */
 @Entity({ tableName: "order_shaft" })
 @Check({ name: "order_shaft_price_nonnegative_check", expression: "price_cents >= 0" })
-@Check({ name: "order_shaft_job_check", expression: "job in ('new', 'retube')" })
+@Check({ name: "order_shaft_job_kind_check", expression: "job = 'new' or job = 'retube'" })
 @Check({ name: "order_shaft_repair_check", expression: "(job = 'retube') = (repair is not null)" })
 export class OrderShaft {
   [OptionalProps]?: "warningAcknowledgements" | "failedCheckAcceptances" | "job" | "repair";

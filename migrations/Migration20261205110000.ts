@@ -11,7 +11,7 @@ export class Migration20261205110000 extends Migration {
     this.addSql(`alter table "order_shaft" add column "job" text not null default 'new';`);
     this.addSql(`alter table "order_shaft" add column "repair" jsonb null;`);
     this.addSql(
-      `alter table "order_shaft" add constraint "order_shaft_job_check" check (job in ('new', 'retube'));`,
+      `alter table "order_shaft" add constraint "order_shaft_job_kind_check" check (job = 'new' or job = 'retube');`,
     );
     this.addSql(
       `alter table "order_shaft" add constraint "order_shaft_repair_check" check ((job = 'retube') = (repair is not null));`,
@@ -20,7 +20,7 @@ export class Migration20261205110000 extends Migration {
 
   override async down(): Promise<void> {
     this.addSql(`alter table "order_shaft" drop constraint if exists "order_shaft_repair_check";`);
-    this.addSql(`alter table "order_shaft" drop constraint if exists "order_shaft_job_check";`);
+    this.addSql(`alter table "order_shaft" drop constraint if exists "order_shaft_job_kind_check";`);
     this.addSql(`alter table "order_shaft" drop column "repair";`);
     this.addSql(`alter table "order_shaft" drop column "job";`);
     this.addSql(`alter table "design" drop column "repair";`);

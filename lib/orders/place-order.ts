@@ -25,7 +25,7 @@ import {
   type AckItem,
 } from "./acknowledgements";
 import type { WarningAcknowledgement } from "@/entities";
-import { reusedForPrice } from "@/lib/retube/intake";
+import { retubeCutLengthMm, reusedForPrice } from "@/lib/retube/intake";
 
 /** What a quote is made from: a saved design, or a design file sent as is. */
 export type QuoteSource = Pick<Design, "name" | "design"> &
@@ -68,8 +68,12 @@ export function quoteDesigns<S extends QuoteSource>(
       );
     }
     // A re-tube (the counter's intake on the draft) does not charge the parts reused and adds teardown.
+    // Its new tube is cut to the customer's weld-to-weld, so that is the length charged.
     const reused = design.repair ? reusedForPrice(design.repair) : null;
-    const lines = quoteShaft(report, shop.priceBook, tubePrice, shop.catalogue.jointSeries, reused);
+    const priced = design.repair
+      ? { ...report, tube: { ...report.tube, tubeLengthMm: retubeCutLengthMm(design.repair) } }
+      : report;
+    const lines = quoteShaft(priced, shop.priceBook, tubePrice, shop.catalogue.jointSeries, reused);
     return { design, report, lines, priceCents: lines.reduce((s, l) => s + l.totalCents, 0) };
   });
   return {

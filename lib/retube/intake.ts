@@ -35,15 +35,18 @@ export const MAX_WELD_TO_WELD_MM = 10_000;
 const positive = "must be a positive number";
 
 const partSchema = z
-  .object({
-    reuse: z.boolean({ error: "must be yes or no" }),
-    /** A short condition note, e.g. "bores round, no ear wear". */
-    note: z
-      .string({ error: "must be text" })
-      .trim()
-      .max(200, { error: "at most 200 characters" })
-      .default(""),
-  })
+  .object(
+    {
+      reuse: z.boolean({ error: "must be yes or no" }),
+      /** A short condition note, e.g. "bores round, no ear wear". */
+      note: z
+        .string({ error: "must be text" })
+        .trim()
+        .max(200, { error: "at most 200 characters" })
+        .default(""),
+    },
+    { error: "say whether the part is reused" },
+  )
   .superRefine((p, ctx) => {
     if (p.reuse && p.note.length < 2)
       ctx.addIssue({
@@ -60,13 +63,16 @@ export const repairIntakeSchema = z.object({
     .number({ error: positive })
     .positive({ error: positive })
     .max(MAX_WELD_TO_WELD_MM, { error: `must be at most ${MAX_WELD_TO_WELD_MM} mm` }),
-  parts: z.object({
-    frontEnd: partSchema,
-    rearEnd: partSchema,
-    slipYoke: partSchema,
-    frontJoint: partSchema,
-    rearJoint: partSchema,
-  }),
+  parts: z.object(
+    {
+      frontEnd: partSchema,
+      rearEnd: partSchema,
+      slipYoke: partSchema,
+      frontJoint: partSchema,
+      rearJoint: partSchema,
+    },
+    { error: "list the parts and whether each is reused" },
+  ),
 });
 export type RepairIntake = z.infer<typeof repairIntakeSchema>;
 

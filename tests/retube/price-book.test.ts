@@ -81,11 +81,13 @@ describe("the re-tube teardown line in the price book", () => {
         (await post({ ...doc, basedOnVersion: version, note: "Teardown takes longer" }, cookie)).status,
       ).toBe(201);
       const em = await getEm();
-      const audit = await em.findOneOrFail(AuditEvent, {
-        action: SAVE_ACTION,
-        subjectId: String(version + 1),
-      });
-      expect(audit.details).toMatchObject({
+      // The newest save (another file may have used the same version number before it restored the shop).
+      const [audit] = await em.find(
+        AuditEvent,
+        { action: SAVE_ACTION, subjectId: String(version + 1) },
+        { orderBy: { at: "desc" }, limit: 1 },
+      );
+      expect(audit!.details).toMatchObject({
         changes: [{ path: "priceBook.teardownPerShaftCents", before, after: before + 2500 }],
       });
 
@@ -99,6 +101,15 @@ describe("the re-tube teardown line in the price book", () => {
       const shop = await getShopEngineering();
       const { shafts } = quoteDesigns([{ name: "Re-tube", design: streetTruck, repair }], shop, "pickup");
       expect(shafts[0]!.lines.find((l) => l.code === "teardown")?.totalCents).toBe(before + 2500);
+      // The new tube is charged on the customer's weld-to-weld plus the price book's allowance (50 mm, demo data).
+      const short = quoteDesigns(
+        [{ name: "Re-tube", design: streetTruck, repair: { ...repair, weldToWeldMm: 1000 } }],
+        shop,
+        "pickup",
+      );
+      const tube = short.shafts[0]!.lines.find((l) => l.code === "tube")!;
+      expect(tube.label).toMatch(/, 1050 mm$/);
+      expect(tube.quantity).toBe(1.05);
     },
   );
 });
