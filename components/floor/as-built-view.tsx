@@ -90,7 +90,9 @@ export function AsBuiltView({
             </div>
           ))}
         </dl>
-        {record.retube && <RetubeSummary retube={record.retube} shaftName={record.shaft.name} />}
+        {record.retube && (
+          <RetubeSummary retube={record.retube} shaftName={record.shaft.name} units={units} />
+        )}
         {checks.length > 0 && (
           <ul className="mt-4 list-disc space-y-1 pl-5 text-sm">
             {checks.map((c) => (

@@ -1,5 +1,6 @@
 import { Wrench } from "lucide-react";
 import type { RetubeView } from "@/lib/orders/queries";
+import { formatQuantity, type FloorUnits } from "@/lib/traveller/units";
 
 /** "Re-tube" beside a shaft's name. */
 export function RetubeBadge() {
@@ -14,7 +15,16 @@ export function RetubeBadge() {
 }
 
 /** A re-tube's intake: the weld-to-weld the new tube is cut to and the parts reused, with their notes. */
-export function RetubeSummary({ retube, shaftName }: { retube: RetubeView; shaftName: string }) {
+export function RetubeSummary({
+  retube,
+  shaftName,
+  units,
+}: {
+  retube: RetubeView;
+  shaftName: string;
+  /** The floor's units (the as-built record); mm elsewhere, like the shaft's other figures. */
+  units?: FloorUnits;
+}) {
   const reused = retube.parts.filter((p) => p.reuse);
   return (
     <section
@@ -23,7 +33,12 @@ export function RetubeSummary({ retube, shaftName }: { retube: RetubeView; shaft
     >
       <h4 className="font-semibold">Re-tube of the customer&apos;s shaft</h4>
       <p className="mt-1">
-        Weld-to-weld <strong className="tabular-nums">{retube.weldToWeldMm.toFixed(1)} mm</strong>
+        Weld-to-weld{" "}
+        <strong className="tabular-nums">
+          {units
+            ? formatQuantity("length", units, retube.weldToWeldMm)
+            : `${retube.weldToWeldMm.toFixed(1)} mm`}
+        </strong>
         <span className="text-ink-muted"> (the new tube is cut to it)</span>
       </p>
       {reused.length > 0 ? (
