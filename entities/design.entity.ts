@@ -2,11 +2,12 @@ import { Entity, Index, ManyToOne, OptionalProps, PrimaryKey, Property } from "@
 import { randomUUID } from "node:crypto";
 import { Customer } from "./customer.entity";
 import { User } from "./user.entity";
+import type { RepairBlock } from "../lib/retube/intake";
 
 /** A saved shaft design (a draft until it is ordered; the order keeps its own frozen copy). */
 @Entity({ tableName: "design" })
 export class Design {
-  [OptionalProps]?: "createdAt" | "updatedAt";
+  [OptionalProps]?: "createdAt" | "updatedAt" | "repair";
 
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
@@ -21,6 +22,13 @@ export class Design {
   /** What the shaft goes in and how it is used, for the shop. */
   @Property({ type: "json", nullable: true })
   application?: { description: string; use: string } | null;
+
+  /**
+   * The counter's re-tube intake for this draft (null: a new shaft). Quoted and copied to the order
+   * shaft when ordered (lib/retube/intake-service.ts, Migration20261205110000).
+   */
+  @Property({ type: "json", nullable: true })
+  repair?: RepairBlock | null = null;
 
   @Index()
   @ManyToOne(() => Customer, { nullable: true, deleteRule: "set null" })

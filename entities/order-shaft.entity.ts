@@ -2,6 +2,7 @@ import { Check, Entity, Index, ManyToOne, OptionalProps, PrimaryKey, Property } 
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import type { QuoteLine } from "../lib/pricing/price-book";
+import type { RepairBlock, ShaftJob } from "../lib/retube/intake";
 
 /** Who acknowledged one warning of the frozen evaluation before the order was placed, and how. */
 export interface WarningAcknowledgement {
@@ -28,8 +29,10 @@ export interface FailedCheckAcceptance {
 /** One shaft of an order, with frozen copies of its design, its evaluation and its price. */
 @Entity({ tableName: "order_shaft" })
 @Check({ name: "order_shaft_price_nonnegative_check", expression: "price_cents >= 0" })
+@Check({ name: "order_shaft_job_kind_check", expression: "job = 'new' or job = 'retube'" })
+@Check({ name: "order_shaft_repair_check", expression: "(job = 'retube') = (repair is not null)" })
 export class OrderShaft {
-  [OptionalProps]?: "warningAcknowledgements" | "failedCheckAcceptances";
+  [OptionalProps]?: "warningAcknowledgements" | "failedCheckAcceptances" | "job" | "repair";
 
   @PrimaryKey({ type: "uuid" })
   id: string = randomUUID();
@@ -73,4 +76,12 @@ export class OrderShaft {
    */
   @Property({ type: "json", defaultRaw: `'[]'` })
   failedCheckAcceptances: FailedCheckAcceptance[] = [];
+
+  /** A new shaft, or a re-tube of the customer's own shaft (Migration20261205110000, lib/retube/intake.ts). */
+  @Property({ type: "text", default: "new" })
+  job: ShaftJob = "new";
+
+  /** A re-tube's intake as the counter recorded it (weld-to-weld, parts reused, who and when); null for a new shaft. */
+  @Property({ type: "json", nullable: true })
+  repair: RepairBlock | null = null;
 }

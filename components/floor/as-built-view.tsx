@@ -1,4 +1,5 @@
 import type { AsBuiltRecord } from "@/lib/floor/queries";
+import { RetubeBadge, RetubeSummary } from "@/components/orders/retube-summary";
 import type { EvaluationReport } from "@/lib/driveline/report";
 import { shownValue } from "@/lib/floor/scan";
 import { formatQuantity, type FloorUnits } from "@/lib/traveller/units";
@@ -44,7 +45,9 @@ export function AsBuiltView({
     ["Overall verdict", r.overall ?? "—"],
     ["Length between joint centres", len(r.lengthMm)],
     ["Tube", r.tube ? `${r.tube.tubeId} · ${len(r.tube.odMm)} × ${len(r.tube.wallMm)} wall` : "—"],
-    ["Cut length", len(r.cutLengthMm ?? r.tube?.tubeLengthMm)],
+    record.retube
+      ? ["Cut length (re-tube: the customer's weld-to-weld)", len(record.retube.weldToWeldMm)]
+      : ["Cut length", len(r.cutLengthMm ?? r.tube?.tubeLengthMm)],
     ["Service speed", r.service ? `${Math.round(r.service.maxShaftRpm)} rpm` : "—"],
     [
       "Critical speed",
@@ -68,6 +71,7 @@ export function AsBuiltView({
         <span className="rounded-full bg-steel-50 px-3 py-1 font-semibold text-steel-900">
           {STATE[record.state]}
         </span>
+        {record.retube && <RetubeBadge />}
         <span className="text-ink-muted">
           Traveller revision {record.revision}
           {record.voidRevisions.length > 0 &&
@@ -89,6 +93,9 @@ export function AsBuiltView({
             </div>
           ))}
         </dl>
+        {record.retube && (
+          <RetubeSummary retube={record.retube} shaftName={record.shaft.name} units={units} />
+        )}
         {checks.length > 0 && (
           <ul className="mt-4 list-disc space-y-1 pl-5 text-sm">
             {checks.map((c) => (

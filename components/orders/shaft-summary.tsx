@@ -3,6 +3,7 @@ import type { ShaftView } from "@/lib/orders/queries";
 import { USE_LABEL } from "@/lib/orders/labels";
 import { formatMoney } from "@/lib/pricing/price-book";
 import { CheckBadge } from "./status-badge";
+import { RetubeBadge, RetubeSummary } from "./retube-summary";
 
 /** One ordered shaft: what it goes in, its key engineering numbers, its checks and its price lines. */
 export function ShaftSummary({
@@ -19,7 +20,7 @@ export function ShaftSummary({
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div>
           <h3 id={`shaft-${shaft.id}`} className="text-lg font-semibold">
-            {shaft.position}. {shaft.name}
+            {shaft.position}. {shaft.name} {shaft.retube && <RetubeBadge />}
           </h3>
           {shaft.application && (
             <p className="text-sm text-ink-muted">
@@ -39,6 +40,7 @@ export function ShaftSummary({
           owner has reviewed it.
         </p>
       )}
+      {shaft.retube && <RetubeSummary retube={shaft.retube} shaftName={shaft.name} />}
       <dl className="mt-4 grid grid-cols-1 gap-x-6 gap-y-2 text-sm sm:grid-cols-2">
         {shaft.facts.map((f) => (
           <div key={f.label} className="flex justify-between gap-3 border-b border-dashed border-line py-1">

@@ -63,6 +63,7 @@ export const FIELD_LABELS: Record<string, string> = {
   currency: "Currency",
   labourPerShaftCents: "Labour per shaft",
   balancingPerShaftCents: "Balancing per shaft",
+  teardownPerShaftCents: "Re-tube teardown and inspection per shaft",
   tubeAllowanceMm: "Tube allowance per cut (mm)",
   minimumTubeChargeMm: "Shortest tube charged (mm)",
   taxRatePercent: "Tax (%)",

@@ -31,6 +31,8 @@ export const DEMO_STEP_HOURS: Record<StepKind, number> = {
   "final-inspection": 5,
   dispatch: 14,
   "sign-off": 2,
+  teardown: 4,
+  inspection: 3,
 };
 
 export interface GenerateCustomer {

@@ -7,6 +7,7 @@ import { StepRecord, WorkOrder, WorkOrderStep, type StepOutcome, type WorkOrderS
 import type { Failure, SiValues } from "@/lib/traveller/measure";
 import type { StepSpec } from "@/lib/traveller/steps";
 import { findWorkOrderBySerial } from "./work-orders";
+import { retubeView, type RetubeView } from "@/lib/orders/queries";
 
 export interface QueueItem {
   workOrderId: string;
@@ -72,6 +73,8 @@ export interface AsBuiltRecord {
   orderNumber: string;
   customerId: string;
   shaft: { name: string; application: { description: string; use: string } | null };
+  /** A re-tube of the customer's shaft: the counter's intake (null for a new shaft). */
+  retube: RetubeView | null;
   /** The frozen design and evaluation the shaft was built to. */
   design: Record<string, unknown>;
   evaluation: Record<string, unknown>;
@@ -115,6 +118,7 @@ export async function asBuiltRecord(em: EntityManager, serial: string): Promise<
     orderNumber: wo.order.number,
     customerId: wo.order.customer.id,
     shaft: { name: wo.orderShaft.name, application: wo.orderShaft.application ?? null },
+    retube: wo.orderShaft.job === "retube" ? retubeView(wo.orderShaft.repair) : null,
     design: wo.orderShaft.design,
     evaluation: wo.orderShaft.evaluation,
     steps: steps.map((s) => ({

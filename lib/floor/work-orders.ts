@@ -31,6 +31,7 @@ import type { FloorSettings } from "@/lib/traveller/settings";
 import { deriveSteps, type StepSpec } from "@/lib/traveller/steps";
 import { buildTravellerView, type TravellerView } from "@/lib/traveller/view";
 import { acceptedExceptions, assertSignedOff } from "@/lib/orders/engineering-signoff";
+import { reusedParts, RETUBE_PART_LABEL, type RepairBlock } from "@/lib/retube/intake";
 import {
   newAfterCommit,
   onFinalInspectionPassed,
@@ -57,7 +58,14 @@ function specsFor(shaft: OrderShaft, order: Order, floor: FloorSettings): StepSp
     report: shaft.evaluation as unknown as EvaluationReport,
     fulfilment: order.fulfilment,
     floor,
+    // A re-tube starts with teardown and inspection, and is cut to the customer's weld-to-weld.
+    repair: retubeIntakeOf(shaft),
   });
+}
+
+/** A re-tube's intake, or null for a new shaft. */
+function retubeIntakeOf(shaft: OrderShaft): RepairBlock | null {
+  return shaft.job === "retube" ? shaft.repair : null;
 }
 
 function addSteps(em: EntityManager, wo: WorkOrder, specs: StepSpec[]): void {
@@ -155,7 +163,9 @@ async function release(orderId: string, by: CurrentUser | null, note: string | n
       em.create(OrderEvent, {
         order,
         kind: "step",
-        label: "Released to the shop",
+        label: shafts.some((s) => s.job === "retube")
+          ? "Released to the shop: your shaft is taken apart and its parts inspected first"
+          : "Released to the shop",
         actor: by ? userRef(em, by) : null,
         public: true,
       }),
@@ -610,8 +620,20 @@ export async function travellerViewFor(
     floor: engineering.floor,
     report: shaft.evaluation as unknown as EvaluationReport,
     acceptedExceptions: acceptedExceptions(shaft),
+    retube: retubeTravellerOf(shaft),
     steps: steps.map((s) => s.spec),
   });
+}
+
+/** What the traveller prints about a re-tube (null for a new shaft). */
+function retubeTravellerOf(shaft: OrderShaft): TravellerView["retube"] {
+  const repair = retubeIntakeOf(shaft);
+  return repair
+    ? {
+        weldToWeldMm: repair.weldToWeldMm,
+        reused: reusedParts(repair).map((p) => `${RETUBE_PART_LABEL[p]} (${repair.parts[p].note})`),
+      }
+    : null;
 }
 
 /** Finds a shaft by its serial (scanned from its QR code or typed). */

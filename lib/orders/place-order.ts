@@ -25,9 +25,11 @@ import {
   type AckItem,
 } from "./acknowledgements";
 import type { WarningAcknowledgement } from "@/entities";
+import { retubeCutLengthMm, reusedForPrice } from "@/lib/retube/intake";
 
 /** What a quote is made from: a saved design, or a design file sent as is. */
-export type QuoteSource = Pick<Design, "name" | "design"> & Partial<Pick<Design, "id" | "application">>;
+export type QuoteSource = Pick<Design, "name" | "design"> &
+  Partial<Pick<Design, "id" | "application" | "repair">>;
 
 export interface QuotedShaft<S extends QuoteSource = QuoteSource> {
   design: S;
@@ -65,7 +67,13 @@ export function quoteDesigns<S extends QuoteSource>(
         `"${design.name}" uses a tube the shop does not stock; the counter will price it by phone.`,
       );
     }
-    const lines = quoteShaft(report, shop.priceBook, tubePrice, shop.catalogue.jointSeries);
+    // A re-tube (the counter's intake on the draft) does not charge the parts reused and adds teardown.
+    // Its new tube is cut to the customer's weld-to-weld, so that is the length charged.
+    const reused = design.repair ? reusedForPrice(design.repair) : null;
+    const priced = design.repair
+      ? { ...report, tube: { ...report.tube, tubeLengthMm: retubeCutLengthMm(design.repair) } }
+      : report;
+    const lines = quoteShaft(priced, shop.priceBook, tubePrice, shop.catalogue.jointSeries, reused);
     return { design, report, lines, priceCents: lines.reduce((s, l) => s + l.totalCents, 0) };
   });
   return {
@@ -93,6 +101,13 @@ async function orderCustomer(
     throw new AppError("invalid", "Choose the customer this order is for.", { customerId: "Required." });
   if (!can(user.role, "orders.own")) throw new AccessError(403);
   return (await em.findOne(Customer, { user: user.id })) ?? em.merge(await linkCustomerToUser(user));
+}
+
+/** ", a re-tube of your shaft" / ", 2 re-tubes" for the customer's timeline; nothing for new shafts. */
+function retubeNote(retubes: number, shafts: number): string {
+  if (retubes === 0) return "";
+  if (shafts === 1) return ", a re-tube of your shaft";
+  return retubes === 1 ? ", 1 re-tube" : `, ${retubes} re-tubes`;
 }
 
 async function nextOrderNumber(em: EntityManager, at: Date): Promise<string> {
@@ -214,13 +229,16 @@ export async function placeOrder(user: CurrentUser, body: PlaceOrderBody): Promi
         priceLines: s.lines,
         priceCents: s.priceCents,
         warningAcknowledgements: acknowledgements[i]!.warnings,
+        job: s.design.repair ? "retube" : "new",
+        repair: s.design.repair ?? null,
       }),
     );
+    const retubes = shafts.filter((s) => s.design.repair).length;
     const signoff = shafts.filter((s) => needsEngineeringSignoff(s.report.checks));
     em.create(OrderEvent, {
       order,
       kind: "received",
-      label: `Order received (${shafts.length} shaft${shafts.length === 1 ? "" : "s"})`,
+      label: `Order received (${shafts.length} shaft${shafts.length === 1 ? "" : "s"}${retubeNote(retubes, shafts.length)})`,
       actor: em.getReference(User, user.id),
       at: now,
     });
@@ -250,6 +268,18 @@ export async function placeOrder(user: CurrentUser, body: PlaceOrderBody): Promi
             failures: a.failures.map((f) => f.checkId),
           })),
           needsEngineeringSignoff: signoff.length > 0,
+          // Re-tubes: the counter's intake frozen on the shaft (parts reused are not charged).
+          retubes: shafts.flatMap((s, i) =>
+            s.design.repair
+              ? [
+                  {
+                    position: i + 1,
+                    weldToWeldMm: s.design.repair.weldToWeldMm,
+                    parts: s.design.repair.parts,
+                  },
+                ]
+              : [],
+          ),
         },
       },
       em,

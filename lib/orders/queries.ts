@@ -1,3 +1,4 @@
+import { RETUBE_PARTS, RETUBE_PART_LABEL, type RepairBlock, type RetubePart } from "@/lib/retube/intake";
 import {
   Order,
   type OrderStatus,
@@ -104,6 +105,32 @@ export interface ShaftView {
   warningAcknowledgements: WarningAcknowledgement[];
   /** A check fails and the owner has not accepted it for this order. */
   needsSignoff: boolean;
+  /** A re-tube of the customer's shaft: the counter's intake (null for a new shaft). */
+  retube: RetubeView | null;
+}
+
+export interface RetubeView {
+  weldToWeldMm: number;
+  parts: { part: RetubePart; label: string; reuse: boolean; note: string }[];
+  recordedBy: string;
+  /** ISO date-time. */
+  recordedAt: string;
+}
+
+/** A re-tube's intake as plain data for the screens. */
+export function retubeView(repair: RepairBlock | null | undefined): RetubeView | null {
+  if (!repair) return null;
+  return {
+    weldToWeldMm: repair.weldToWeldMm,
+    parts: RETUBE_PARTS.map((part) => ({
+      part,
+      label: RETUBE_PART_LABEL[part],
+      reuse: repair.parts[part].reuse,
+      note: repair.parts[part].note,
+    })),
+    recordedBy: repair.recordedBy.name,
+    recordedAt: repair.recordedAt,
+  };
 }
 
 export interface OrderView extends OrderRow {
@@ -159,6 +186,8 @@ export interface ShaftSource {
   evaluation: unknown;
   warningAcknowledgements?: WarningAcknowledgement[];
   failedCheckAcceptances?: { checkId: string }[];
+  /** A re-tube's intake (an ordered re-tube, or a quoted draft with one). */
+  repair?: RepairBlock | null;
 }
 
 /** A shaft's key numbers, checks and price, as plain data for the screens. */
@@ -175,7 +204,9 @@ export function shaftView(s: ShaftSource): ShaftView {
     priceCents: s.priceCents,
     facts: [
       { label: "Installed length", value: fmt(r.lengthMm, 1, " mm") },
-      { label: "Cut length", value: fmt(r.cutLengthMm, 1, " mm") },
+      s.repair
+        ? { label: "Cut length (re-tube)", value: `${fmt(s.repair.weldToWeldMm, 1, " mm")} weld-to-weld` }
+        : { label: "Cut length", value: fmt(r.cutLengthMm, 1, " mm") },
       {
         label: "Tube",
         value: r.tube ? `${fmt(r.tube.odMm, 1)} × ${fmt(r.tube.wallMm, 2)} mm ${r.tube.materialId}` : "—",
@@ -199,6 +230,7 @@ export function shaftView(s: ShaftSource): ShaftView {
     cautions: [...(r.cautions ?? [])],
     warningAcknowledgements: s.warningAcknowledgements ?? [],
     needsSignoff: needsEngineeringSignoff(r.checks ?? [], s.failedCheckAcceptances),
+    retube: retubeView(s.repair),
   };
 }
 

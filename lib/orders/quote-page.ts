@@ -7,6 +7,7 @@ import { quoteDesigns } from "./place-order";
 import { getShopEngineering } from "@/lib/shop/config";
 import { AppError } from "@/lib/http/errors";
 import { quoteOrder, type OrderQuote } from "@/lib/pricing/price-book";
+import { retubeGeometryOf, type RetubeGeometry } from "@/lib/retube/intake";
 
 export interface QuotePageData {
   designIds: string[];
@@ -17,6 +18,8 @@ export interface QuotePageData {
   depositPercent: number;
   leadTimeWorkingDays: number;
   failing: string[];
+  /** Per shaft: what the counter's re-tube cross-check needs (lib/retube/intake.ts retubeLengthCheck). */
+  retubeGeometries: RetubeGeometry[];
   /** The customer's other saved designs, which can be added to the same order. */
   others: { id: string; name: string }[];
 }
@@ -60,12 +63,14 @@ export async function quoteForDesigns(
         priceLines: q.lines,
         priceCents: q.priceCents,
         evaluation: q.report,
+        repair: q.design.repair ?? null,
       }),
     ),
     pickup: pickup.quote,
     ship: ship.quote,
     depositPercent: shop.priceBook.depositPercent,
     leadTimeWorkingDays: shop.priceBook.leadTimeWorkingDays,
+    retubeGeometries: pickup.shafts.map((q) => retubeGeometryOf(q.report)),
     failing: pickup.shafts.filter((s) => s.report.overall === "fail").map((s) => s.design.name),
     others: (
       await em.find(

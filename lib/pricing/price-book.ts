@@ -28,6 +28,8 @@ export const priceBookSchema = z.object({
   /** Cutting, welding, phasing and straightening one shaft. */
   labourPerShaftCents: money(),
   balancingPerShaftCents: money(),
+  /** Re-tube / repair orders: taking the customer's shaft apart and inspecting the parts kept, per shaft. */
+  teardownPerShaftCents: money().default(4500),
   /** Tube is charged on the cut length plus this allowance for facing and waste. */
   tubeAllowanceMm: millimetres(1_000),
   /** Shortest length of tube charged. */
@@ -56,6 +58,7 @@ export const defaultPriceBook: PriceBook = {
   currency: "USD",
   labourPerShaftCents: 14500,
   balancingPerShaftCents: 6500,
+  teardownPerShaftCents: 4500,
   tubeAllowanceMm: 50,
   minimumTubeChargeMm: 300,
   taxRatePercent: 8.5,
@@ -67,7 +70,7 @@ export const defaultPriceBook: PriceBook = {
 };
 
 export interface QuoteLine {
-  code: "tube" | "fitting" | "joint" | "labour" | "balance" | "shipping" | "tax";
+  code: "tube" | "fitting" | "joint" | "labour" | "balance" | "teardown" | "shipping" | "tax";
   label: string;
   quantity: number;
   unitCents: number;
@@ -114,15 +117,31 @@ const line = (code: QuoteLine["code"], label: string, quantity: number, unitCent
   totalCents: Math.round(quantity * unitCents),
 });
 
+/** A re-tube: which of the customer's parts are reused (lib/retube/intake.ts reusedForPrice). */
+export interface ReusedParts {
+  frontEnd: boolean;
+  rearEnd: boolean;
+  frontJoint: boolean;
+  rearJoint: boolean;
+  /** A slip yoke matched to the vehicle's output (priced from the interface data). */
+  slipYoke?: boolean;
+}
+
+/** A part the customer's shaft already has: listed so the quote shows it, never charged. */
+const reusedLine = (code: QuoteLine["code"], label: string): QuoteLine =>
+  line(code, `${label}: the customer's, reused (not charged)`, 1, 0);
+
 /**
  * The price lines of one shaft: tube by length (from the catalogue price per metre), the two end
- * fittings, a joint (cross) at each end, labour and balancing.
+ * fittings, a joint (cross) at each end, labour and balancing. A re-tube (`reused` given) does not
+ * charge the parts reused and adds the price book's teardown and inspection line.
  */
 export function quoteShaft(
   shaft: PricedShaft,
   book: PriceBook,
   tubePricePerMetreCents: number,
   joints: readonly JointPrice[],
+  reused?: ReusedParts | null,
 ): QuoteLine[] {
   const chargedMm = Math.max(book.minimumTubeChargeMm, shaft.tube.tubeLengthMm + book.tubeAllowanceMm);
   const metres = Math.round(chargedMm) / 1000;
@@ -134,21 +153,34 @@ export function quoteShaft(
       tubePricePerMetreCents,
     ),
   ];
-  for (const end of [shaft.ends?.front, shaft.ends?.rear]) {
+  for (const [end, at] of [
+    [shaft.ends?.front, "front"],
+    [shaft.ends?.rear, "rear"],
+  ] as const) {
     if (!end) continue;
-    lines.push(line("fitting", end.name, 1, end.priceCents));
+    const keepEnd = at === "front" ? reused?.frontEnd : reused?.rearEnd;
+    const keepJoint = at === "front" ? reused?.frontJoint : reused?.rearJoint;
+    lines.push(keepEnd ? reusedLine("fitting", end.name) : line("fitting", end.name, 1, end.priceCents));
     const joint = joints.find((j) => j.id === (end.crossSeriesId ?? end.jointSeriesId));
-    if (joint) lines.push(line("joint", `Universal joint ${joint.name}`, 1, joint.priceCents));
+    if (joint)
+      lines.push(
+        keepJoint
+          ? reusedLine("joint", `Universal joint ${joint.name}`)
+          : line("joint", `Universal joint ${joint.name}`, 1, joint.priceCents),
+      );
   }
-  lines.push(...interfacePartLines(shaft));
+  lines.push(...interfacePartLines(shaft, reused));
+  if (reused) lines.push(line("teardown", "Re-tube: teardown and inspection", 1, book.teardownPerShaftCents));
   lines.push(line("labour", "Cut, weld, phase and straighten", 1, book.labourPerShaftCents));
   lines.push(line("balance", "Dynamic balance", 1, book.balancingPerShaftCents));
   return lines;
 }
 
-/** The parts matched to the vehicle's interface data (the slip yoke), each a fitting line. */
-export function interfacePartLines(shaft: PricedShaft): QuoteLine[] {
-  return (shaft.interface?.parts ?? []).map((p) => line("fitting", p.name, 1, p.priceCents));
+/** The parts matched to the vehicle's interface data (the slip yoke), each a fitting line; a reused slip yoke is not charged. */
+export function interfacePartLines(shaft: PricedShaft, reused?: ReusedParts | null): QuoteLine[] {
+  return (shaft.interface?.parts ?? []).map((p) =>
+    reused?.slipYoke ? reusedLine("fitting", p.name) : line("fitting", p.name, 1, p.priceCents),
+  );
 }
 
 export interface OrderQuote {

@@ -140,12 +140,14 @@ export function checkMeasurements(
         }
         values[field.key] = b;
         if (!b) {
+          const reason = field.reasonKey ? input[field.reasonKey] : undefined;
+          const why = typeof reason === "string" && reason.trim() ? ` — ${reason.trim().slice(0, 200)}` : "";
           failures.push({
             key: field.key,
             label: field.label,
             value: null,
             limit: null,
-            message: `${field.label}: no`,
+            message: `${field.label}: no${why}`,
           });
         }
         break;

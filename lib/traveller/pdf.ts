@@ -4,7 +4,7 @@
  * printer resolution), what each station needs, and a sign-off line per step. Server only (reads
  * the embedded fonts from lib/traveller/fonts).
  */
-import { PDFDocument, degrees } from "pdf-lib";
+import { PDFDocument, degrees, type PDFPage } from "pdf-lib";
 import { BLACK, GREY, MARGIN, PAGE, Writer, drawCode128, drawQr, embedFonts, type Fonts } from "./pdf-kit";
 import { describeLimit } from "./measure";
 import {
@@ -89,7 +89,11 @@ function shaftBlock(w: Writer, view: TravellerView, top: number, left: number, w
     f.bold,
   );
   y -= 16;
-  label("Cut length (weld seat to weld seat)", left, y);
+  label(
+    view.retube ? "Cut length (re-tube: the customer's weld-to-weld)" : "Cut length (weld seat to weld seat)",
+    left,
+    y,
+  );
   y -= 15;
   const cut = plusMinus(frozenFields(view.steps, "cut").find((x) => x.key === "cutLengthMm")?.limit) ?? {
     nominal: tubeCutLengthMm(report),
@@ -282,6 +286,29 @@ function exceptionsBlock(w: Writer, view: TravellerView, top: number, left: numb
   return bottom;
 }
 
+/** A re-tube: the customer's shaft, its weld-to-weld and the parts the counter meant to reuse. */
+function retubeLine(
+  w: Writer,
+  retube: NonNullable<TravellerView["retube"]>,
+  units: FloorUnits,
+  left: number,
+  top: number,
+  width: number,
+): number {
+  const reused = retube.reused.length ? retube.reused.join("; ") : "none, all new parts";
+  return (
+    w.wrap(
+      `RE-TUBE of the customer's shaft. Weld-to-weld ${formatQuantity("length", units, retube.weldToWeldMm)} (the cut length). Reused if they pass inspection: ${reused}.`,
+      left,
+      top - 2,
+      width,
+      8,
+      w.f.bold,
+      2,
+    ) - 2
+  );
+}
+
 /** Draws one shaft's traveller on a new page of `doc`. */
 async function addTravellerPage(doc: PDFDocument, view: TravellerView, f: Fonts): Promise<void> {
   const [pw, ph] = PAGE[view.floor.paperSize];
@@ -294,7 +321,7 @@ async function addTravellerPage(doc: PDFDocument, view: TravellerView, f: Fonts)
   // Header: who, what, when; the serial big, with its QR code.
   const qr = 78;
   drawQr(page, view.serialQrText, left + width - qr, y - qr, qr);
-  w.text(`${view.shop.name} · TRAVELLER`, left, y - 9, 9, f.bold);
+  w.text(`${view.shop.name} · TRAVELLER${view.retube ? " · RE-TUBE" : ""}`, left, y - 9, 9, f.bold);
   w.text(view.serial, left, y - 32, 22, f.mono);
   w.text(
     `Revision ${view.revision} · shaft ${view.shaft.position} of ${view.shaft.count} · order ${view.order.number}`,
@@ -326,33 +353,112 @@ async function addTravellerPage(doc: PDFDocument, view: TravellerView, f: Fonts)
     1,
   );
   y -= 96;
+  if (view.retube) y = retubeLine(w, view.retube, view.floor.units, left, y, width);
   w.rule(left, y, left + width, 1.2);
   y = shaftBlock(w, view, y - 12, left, width);
   y -= 4;
   if (view.acceptedExceptions.length) y = exceptionsBlock(w, view, y, left, width) - 4;
 
-  // Steps fill the rest of the page.
+  // Steps fill the rest of the page; a routing too long for it (a re-tube's) continues overleaf.
+  const pages = drawSteps(doc, w, view, y, f);
+  if (view.voidedBy != null) for (const p of pages) drawVoid(p, view.voidedBy, f);
+}
+
+function drawVoid(page: PDFPage, voidedBy: number, f: Fonts): void {
+  const [pw, ph] = [page.getWidth(), page.getHeight()];
+  const text = `VOID - see revision ${voidedBy}`;
+  const size = 54;
+  page.drawText(text, {
+    x: pw / 2 - f.bold.widthOfTextAtSize(text, size) / 2.6,
+    y: ph / 2 - 160,
+    size,
+    font: f.bold,
+    color: BLACK,
+    opacity: 0.3,
+    rotate: degrees(35),
+  });
+}
+
+/** Rows of fields a step's block needs (the cell packing of stepBlock, before any label wraps). */
+function fieldRows(step: StepSpec): number {
+  let rows = step.fields.length ? 1 : 0;
+  let cx = 0;
+  for (const field of step.fields) {
+    const cell = field.type === "text" ? 0.25 : 0.5;
+    if (cx + cell > 1.0001) {
+      rows += 1;
+      cx = 0;
+    }
+    cx += cell;
+  }
+  return rows;
+}
+
+/** The least height a step's block needs: name, instructions, its rows of fields, the sign-off line. */
+const stepMinHeight = (step: StepSpec) => 30 + fieldRows(step) * 9.4 + 14;
+
+/**
+ * Draws the step blocks from `top` down, all the same height: spread over the page when they fit
+ * (at most 92 pt each), else as many as fit per page with the rest on continuation pages, each
+ * headed with the serial and its QR code. Returns every page drawn on.
+ */
+function drawSteps(doc: PDFDocument, first: Writer, view: TravellerView, top: number, f: Fonts): PDFPage[] {
   const bottom = MARGIN;
   const gap = 4;
+  const left = MARGIN;
   const n = view.steps.length;
-  const h = Math.min(92, (y - bottom - gap * (n - 1)) / n);
-  view.steps.forEach((step, i) => {
-    stepBlock(w, step, view.floor.units, y - i * (h + gap), left, width, h);
-  });
-
-  if (view.voidedBy != null) {
-    const text = `VOID - see revision ${view.voidedBy}`;
-    const size = 54;
-    page.drawText(text, {
-      x: pw / 2 - f.bold.widthOfTextAtSize(text, size) / 2.6,
-      y: ph / 2 - 160,
-      size,
-      font: f.bold,
-      color: BLACK,
-      opacity: 0.3,
-      rotate: degrees(35),
-    });
+  const need = Math.max(0, ...view.steps.map(stepMinHeight));
+  const spread = (top - bottom - gap * (n - 1)) / n;
+  const width = first.page.getWidth() - 2 * MARGIN;
+  if (spread >= need || n <= 1) {
+    const h = Math.min(92, spread);
+    view.steps.forEach((step, i) =>
+      stepBlock(first, step, view.floor.units, top - i * (h + gap), left, width, h),
+    );
+    return [first.page];
   }
+  // Continued: a little more than the least, so labels that wrap keep clear of the sign-off line.
+  const h = Math.max(need + 8, 72);
+  const pages = [first.page];
+  let w = first;
+  let y = top;
+  let sheet = 1;
+  for (const step of view.steps) {
+    if (y - h < bottom) {
+      sheet += 1;
+      const page = doc.addPage([first.page.getWidth(), first.page.getHeight()]);
+      pages.push(page);
+      w = new Writer(page, f);
+      y = continuationHeader(w, view, sheet);
+    }
+    stepBlock(w, step, view.floor.units, y, left, width, h);
+    y -= h + gap;
+  }
+  return pages;
+}
+
+/** The head of a continuation page: whose traveller it is, with the serial's QR code. Returns where steps start. */
+function continuationHeader(w: Writer, view: TravellerView, sheet: number): number {
+  const width = w.page.getWidth() - 2 * MARGIN;
+  const y = w.page.getHeight() - MARGIN;
+  const qr = 54;
+  drawQr(w.page, view.serialQrText, MARGIN + width - qr, y - qr, qr);
+  w.text(
+    `${view.shop.name} · TRAVELLER${view.retube ? " · RE-TUBE" : ""} · continued, sheet ${sheet}`,
+    MARGIN,
+    y - 9,
+    9,
+    w.f.bold,
+  );
+  w.text(view.serial, MARGIN, y - 30, 18, w.f.mono);
+  w.text(
+    `Revision ${view.revision} · shaft ${view.shaft.position} of ${view.shaft.count} · order ${view.order.number} · ${view.order.customerName}`,
+    MARGIN,
+    y - 44,
+    9,
+  );
+  w.rule(MARGIN, y - qr - 6, MARGIN + width, 1.2);
+  return y - qr - 14;
 }
 
 /** One page per shaft, in the order given. */

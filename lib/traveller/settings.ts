@@ -16,6 +16,9 @@ export const STEP_KINDS = [
   "final-inspection",
   "dispatch",
   "sign-off",
+  // Re-tube / repair orders only (lib/retube/steps.ts puts them before the routing).
+  "teardown",
+  "inspection",
 ] as const;
 export type StepKind = (typeof STEP_KINDS)[number];
 

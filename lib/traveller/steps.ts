@@ -7,6 +7,8 @@
 import type { EvaluationReport } from "@/lib/driveline/report";
 import type { FloorSettings, RoutingStep, StepKind } from "./settings";
 import type { FloorQuantity } from "./units";
+import { retubeCutLengthMm, type RepairIntake } from "@/lib/retube/intake";
+import { inspectionFields, teardownFields, withRetubeSteps } from "@/lib/retube/steps";
 
 /** A numeric limit in SI. `min`/`max` bound the value; for a `nominal` the tolerance is ±. */
 export interface NumericLimit {
@@ -29,8 +31,8 @@ export type FieldSpec =
       /** Runout only: where to read it, mm from the front weld. */
       stationMm?: number;
     }
-  /** Must be confirmed (yes); "no" holds the step. */
-  | { key: string; label: string; type: "confirm" }
+  /** Must be confirmed (yes); "no" holds the step (with the text field `reasonKey` names as the reason). */
+  | { key: string; label: string; type: "confirm"; reasonKey?: string }
   /** Balance weights added: a list of { plane, mass (g), angleDeg }. */
   | { key: string; label: string; type: "weights" };
 
@@ -57,6 +59,8 @@ export interface StepContext {
   report: EvaluationReport;
   fulfilment: "pickup" | "ship";
   floor: FloorSettings;
+  /** A re-tube's intake (lib/retube/intake.ts); absent or null for a new shaft. */
+  repair?: Pick<RepairIntake, "weldToWeldMm" | "parts"> | null;
 }
 
 const tol = (nominal: number, plusMinus: number, source: string): NumericLimit => ({
@@ -85,13 +89,18 @@ export function tubeCutLengthMm(report: EvaluationReport): number {
   return report.cutLengthMm ?? report.tube.tubeLengthMm;
 }
 
+/** The cut length for this shaft: the design's, or a re-tube's weld-to-weld (lib/retube/intake.ts). */
+export function cutLengthFor(ctx: StepContext): number {
+  return ctx.repair ? retubeCutLengthMm(ctx.repair) : tubeCutLengthMm(ctx.report);
+}
+
 /**
  * Runout stations: near each weld (the inset in from it, at most a quarter of the tube) and
  * mid-span. Shafts at or above the fast-shaft speed get the tighter of the two sets of limits.
  */
 export function runoutStations(ctx: StepContext): { stations: RunoutStation[]; fast: boolean } {
   const { report, floor } = ctx;
-  const length = tubeCutLengthMm(report);
+  const length = cutLengthFor(ctx);
   const inset = Math.min(floor.limits.runoutStationInsetMm.value, length / 4);
   const fast = report.service.maxShaftRpm >= floor.limits.fastShaftRpm.value;
   const ends = fast
@@ -160,9 +169,11 @@ function fieldsFor(step: RoutingStep, ctx: StepContext): FieldSpec[] {
           type: "number",
           quantity: "length",
           limit: tol(
-            tubeCutLengthMm(report),
+            cutLengthFor(ctx),
             floor.limits.cutLengthToleranceMm.value,
-            floor.limits.cutLengthToleranceMm.source,
+            ctx.repair
+              ? `re-tube: the customer's weld-to-weld; ${floor.limits.cutLengthToleranceMm.source}`
+              : floor.limits.cutLengthToleranceMm.source,
           ),
         },
       ];
@@ -236,12 +247,17 @@ function fieldsFor(step: RoutingStep, ctx: StepContext): FieldSpec[] {
         : [{ key: "pickedUpBy", label: "Picked up by", type: "text" }];
     case "sign-off":
       return [];
+    case "teardown":
+      return teardownFields(ctx);
+    case "inspection":
+      return inspectionFields(ctx);
   }
 }
 
 /** The record sheet of every step of the routing, in order. */
 export function deriveSteps(ctx: StepContext): StepSpec[] {
-  return ctx.floor.routing.map((step, i) => ({
+  const routing = ctx.repair ? withRetubeSteps(ctx.floor.routing) : ctx.floor.routing;
+  return routing.map((step, i) => ({
     position: i + 1,
     code: step.code,
     kind: step.kind,

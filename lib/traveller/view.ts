@@ -49,6 +49,8 @@ export interface TravellerView {
   report: EvaluationReport;
   /** Failed checks an owner accepted for this shaft; none for a shaft that passed. */
   acceptedExceptions: AcceptedException[];
+  /** A re-tube of the customer's shaft: the counter's weld-to-weld and the parts reused (with their notes). */
+  retube?: { weldToWeldMm: number; reused: string[] } | null;
   steps: TravellerStep[];
 }
 

@@ -54,6 +54,11 @@ export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/de
           </>
         }
       />
+      <p className="no-print mb-3 text-sm text-ink-soft" data-testid="retube-hint">
+        <strong>Re-tube or repair?</strong> Build the shaft as usual, with the joint-centre length measured on
+        the customer&apos;s shaft (front cross centre to rear cross centre). The quote then asks for the
+        weld-to-weld and the parts reused.
+      </p>
       <CounterBuilder
         key={draft?.id ?? "new"}
         catalogue={shop.catalogue}

@@ -7,6 +7,9 @@ import { quoteForDesigns } from "@/lib/orders/quote-page";
 import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
 import { QuoteView } from "@/components/orders/quote-view";
+import { getShopEngineering } from "@/lib/shop/config";
+import type { RepairIntake } from "@/lib/retube/intake";
+import { RetubeIntake } from "./_components/retube-intake";
 
 export const metadata: Metadata = { title: "Phone order quote" };
 
@@ -15,10 +18,13 @@ export default async function CounterQuotePage({ searchParams }: PageProps<"/des
   const { design, customer } = await searchParams;
   const designIds = (Array.isArray(design) ? design : design ? [design] : []).filter(isUuid);
   if (designIds.length === 0 || !isUuid(customer)) notFound();
-  const data = await quoteForDesigns(user, designIds, customer).catch((e: unknown) => {
-    if (e instanceof AppError && e.code === "not_found") notFound();
-    throw e;
-  });
+  const [data, { floor }] = await Promise.all([
+    quoteForDesigns(user, designIds, customer).catch((e: unknown) => {
+      if (e instanceof AppError && e.code === "not_found") notFound();
+      throw e;
+    }),
+    getShopEngineering(),
+  ]);
   return (
     <>
       <PageHeader
@@ -33,6 +39,28 @@ export default async function CounterQuotePage({ searchParams }: PageProps<"/des
           </Link>
         }
       />
+      <div className="mb-6 space-y-4">
+        {data.shafts.map((s, i) => (
+          <RetubeIntake
+            key={s.id}
+            designId={s.id}
+            shaftName={s.name}
+            job={s.retube ? "retube" : "new"}
+            initial={
+              s.retube
+                ? {
+                    weldToWeldMm: s.retube.weldToWeldMm,
+                    parts: Object.fromEntries(
+                      s.retube.parts.map((p) => [p.part, { reuse: p.reuse, note: p.note }]),
+                    ) as RepairIntake["parts"],
+                  }
+                : null
+            }
+            geometry={data.retubeGeometries[i]!}
+            units={floor.units}
+          />
+        ))}
+      </div>
       <QuoteView
         data={data}
         counter

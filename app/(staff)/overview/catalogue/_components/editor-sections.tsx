@@ -121,6 +121,12 @@ export function PolicySection({ currency }: { currency: string }) {
       <div className="grid gap-4 card p-5 sm:grid-cols-2 lg:grid-cols-4">
         <NumberInput name="priceBook.labourPerShaftCents" label="Labour per shaft" money visibleLabel />
         <NumberInput name="priceBook.balancingPerShaftCents" label="Balancing per shaft" money visibleLabel />
+        <NumberInput
+          name="priceBook.teardownPerShaftCents"
+          label="Re-tube teardown and inspection"
+          money
+          visibleLabel
+        />
         <NumberInput name="priceBook.shippingCents" label="Shipping per shaft" money visibleLabel />
         <NumberInput name="priceBook.taxRatePercent" label="Tax (%)" visibleLabel />
         <NumberInput
@@ -917,6 +923,8 @@ const STEP_KIND_LABELS: Record<(typeof STEP_KINDS)[number], string> = {
   "final-inspection": "Final inspection",
   dispatch: "Dispatch",
   "sign-off": "Sign-off",
+  teardown: "Teardown (re-tube)",
+  inspection: "Inspect reused parts (re-tube)",
 };
 
 function RoutingRow({
