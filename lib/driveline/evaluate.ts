@@ -44,7 +44,7 @@ import {
   outputAccelerationCheck,
   serviceChecks,
   speedBasisInWords,
-  useLimits,
+  limitsForUse,
   weldZoneCheck,
   weldZoneTorsion,
 } from "./load-checks";
@@ -256,7 +256,7 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   const rpm = service.maxShaftRpm;
   const omega = rpmToRadS(rpm);
   const lengthMm = design.lengthMm;
-  const use = useLimits(design, settings, options?.use);
+  const use = limitsForUse(design, settings, options?.use);
   const loads = serviceLoads(design, use.factors);
   const torqueNm = loads.peakShaftTorqueNm;
 

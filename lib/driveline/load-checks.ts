@@ -36,7 +36,7 @@ export interface UseLimits {
 }
 
 /** The use (the design's, else the caller's, else street) and the limits it selects. */
-export function useLimits(design: DesignFile, settings: ShopSettings, fallback?: ShaftUse): UseLimits {
+export function limitsForUse(design: DesignFile, settings: ShopSettings, fallback?: ShaftUse): UseLimits {
   const use: ShaftUse = design.use ?? fallback ?? "street";
   const factor = serviceFactorFor(use, settings);
   const adhesion = adhesionFor(use, settings);
