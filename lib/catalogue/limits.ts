@@ -48,7 +48,7 @@ export const LIMIT_META: Record<SettingKey, LimitMeta> = {
     max: 20,
   },
   maxCriticalSpeedRatio: {
-    label: "Largest service / critical speed",
+    label: "Largest service / critical speed, street",
     unit: "",
     min: 0,
     minExclusive: true,
@@ -97,6 +97,52 @@ export const LIMIT_META: Record<SettingKey, LimitMeta> = {
   runoutCentreMm: { label: "Runout at the centre, TIR", unit: "mm", min: 0, minExclusive: true, max: 10 },
   phasingToleranceDeg: { label: "Phasing tolerance, ±", unit: "°", min: 0, minExclusive: true, max: 10 },
   centreJointAngleDeg: { label: "Centre-bearing joint angle", unit: "°", min: 0, max: 10 },
+  // A service factor below 1 would lower the worst-case torque; 5 is a typo guard.
+  serviceFactorStreet: { label: "Service factor, street", unit: "", min: 1, max: 5 },
+  serviceFactorTowing: { label: "Service factor, towing", unit: "", min: 1, max: 5 },
+  serviceFactorOffRoad: { label: "Service factor, off-road", unit: "", min: 1, max: 5 },
+  serviceFactorRace: { label: "Service factor, race", unit: "", min: 1, max: 5 },
+  serviceFactorIndustrial: { label: "Service factor, industrial", unit: "", min: 1, max: 5 },
+  adhesionStreet: { label: "Tyre–road adhesion, street", unit: "", min: 0, minExclusive: true, max: 2 },
+  adhesionTowing: { label: "Tyre–road adhesion, towing", unit: "", min: 0, minExclusive: true, max: 2 },
+  adhesionOffRoad: { label: "Tyre–road adhesion, off-road", unit: "", min: 0, minExclusive: true, max: 2 },
+  adhesionRace: { label: "Tyre–road adhesion, race", unit: "", min: 0, minExclusive: true, max: 2 },
+  adhesionIndustrial: {
+    label: "Tyre–road adhesion, industrial",
+    unit: "",
+    min: 0,
+    minExclusive: true,
+    max: 2,
+  },
+  maxCriticalSpeedRatioTowing: {
+    label: "Largest service / critical speed, towing",
+    unit: "",
+    min: 0,
+    minExclusive: true,
+    max: 1,
+  },
+  maxCriticalSpeedRatioOffRoad: {
+    label: "Largest service / critical speed, off-road",
+    unit: "",
+    min: 0,
+    minExclusive: true,
+    max: 1,
+  },
+  maxCriticalSpeedRatioRace: {
+    label: "Largest service / critical speed, race",
+    unit: "",
+    min: 0,
+    minExclusive: true,
+    max: 1,
+  },
+  maxCriticalSpeedRatioIndustrial: {
+    label: "Largest service / critical speed, industrial",
+    unit: "",
+    min: 0,
+    minExclusive: true,
+    max: 1,
+  },
+  minWeldZoneSafetyFactor: { label: "Smallest weld-zone torsion safety factor", unit: "", min: 1, max: 10 },
 };
 
 export const FLOOR_LIMIT_META: Record<FloorLimitKey, LimitMeta> = {

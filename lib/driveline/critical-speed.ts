@@ -35,3 +35,14 @@ export function spanForCriticalSpeedMm(input: Omit<CriticalSpeedInput, "spanMm">
 export function criticalSpeedHandbookRpm(odIn: number, idIn: number, spanIn: number): number {
   return (4.76e6 * Math.sqrt(odIn * odIn + idIn * idIn)) / (spanIn * spanIn);
 }
+
+/**
+ * The span checked for whirl: the longest the shaft gets. A slip shaft is longest at full droop
+ * (lengthMm + slip.droopExtensionMm); otherwise the installed length.
+ */
+export function criticalSpeedLengthMm(
+  lengthMm: number,
+  slip?: { readonly droopExtensionMm?: number | null } | null,
+): number {
+  return lengthMm + (slip?.droopExtensionMm ?? 0);
+}

@@ -40,8 +40,18 @@ import {
 import { parseDesign, type DesignFile, type FieldIssue } from "./schema";
 import { tubeMassKg } from "./section";
 import { slipChecks, slipReport } from "./slip";
-import { defaultSettings, type ShopSettings } from "./settings";
-import { designShaftTorqueNm, serviceSpeed } from "./speed";
+import {
+  criticalSpeedCheck,
+  jointContinuousChecks,
+  outputAccelerationCheck,
+  serviceChecks,
+  speedBasisInWords,
+  limitsForUse,
+  weldZoneCheck,
+  weldZoneTorsion,
+} from "./load-checks";
+import { defaultSettings, type ShaftUse, type ShopSettings } from "./settings";
+import { serviceLoads, serviceSpeed } from "./speed";
 import { torsionShearStressMPa } from "./torsion";
 import { rankTubes, type TubeCandidate, type TubeSelection } from "./tube-selection";
 
@@ -54,6 +64,8 @@ export interface EvaluateOptions {
   readonly alternatives?: boolean;
   /** How a tube is picked when the design leaves it to Yokeline (default: the lightest that passes). */
   readonly tubePreference?: TubePreference;
+  /** The use when the design file gives none (e.g. the saved design's application); default street. */
+  readonly use?: ShaftUse;
 }
 
 /** Among the tubes that pass: the lightest (engineering's usual preference) or the cheapest (a shop's quote). */
@@ -160,7 +172,15 @@ function jointChecks(
 
 interface ResolvedTube {
   report: TubeReport;
-  material: Pick<Material, "elasticModulusGPa" | "densityKgM3" | "shearYieldMPa" | "weldFamily">;
+  material: Pick<
+    Material,
+    | "elasticModulusGPa"
+    | "densityKgM3"
+    | "shearYieldMPa"
+    | "weldFamily"
+    | "weldZoneTensileYieldMPa"
+    | "weldZoneSource"
+  >;
   maxLengthMm: number | null;
 }
 
@@ -182,8 +202,16 @@ function resolveMaterial(
       },
     ]);
   }
-  // A one-off material welds like steel unless the catalogue knows better.
-  return { elasticModulusGPa, densityKgM3, shearYieldMPa, weldFamily: base?.weldFamily ?? "steel" };
+  // A one-off material welds like steel unless the catalogue knows better; its weld zone is unknown.
+  return {
+    elasticModulusGPa,
+    densityKgM3,
+    shearYieldMPa,
+    weldFamily: base?.weldFamily ?? "steel",
+    ...(base?.weldZoneTensileYieldMPa != null
+      ? { weldZoneTensileYieldMPa: base.weldZoneTensileYieldMPa, weldZoneSource: base.weldZoneSource ?? "" }
+      : {}),
+  };
 }
 
 function endReport(f: EndFitting, origin: EndReport["origin"], index: CatalogueIndex): EndReport {
@@ -229,8 +257,10 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   }
   const rpm = service.maxShaftRpm;
   const omega = rpmToRadS(rpm);
-  const torqueNm = designShaftTorqueNm(design.torque);
   const lengthMm = design.lengthMm;
+  const use = limitsForUse(design, settings, options?.use);
+  const loads = serviceLoads(design, use.factors);
+  const torqueNm = loads.peakShaftTorqueNm;
 
   // Ends named by the design (fixed before the tube is picked: the tube must fit them).
   const namedEnds: (EndFitting | null)[] = POSITIONS2.map((p) => {
@@ -254,13 +284,15 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   let selection: TubeSelection | null = null;
   const rank = (): TubeSelection =>
     rankTubes({
-      spanMm: lengthMm,
+      spanMm: use.criticalSpeedLengthMm,
       tubeLengthMm: lengthMm - seatAllowanceMm,
       maxShaftRpm: rpm,
       peakShaftTorqueNm: torqueNm,
       fittings: namedEnds,
       catalogue,
       settings,
+      criticalSpeedRatioLimit: use.criticalSpeedRatioLimit,
+      warnCriticalSpeedRatio: use.criticalSpeedWarn.value,
     });
   let tubeSpec: {
     id: string | null;
@@ -355,8 +387,10 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   const phasing0 = phasingResult(chain, response);
   const inPhase = chain.phaseIndexRad[0] === 0 ? response : chainResponse(makeChain(shafts, [0]));
   let asSpecified: EvaluationReport["phasing"]["asSpecified"];
+  let outputResponse = response;
   if (design.phaseIndexDeg != null) {
     const r = chainResponse(makeChain(shafts, [design.phaseIndexDeg * RAD]));
+    outputResponse = r;
     asSpecified = {
       phaseIndexDeg: design.phaseIndexDeg,
       outputSpeedVariationPct: r.outputPeakToPeak * 100,
@@ -381,19 +415,22 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   const nc = criticalSpeedRpm({
     odMm: tube.odMm,
     wallMm: tube.wallMm,
-    spanMm: lengthMm,
+    spanMm: use.criticalSpeedLengthMm,
     elasticModulusGPa: tube.elasticModulusGPa,
     densityKgM3: tube.densityKgM3,
   });
   const criticalSpeedRatio = rpm / nc;
   const shearStressMPa = torsionShearStressMPa(tube, torqueNm);
   const safetyFactor = tube.shearYieldMPa / shearStressMPa;
+  const weldZone = weldZoneTorsion(material, shearStressMPa);
+  const outputPeakAngularAccelerationRadS2 = omega * omega * outputResponse.outputPeakRatioDerivative;
   const grade = design.balanceGradeMmS ?? settings.balanceGradeMmS.value;
   const gradeSource = design.balanceGradeMmS != null ? "design file" : settings.balanceGradeMmS.source;
   const rotorMassKg = massKg + (front?.massKg ?? 0) + (rear?.massKg ?? 0);
   const uPer = permissibleUnbalanceGmm(grade, rotorMassKg, rpm);
 
   const checks: Check[] = [];
+  checks.push(...serviceChecks(service, loads, use.use, design));
   checks.push(...jointChecks(joints, settings, rpm, index));
   const diff = Math.abs(joints[0]!.workingAngleDeg - joints[1]!.workingAngleDeg);
   checks.push(
@@ -418,6 +455,7 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
       overStatus: "warn",
     }),
   );
+  checks.push(outputAccelerationCheck(outputPeakAngularAccelerationRadS2, eqAngle, rpm, settings));
   if (asSpecified) {
     const off = Math.abs(((asSpecified.phaseIndexDeg - phasing0.phaseIndexDeg + 270) % 180) - 90);
     checks.push(
@@ -431,18 +469,7 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
       }),
     );
   }
-  checks.push(
-    checkAtMost({
-      id: "critical-speed",
-      what: `Critical-speed ratio (${Math.round(rpm)} rpm service / ${Math.round(nc)} rpm critical)`,
-      value: criticalSpeedRatio,
-      unit: "",
-      limit: settings.maxCriticalSpeedRatio,
-      digits: 3,
-      warnAbove: settings.warnCriticalSpeedRatio.value,
-      warnSource: settings.warnCriticalSpeedRatio.source,
-    }),
-  );
+  checks.push(criticalSpeedCheck(criticalSpeedRatio, rpm, nc, lengthMm, use));
   checks.push(
     checkAtLeast({
       id: "torsion",
@@ -452,8 +479,10 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
       limit: settings.minTorsionSafetyFactor,
     }),
   );
+  checks.push(weldZoneCheck(weldZone, safetyFactor, shearStressMPa, torqueNm, tube, settings));
   checks.push(...endChecks(ends, namedEnds, tube, material.weldFamily, torqueNm, index));
   checks.push(...fit.checks);
+  checks.push(...jointContinuousChecks(ends, loads, index));
   checks.push(...lengthChecks(lengthMm, cutLengthMm, tubeLengthMm, catalogueTube?.maxLengthMm ?? null, tube));
   const slip = design.slip ? slipReport(design, settings, fit.slipYoke) : null;
   if (slip) checks.push(...slipChecks(slip, settings));
@@ -469,7 +498,7 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
 
   // Two-piece proposal when no single tube passes critical speed at this length.
   let twoPiece: TwoPieceProposal | null = null;
-  if (criticalSpeedRatio > settings.maxCriticalSpeedRatio.value) {
+  if (criticalSpeedRatio > use.criticalSpeedRatioLimit.value) {
     selection ??= rank();
     if (!selection.anyPassesCriticalSpeed) {
       twoPiece = proposeTwoPiece(u, lengthMm, rpm, torqueNm, catalogue, settings, index);
@@ -491,6 +520,17 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
       governedBy: service.governedBy,
       vehicleRpm: service.vehicleRpm,
       engineRpm: service.engineRpm,
+      speedBasis: speedBasisInWords(service, design),
+      use: use.use,
+      engineTorqueAtShaftNm: loads.engineTorqueAtShaftNm,
+      wheelSlipTorqueNm: loads.wheelSlipTorqueNm,
+      adhesion: loads.adhesion,
+      adhesionSource: loads.adhesionSource,
+      torqueGovernedBy: loads.torqueGovernedBy,
+      serviceFactor: loads.serviceFactor,
+      serviceFactorSource: loads.serviceFactorSource,
+      runningTorqueNm: loads.runningTorqueNm,
+      runningTorqueBasis: loads.runningTorqueBasis,
     },
     lengthMm,
     joints,
@@ -505,10 +545,20 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
       ...(asSpecified ? { asSpecified } : {}),
     },
     peakAngularAccelerationRadS2,
+    outputPeakAngularAccelerationRadS2,
     tube,
     criticalSpeedRpm: nc,
     criticalSpeedRatio,
-    torsion: { shearStressMPa, shearYieldMPa: tube.shearYieldMPa, safetyFactor },
+    criticalSpeedLengthMm: use.criticalSpeedLengthMm,
+    criticalSpeedRatioLimit: use.criticalSpeedRatioLimit.value,
+    torsion: {
+      shearStressMPa,
+      shearYieldMPa: tube.shearYieldMPa,
+      safetyFactor,
+      weldZoneShearYieldMPa: weldZone.shearYieldMPa,
+      weldZoneSafetyFactor: weldZone.safetyFactor,
+      weldZoneSource: weldZone.source,
+    },
     balance: {
       gradeMmS: grade,
       speedRpm: rpm,

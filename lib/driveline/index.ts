@@ -71,7 +71,18 @@ export type {
   FlangePattern,
   CapRetention,
 } from "./catalogue/types";
-export { defaultSettings, resolveSettings, type ShopSettings, type Limit, type SettingKey } from "./settings";
+export {
+  defaultSettings,
+  resolveSettings,
+  serviceFactorFor,
+  adhesionFor,
+  criticalSpeedRatioLimitFor,
+  criticalSpeedWarnFor,
+  type ShopSettings,
+  type Limit,
+  type SettingKey,
+  type ShaftUse,
+} from "./settings";
 export * from "./units";
 export { shaftDirection, angleBetweenRad, phaseIndexRad, type Vec3, type ShaftAngles } from "./geometry";
 export {
@@ -91,9 +102,22 @@ export {
   bestPhaseIndicesRad,
   type Chain,
 } from "./phasing";
-export { criticalSpeedRpm, criticalSpeedHandbookRpm, spanForCriticalSpeedMm } from "./critical-speed";
-export { torsionShearStressMPa, shearYieldFromTensileMPa } from "./torsion";
-export { serviceSpeed, shaftRpmAtRoadSpeed, designShaftTorqueNm } from "./speed";
+export {
+  criticalSpeedRpm,
+  criticalSpeedHandbookRpm,
+  spanForCriticalSpeedMm,
+  criticalSpeedLengthMm,
+} from "./critical-speed";
+export { torsionShearStressMPa, shearYieldFromTensileMPa, weldZoneShearYieldMPa } from "./torsion";
+export {
+  serviceSpeed,
+  shaftRpmAtRoadSpeed,
+  designShaftTorqueNm,
+  wheelSlipTorqueNm,
+  serviceLoads,
+  STANDARD_GRAVITY,
+  type ServiceLoads,
+} from "./speed";
 export { permissibleUnbalanceGmm, unbalancePerPlaneGmm } from "./balance";
 export {
   triageVibration,

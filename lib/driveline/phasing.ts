@@ -28,6 +28,8 @@ export interface ChainResponse {
   readonly outputMinRatio: number;
   /** Peak |dRⱼ/dθ| of each intermediate shaft j (times ω² → rad/s²). */
   readonly tubePeakRatioDerivative: readonly number[];
+  /** Peak |dR/dθ| of the output (last) shaft: the net output's acceleration over ω². */
+  readonly outputPeakRatioDerivative: number;
 }
 
 const SAMPLES_PER_HALF_TURN = 90;
@@ -142,6 +144,7 @@ function refinePeak(y: Float64Array, k: number): number {
 
 const STRIDE = 13;
 const scratchRatio = new Float64Array(SAMPLES_PER_HALF_TURN);
+const scratchOutputDerivative = new Float64Array(SAMPLES_PER_HALF_TURN);
 const scratchDerivative: Float64Array[] = [];
 
 /**
@@ -219,6 +222,7 @@ export function chainResponse(chain: Chain): ChainResponse {
       ez = cd * fz + sd * (bx * fy - by * fx);
     }
     scratchRatio[k] = ratio;
+    scratchOutputDerivative[k] = deriv < 0 ? -deriv : deriv;
   }
   let kMax = 0;
   let kMin = 0;
@@ -235,7 +239,12 @@ export function chainResponse(chain: Chain): ChainResponse {
     for (let k = 1; k < SAMPLES_PER_HALF_TURN; k++) if (d[k]! > d[kd]!) kd = k;
     tubePeakRatioDerivative.push(refinePeak(d, kd));
   }
+  let ko = 0;
+  for (let k = 1; k < SAMPLES_PER_HALF_TURN; k++)
+    if (scratchOutputDerivative[k]! > scratchOutputDerivative[ko]!) ko = k;
+  const outputDerivative = refinePeak(scratchOutputDerivative, ko);
   return {
+    outputPeakRatioDerivative: outputDerivative > 1e-12 ? outputDerivative : 0,
     // Below 1e-12 the spread is rounding noise of an exact cancellation.
     outputPeakToPeak: outputMaxRatio - outputMinRatio > 1e-12 ? outputMaxRatio - outputMinRatio : 0,
     outputMaxRatio,

@@ -159,23 +159,53 @@ export interface EvaluationReport {
   readonly designName: string | null;
   readonly service: {
     readonly maxShaftRpm: number;
+    /** Design torque: min(engine-based, wheel-slip when known) × serviceFactor. Torsion and joint checks use it. */
     readonly peakShaftTorqueNm: number;
     readonly governedBy: "maxShaftRpm" | "vehicle" | "engine";
     readonly vehicleRpm: number | null;
     readonly engineRpm: number | null;
+    /** Which speed path governs, in words (also the `service-speed` check's message). */
+    readonly speedBasis: string;
+    /** The design file's use (default street). */
+    readonly use: "street" | "towing" | "off-road" | "race" | "industrial";
+    /** engine × first gear × transfer-case low × converter stall. */
+    readonly engineTorqueAtShaftNm: number;
+    /** m·g·μ·r ÷ axle ratio; null without traction or an axle ratio. */
+    readonly wheelSlipTorqueNm: number | null;
+    /** Adhesion used for the wheel-slip torque and its source (null when not computed). */
+    readonly adhesion: number | null;
+    readonly adhesionSource: string | null;
+    /** Which of the two set the design torque before the service factor. */
+    readonly torqueGovernedBy: "engine" | "wheel-slip";
+    readonly serviceFactor: number;
+    readonly serviceFactorSource: string;
+    /** Engine peak torque through top gear (transfer case high 1:1), or the machine's rated torque. */
+    readonly runningTorqueNm: number;
+    readonly runningTorqueBasis: "rated" | "top-gear" | "assumed-direct";
   };
   readonly lengthMm: number;
   readonly joints: readonly JointReport[];
   readonly phasing: PhasingReport;
   /** Largest angular acceleration of the tube over one turn, input constant at service rpm. */
   readonly peakAngularAccelerationRadS2: number;
+  /** Largest angular acceleration of the net output (pinion) over one turn: what the residual angle leaves. */
+  readonly outputPeakAngularAccelerationRadS2: number;
   readonly tube: TubeReport;
   readonly criticalSpeedRpm: number;
   readonly criticalSpeedRatio: number;
+  /** The span used for `criticalSpeedRpm`: lengthMm + slip droop (the longest the shaft gets). */
+  readonly criticalSpeedLengthMm: number;
+  /** The largest service / critical ratio for the design's use. */
+  readonly criticalSpeedRatioLimit: number;
   readonly torsion: {
     readonly shearStressMPa: number;
     readonly shearYieldMPa: number;
     readonly safetyFactor: number;
+    /** Shear yield of the weld-affected zone (catalogue weld-zone yield / √3); null when the material gives none. */
+    readonly weldZoneShearYieldMPa: number | null;
+    readonly weldZoneSafetyFactor: number | null;
+    /** Where the weld-zone figure comes from. */
+    readonly weldZoneSource: string | null;
   };
   readonly balance: {
     readonly gradeMmS: number;

@@ -397,6 +397,24 @@ const materialEntrySchema = object({
   shearYieldMPa: bounded(PHYSICAL_MAX.shearYieldMPa, "MPa"),
   weldFamily: z.enum(["steel", "aluminium", "composite"], { error: "must be steel, aluminium or composite" }),
   source: sourceText(SOURCE_REQUIRED),
+  condition: z
+    .string({ error: "must be text" })
+    .max(200, { error: "must be at most 200 characters" })
+    .optional(),
+  weldZoneTensileYieldMPa: bounded(PHYSICAL_MAX.shearYieldMPa, "MPa").optional(),
+  weldZoneSource: z.string({ error: "must be text" }).optional(),
+}).check((ctx) => {
+  const m = ctx.value;
+  if (m.weldZoneTensileYieldMPa == null) return;
+  if (!m.weldZoneSource?.trim())
+    ctx.issues.push({ code: "custom", input: m, path: ["weldZoneSource"], message: SOURCE_REQUIRED });
+  if (m.weldZoneTensileYieldMPa > m.tensileYieldMPa)
+    ctx.issues.push({
+      code: "custom",
+      input: m,
+      path: ["weldZoneTensileYieldMPa"],
+      message: "must not be above the parent metal's yield (welding does not strengthen the tube)",
+    });
 });
 
 /** Largest single price the catalogue takes: $1,000,000 in cents (a typo guard, not a policy). */
@@ -493,6 +511,7 @@ const jointSeriesEntrySchema = object({
   id: id(),
   name: name(),
   torqueRatingNm: bounded(PHYSICAL_MAX.torqueNm, "N·m"),
+  continuousTorqueNm: bounded(PHYSICAL_MAX.torqueNm, "N·m").optional(),
   maxWorkingAngleDeg: bounded(90, "°"),
   massKg: bounded(1_000, "kg"),
   priceCents: cents(),
@@ -531,6 +550,14 @@ const jointSeriesEntrySchema = object({
           path: [key],
           message: "must be given for a conversion cross (the caps on its own side)",
         });
+  }
+  if (j.continuousTorqueNm != null && j.continuousTorqueNm > j.torqueRatingNm) {
+    ctx.issues.push({
+      code: "custom",
+      input: j,
+      path: ["continuousTorqueNm"],
+      message: "must not be above the peak torque rating",
+    });
   }
 });
 

@@ -44,10 +44,120 @@ export const defaultSettings = {
   runoutCentreMm: { value: 0.38, source: `${SHOP} (0.015 in TIR at the centre)` },
   phasingToleranceDeg: { value: 1.0, source: `${SHOP} (rear yoke within ±1° of the index)` },
   centreJointAngleDeg: { value: 1.0, source: `${SHOP} (centre-bearing joint kept off zero)` },
+  // Loads per use (design-file.md Additions): the design torque is multiplied by the use's factor.
+  serviceFactorStreet: {
+    value: 1.0,
+    source: "Yokeline default: the design torque already is the worst-case launch",
+  },
+  serviceFactorTowing: {
+    value: 1.25,
+    source: "from memory (no published source found): sustained heavy pulls and trailer snatch",
+  },
+  serviceFactorOffRoad: {
+    value: 1.5,
+    source:
+      "from memory (no published source found): wheel hop and wheels regaining grip after leaving the ground",
+  },
+  serviceFactorRace: {
+    value: 2.0,
+    source:
+      "from memory (no published source found): a dropped clutch on a sticky tyre can about double the launch torque",
+  },
+  serviceFactorIndustrial: {
+    value: 1.5,
+    source:
+      "from memory: industrial cardan-shaft makers' selection tables put moderate-shock machinery near 1.5; use the machine's own factor",
+  },
+  // Tyre–road adhesion for the wheel-slip torque when the design gives none.
+  adhesionStreet: {
+    value: 0.85,
+    source:
+      "from memory: peak tyre–road coefficient on dry asphalt 0.8–0.9 (vehicle dynamics texts, e.g. Gillespie)",
+  },
+  adhesionTowing: { value: 0.85, source: "from memory: road tyres on dry asphalt, as street" },
+  adhesionOffRoad: {
+    value: 1.0,
+    source: "from memory (no published source found): soft off-road tyres on rock can reach 1.0 and more",
+  },
+  adhesionRace: {
+    value: 1.5,
+    source: "from memory (no published source found): racing slicks on a prepared surface, 1.3–1.8",
+  },
+  adhesionIndustrial: { value: 0.85, source: "from memory: road tyres on dry asphalt, as street" },
+  // Critical-speed ratio per use; street is `maxCriticalSpeedRatio` above.
+  maxCriticalSpeedRatioTowing: { value: 0.75, source: `${SHOP} (road shafts; no standard gives a number)` },
+  maxCriticalSpeedRatioOffRoad: { value: 0.75, source: `${SHOP} (road shafts; no standard gives a number)` },
+  maxCriticalSpeedRatioRace: {
+    value: 0.7,
+    source:
+      "Yokeline default (from memory, no published source): sustained running at top speed, more margin",
+  },
+  maxCriticalSpeedRatioIndustrial: {
+    value: 0.7,
+    source:
+      "from memory: machinery practice keeps running speeds 20–30 % clear of a critical speed (e.g. API 684 separation margins)",
+  },
+  /** Torsion at the weld-affected zone: the zone must not yield at the design torque. */
+  minWeldZoneSafetyFactor: {
+    value: 1.0,
+    source:
+      "Yokeline default: no yield at the design (limit) torque on the weld zone's minimum yield, as airworthiness rules ask of limit loads (14 CFR 25.305(a), from memory); the parent metal keeps its own factor",
+  },
 } as const satisfies Record<string, Limit>;
 
 export type SettingKey = keyof typeof defaultSettings;
 export type ShopSettings = { readonly [K in SettingKey]: Limit };
+
+/** What the shaft is used for (the design file's `use`; default street). */
+export type ShaftUse = "street" | "towing" | "off-road" | "race" | "industrial";
+
+/** Each use's setting keys: service factor, default adhesion, critical-speed ratio limit. */
+const USE_KEYS: Record<ShaftUse, { factor: SettingKey; adhesion: SettingKey; criticalRatio: SettingKey }> = {
+  street: {
+    factor: "serviceFactorStreet",
+    adhesion: "adhesionStreet",
+    criticalRatio: "maxCriticalSpeedRatio",
+  },
+  towing: {
+    factor: "serviceFactorTowing",
+    adhesion: "adhesionTowing",
+    criticalRatio: "maxCriticalSpeedRatioTowing",
+  },
+  "off-road": {
+    factor: "serviceFactorOffRoad",
+    adhesion: "adhesionOffRoad",
+    criticalRatio: "maxCriticalSpeedRatioOffRoad",
+  },
+  race: { factor: "serviceFactorRace", adhesion: "adhesionRace", criticalRatio: "maxCriticalSpeedRatioRace" },
+  industrial: {
+    factor: "serviceFactorIndustrial",
+    adhesion: "adhesionIndustrial",
+    criticalRatio: "maxCriticalSpeedRatioIndustrial",
+  },
+};
+
+/** The shop's service factor for a use. */
+export const serviceFactorFor = (use: ShaftUse, settings: ShopSettings): Limit =>
+  settings[USE_KEYS[use].factor];
+
+/** The shop's default tyre–road adhesion for a use. */
+export const adhesionFor = (use: ShaftUse, settings: ShopSettings): Limit => settings[USE_KEYS[use].adhesion];
+
+/** The largest service / critical speed ratio for a use (street: `maxCriticalSpeedRatio`). */
+export const criticalSpeedRatioLimitFor = (use: ShaftUse, settings: ShopSettings): Limit =>
+  settings[USE_KEYS[use].criticalRatio];
+
+/**
+ * The warn threshold below a use's critical-speed limit: the shop's warn band scaled with the
+ * limit (street: `warnCriticalSpeedRatio` itself).
+ */
+export function criticalSpeedWarnFor(use: ShaftUse, settings: ShopSettings): Limit {
+  const limit = criticalSpeedRatioLimitFor(use, settings);
+  const w = settings.warnCriticalSpeedRatio;
+  if (use === "street") return w;
+  const value = (w.value / settings.maxCriticalSpeedRatio.value) * limit.value;
+  return { value, source: `${w.source}, scaled to the ${use} limit` };
+}
 
 /**
  * Defaults overlaid with a shop's overrides. A bare number keeps the key but its source

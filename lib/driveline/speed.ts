@@ -59,3 +59,95 @@ export function designShaftTorqueNm(t: TorqueInput): number {
     t.engineTorqueNm * (t.firstGearRatio ?? 1) * (t.transferCaseLowRatio ?? 1) * (t.converterStallRatio ?? 1)
   );
 }
+
+/** Standard gravity, m/s² (CGPM 1901; ISO 80000-3). */
+export const STANDARD_GRAVITY = 9.80665;
+
+/**
+ * Wheel-slip torque at the shaft (design-file.md Additions): the most the tyres can pass before
+ * they spin, back through the axle: m·g·μ·r ÷ axle ratio (N·m; r in m).
+ */
+export function wheelSlipTorqueNm(
+  drivenAxleLoadKg: number,
+  adhesion: number,
+  tireLoadedRadiusMm: number,
+  axleRatio: number,
+): number {
+  return (drivenAxleLoadKg * STANDARD_GRAVITY * adhesion * (tireLoadedRadiusMm / 1000)) / axleRatio;
+}
+
+/** What the shop's settings give for the design's use (see settings.ts). */
+export interface UseFactors {
+  readonly serviceFactor: number;
+  readonly serviceFactorSource: string;
+  readonly adhesion: number;
+  readonly adhesionSource: string;
+}
+
+export interface ServiceLoadInput {
+  readonly torque: TorqueInput & {
+    readonly topGearRatio?: number | null;
+    readonly ratedShaftTorqueNm?: number | null;
+  };
+  readonly speed: { readonly axleRatio?: number | null; readonly topGearRatio?: number | null };
+  readonly traction?: {
+    readonly drivenAxleLoadKg: number;
+    readonly tireLoadedRadiusMm: number;
+    readonly adhesion?: number | null;
+  } | null;
+}
+
+export interface ServiceLoads {
+  /** engine × first gear × transfer-case low × converter stall (each default 1). */
+  readonly engineTorqueAtShaftNm: number;
+  /** Null without `traction` or an axle ratio. */
+  readonly wheelSlipTorqueNm: number | null;
+  /** Adhesion used for the wheel-slip torque (null when not computed) and where it comes from. */
+  readonly adhesion: number | null;
+  readonly adhesionSource: string | null;
+  readonly serviceFactor: number;
+  readonly serviceFactorSource: string;
+  /** min(engine-based, wheel-slip when known) × serviceFactor. */
+  readonly peakShaftTorqueNm: number;
+  /** Which of the two set the design torque before the factor. */
+  readonly torqueGovernedBy: "engine" | "wheel-slip";
+  /** Engine peak torque through top gear (transfer case in high, 1:1), or the machine's rated torque. */
+  readonly runningTorqueNm: number;
+  readonly runningTorqueBasis: "rated" | "top-gear" | "assumed-direct";
+  /** The top-gear ratio used for the running torque (null for a rated torque). */
+  readonly runningTopGearRatio: number | null;
+}
+
+/**
+ * Design and running torque at the shaft. Design torque = min(engine-based, wheel-slip) × the
+ * use's service factor; running torque = engine peak torque × top gear (torque.topGearRatio,
+ * else speed.topGearRatio, else 1 — direct drive, said in the report) × transfer-case high (1),
+ * or the machine's rated shaft torque when given.
+ */
+export function serviceLoads(input: ServiceLoadInput, factors: UseFactors): ServiceLoads {
+  const engine = designShaftTorqueNm(input.torque);
+  const t = input.traction;
+  const axle = input.speed.axleRatio;
+  const adhesion = t ? (t.adhesion ?? factors.adhesion) : null;
+  const slip =
+    t && axle != null && adhesion != null
+      ? wheelSlipTorqueNm(t.drivenAxleLoadKg, adhesion, t.tireLoadedRadiusMm, axle)
+      : null;
+  const governed = slip !== null && slip < engine ? "wheel-slip" : "engine";
+  const base = governed === "wheel-slip" ? slip! : engine;
+  const rated = input.torque.ratedShaftTorqueNm;
+  const top = input.torque.topGearRatio ?? input.speed.topGearRatio ?? null;
+  return {
+    engineTorqueAtShaftNm: engine,
+    wheelSlipTorqueNm: slip,
+    adhesion: slip !== null ? adhesion : null,
+    adhesionSource: slip === null ? null : t?.adhesion != null ? "design file" : factors.adhesionSource,
+    serviceFactor: factors.serviceFactor,
+    serviceFactorSource: factors.serviceFactorSource,
+    peakShaftTorqueNm: base * factors.serviceFactor,
+    torqueGovernedBy: governed,
+    runningTorqueNm: rated ?? input.torque.engineTorqueNm * (top ?? 1),
+    runningTorqueBasis: rated != null ? "rated" : top != null ? "top-gear" : "assumed-direct",
+    runningTopGearRatio: rated != null ? null : (top ?? 1),
+  };
+}

@@ -17,3 +17,13 @@ export const shearYieldFromTensileMPa = (tensileYieldMPa: number): number => ten
 export function torqueAtShearStressNm(tube: TubeSection, shearMPa: number): number {
   return shearMPa / torsionShearStressMPa(tube, 1);
 }
+
+/**
+ * Shear yield of a material's weld-affected zone (τ = S_y,weld/√3, von Mises), or null when the
+ * catalogue gives no weld-zone figure for it.
+ */
+export function weldZoneShearYieldMPa(m: {
+  readonly weldZoneTensileYieldMPa?: number | null;
+}): number | null {
+  return m.weldZoneTensileYieldMPa != null ? shearYieldFromTensileMPa(m.weldZoneTensileYieldMPa) : null;
+}

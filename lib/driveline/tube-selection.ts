@@ -1,14 +1,15 @@
 /**
  * Rank the catalogue's tubes for a span, service speed and torque: every tube that passes
- * critical speed, torsion and stock length, by mass and by cost; the rest with their reasons.
+ * critical speed (at the longest span, with the use's limit), torsion in the parent metal and
+ * in the weld-affected zone, and stock length, by mass and by cost; the rest with their reasons.
  */
 import { defaultCatalogue } from "./catalogue/default";
 import { fittingFitsTube, indexCatalogue, suggestFitting } from "./catalogue/lookup";
 import type { Catalogue, EndFitting, TubeSize } from "./catalogue/types";
 import { criticalSpeedRpm } from "./critical-speed";
 import { tubeMassKg } from "./section";
-import { defaultSettings, type ShopSettings } from "./settings";
-import { torsionShearStressMPa } from "./torsion";
+import { defaultSettings, type Limit, type ShopSettings } from "./settings";
+import { torsionShearStressMPa, weldZoneShearYieldMPa } from "./torsion";
 
 export interface TubeCandidate {
   readonly tubeId: string;
@@ -24,8 +25,10 @@ export interface TubeCandidate {
   readonly speedHeadroomPct: number;
   readonly shearStressMPa: number;
   readonly torsionSafetyFactor: number;
+  /** Weld-zone shear yield / shear stress; null when the material gives no weld-zone figure. */
+  readonly weldZoneSafetyFactor: number | null;
   readonly priceCents: number;
-  /** "warn" when the critical-speed ratio is in the warn band. */
+  /** "warn" when the critical-speed ratio is in the warn band or the weld zone is not known. */
   readonly status: "pass" | "warn";
 }
 
@@ -36,6 +39,7 @@ export interface RejectedTube {
   readonly wallMm: number;
   readonly criticalSpeedRatio: number;
   readonly torsionSafetyFactor: number;
+  readonly weldZoneSafetyFactor: number | null;
   readonly reasons: readonly string[];
 }
 
@@ -53,7 +57,7 @@ export interface TubeSelection {
 }
 
 export interface RankTubesInput {
-  /** Joint centre to joint centre, mm (the critical-speed span). */
+  /** The critical-speed span, mm: joint centre to joint centre at the longest (full droop for a slip shaft). */
   readonly spanMm: number;
   /** Tube length to buy; default spanMm minus the end allowance. */
   readonly tubeLengthMm?: number;
@@ -63,6 +67,9 @@ export interface RankTubesInput {
   readonly fittings?: readonly (EndFitting | null)[];
   readonly catalogue?: Catalogue;
   readonly settings?: ShopSettings;
+  /** The use's critical-speed ratio limit and warn threshold (default the street ones). */
+  readonly criticalSpeedRatioLimit?: Limit;
+  readonly warnCriticalSpeedRatio?: number;
 }
 
 const round1 = (x: number): string => x.toFixed(1);
@@ -75,9 +82,11 @@ export function rankTubes(input: RankTubesInput): TubeSelection {
   const catalogue = input.catalogue ?? defaultCatalogue;
   const settings = input.settings ?? defaultSettings;
   const index = indexCatalogue(catalogue);
-  const maxRatio = settings.maxCriticalSpeedRatio.value;
-  const warnRatio = settings.warnCriticalSpeedRatio.value;
+  const ratioLimit = input.criticalSpeedRatioLimit ?? settings.maxCriticalSpeedRatio;
+  const maxRatio = ratioLimit.value;
+  const warnRatio = input.warnCriticalSpeedRatio ?? settings.warnCriticalSpeedRatio.value;
   const minSf = settings.minTorsionSafetyFactor.value;
+  const minWeldSf = settings.minWeldZoneSafetyFactor.value;
   const fixedFittings = (input.fittings ?? []).filter((f): f is EndFitting => f != null);
   const passing: TubeCandidate[] = [];
   const rejected: RejectedTube[] = [];
@@ -87,7 +96,7 @@ export function rankTubes(input: RankTubesInput): TubeSelection {
   for (const tube of catalogue.tubes) {
     const material = index.materials.get(tube.materialId);
     if (!material) {
-      rejected.push(reject(tube, NaN, NaN, [`material "${tube.materialId}" is not in the catalogue`]));
+      rejected.push(reject(tube, NaN, NaN, null, [`material "${tube.materialId}" is not in the catalogue`]));
       continue;
     }
     const tubeLengthMm = input.tubeLengthMm ?? input.spanMm;
@@ -100,15 +109,19 @@ export function rankTubes(input: RankTubesInput): TubeSelection {
     const ratio = input.maxShaftRpm / nc;
     const shear = torsionShearStressMPa(tube, input.peakShaftTorqueNm);
     const sf = material.shearYieldMPa / shear;
+    const weldYield = weldZoneShearYieldMPa(material);
+    const weldSf = weldYield !== null ? weldYield / shear : null;
     const reasons: string[] = [];
     if (ratio > maxRatio) {
-      reasons.push(
-        `critical-speed ratio ${ratio.toFixed(3)} above ${maxRatio} (${settings.maxCriticalSpeedRatio.source})`,
-      );
+      reasons.push(`critical-speed ratio ${ratio.toFixed(3)} above ${maxRatio} (${ratioLimit.source})`);
     } else anyPassesCriticalSpeed = true;
     if (sf < minSf)
       reasons.push(
         `torsion safety factor ${sf.toFixed(2)} below ${minSf} (${settings.minTorsionSafetyFactor.source})`,
+      );
+    if (weldSf !== null && weldSf < minWeldSf)
+      reasons.push(
+        `weld-zone torsion safety factor ${weldSf.toFixed(2)} below ${minWeldSf} (${settings.minWeldZoneSafetyFactor.source})`,
       );
     if (tubeLengthMm > tube.maxLengthMm)
       reasons.push(`needs ${round1(tubeLengthMm)} mm, stock is ${round1(tube.maxLengthMm)} mm`);
@@ -137,11 +150,13 @@ export function rankTubes(input: RankTubesInput): TubeSelection {
       speedHeadroomPct: ((nc * maxRatio) / input.maxShaftRpm - 1) * 100,
       shearStressMPa: shear,
       torsionSafetyFactor: sf,
+      weldZoneSafetyFactor: weldSf,
       priceCents: Math.round((tube.pricePerMetreCents * tubeLengthMm) / 1000),
-      status: ratio > warnRatio ? "warn" : "pass",
+      status: ratio > warnRatio || weldSf === null ? "warn" : "pass",
     };
-    if (sf >= minSf && (stiffest === null || ratio < stiffest.criticalSpeedRatio)) stiffest = candidate;
-    if (reasons.length) rejected.push(reject(tube, ratio, sf, reasons));
+    const strongEnough = sf >= minSf && (weldSf === null || weldSf >= minWeldSf);
+    if (strongEnough && (stiffest === null || ratio < stiffest.criticalSpeedRatio)) stiffest = candidate;
+    if (reasons.length) rejected.push(reject(tube, ratio, sf, weldSf, reasons));
     else passing.push(candidate);
   }
   const byMass = [...passing].sort((a, b) => a.massKg - b.massKg || a.priceCents - b.priceCents);
@@ -149,7 +164,13 @@ export function rankTubes(input: RankTubesInput): TubeSelection {
   return { spanMm: input.spanMm, byMass, byCost, rejected, anyPassesCriticalSpeed, stiffest };
 }
 
-function reject(tube: TubeSize, ratio: number, sf: number, reasons: string[]): RejectedTube {
+function reject(
+  tube: TubeSize,
+  ratio: number,
+  sf: number,
+  weldSf: number | null,
+  reasons: string[],
+): RejectedTube {
   return {
     tubeId: tube.id,
     materialId: tube.materialId,
@@ -157,6 +178,7 @@ function reject(tube: TubeSize, ratio: number, sf: number, reasons: string[]): R
     wallMm: tube.wallMm,
     criticalSpeedRatio: ratio,
     torsionSafetyFactor: sf,
+    weldZoneSafetyFactor: weldSf,
     reasons,
   };
 }

@@ -16,7 +16,8 @@ import type {
 } from "./types";
 
 const IN = 25.4;
-const MATERIAL_SOURCE = "engineering reference §10, typical values (from memory); shop catalogue overrides";
+/** E and density are typical values (engineering reference §10, from memory); yields are minimums. */
+const TYPICAL = "E and density typical (engineering reference §10, from memory); shop catalogue overrides";
 
 export const defaultMaterials: readonly Material[] = [
   {
@@ -24,10 +25,15 @@ export const defaultMaterials: readonly Material[] = [
     name: "Carbon steel DOM tube (1020 class, ASTM A513 Type 5 min.)",
     elasticModulusGPa: 200,
     densityKgM3: 7870,
+    // ASTM A513 Type 5, 1020 stress-relieved: min. yield 55 ksi (379 MPa), min. tensile 65 ksi.
     tensileYieldMPa: 379,
     shearYieldMPa: shearYieldFromTensileMPa(379),
+    condition: "drawn over mandrel, stress-relieved (SR)",
+    weldZoneTensileYieldMPa: 262,
+    weldZoneSource:
+      "assumed: welding heat removes the drawing's cold work next to the weld, leaving about the as-welded hot-rolled tube DOM is drawn from — ASTM A513 Type 1, 1020, min. yield 38 ksi (262 MPa), as steel distributors tabulate the standard (from memory; no standard gives a weld-zone figure for DOM)",
     weldFamily: "steel",
-    source: MATERIAL_SOURCE,
+    source: `yield: ASTM A513 Type 5, 1020 stress-relieved, min. 55 ksi (379 MPa), as steel distributors tabulate the standard; ${TYPICAL}`,
   },
   {
     id: "chromoly-4130",
@@ -36,18 +42,28 @@ export const defaultMaterials: readonly Material[] = [
     densityKgM3: 7850,
     tensileYieldMPa: 435,
     shearYieldMPa: shearYieldFromTensileMPa(435),
+    condition: "normalised",
+    // 435 × 90/95 ≈ 412 MPa.
+    weldZoneTensileYieldMPa: 412,
+    weldZoneSource:
+      "from memory: about 90 ksi ultimate next to welds in normalised 4130 not heat-treated after welding, against 95 ksi in the parent tube (MIL-HDBK-5 welded-joint tables); the parent's 435 MPa scaled by 90/95",
     weldFamily: "steel",
-    source: MATERIAL_SOURCE,
+    source: `yield: 435 MPa, the handbook's typical normalised 4130 (from memory), below the aircraft tube specifications' minimum for normalised tube (75 ksi / 517 MPa, MIL-T-6736 / AMS 6360, from memory), so it serves as a minimum; ${TYPICAL}`,
   },
   {
     id: "aluminium-6061-t6",
     name: "Aluminium 6061-T6",
     elasticModulusGPa: 68.9,
     densityKgM3: 2700,
-    tensileYieldMPa: 276,
-    shearYieldMPa: shearYieldFromTensileMPa(276),
+    // Minimum, not the typical 276 MPa.
+    tensileYieldMPa: 241,
+    shearYieldMPa: shearYieldFromTensileMPa(241),
+    condition: "T6, drawn tube",
+    weldZoneTensileYieldMPa: 103,
+    weldZoneSource:
+      "welded 6061-T6: about 15 ksi (103 MPa) tensile yield, the aluminium design specification's welded values (Aluminum Design Manual, from memory)",
     weldFamily: "aluminium",
-    source: MATERIAL_SOURCE,
+    source: `yield: ASTM B210 / B221, 6061-T6 tube min. 35 ksi (241 MPa) (from memory; the typical 276 MPa is not a minimum); ${TYPICAL}`,
   },
 ];
 
@@ -123,11 +139,16 @@ function buildTubes(): TubeSize[] {
 /** The demo catalogue's fastener torques are invented: a real shop enters its parts makers' figures. */
 const DEMO_TORQUE = "demo data (invented) — use the part maker's published figure";
 
+/**
+ * Demo data (invented): peak (static) and continuous ratings. A real shop enters its joint
+ * maker's published ratings; continuous ratings here are about a third of the peak.
+ */
 export const defaultJointSeries: readonly JointSeries[] = [
   {
     id: "YL-X28",
     name: "YL-X28 cross, 28 mm caps",
     torqueRatingNm: 1100,
+    continuousTorqueNm: 400,
     maxWorkingAngleDeg: 20,
     massKg: 0.55,
     priceCents: 4500,
@@ -138,6 +159,7 @@ export const defaultJointSeries: readonly JointSeries[] = [
     id: "YL-X30",
     name: "YL-X30 cross, 30 mm caps",
     torqueRatingNm: 1700,
+    continuousTorqueNm: 600,
     maxWorkingAngleDeg: 20,
     massKg: 0.7,
     priceCents: 5900,
@@ -148,6 +170,7 @@ export const defaultJointSeries: readonly JointSeries[] = [
     id: "YL-X35",
     name: "YL-X35 cross, 35 mm caps",
     torqueRatingNm: 2700,
+    continuousTorqueNm: 950,
     maxWorkingAngleDeg: 18,
     massKg: 1.0,
     priceCents: 8900,
@@ -158,6 +181,7 @@ export const defaultJointSeries: readonly JointSeries[] = [
     id: "YL-X41",
     name: "YL-X41 cross, 41 mm caps",
     torqueRatingNm: 4200,
+    continuousTorqueNm: 1500,
     maxWorkingAngleDeg: 18,
     massKg: 1.5,
     priceCents: 14500,
@@ -168,6 +192,7 @@ export const defaultJointSeries: readonly JointSeries[] = [
     id: "YL-X48",
     name: "YL-X48 cross, 48 mm caps",
     torqueRatingNm: 6500,
+    continuousTorqueNm: 2300,
     maxWorkingAngleDeg: 15,
     massKg: 2.3,
     priceCents: 24000,

@@ -191,16 +191,31 @@ function MaterialRow({ index, onRemove }: { index: number; onRemove: () => void 
         <NumberInput name={`${p}.densityKgM3`} label={`Density (kg/m³) of ${row}`} className="w-24" />
       </td>
       <td className={TD}>
-        <NumberInput name={`${p}.tensileYieldMPa`} label={`Yield (MPa) of ${row}`} className="w-24" />
+        <NumberInput name={`${p}.tensileYieldMPa`} label={`Minimum yield (MPa) of ${row}`} className="w-24" />
       </td>
       <td className={TD}>
         <NumberInput name={`${p}.shearYieldMPa`} label={`Shear yield (MPa) of ${row}`} className="w-24" />
+      </td>
+      <td className={TD}>
+        <TextInput name={`${p}.condition`} label={`Condition of ${row}`} className="w-48" />
       </td>
       <td className={TD}>
         <SelectInput name={`${p}.weldFamily`} label={`Weld family of ${row}`} options={WELD_FAMILIES} />
       </td>
       <td className={TD}>
         <TextInput name={`${p}.source`} label={`Source of ${row}`} className="w-72" />
+      </td>
+      <td className={TD}>
+        <NumberInput
+          name={`${p}.weldZoneTensileYieldMPa`}
+          label={`Weld-zone yield (MPa) of ${row}`}
+          empty={undefined}
+          placeholder="—"
+          className="w-24"
+        />
+      </td>
+      <td className={TD}>
+        <TextInput name={`${p}.weldZoneSource`} label={`Weld-zone yield source of ${row}`} className="w-72" />
       </td>
       <td className={TD}>
         <RemoveButton label={`Remove ${row}`} onClick={onRemove} />
@@ -217,7 +232,7 @@ export function MaterialsSection() {
     <Section
       id="materials"
       title={`Materials (${fields.length})`}
-      description="Tube materials and their constants. Each material names the source of its figures (a standard, a handbook or the mill's certificate)."
+      description="Tube materials and their constants. Yields are minimums for the condition named, not typical values. Welding softens the tube next to the weld: the weld-zone yield is checked in torsion too. Each figure names its source (a standard, a handbook or the mill's certificate)."
       action={
         <AddButton
           label="Add material"
@@ -236,10 +251,13 @@ export function MaterialsSection() {
           "Name",
           { label: "E (GPa)", right: true },
           { label: "Density (kg/m³)", right: true },
-          { label: "Yield (MPa)", right: true },
+          { label: "Minimum yield (MPa)", right: true },
           { label: "Shear yield (MPa)", right: true },
+          "Condition",
           "Weld family",
           "Source",
+          { label: "Weld-zone yield (MPa)", right: true },
+          "Weld-zone source",
           { label: "Remove", srOnly: true },
         ]}
       >
@@ -514,7 +532,20 @@ function JointRow({
         <TextInput name={`${p}.name`} label={`Name of ${row}`} className="w-56" />
       </td>
       <td className={TD}>
-        <NumberInput name={`${p}.torqueRatingNm`} label={`Torque rating (N·m) of ${row}`} className="w-24" />
+        <NumberInput
+          name={`${p}.torqueRatingNm`}
+          label={`Peak torque rating (N·m) of ${row}`}
+          className="w-24"
+        />
+      </td>
+      <td className={TD}>
+        <NumberInput
+          name={`${p}.continuousTorqueNm`}
+          label={`Continuous rating (N·m) of ${row}`}
+          empty={undefined}
+          placeholder="—"
+          className="w-24"
+        />
       </td>
       <td className={TD}>
         <NumberInput
@@ -558,7 +589,7 @@ export function JointsSection() {
     <Section
       id="joints"
       title={`Universal joints (${fields.length})`}
-      description="Joint (cross) series: torque rating, largest working angle, mass, price, and the strap or U-bolt torque with its source. The caps (diameter, span across them, how the vehicle's yoke holds them) match a vehicle's yoke; a conversion cross has these caps on one side and the other series' on the other; a double-Cardan joint's largest angle is the whole joint's."
+      description="Joint (cross) series: peak (static) torque rating against the design torque, continuous rating against the running torque, largest working angle, mass, price, and the strap or U-bolt torque with its source. The caps (diameter, span across them, how the vehicle's yoke holds them) match a vehicle's yoke; a conversion cross has these caps on one side and the other series' on the other; a double-Cardan joint's largest angle is the whole joint's."
       action={
         <AddButton
           label="Add joint series"
@@ -573,7 +604,8 @@ export function JointsSection() {
         headings={[
           "Id",
           "Name",
-          { label: "Torque rating (N·m)", right: true },
+          { label: "Peak torque rating (N·m)", right: true },
+          { label: "Continuous rating (N·m)", right: true },
           { label: "Largest working angle (°)", right: true },
           { label: "Mass (kg)", right: true },
           { label: "Price", right: true },

@@ -1,0 +1,142 @@
+import { afterAll, beforeAll, describe, expect } from "vitest";
+import { NextRequest } from "next/server";
+import { Client } from "pg";
+import { POST } from "@/app/api/catalogue/versions/route";
+import { evaluateDesign, parseDesign } from "@/lib/driveline";
+import { currentShopConfig } from "@/lib/catalogue/versions";
+import { describePath } from "@/lib/catalogue/describe";
+import type { ConfigChange } from "@/lib/catalogue/diff";
+import { getShopEngineering, invalidateShopEngineering } from "@/lib/shop/config";
+import { createStaffUser } from "@/lib/users/staff";
+import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
+import { dbTest, hasDatabase } from "../setup/db";
+import { streetTruck } from "../setup/orders";
+
+const PASSWORD = "a-long-password-1";
+
+async function ownerCookie() {
+  const user = await createStaffUser(
+    { name: "Test owner", email: uniqueEmail("owner"), role: "owner", password: PASSWORD },
+    null,
+  );
+  return sessionCookie(await authRequest("/sign-in/email", { email: user.email, password: PASSWORD }));
+}
+
+const post = (body: unknown, cookie: string) =>
+  POST(
+    new NextRequest("http://127.0.0.1/api/catalogue/versions", {
+      method: "POST",
+      headers: { "content-type": "application/json", cookie },
+      body: JSON.stringify(body),
+    }),
+    { params: Promise.resolve({}) },
+  );
+
+// This file changes the shop's configuration: put it back as it was for the files after it.
+let original: { rows: unknown[] } = { rows: [] };
+beforeAll(async () => {
+  if (!hasDatabase) return;
+  const c = new Client({ connectionString: process.env.DATABASE_URL });
+  await c.connect();
+  original = await c.query("select * from shop_config");
+  await c.end();
+});
+afterAll(async () => {
+  if (!hasDatabase) return;
+  const c = new Client({ connectionString: process.env.DATABASE_URL });
+  await c.connect();
+  await c.query("delete from shop_config_version");
+  await c.query("delete from shop_config");
+  for (const r of original.rows as Record<string, unknown>[]) {
+    await c.query(
+      "insert into shop_config (id, catalogue, settings, price_book, floor, version, updated_at) values ($1, $2, $3, $4, $5, $6, $7)",
+      [r.id, r.catalogue, r.settings, r.price_book, r.floor, r.version, r.updated_at].map((v) =>
+        typeof v === "object" && v !== null && !(v instanceof Date) ? JSON.stringify(v) : v,
+      ),
+    );
+  }
+  await c.end();
+  invalidateShopEngineering();
+});
+
+describe("the editor's loads fields: weld zone, continuous rating, the limits per use", () => {
+  dbTest(
+    "a weld-zone yield without its source, or a continuous rating above the peak, is refused by field",
+    async () => {
+      const owner = await ownerCookie();
+      const { version, document } = await currentShopConfig();
+      const cases = [
+        {
+          change: (d: typeof document) => {
+            d.catalogue.materials[0]!.weldZoneSource = "";
+          },
+          field: "catalogue.materials.0.weldZoneSource",
+          message: /source/,
+        },
+        {
+          change: (d: typeof document) => {
+            d.catalogue.jointSeries[0]!.continuousTorqueNm = d.catalogue.jointSeries[0]!.torqueRatingNm + 1;
+          },
+          field: "catalogue.jointSeries.0.continuousTorqueNm",
+          message: /peak/,
+        },
+        {
+          change: (d: typeof document) => {
+            d.settings.serviceFactorTowing = { value: 0.8, source: "wishful" };
+          },
+          field: "settings.serviceFactorTowing.value",
+          message: /between 1 and 5/,
+        },
+      ];
+      for (const c of cases) {
+        const d = structuredClone(document);
+        c.change(d);
+        const res = await post({ ...d, basedOnVersion: version, note: "bad" }, owner);
+        expect(res.status, c.field).toBe(422);
+        const body = (await res.json()) as { error: { fields?: Record<string, string> } };
+        expect(body.error.fields?.[c.field], c.field).toMatch(c.message);
+      }
+      expect((await currentShopConfig()).version).toBe(version);
+    },
+  );
+
+  dbTest(
+    "saved figures are kept, named in the history, and used by the next evaluation",
+    { timeout: 60_000 },
+    async () => {
+      const owner = await ownerCookie();
+      const { version, document } = await currentShopConfig();
+      const d = structuredClone(document);
+      const dom = d.catalogue.materials.findIndex((m) => m.id === "steel-dom");
+      const x41 = d.catalogue.jointSeries.findIndex((s) => s.id === "YL-X41");
+      // Demo data: a shop that measured a softer weld zone and holds a lower continuous rating.
+      d.catalogue.materials[dom] = {
+        ...d.catalogue.materials[dom]!,
+        weldZoneTensileYieldMPa: 220,
+        weldZoneSource: "our weld procedure test, coupon 7",
+      };
+      d.catalogue.jointSeries[x41] = { ...d.catalogue.jointSeries[x41]!, continuousTorqueNm: 500 };
+      const res = await post({ ...d, basedOnVersion: version, note: "Weld coupon results" }, owner);
+      expect(res.status).toBe(201);
+      const saved = (await res.json()) as { changes: ConfigChange[] };
+      const words = saved.changes.map((c) => describePath(c.at));
+      expect(words).toContain("Materials › steel-dom › Weld-zone yield (MPa)");
+      expect(words).toContain("Joints › YL-X41 › Continuous rating (N·m)");
+
+      const now = await currentShopConfig();
+      expect(now.document.catalogue.materials[dom]!.weldZoneSource).toBe("our weld procedure test, coupon 7");
+      invalidateShopEngineering();
+      const shop = await getShopEngineering();
+      const parsed = parseDesign(streetTruck, { catalogue: shop.catalogue });
+      if (!parsed.ok) throw new Error("street truck must parse");
+      const r = evaluateDesign(parsed.design, { catalogue: shop.catalogue, settings: shop.settings });
+      // 220/√3 = 127.0 MPa weld-zone shear yield over the truck's 138.1 MPa: below 1.0, a failure.
+      expect(r.torsion.weldZoneSafetyFactor).toBeCloseTo(220 / Math.sqrt(3) / r.torsion.shearStressMPa, 9);
+      expect(r.checks.find((c) => c.id === "torsion.weld-zone")?.status).toBe("fail");
+      // 550 N·m running torque (top gear taken as 1) against 500 N·m.
+      const cont = r.checks.find((c) => c.id === "joint-continuous.front")!;
+      expect(cont.limit).toBe(500);
+      expect(cont.status).toBe("fail");
+    },
+  );
+});
