@@ -31,6 +31,7 @@ export const DEMO_STEP_HOURS: Record<StepKind, number> = {
   "final-inspection": 5,
   dispatch: 14,
   "sign-off": 2,
+  assembly: 6,
 };
 
 export interface GenerateCustomer {

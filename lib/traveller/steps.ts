@@ -7,6 +7,7 @@
 import type { EvaluationReport } from "@/lib/driveline/report";
 import type { FloorSettings, RoutingStep, StepKind } from "./settings";
 import type { FloorQuantity } from "./units";
+import { assemblyFields, deriveTwoPieceSteps } from "./two-piece-steps";
 
 /** A numeric limit in SI. `min`/`max` bound the value; for a `nominal` the tolerance is ±. */
 export interface NumericLimit {
@@ -49,6 +50,8 @@ export interface StepSpec {
   code: string;
   kind: StepKind;
   name: string;
+  /** Two-piece shafts: the piece this step is for ("A" front, "B" rear); absent for the whole shaft. */
+  piece?: "A" | "B";
   instructions: string[];
   fields: FieldSpec[];
 }
@@ -138,7 +141,7 @@ export function balanceLimit(report: EvaluationReport): { perPlaneGmm: number; s
   };
 }
 
-function fieldsFor(step: RoutingStep, ctx: StepContext): FieldSpec[] {
+export function fieldsFor(step: RoutingStep, ctx: StepContext): FieldSpec[] {
   const { report, floor } = ctx;
   const lengthTol = report.shopFloor.lengthToleranceMm;
   const lengthSource = report.shopFloor.sources[0] ?? "shop setting";
@@ -236,12 +239,15 @@ function fieldsFor(step: RoutingStep, ctx: StepContext): FieldSpec[] {
         : [{ key: "pickedUpBy", label: "Picked up by", type: "text" }];
     case "sign-off":
       return [];
+    case "assembly":
+      return assemblyFields(ctx);
   }
 }
 
 /** The record sheet of every step of the routing, in order. */
 export function deriveSteps(ctx: StepContext): StepSpec[] {
-  return ctx.floor.routing.map((step, i) => ({
+  if (ctx.report.layout === "two-piece") return deriveTwoPieceSteps(ctx);
+  return oneShaftRouting(ctx.floor.routing).map((step, i) => ({
     position: i + 1,
     code: step.code,
     kind: step.kind,
@@ -255,3 +261,6 @@ export function deriveSteps(ctx: StepContext): StepSpec[] {
     fields: fieldsFor(step, ctx),
   }));
 }
+
+/** An assembly step joins the pieces of a two-piece shaft; a one-piece shaft has none. */
+const oneShaftRouting = (routing: readonly RoutingStep[]) => routing.filter((s) => s.kind !== "assembly");

@@ -656,6 +656,7 @@ const STEP_KIND_LABELS: Record<(typeof STEP_KINDS)[number], string> = {
   "final-inspection": "Final inspection",
   dispatch: "Dispatch",
   "sign-off": "Sign-off",
+  assembly: "Assembly (two-piece)",
 };
 
 function RoutingRow({
