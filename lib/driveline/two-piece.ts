@@ -130,7 +130,7 @@ function stubFitting(b: CentreBearing, index: CatalogueIndex): EndFitting {
 function stubEnd(b: CentreBearing, index: CatalogueIndex): EndReport {
   return {
     ...endReport(stubFitting(b, index), "design", index),
-    name: `Stub of ${b.name}`,
+    name: `${b.name} (stub end)`,
     kind: "centre-bearing-stub",
     priceCents: 0,
   };

@@ -26,6 +26,12 @@ export function pieceReport(report: EvaluationReport, piece: ShaftPieceReport): 
     criticalSpeedRpm: piece.criticalSpeedRpm,
     criticalSpeedRatio: piece.criticalSpeedRatio,
     phasing: { ...phasing, phaseIndexDeg: piece.phaseIndexDeg },
+    // The piece's own two joints: the centre joint is the front piece's rear and the rear piece's front.
+    joints: report.joints
+      .filter((j) => j.position === piece.position || j.position === "centre")
+      .map((j) =>
+        j.position === "centre" ? { ...j, position: piece.position === "front" ? "rear" : "front" } : j,
+      ),
   };
 }
 
