@@ -259,6 +259,13 @@ export const designFileSchema = object({
   if (d.layout === "two-piece" && !d.centreBearing) {
     add(["centreBearing"], "is required for a two-piece layout (the catalogue centre bearing)");
   }
+  const from = d.centreBearing?.fromFrontMm;
+  if (d.layout === "two-piece" && from != null && d.lengthMm != null && from >= d.lengthMm) {
+    add(
+      ["centreBearing", "fromFrontMm"],
+      "must be less than lengthMm (the centre joint lies between the ends)",
+    );
+  }
   if (d.slip && d.lengthMm != null && d.slip.collapsedLengthMm > d.lengthMm) {
     add(
       ["slip", "collapsedLengthMm"],
