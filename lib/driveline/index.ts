@@ -32,7 +32,10 @@ export type {
   SlipReport,
   PieceReport,
   TwoPieceProposal,
+  ShaftPieceReport,
+  CentreBearingReport,
 } from "./report";
+export { twoPieceDesignFrom, suggestCentreBearing } from "./two-piece";
 export { SAFETY_CAUTION, DISCLAIMER, DEMO_CATALOGUE_NOTE } from "./report";
 export type { Check, CheckStatus } from "./checks";
 export {
