@@ -76,7 +76,11 @@ test("a two-piece shaft from quote through the floor", async ({ page, browser })
   // The customer's timeline shows both pieces' steps and the assembly.
   await page.goto(`/orders/${orderId}`);
   const timeline = page.getByRole("list", { name: "Order timeline" });
-  for (const name of ["Cut tube — piece A (front)", "Balance — piece B (rear)", "Assemble at the centre bearing"]) {
+  for (const name of [
+    "Cut tube — piece A (front)",
+    "Balance — piece B (rear)",
+    "Assemble at the centre bearing",
+  ]) {
     await expect(timeline).toContainText(`${serial}: ${name} done`);
   }
 });
