@@ -22,6 +22,7 @@ import type { Catalogue, CentreBearing, EndFitting } from "./catalogue/types";
 import { checkAtLeast, checkAtMost, checkOf, fmt, worstStatus, type Check } from "./checks";
 import { permissibleUnbalanceGmm } from "./balance";
 import { criticalSpeedRpm } from "./critical-speed";
+import { sampleChainCurves } from "./curves";
 import { designDirections } from "./design-geometry";
 import { add, dot, normalise, scale, sub, type Vec3 } from "./geometry";
 import { chainResponse, makeChain } from "./phasing";
@@ -572,7 +573,10 @@ export function evaluateTwoPiece(design: DesignFile, options?: EvaluateOptions):
     checks,
     cautions,
   };
-  // No `curves`: the one-piece curves do not describe three joints, and are left out rather than mislead.
+  if (options?.curves) {
+    const points = typeof options.curves === "object" ? options.curves.points : 181;
+    return { ...report, curves: sampleChainCurves(chain, points) };
+  }
   return report;
 }
 

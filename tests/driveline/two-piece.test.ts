@@ -118,6 +118,8 @@ describe("two-piece shaft evaluation (examples/two-piece-van.json)", () => {
     expect(offset.phasing.outputSpeedVariationPct).toBeLessThan(
       offset.phasing.inPhaseOutputSpeedVariationPct,
     );
+    // The builder's plot gets one curve per joint of the chain.
+    expect(evaluateDesign(design, { curves: { points: 37 } }).curves!.joints).toHaveLength(3);
   });
 
   it("fails, in words, a centre bearing whose stub does not take the tube", () => {
