@@ -183,9 +183,13 @@ export function quoteTwoPieceShaft(
     );
   }
   for (const p of pieces) {
-    for (const end of [p.ends.front, p.ends.rear]) {
+    const ends = [
+      [p.ends.front, p.position === "front" ? "front end" : "centre end"],
+      [p.ends.rear, p.position === "rear" ? "rear end" : "centre end"],
+    ] as const;
+    for (const [end, where] of ends) {
       if (!end || end.kind === "centre-bearing-stub") continue;
-      lines.push(line("fitting", `${end.name}, ${PIECE_NAMES[p.piece]}`, 1, end.priceCents));
+      lines.push(line("fitting", `${end.name}, ${PIECE_NAMES[p.piece]}, ${where}`, 1, end.priceCents));
     }
   }
   const bearing = shaft.centreBearing!;
