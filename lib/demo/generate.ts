@@ -33,6 +33,7 @@ export const DEMO_STEP_HOURS: Record<StepKind, number> = {
   "sign-off": 2,
   teardown: 4,
   inspection: 3,
+  assembly: 6,
 };
 
 export interface GenerateCustomer {

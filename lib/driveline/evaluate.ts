@@ -23,7 +23,6 @@ import { criticalSpeedRpm } from "./critical-speed";
 import { sampleChainCurves } from "./curves";
 import { designDirections } from "./design-geometry";
 import { applyDoubleCardan } from "./double-cardan";
-import { add, dot, normalise, scale, sub, type Vec3 } from "./geometry";
 import { fitInterface } from "./interface";
 import { chainResponse, makeChain, phasingResult } from "./phasing";
 import {
@@ -33,7 +32,6 @@ import {
   type EndReport,
   type EvaluationReport,
   type JointReport,
-  type PieceReport,
   type TubeReport,
   type TwoPieceProposal,
 } from "./report";
@@ -53,6 +51,7 @@ import {
 import { defaultSettings, type ShaftUse, type ShopSettings } from "./settings";
 import { serviceLoads, serviceSpeed } from "./speed";
 import { torsionShearStressMPa } from "./torsion";
+import { evaluateTwoPiece, proposeTwoPiece } from "./two-piece";
 import { rankTubes, type TubeCandidate, type TubeSelection } from "./tube-selection";
 
 export interface EvaluateOptions {
@@ -81,14 +80,14 @@ export class DesignInputError extends Error {
 
 const DEG = 180 / Math.PI;
 const RAD = Math.PI / 180;
-const rpmToRadS = (rpm: number): number => (rpm * Math.PI) / 30;
+export const rpmToRadS = (rpm: number): number => (rpm * Math.PI) / 30;
 const POSITIONS2 = ["front", "rear"] as const;
 
 /**
  * Largest working angle (rad) whose exact peak output acceleration at ω equals the limit.
  * α grows about as β², so β ← β·√(limit/α(β)) converges in a few steps.
  */
-function maxAngleForAccelerationRad(limitRadS2: number, omegaRadS: number): number {
+export function maxAngleForAccelerationRad(limitRadS2: number, omegaRadS: number): number {
   let beta = Math.min(1.4, Math.sqrt(limitRadS2) / omegaRadS);
   for (let i = 0; i < 6; i++) {
     const a = cardanPeakAngularAccelerationRadS2(beta, omegaRadS);
@@ -98,7 +97,7 @@ function maxAngleForAccelerationRad(limitRadS2: number, omegaRadS: number): numb
   return beta;
 }
 
-function jointReport(
+export function jointReport(
   position: JointReport["position"],
   betaRad: number,
   omegaRadS: number,
@@ -122,7 +121,7 @@ function jointReport(
 const label = (p: string): string => p.charAt(0).toUpperCase() + p.slice(1);
 
 /** The per-joint angle rules: minimum, acceleration limit, the cross series' maximum. */
-function jointChecks(
+export function jointChecks(
   joints: readonly JointReport[],
   settings: ShopSettings,
   rpm: number,
@@ -214,7 +213,7 @@ function resolveMaterial(
   };
 }
 
-function endReport(f: EndFitting, origin: EndReport["origin"], index: CatalogueIndex): EndReport {
+export function endReport(f: EndFitting, origin: EndReport["origin"], index: CatalogueIndex): EndReport {
   return {
     fittingId: f.id,
     name: f.name,
@@ -229,7 +228,10 @@ function endReport(f: EndFitting, origin: EndReport["origin"], index: CatalogueI
 }
 
 /** Pick from a ranking: the first clean pass, else the first that warns, else the stiffest. */
-function pickTube(selection: TubeSelection, choice: TubePreference = "lightest"): TubeCandidate | null {
+export function pickTube(
+  selection: TubeSelection,
+  choice: TubePreference = "lightest",
+): TubeCandidate | null {
   const ranked = choice === "cheapest" ? selection.byCost : selection.byMass;
   return ranked.find((c) => c.status === "pass") ?? ranked[0] ?? selection.stiffest;
 }
@@ -241,6 +243,7 @@ function pickTube(selection: TubeSelection, choice: TubePreference = "lightest")
  * with the same catalogue rejects those first).
  */
 export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): EvaluationReport {
+  if (design.layout === "two-piece") return evaluateTwoPiece(design, options);
   const catalogue = options?.catalogue ?? defaultCatalogue;
   const settings = options?.settings ?? defaultSettings;
   const index = indexCatalogue(catalogue);
@@ -691,141 +694,6 @@ function lengthChecks(
     );
   }
   return out;
-}
-
-/** Unit vector normal to u in the vertical plane through u, pointing down. */
-function downNormal(u: Vec3): Vec3 {
-  const down = { x: 0, y: 0, z: -1 };
-  return normalise(sub(down, scale(u, dot(down, u))));
-}
-
-/**
- * Split the shaft at its middle with a centre support bearing. The bearing is dropped below
- * the straight joint-to-joint line just enough to give its joint the shop's centre-joint
- * angle (so its needles roll); both pieces use the lightest tube that passes at half span.
- */
-function proposeTwoPiece(
-  u: { transmission: Vec3; driveshaft: Vec3; pinion: Vec3 },
-  lengthMm: number,
-  rpm: number,
-  torqueNm: number,
-  catalogue: Catalogue,
-  settings: ShopSettings,
-  index: CatalogueIndex,
-): TwoPieceProposal {
-  const front = lengthMm / 2;
-  const rear = lengthMm - front;
-  const centreAngle = settings.centreJointAngleDeg.value * RAD;
-  // Apex angle of the dropped triangle: atan(h/L1) + atan(h/L2) ≈ h·L/(L1·L2).
-  const dropMm = (Math.tan(centreAngle) * front * rear) / lengthMm;
-  const down = downNormal(u.driveshaft);
-  const bearing = add(scale(u.driveshaft, front), scale(down, dropMm));
-  const u1 = normalise(bearing);
-  const u2 = normalise(sub(scale(u.driveshaft, lengthMm), bearing));
-  const chain = makeChain([u.transmission, u1, u2, u.pinion]);
-  const response = chainResponse(chain);
-  const omega = rpmToRadS(rpm);
-  const selection = rankTubes({
-    spanMm: Math.max(front, rear),
-    maxShaftRpm: rpm,
-    peakShaftTorqueNm: torqueNm,
-    catalogue,
-    settings,
-  });
-  const pick = pickTube(selection);
-  const maxAngleDeg =
-    maxAngleForAccelerationRad(settings.maxJointAngularAccelerationRadS2.value, omega) * DEG;
-  const positions = ["front", "centre", "rear"] as const;
-  const joints = chain.workingAngleRad.map((b, i) => jointReport(positions[i]!, b, omega, maxAngleDeg, null));
-  const checks: Check[] = jointChecks(joints, settings, rpm, index, "Two-piece: ");
-  const pieces: PieceReport[] = [];
-  const material = pick ? index.materials.get(pick.materialId) : undefined;
-  if (pick && material) {
-    const fitting = suggestFitting(catalogue, index, pick.odMm, material.weldFamily, torqueNm);
-    for (const [position, spanMm] of [
-      ["front", front],
-      ["rear", rear],
-    ] as const) {
-      const cut = fitting ? spanMm - 2 * fitting.jointCentreToWeldSeatMm : null;
-      const tubeLengthMm = cut !== null && cut > 0 ? cut : spanMm;
-      const nc = criticalSpeedRpm({
-        ...pick,
-        spanMm,
-        elasticModulusGPa: material.elasticModulusGPa,
-        densityKgM3: material.densityKgM3,
-      });
-      const tube: TubeCandidate = {
-        ...pick,
-        tubeLengthMm,
-        massKg: tubeMassKg(pick, tubeLengthMm, material.densityKgM3),
-        criticalSpeedRpm: nc,
-        criticalSpeedRatio: rpm / nc,
-        speedHeadroomPct: ((nc * settings.maxCriticalSpeedRatio.value) / rpm - 1) * 100,
-        priceCents: Math.round(
-          ((index.tubes.get(pick.tubeId)?.pricePerMetreCents ?? 0) * tubeLengthMm) / 1000,
-        ),
-      };
-      pieces.push({ position, spanMm, tube, cutLengthMm: cut });
-      checks.push(
-        checkAtMost({
-          id: `two-piece.critical-speed.${position}`,
-          what: `Two-piece ${position} piece critical-speed ratio (${Math.round(rpm)} / ${Math.round(nc)} rpm, ${pick.tubeId})`,
-          value: tube.criticalSpeedRatio,
-          unit: "",
-          digits: 3,
-          limit: settings.maxCriticalSpeedRatio,
-          warnAbove: settings.warnCriticalSpeedRatio.value,
-          warnSource: settings.warnCriticalSpeedRatio.source,
-        }),
-      );
-    }
-    checks.push(
-      checkAtLeast({
-        id: "two-piece.torsion",
-        what: `Two-piece torsion safety factor (${pick.tubeId})`,
-        value: pick.torsionSafetyFactor,
-        unit: "",
-        limit: settings.minTorsionSafetyFactor,
-      }),
-    );
-  } else {
-    checks.push(
-      checkOf(
-        "two-piece.critical-speed",
-        "fail",
-        `No catalogue tube passes the critical-speed ratio limit ${settings.maxCriticalSpeedRatio.value} even at ${fmt(Math.max(front, rear), 0)} mm span — ${settings.maxCriticalSpeedRatio.source}`,
-        settings.maxCriticalSpeedRatio.source,
-      ),
-    );
-  }
-  const eq = equivalentAngleRad(response.outputPeakToPeak) * DEG;
-  checks.push(
-    checkAtMost({
-      id: "two-piece.equivalent-angle",
-      what: "Two-piece equivalent angle",
-      value: eq,
-      unit: "°",
-      limit: settings.maxEquivalentAngleDeg,
-      overStatus: "warn",
-    }),
-  );
-  const overall = worstStatus(checks.map((c) => c.status));
-  return {
-    reason: `No single catalogue tube keeps the critical-speed ratio within ${settings.maxCriticalSpeedRatio.value} over ${fmt(lengthMm, 0)} mm; split with a centre support bearing, three joints.`,
-    feasible: pieces.length === 2 && overall !== "fail",
-    centreBearingFromFrontMm: front,
-    centreBearingDropMm: dropMm,
-    pieces,
-    joints,
-    phasing: {
-      phaseIndicesDeg: chain.phaseIndexRad.map((r) => r * DEG),
-      outputSpeedVariationPct: response.outputPeakToPeak * 100,
-      equivalentAngleDeg: eq,
-    },
-    peakAngularAccelerationRadS2: omega * omega * Math.max(...response.tubePeakRatioDerivative),
-    checks,
-    overall,
-  };
 }
 
 /** Parse untrusted input, then evaluate: `{ ok: true, report }` or the field issues. */

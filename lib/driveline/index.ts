@@ -32,8 +32,11 @@ export type {
   SlipReport,
   PieceReport,
   TwoPieceProposal,
+  ShaftPieceReport,
+  CentreBearingReport,
 } from "./report";
 export type { SlipYokeSummary } from "./report";
+export { twoPieceDesignFrom, suggestCentreBearing } from "./two-piece";
 export { SAFETY_CAUTION, DISCLAIMER, DEMO_CATALOGUE_NOTE } from "./report";
 export { slipReport, slipChecks, resolveSlipYoke, minEngagementLimit } from "./slip";
 export {

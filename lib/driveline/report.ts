@@ -49,6 +49,8 @@ export interface PhasingReport {
   /** Variation with the yokes in phase (index 0), for comparison, %. */
   readonly inPhaseOutputSpeedVariationPct: number;
   readonly toleranceDeg: number;
+  /** Two-piece shafts: the index of each piece's rear yoke (front piece, rear piece), deg. */
+  readonly phaseIndicesDeg?: readonly number[];
   /** Present when the design gives phaseIndexDeg. */
   readonly asSpecified?: {
     readonly phaseIndexDeg: number;
@@ -137,6 +139,8 @@ export interface PieceReport {
 export interface TwoPieceProposal {
   readonly reason: string;
   readonly feasible: boolean;
+  /** The catalogue centre bearing proposed (null when none takes the tube and the torque). */
+  readonly centreBearingId: string | null;
   /** Centre-bearing joint centre from the front joint centre, along the shaft line, mm. */
   readonly centreBearingFromFrontMm: number;
   /** Drop of the centre-bearing joint below the straight joint-to-joint line, mm. */
@@ -152,6 +156,48 @@ export interface TwoPieceProposal {
   readonly peakAngularAccelerationRadS2: number;
   readonly checks: readonly Check[];
   readonly overall: CheckStatus;
+}
+
+/** One piece of a two-piece shaft: "A" the front piece, "B" the rear piece. */
+export interface ShaftPieceReport {
+  readonly piece: "A" | "B";
+  readonly position: "front" | "rear";
+  /** Joint centre to joint centre of this piece (its critical-speed span and as-welded length), mm. */
+  readonly spanMm: number;
+  /** This piece's tube: its cut length, mass and price. */
+  readonly tube: TubeReport;
+  /** Front piece: the front fitting and the centre bearing's stub; rear piece: the centre-side weld yoke and the rear fitting. */
+  readonly ends: { readonly front: EndReport | null; readonly rear: EndReport | null };
+  /** Span minus each end's joint centre to weld seat; null without both ends. */
+  readonly cutLengthMm: number | null;
+  readonly criticalSpeedRpm: number;
+  readonly criticalSpeedRatio: number;
+  /** Index of this piece's rear yoke from in phase with its front yoke, deg in (−90, 90], + clockwise looking rearward. */
+  readonly phaseIndexDeg: number;
+  /** ISO 21940-11 for this piece alone (its own rotor mass), two planes. */
+  readonly balance: {
+    readonly gradeMmS: number;
+    readonly speedRpm: number;
+    readonly rotorMassKg: number;
+    readonly permissibleUnbalanceGmm: number;
+    readonly perPlaneGmm: number;
+  };
+}
+
+/** The centre support bearing of a two-piece shaft, where it sits, and the centre joint. */
+export interface CentreBearingReport {
+  readonly bearingId: string;
+  readonly name: string;
+  readonly jointSeriesId: string;
+  readonly jointCentreToWeldSeatMm: number;
+  readonly massKg: number;
+  readonly priceCents: number;
+  /** Centre joint centre from the front joint centre, along the straight joint-to-joint line, mm. */
+  readonly fromFrontMm: number;
+  /** Drop of the centre joint below that line, mm. */
+  readonly dropMm: number;
+  readonly centreJointAngleDeg: number;
+  readonly source: string;
 }
 
 export interface EvaluationReport {
@@ -233,6 +279,14 @@ export interface EvaluationReport {
   };
   readonly tubeSelection: TubeSelection | null;
   readonly twoPiece: TwoPieceProposal | null;
+  /**
+   * Two-piece shafts only (`layout: "two-piece"`): then `joints` are front, centre, rear; `tube` is the
+   * section both pieces use (length, mass and price of both); `criticalSpeed*` the governing piece;
+   * `balance` the whole rotor; `cutLengthMm` null (each piece has its own).
+   */
+  readonly layout?: "two-piece";
+  readonly pieces?: readonly ShaftPieceReport[];
+  readonly centreBearing?: CentreBearingReport;
   readonly checks: readonly Check[];
   readonly cautions: readonly string[];
   readonly curves?: CurveSet;

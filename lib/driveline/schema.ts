@@ -259,6 +259,13 @@ export const designFileSchema = object({
   if (d.layout === "two-piece" && !d.centreBearing) {
     add(["centreBearing"], "is required for a two-piece layout (the catalogue centre bearing)");
   }
+  const from = d.centreBearing?.fromFrontMm;
+  if (d.layout === "two-piece" && from != null && d.lengthMm != null && from >= d.lengthMm) {
+    add(
+      ["centreBearing", "fromFrontMm"],
+      "must be less than lengthMm (the centre joint lies between the ends)",
+    );
+  }
   if (d.slip && d.lengthMm != null && d.slip.collapsedLengthMm > d.lengthMm) {
     add(
       ["slip", "collapsedLengthMm"],
@@ -348,6 +355,17 @@ function fittingReferenceIssues(design: DesignFile, catalogue: Catalogue): Field
         message: `${path}: must be a joint series in the catalogue (unknown "${seriesId}")`,
       });
     }
+  }
+  const bearingId = design.centreBearing?.bearingId;
+  if (
+    design.layout === "two-piece" &&
+    bearingId != null &&
+    !(catalogue.centreBearings ?? []).some((b) => b.id === bearingId)
+  ) {
+    issues.push({
+      path: "centreBearing.bearingId",
+      message: `centreBearing.bearingId: must be a centre bearing in the catalogue (unknown "${bearingId}")`,
+    });
   }
   return issues;
 }
@@ -574,6 +592,21 @@ const slipYokeEntrySchema = object({
   source: sourceText(SOURCE_REQUIRED),
 });
 
+/** A centre support bearing (two-piece shafts): its stub's weld seat, the centre joint's series, price. */
+const centreBearingEntrySchema = object({
+  id: id(),
+  name: name(),
+  jointSeriesId: id(),
+  tubeOdMm: bounded(PHYSICAL_MAX.tubeOdMm, "mm"),
+  weldFamily: z.enum(["steel", "aluminium", "composite"], {
+    error: "must be steel, aluminium or composite",
+  }),
+  jointCentreToWeldSeatMm: bounded(PHYSICAL_MAX.slipMm, "mm"),
+  massKg: bounded(1_000, "kg"),
+  priceCents: cents(),
+  source: sourceText(SOURCE_REQUIRED),
+});
+
 /** For each row whose id repeats an earlier row's: its index and that earlier row's index. */
 function repeatedIds(list: readonly { id: string }[]): { index: number; first: number; id: string }[] {
   const first = new Map<string, number>();
@@ -582,6 +615,27 @@ function repeatedIds(list: readonly { id: string }[]): { index: number; first: n
     const seen = first.get(row.id);
     if (seen === undefined) first.set(row.id, index);
     else out.push({ index, first: seen, id: row.id });
+  });
+  return out;
+}
+
+/** Repeated ids and unknown joint series among a catalogue's centre bearings (paths from the catalogue). */
+function centreBearingIssues(c: {
+  jointSeries: readonly { id: string }[];
+  centreBearings?: readonly { id: string; jointSeriesId: string }[] | undefined;
+}): { path: (string | number)[]; message: string }[] {
+  const list = c.centreBearings ?? [];
+  const out = repeatedIds(list).map((r) => ({
+    path: ["centreBearings", r.index, "id"],
+    message: `must be unique (row ${r.first + 1} already uses "${r.id}")`,
+  }));
+  const series = new Set(c.jointSeries.map((j) => j.id));
+  list.forEach((b, i) => {
+    if (!series.has(b.jointSeriesId))
+      out.push({
+        path: ["centreBearings", i, "jointSeriesId"],
+        message: `must be a joint series in this catalogue (no series "${b.jointSeriesId}")`,
+      });
   });
   return out;
 }
@@ -602,6 +656,7 @@ export const catalogueSchema = object({
   endFittings: z.array(endFittingEntrySchema, { error: "must be a list" }),
   jointSeries: z.array(jointSeriesEntrySchema, { error: "must be a list" }),
   slipYokes: z.array(slipYokeEntrySchema, { error: "must be a list" }).optional(),
+  centreBearings: z.array(centreBearingEntrySchema, { error: "must be a list" }).optional(),
 }).check((ctx) => {
   const c = ctx.value;
   for (const r of repeatedIds(c.slipYokes ?? []))
@@ -611,6 +666,7 @@ export const catalogueSchema = object({
       path: ["slipYokes", r.index, "id"],
       message: `must be unique (row ${r.first + 1} already uses "${r.id}")`,
     });
+  centreBearingIssues(c).forEach((issue) => ctx.issues.push({ code: "custom", input: c, ...issue }));
   for (const key of ["materials", "tubes", "endFittings", "jointSeries"] as const) {
     for (const r of repeatedIds(c[key]))
       ctx.issues.push({

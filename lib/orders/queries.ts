@@ -190,6 +190,39 @@ export interface ShaftSource {
   repair?: RepairBlock | null;
 }
 
+/** A two-piece shaft's key numbers: the centre bearing, and each piece's cut length, index and balance (null for one piece). */
+function twoPieceFacts(r: Partial<EvaluationReport>): ShaftView["facts"] | null {
+  if (r.layout !== "two-piece") return null;
+  const pieces = r.pieces ?? [];
+  const each = (f: (p: (typeof pieces)[number]) => string) =>
+    pieces.map((p) => `${p.piece} ${f(p)}`).join(" / ");
+  return [
+    { label: "Installed length", value: fmt(r.lengthMm, 1, " mm") },
+    {
+      label: "Two pieces, centre bearing",
+      value: r.centreBearing
+        ? `${r.centreBearing.bearingId} at ${fmt(r.centreBearing.fromFrontMm, 1, " mm")} from the front`
+        : "—",
+    },
+    { label: "Cut lengths", value: each((p) => fmt(p.cutLengthMm, 1, " mm")) },
+    {
+      label: "Tube",
+      value: r.tube ? `${fmt(r.tube.odMm, 1)} × ${fmt(r.tube.wallMm, 2)} mm ${r.tube.materialId}` : "—",
+    },
+    {
+      label: "Working angles (front / centre / rear)",
+      value: r.joints ? r.joints.map((j) => fmt(j.workingAngleDeg, 2, "°")).join(" / ") : "—",
+    },
+    { label: "Rear yoke indices", value: each((p) => fmt(p.phaseIndexDeg, 1, "°")) },
+    { label: "Critical speed (each piece)", value: each((p) => fmt(p.criticalSpeedRpm, 0, " rpm")) },
+    { label: "Torsion safety factor", value: fmt(r.torsion?.safetyFactor, 2) },
+    {
+      label: "Balance (per plane)",
+      value: `${each((p) => fmt(p.balance.perPlaneGmm, 0, " g·mm"))} at G ${fmt(r.balance?.gradeMmS, 1)}`,
+    },
+  ];
+}
+
 /** A shaft's key numbers, checks and price, as plain data for the screens. */
 export function shaftView(s: ShaftSource): ShaftView {
   // A frozen EvaluationReport; read defensively, since an older order may predate a field.
@@ -202,7 +235,7 @@ export function shaftView(s: ShaftSource): ShaftView {
     overall: s.overall,
     priceLines: s.priceLines,
     priceCents: s.priceCents,
-    facts: [
+    facts: twoPieceFacts(r) ?? [
       { label: "Installed length", value: fmt(r.lengthMm, 1, " mm") },
       s.repair
         ? { label: "Cut length (re-tube)", value: `${fmt(s.repair.weldToWeldMm, 1, " mm")} weld-to-weld` }

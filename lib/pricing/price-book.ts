@@ -30,6 +30,8 @@ export const priceBookSchema = z.object({
   balancingPerShaftCents: money(),
   /** Re-tube / repair orders: taking the customer's shaft apart and inspecting the parts kept, per shaft. */
   teardownPerShaftCents: money().default(4500),
+  /** Two-piece shafts: cutting, welding and phasing the second piece and fitting the centre bearing. */
+  labourPerExtraPieceCents: money().default(9500),
   /** Tube is charged on the cut length plus this allowance for facing and waste. */
   tubeAllowanceMm: millimetres(1_000),
   /** Shortest length of tube charged. */
@@ -59,6 +61,7 @@ export const defaultPriceBook: PriceBook = {
   labourPerShaftCents: 14500,
   balancingPerShaftCents: 6500,
   teardownPerShaftCents: 4500,
+  labourPerExtraPieceCents: 9500,
   tubeAllowanceMm: 50,
   minimumTubeChargeMm: 300,
   taxRatePercent: 8.5,
@@ -70,7 +73,16 @@ export const defaultPriceBook: PriceBook = {
 };
 
 export interface QuoteLine {
-  code: "tube" | "fitting" | "joint" | "labour" | "balance" | "teardown" | "shipping" | "tax";
+  code:
+    | "tube"
+    | "fitting"
+    | "joint"
+    | "centre-bearing"
+    | "labour"
+    | "balance"
+    | "teardown"
+    | "shipping"
+    | "tax";
   label: string;
   quantity: number;
   unitCents: number;
@@ -93,6 +105,21 @@ export interface PricedShaft {
   } | null;
   /** Parts matched to the vehicle beyond the ends' fittings and joints (the slip yoke). */
   interface?: { parts?: readonly { name: string; priceCents: number }[] } | null;
+  /** Two-piece shafts: each piece's tube and ends, and the centre bearing (see quoteTwoPieceShaft). */
+  layout?: "two-piece";
+  pieces?: readonly PricedPiece[];
+  centreBearing?: { name: string; priceCents: number; jointSeriesId: string };
+}
+
+/** One piece of a two-piece shaft as pricing reads it. */
+export interface PricedPiece {
+  piece: "A" | "B";
+  position: "front" | "rear";
+  tube: { tubeLengthMm: number };
+  ends: {
+    front: { name: string; priceCents: number; jointSeriesId: string; kind?: string } | null;
+    rear: { name: string; priceCents: number; jointSeriesId: string; kind?: string } | null;
+  };
 }
 
 /** An end fitting and the joint fitted there (`crossSeriesId`: a conversion cross, a greaseable cross or a double-Cardan joint). */
@@ -143,6 +170,8 @@ export function quoteShaft(
   joints: readonly JointPrice[],
   reused?: ReusedParts | null,
 ): QuoteLine[] {
+  if (shaft.layout === "two-piece" && shaft.pieces?.length && shaft.centreBearing)
+    return quoteTwoPieceShaft(shaft, book, tubePricePerMetreCents, joints);
   const chargedMm = Math.max(book.minimumTubeChargeMm, shaft.tube.tubeLengthMm + book.tubeAllowanceMm);
   const metres = Math.round(chargedMm) / 1000;
   const lines: QuoteLine[] = [
@@ -181,6 +210,68 @@ export function interfacePartLines(shaft: PricedShaft, reused?: ReusedParts | nu
   return (shaft.interface?.parts ?? []).map((p) =>
     reused?.slipYoke ? reusedLine("fitting", p.name) : line("fitting", p.name, 1, p.priceCents),
   );
+}
+
+const PIECE_NAMES = { A: "piece A (front)", B: "piece B (rear)" } as const;
+
+/**
+ * The price lines of a two-piece shaft: each piece's tube by its own cut length (each cut gets the
+ * allowance and the shortest charge), the fittings of both pieces (the front piece's stub comes with
+ * the centre bearing), the centre bearing, a joint at the front, the centre and the rear, labour for
+ * the first piece plus the extra piece, and balancing for each piece.
+ */
+export function quoteTwoPieceShaft(
+  shaft: PricedShaft,
+  book: PriceBook,
+  tubePricePerMetreCents: number,
+  joints: readonly JointPrice[],
+): QuoteLine[] {
+  const pieces = shaft.pieces ?? [];
+  const lines: QuoteLine[] = [];
+  for (const p of pieces) {
+    const chargedMm = Math.max(book.minimumTubeChargeMm, p.tube.tubeLengthMm + book.tubeAllowanceMm);
+    lines.push(
+      line(
+        "tube",
+        `Tube ${shaft.tube.odMm.toFixed(1)} × ${shaft.tube.wallMm.toFixed(2)} mm ${shaft.tube.materialId}, ${PIECE_NAMES[p.piece]}, ${Math.round(chargedMm)} mm`,
+        Math.round(chargedMm) / 1000,
+        tubePricePerMetreCents,
+      ),
+    );
+  }
+  for (const p of pieces) {
+    const ends = [
+      [p.ends.front, p.position === "front" ? "front end" : "centre end"],
+      [p.ends.rear, p.position === "rear" ? "rear end" : "centre end"],
+    ] as const;
+    for (const [end, where] of ends) {
+      if (!end || end.kind === "centre-bearing-stub") continue;
+      lines.push(line("fitting", `${end.name}, ${PIECE_NAMES[p.piece]}, ${where}`, 1, end.priceCents));
+    }
+  }
+  const bearing = shaft.centreBearing!;
+  lines.push(line("centre-bearing", bearing.name, 1, bearing.priceCents));
+  const seriesIds = [
+    ["front", pieces[0]?.ends.front?.jointSeriesId],
+    ["centre", bearing.jointSeriesId],
+    ["rear", pieces[pieces.length - 1]?.ends.rear?.jointSeriesId],
+  ] as const;
+  for (const [where, id] of seriesIds) {
+    const joint = joints.find((j) => j.id === id);
+    if (joint) lines.push(line("joint", `Universal joint ${joint.name}, ${where}`, 1, joint.priceCents));
+  }
+  lines.push(...interfacePartLines(shaft));
+  lines.push(line("labour", "Cut, weld, phase and straighten", 1, book.labourPerShaftCents));
+  lines.push(
+    line(
+      "labour",
+      "Second piece: cut, weld, phase and straighten; fit the centre bearing",
+      pieces.length - 1,
+      book.labourPerExtraPieceCents,
+    ),
+  );
+  lines.push(line("balance", "Dynamic balance, each piece", pieces.length, book.balancingPerShaftCents));
+  return lines;
 }
 
 export interface OrderQuote {

@@ -17,10 +17,11 @@ import {
   type StepSpec,
 } from "./steps";
 import { formatQuantity, type FloorUnits } from "./units";
+import { addTwoPieceTravellerPages } from "./pdf-two-piece";
 import type { TravellerStep, TravellerView } from "./view";
 
 /** Looking rearward: the front yoke's plane as a dashed reference, the rear yoke rotated by the index. */
-function drawPhaseDiagram(w: Writer, cx: number, cy: number, r: number, indexDeg: number): void {
+export function drawPhaseDiagram(w: Writer, cx: number, cy: number, r: number, indexDeg: number): void {
   const p = w.page;
   p.drawEllipse({ x: cx, y: cy, xScale: r, yScale: r, borderColor: BLACK, borderWidth: 0.8 });
   p.drawLine({
@@ -309,8 +310,19 @@ function retubeLine(
   );
 }
 
+/** What a page of a two-piece shaft's traveller changes: a line under the header, the block above the steps. */
+export interface PageOptions {
+  subtitle?: string;
+  block?: (w: Writer, top: number, left: number, width: number) => number;
+}
+
 /** Draws one shaft's traveller on a new page of `doc`. */
-async function addTravellerPage(doc: PDFDocument, view: TravellerView, f: Fonts): Promise<void> {
+export async function addTravellerPage(
+  doc: PDFDocument,
+  view: TravellerView,
+  f: Fonts,
+  options: PageOptions = {},
+): Promise<void> {
   const [pw, ph] = PAGE[view.floor.paperSize];
   const page = doc.addPage([pw, ph]);
   const w = new Writer(page, f);
@@ -354,8 +366,12 @@ async function addTravellerPage(doc: PDFDocument, view: TravellerView, f: Fonts)
   );
   y -= 96;
   if (view.retube) y = retubeLine(w, view.retube, view.floor.units, left, y, width);
+  if (options.subtitle) {
+    w.text(options.subtitle, left, y - 2, 10, f.bold);
+    y -= 12;
+  }
   w.rule(left, y, left + width, 1.2);
-  y = shaftBlock(w, view, y - 12, left, width);
+  y = (options.block ?? ((ww, t, l, wd) => shaftBlock(ww, view, t, l, wd)))(w, y - 12, left, width);
   y -= 4;
   if (view.acceptedExceptions.length) y = exceptionsBlock(w, view, y, left, width) - 4;
 
@@ -467,7 +483,10 @@ export async function renderTravellers(views: readonly TravellerView[]): Promise
   doc.setTitle(views.length === 1 ? `Traveller ${views[0]!.serial}` : `Travellers (${views.length})`);
   doc.setCreator("Yokeline");
   const f = await embedFonts(doc);
-  for (const view of views) await addTravellerPage(doc, view, f);
+  for (const view of views) {
+    if (view.report.layout === "two-piece") await addTwoPieceTravellerPages(doc, view, f);
+    else await addTravellerPage(doc, view, f);
+  }
   return doc.save();
 }
 

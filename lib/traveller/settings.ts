@@ -19,6 +19,7 @@ export const STEP_KINDS = [
   // Re-tube / repair orders only (lib/retube/steps.ts puts them before the routing).
   "teardown",
   "inspection",
+  "assembly",
 ] as const;
 export type StepKind = (typeof STEP_KINDS)[number];
 
@@ -74,6 +75,24 @@ export const defaultRouting: readonly RoutingStep[] = [
     instructions: ["Cap the ends, pack, and ship or hand over"],
   },
 ];
+
+/**
+ * Two-piece shafts: the assembly step that joins the pieces at the centre bearing and phases the
+ * three joints, inserted before final inspection when the shop's routing has no step of kind
+ * "assembly" of its own (one-piece shafts skip such a step). Common shop practice.
+ */
+export const defaultAssemblyStep: RoutingStep = {
+  code: "ASM",
+  kind: "assembly",
+  name: "Assemble at the centre bearing",
+  instructions: [
+    "Fit the centre bearing and the end yoke on the front piece's stub to the phase marks",
+    "Fit the centre joint to the rear piece, check both indices and the overall length",
+  ],
+};
+
+/** The pieces of a two-piece shaft: routing steps of these kinds are done once per piece. */
+export const PER_PIECE_KINDS: readonly StepKind[] = ["cut", "weld-phase", "runout", "balance"];
 
 const SHOP = "common shop practice";
 

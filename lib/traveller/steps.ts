@@ -9,6 +9,7 @@ import type { FloorSettings, RoutingStep, StepKind } from "./settings";
 import type { FloorQuantity } from "./units";
 import { retubeCutLengthMm, type RepairIntake } from "@/lib/retube/intake";
 import { inspectionFields, teardownFields, withRetubeSteps } from "@/lib/retube/steps";
+import { assemblyFields, deriveTwoPieceSteps } from "./two-piece-steps";
 
 /** A numeric limit in SI. `min`/`max` bound the value; for a `nominal` the tolerance is ±. */
 export interface NumericLimit {
@@ -51,6 +52,8 @@ export interface StepSpec {
   code: string;
   kind: StepKind;
   name: string;
+  /** Two-piece shafts: the piece this step is for ("A" front, "B" rear); absent for the whole shaft. */
+  piece?: "A" | "B";
   instructions: string[];
   fields: FieldSpec[];
 }
@@ -147,7 +150,7 @@ export function balanceLimit(report: EvaluationReport): { perPlaneGmm: number; s
   };
 }
 
-function fieldsFor(step: RoutingStep, ctx: StepContext): FieldSpec[] {
+export function fieldsFor(step: RoutingStep, ctx: StepContext): FieldSpec[] {
   const { report, floor } = ctx;
   const lengthTol = report.shopFloor.lengthToleranceMm;
   const lengthSource = report.shopFloor.sources[0] ?? "shop setting";
@@ -251,13 +254,16 @@ function fieldsFor(step: RoutingStep, ctx: StepContext): FieldSpec[] {
       return teardownFields(ctx);
     case "inspection":
       return inspectionFields(ctx);
+    case "assembly":
+      return assemblyFields(ctx);
   }
 }
 
 /** The record sheet of every step of the routing, in order. */
 export function deriveSteps(ctx: StepContext): StepSpec[] {
+  if (ctx.report.layout === "two-piece") return deriveTwoPieceSteps(ctx);
   const routing = ctx.repair ? withRetubeSteps(ctx.floor.routing) : ctx.floor.routing;
-  return routing.map((step, i) => ({
+  return oneShaftRouting(routing).map((step, i) => ({
     position: i + 1,
     code: step.code,
     kind: step.kind,
@@ -271,3 +277,6 @@ export function deriveSteps(ctx: StepContext): StepSpec[] {
     fields: fieldsFor(step, ctx),
   }));
 }
+
+/** An assembly step joins the pieces of a two-piece shaft; a one-piece shaft has none. */
+const oneShaftRouting = (routing: readonly RoutingStep[]) => routing.filter((s) => s.kind !== "assembly");

@@ -7,6 +7,7 @@ import { shearYieldFromTensileMPa } from "../torsion";
 import { tubeMassKg } from "../section";
 import type {
   Catalogue,
+  CentreBearing,
   EndFitting,
   FlangePattern,
   JointSeries,
@@ -431,6 +432,33 @@ export const defaultSlipYokes: readonly SlipYoke[] = (
   priceCents,
   source: SLIP_YOKE_SOURCE,
 }));
+/**
+ * Demo data: centre support bearings for two-piece shafts, one per joint series and steel tube OD the
+ * series' weld yokes take. Each is a rubber-isolated ball bearing in a bracket, with the splined stub
+ * that is welded to the front piece and the end yoke that slides on it (half of the centre joint).
+ * Dimensions, masses and prices are invented, sized like the weld yokes of the same series.
+ */
+function buildCentreBearings(): CentreBearing[] {
+  const out: CentreBearing[] = [];
+  for (const series of defaultJointSeries) {
+    const f = FITTING_SERIES[series.id]!;
+    const code = series.id.slice(3);
+    for (const odIn of f.odsIn) {
+      out.push({
+        id: `YL-CB-${code}-${Math.round(odIn * 1000)}`,
+        name: `Centre bearing, stub and end yoke ${series.id}, ${odIn} in tube`,
+        jointSeriesId: series.id,
+        tubeOdMm: odIn * IN,
+        weldFamily: "steel",
+        jointCentreToWeldSeatMm: Math.round(f.seatMm * 2.2),
+        massKg: Math.round((f.massKg * 2.1 + 0.9) * 100) / 100,
+        priceCents: Math.round(f.priceCents * 3.4 + 4500),
+        source: "demo data (invented part); use the bearing maker's sheet",
+      });
+    }
+  }
+  return out;
+}
 
 /** The built-in demonstration catalogue (demo: true). */
 export const defaultCatalogue: Catalogue = {
@@ -447,4 +475,5 @@ export const defaultCatalogue: Catalogue = {
     ...defaultDoubleCardanJoints,
   ],
   slipYokes: defaultSlipYokes,
+  centreBearings: buildCentreBearings(),
 };

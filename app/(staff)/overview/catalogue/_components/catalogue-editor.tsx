@@ -22,6 +22,7 @@ import {
   TubesSection,
 } from "./editor-sections";
 import type { Path } from "./editor-inputs";
+import { CentreBearingsSection } from "./centre-bearings-section";
 
 /** Every field message in the form's error tree, with its dotted path. */
 function flatten(errors: FieldErrors, prefix: string[] = []): { at: string[]; message: string }[] {
@@ -336,6 +337,7 @@ const Sections = memo(function Sections({ currency }: { currency: string }) {
       <FittingsSection />
       <JointsSection />
       <SlipYokesSection />
+      <CentreBearingsSection />
       <LimitsSection />
       <FloorSection />
     </>

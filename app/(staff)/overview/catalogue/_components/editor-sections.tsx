@@ -8,10 +8,10 @@ import { defaultFloorLimits, STEP_KINDS, type FloorLimitKey } from "@/lib/travel
 import { CheckboxInput, LinesInput, NumberInput, SelectInput, TextInput, type Path } from "./editor-inputs";
 
 const TH = "px-2 py-2 font-semibold whitespace-nowrap";
-const TD = "px-2 py-1.5 align-top";
-const inches = (digits: number) => (mm: number) => `${mmToIn(mm).toFixed(digits)} in`;
+export const TD = "px-2 py-1.5 align-top";
+export const inches = (digits: number) => (mm: number) => `${mmToIn(mm).toFixed(digits)} in`;
 
-const WELD_FAMILIES = [
+export const WELD_FAMILIES = [
   { value: "steel", label: "Steel" },
   { value: "aluminium", label: "Aluminium" },
   { value: "composite", label: "Composite" },
@@ -22,7 +22,7 @@ const FITTING_KINDS = [
   { value: "flange-yoke", label: "Flange yoke" },
 ];
 
-function Section({
+export function Section({
   id,
   title,
   description,
@@ -51,7 +51,7 @@ function Section({
   );
 }
 
-function Table({
+export function Table({
   caption,
   headings,
   children,
@@ -82,7 +82,7 @@ function Table({
   );
 }
 
-function AddButton({ label, onClick }: { label: string; onClick: () => void }) {
+export function AddButton({ label, onClick }: { label: string; onClick: () => void }) {
   return (
     <button type="button" className="btn-quiet" onClick={onClick}>
       <Plus className="size-4" aria-hidden="true" />
@@ -91,7 +91,7 @@ function AddButton({ label, onClick }: { label: string; onClick: () => void }) {
   );
 }
 
-function RemoveButton({ label, onClick }: { label: string; onClick: () => void }) {
+export function RemoveButton({ label, onClick }: { label: string; onClick: () => void }) {
   return (
     <button
       type="button"
@@ -106,7 +106,7 @@ function RemoveButton({ label, onClick }: { label: string; onClick: () => void }
 }
 
 /** The id a row is called by in labels ("tube YL-T-…", or "new tube, row 4"). */
-function useRowName(path: Path, noun: string, index: number): string {
+export function useRowName(path: Path, noun: string, index: number): string {
   const value = useWatch<ShopConfigDocumentInput>({ name: path });
   return typeof value === "string" && value.trim() ? `${noun} ${value}` : `new ${noun}, row ${index + 1}`;
 }
@@ -124,6 +124,12 @@ export function PolicySection({ currency }: { currency: string }) {
         <NumberInput
           name="priceBook.teardownPerShaftCents"
           label="Re-tube teardown and inspection"
+          money
+          visibleLabel
+        />
+        <NumberInput
+          name="priceBook.labourPerExtraPieceCents"
+          label="Labour per extra piece (two-piece)"
           money
           visibleLabel
         />
@@ -368,7 +374,7 @@ export function TubesSection() {
   );
 }
 
-function useSeriesOptions() {
+export function useSeriesOptions() {
   const series = useWatch<ShopConfigDocumentInput, "catalogue.jointSeries">({
     name: "catalogue.jointSeries",
   });
@@ -957,6 +963,7 @@ const STEP_KIND_LABELS: Record<(typeof STEP_KINDS)[number], string> = {
   "sign-off": "Sign-off",
   teardown: "Teardown (re-tube)",
   inspection: "Inspect reused parts (re-tube)",
+  assembly: "Assembly (two-piece)",
 };
 
 function RoutingRow({
