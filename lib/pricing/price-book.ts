@@ -74,15 +74,7 @@ export const defaultPriceBook: PriceBook = {
 
 export interface QuoteLine {
   code:
-    | "tube"
-    | "fitting"
-    | "joint"
-    | "centre-bearing"
-    | "labour"
-    | "balance"
-    | "teardown"
-    | "shipping"
-    | "tax";
+    "tube" | "fitting" | "joint" | "centre-bearing" | "labour" | "balance" | "teardown" | "shipping" | "tax";
   label: string;
   quantity: number;
   unitCents: number;
