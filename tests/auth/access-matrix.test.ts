@@ -206,7 +206,8 @@ beforeAll(async () => {
   await signUpVerified({ name: "Other Buyer", email: otherEmail, password: PASSWORD });
   cookies.customer = await signInCookie(customerEmail);
   cookies.other = await signInCookie(otherEmail);
-  const staff: Partial<Record<"counter" | "floor" | "owner", User>> = {};
+  const staff: Partial<Record<"counter" | "floor" | "owner", { id: string; name: string; email: string }>> =
+    {};
   for (const role of ["counter", "floor", "owner"] as const) {
     const email = uniqueEmail(`matrix-${role}`);
     staff[role] = await createStaffUser({ name: `Matrix ${role}`, email, role, password: PASSWORD }, null);
