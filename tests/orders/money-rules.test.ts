@@ -9,12 +9,12 @@ import { POST as checkoutPost } from "@/app/api/orders/[id]/checkout/route";
 import { createStaffUser } from "@/lib/users/staff";
 import type { Role } from "@/lib/auth/roles";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest } from "../setup/db";
 import { newCustomer, payWithCard, saveDesign, startPaymentsHarness } from "../setup/orders";
 
 let harness: Awaited<ReturnType<typeof startPaymentsHarness>>;
 beforeAll(async () => {
-  if (hasDatabase) harness = await startPaymentsHarness();
+  harness = await startPaymentsHarness();
 });
 afterAll(async () => harness?.close());
 
