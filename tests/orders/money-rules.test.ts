@@ -4,7 +4,7 @@ import { AuditEvent, Order, OrderEvent, Payment, Refund } from "@/entities";
 import { getEm, inTransaction } from "@/lib/db/orm";
 import { placeOrder } from "@/lib/orders/place-order";
 import { requestBalance, startCheckout } from "@/lib/orders/payments";
-import { payments } from "@/lib/payments/stripe";
+import { payments } from "@/lib/payments";
 import { POST as checkoutPost } from "@/app/api/orders/[id]/checkout/route";
 import { createStaffUser } from "@/lib/users/staff";
 import type { Role } from "@/lib/auth/roles";
