@@ -11,7 +11,7 @@ export default function ErrorPage({
 }) {
   return (
     <main id="main">
-      <ErrorScreen error={error} reset={reset} />
+      <ErrorScreen error={error} reset={reset} brand />
     </main>
   );
 }

@@ -5,6 +5,7 @@ export default function Forbidden() {
   return (
     <main id="main">
       <StatusPanel
+        brand
         code="403"
         title="This page is for shop staff"
         actions={

@@ -1,6 +1,5 @@
 "use client";
 import "./globals.css";
-import { BrandMark } from "@/components/brand-mark";
 import { ErrorScreen } from "@/components/error-screen";
 
 // When even the root layout fails: it replaces the whole document, so it brings its own html and body.
@@ -17,12 +16,8 @@ export default function GlobalError({
         <title>Error · Yokeline</title>
       </head>
       <body className="bg-paper font-sans">
-        <main id="main" className="flex min-h-dvh flex-col items-center px-4 py-10">
-          <span className="flex items-center gap-3 text-ink">
-            <BrandMark className="size-10" />
-            <span className="text-2xl font-bold tracking-tight">Yokeline</span>
-          </span>
-          <ErrorScreen error={error} reset={reset} />
+        <main id="main">
+          <ErrorScreen error={error} reset={reset} brand />
         </main>
       </body>
     </html>

@@ -5,6 +5,7 @@ export default function NotFound() {
   return (
     <main id="main">
       <StatusPanel
+        brand
         code="404"
         title="Nothing here"
         actions={

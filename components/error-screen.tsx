@@ -14,7 +14,10 @@ export function ErrorScreen({
   error,
   reset,
   homeHref = "/",
+  brand = false,
 }: {
+  /** Outside the app's frame (the root error boundaries): show the brand. */
+  brand?: boolean;
   error: Error & { digest?: string };
   reset: () => void;
   homeHref?: string;
@@ -26,6 +29,7 @@ export function ErrorScreen({
   }, [error]);
   return (
     <StatusPanel
+      brand={brand}
       code="Error"
       title="This screen could not be shown"
       actions={

@@ -1,3 +1,5 @@
+import { BrandMark } from "@/components/brand-mark";
+
 /**
  * The centred message of the app's own error, not-found and refusal screens: a code, a heading,
  * a sentence of what to do, and the ways back.
@@ -7,7 +9,10 @@ export function StatusPanel({
   title,
   children,
   actions,
+  brand = false,
 }: {
+  /** Show the brand above the message (screens outside the app's frame). */
+  brand?: boolean;
   code: string;
   title: string;
   children?: React.ReactNode;
@@ -15,6 +20,12 @@ export function StatusPanel({
 }) {
   return (
     <div className="mx-auto max-w-lg px-4 py-16 text-center">
+      {brand && (
+        <span className="mb-8 inline-flex items-center gap-3 text-ink">
+          <BrandMark className="size-10" />
+          <span className="text-2xl font-bold tracking-tight">Yokeline</span>
+        </span>
+      )}
       <p className="font-mono text-sm text-ink-muted">{code}</p>
       <h1 className="mt-2 text-2xl font-bold">{title}</h1>
       {children && <div className="mt-2 text-ink-muted">{children}</div>}
