@@ -1,6 +1,36 @@
 import nextVitals from "eslint-config-next/core-web-vitals";
 import nextTs from "eslint-config-next/typescript";
 
+const SERVER_ONLY_IMPORT = /^(@mikro-orm\/|pg($|\/)|@\/lib\/db($|\/)|@\/entities($|\/))/;
+
+/** Reports a database, ORM or entity import in a client component or anywhere under components/. */
+const clientBoundary = {
+  meta: {
+    type: "problem",
+    messages: {
+      server:
+        "{{source}}: client components and components/ get plain view models, never the database, the ORM or entities.",
+    },
+    schema: [],
+  },
+  create(context) {
+    const file = context.filename.split("\\").join("/");
+    let client = /\/components\//.test(file);
+    return {
+      Program(node) {
+        for (const statement of node.body) {
+          if (statement.type !== "ExpressionStatement" || typeof statement.directive !== "string") break;
+          if (statement.directive === "use client") client = true;
+        }
+      },
+      ImportDeclaration(node) {
+        if (client && SERVER_ONLY_IMPORT.test(String(node.source.value)))
+          context.report({ node, messageId: "server", data: { source: String(node.source.value) } });
+      },
+    };
+  },
+};
+
 /** Next's recommended rules (React, hooks, accessibility, imports) plus its TypeScript rules. */
 const config = [
   ...nextVitals,
@@ -13,6 +43,40 @@ const config = [
         { argsIgnorePattern: "^_", varsIgnorePattern: "^_", destructuredArrayIgnorePattern: "^_" },
       ],
     },
+  },
+  // The engineering core is pure: no I/O, no framework, nothing from the app around it
+  // (DEVELOPERS.md "Layout"; the browser, the server and the CLI all import it).
+  {
+    files: ["lib/driveline/**/*.{ts,tsx}"],
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        {
+          patterns: [
+            {
+              regex:
+                "^(node:|next($|/)|react($|/|-dom)|@mikro-orm/|pg($|/)|pg-boss|stripe|resend|nodemailer|server-only)",
+              message: "lib/driveline is pure TypeScript: no I/O, no framework, no database.",
+            },
+            {
+              regex: "^@/(?!lib/driveline(/|$))",
+              message: "lib/driveline imports only from lib/driveline (no app modules, no entities).",
+            },
+            {
+              regex: "^(fs|path|http|https|net|child_process|crypto|os|url|stream|zlib|worker_threads)$",
+              message: "lib/driveline does no I/O: Node's modules stay outside the core.",
+            },
+          ],
+        },
+      ],
+    },
+  },
+  // Client components ("use client" files, and everything in components/) never reach the database,
+  // the ORM or entities: they get plain view models.
+  {
+    files: ["**/*.{ts,tsx}"],
+    plugins: { yokeline: { rules: { "client-boundary": clientBoundary } } },
+    rules: { "yokeline/client-boundary": "error" },
   },
   {
     ignores: [

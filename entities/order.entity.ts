@@ -19,17 +19,10 @@ import { OrderEvent } from "./order-event.entity";
 import { WorkOrder } from "./work-order.entity";
 import { OrderNote } from "./order-note.entity";
 
-export const ORDER_STATUSES = [
-  "awaiting_payment",
-  "received",
-  "in_shop",
-  "ready",
-  "shipped",
-  "cancelled",
-] as const;
-export type OrderStatus = (typeof ORDER_STATUSES)[number];
-export const PAYMENT_STATES = ["unpaid", "deposit_paid", "paid", "partially_refunded", "refunded"] as const;
-export type PaymentState = (typeof PAYMENT_STATES)[number];
+import { ORDER_STATUSES, PAYMENT_STATES, type OrderStatus, type PaymentState } from "../lib/orders/states";
+
+// The state unions live in lib/orders/states.ts (screens use them without the ORM); re-exported here.
+export { ORDER_STATUSES, PAYMENT_STATES, type OrderStatus, type PaymentState };
 
 /** One customer order: one or more shafts, a price, a promised date, its payments and timeline. */
 @Entity({ tableName: "shop_order" })

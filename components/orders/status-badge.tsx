@@ -1,4 +1,4 @@
-import type { OrderStatus, PaymentState } from "@/entities";
+import type { OrderStatus, PaymentState } from "@/lib/orders/states";
 import { ORDER_STATUS_LABEL, PAYMENT_STATE_LABEL } from "@/lib/orders/labels";
 
 const ORDER_TONE: Record<OrderStatus, string> = {

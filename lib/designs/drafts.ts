@@ -1,4 +1,5 @@
 import "server-only";
+import { isUuid } from "@/lib/http/known-errors";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { Customer, Design, User } from "@/entities";
 import { AccessError, type CurrentUser } from "@/lib/auth/guard";
@@ -31,8 +32,6 @@ export interface DraftSummary {
   customerId: string | null;
   updatedAt: string;
 }
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** Staff at the counter (orders.desk) see every draft; customers (orders.own) their own; others none. */
 function scopeOf(user: CurrentUser): "staff" | "customer" {
@@ -94,7 +93,7 @@ function validDesign(input: unknown, catalogue: Catalogue): DesignFile {
 /** Loads a draft the user may see; anything else (absent, someone else's, not an id) is 404. */
 async function loadDraft(em: EntityManager, user: CurrentUser, id: string): Promise<Design> {
   const scope = scopeOf(user);
-  const draft = UUID.test(id)
+  const draft = isUuid(id)
     ? await em.findOne(Design, scope === "staff" ? { id } : { id, customer: { user: user.id } })
     : null;
   if (!draft) throw new AppError("not_found", "No such design.");

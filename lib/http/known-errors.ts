@@ -1,4 +1,5 @@
 import { ConnectionException, NotFoundError } from "@mikro-orm/core";
+import { z } from "zod";
 import { AppError } from "./errors";
 
 /** The message callers see while the database cannot be reached. */
@@ -7,11 +8,11 @@ export const DATABASE_DOWN_MESSAGE = "The database is not reachable just now; tr
 /** Node socket errors and PostgreSQL shutdown/start-up states (57P01–57P03). */
 const DOWN_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "EPIPE", "57P01", "57P02", "57P03"]);
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+const uuidSchema = z.uuid();
 
 /** Whether `value` is a well-formed UUID (what every id in Yokeline is). */
 export function isUuid(value: unknown): value is string {
-  return typeof value === "string" && UUID.test(value);
+  return uuidSchema.safeParse(value).success;
 }
 
 /**

@@ -1,3 +1,5 @@
+import "server-only";
+import { isUuid } from "@/lib/http/known-errors";
 import { EmailMessage } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 
@@ -19,8 +21,6 @@ export interface OutboxMessage extends OutboxRow {
   text: string;
   orderId: string | null;
 }
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 function toRow(m: Omit<EmailMessage, "html" | "text">): OutboxRow {
   return {
@@ -50,7 +50,7 @@ export async function listOutbox(limit = 200): Promise<OutboxRow[]> {
 
 /** One outbox message with its HTML and text, or null. */
 export async function getOutboxMessage(id: string): Promise<OutboxMessage | null> {
-  if (!UUID.test(id)) return null;
+  if (!isUuid(id)) return null;
   const em = await getEm();
   const m = await em.findOne(EmailMessage, { id });
   return m ? { ...toRow(m), html: m.html, text: m.text, orderId: m.orderId ?? null } : null;

@@ -1,3 +1,5 @@
+import "server-only";
+import { isUuid } from "@/lib/http/known-errors";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { Order } from "@/entities";
 import type { CurrentUser } from "@/lib/auth/guard";
@@ -18,7 +20,7 @@ export async function loadOrderForUser(
   user: CurrentUser,
   orderId: string,
 ): Promise<Order> {
-  const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(orderId);
+  const uuid = isUuid(orderId);
   const order = uuid
     ? await em.findOne(
         Order,

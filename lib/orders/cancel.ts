@@ -6,7 +6,7 @@ import { recordAudit } from "@/lib/audit";
 import { inTransaction } from "@/lib/db/orm";
 import { AppError } from "@/lib/http/errors";
 import { logger } from "@/lib/logger";
-import { payments } from "@/lib/payments/stripe";
+import { payments } from "@/lib/payments";
 import { PaymentsUnavailableError } from "@/lib/payments/port";
 import { formatMoney } from "@/lib/pricing/price-book";
 import { getShopEngineering } from "@/lib/shop/config";

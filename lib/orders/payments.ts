@@ -7,7 +7,7 @@ import { recordAudit } from "@/lib/audit";
 import { getEm, inTransaction } from "@/lib/db/orm";
 import { AppError } from "@/lib/http/errors";
 import { logger } from "@/lib/logger";
-import { payments } from "@/lib/payments/stripe";
+import { payments } from "@/lib/payments";
 import { PaymentsUnavailableError, type PaymentEvent } from "@/lib/payments/port";
 import { can } from "@/lib/auth/permissions";
 import { appUrl } from "@/lib/http/app-url";

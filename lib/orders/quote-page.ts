@@ -1,3 +1,4 @@
+import "server-only";
 import { Customer, Design } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 import type { CurrentUser } from "@/lib/auth/guard";

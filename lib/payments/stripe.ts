@@ -156,10 +156,3 @@ function toPaymentEvent(event: Stripe.Event): PaymentEvent {
       return { id: event.id, type: "other", providerType: event.type, raw: event };
   }
 }
-
-let instance: PaymentsPort | null = null;
-/** The app's payments port (configured from the environment once). */
-export function payments(): PaymentsPort {
-  instance ??= createStripePayments();
-  return instance;
-}

@@ -1,3 +1,5 @@
+import "server-only";
+import { isUuid } from "@/lib/http/known-errors";
 import { createHash } from "node:crypto";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { fileTypeFromBuffer } from "file-type";
@@ -140,7 +142,7 @@ export async function listOrderUploads(em: EntityManager, order: Order): Promise
 
 /** An upload together with the id of its order, for the access check; null when absent. */
 export async function findUpload(em: EntityManager, uploadId: string): Promise<Upload | null> {
-  if (!/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(uploadId)) return null;
+  if (!isUuid(uploadId)) return null;
   return em.findOne(Upload, { id: uploadId });
 }
 

@@ -1,6 +1,6 @@
 import { describe, expect } from "vitest";
-import { AccessError, authorize } from "@/lib/auth/guard";
-import { ROLE_PERMISSIONS, type Permission } from "@/lib/auth/permissions";
+import { authorize, type AccessError } from "@/lib/auth/guard";
+import type { Permission } from "@/lib/auth/permissions";
 import { createStaffUser } from "@/lib/users/staff";
 import type { Role } from "@/lib/auth/roles";
 import { authRequest, sessionCookie, signUpVerified, uniqueEmail } from "../setup/auth-requests";
@@ -20,41 +20,46 @@ async function signedInAs(role: Role): Promise<Headers> {
   return new Headers({ cookie: sessionCookie(res) });
 }
 
-const STAFF_PERMISSIONS: Permission[] = [
-  "orders.desk",
-  "floor.scan",
-  "shop.overview",
-  "shop.manage",
-  "staff.manage",
-  "payments.refund",
-];
+// Who holds what, written out by hand from the house rules (DEVELOPERS.md "Access"; issue 11: the
+// expectations may not be read from lib/auth/permissions.ts, the table under test). Typed as a
+// Record over Permission, so a new permission does not compile until it has a row here.
+// Columns:                          customer counter floor owner
+// prettier-ignore
+const EXPECTED: Record<Permission, [boolean, boolean, boolean, boolean]> = {
+  "orders.own":                     [true,    false,  false, false],
+  "orders.desk":                    [false,   true,   false, true],
+  "floor.scan":                     [false,   false,  true,  true],
+  "shop.overview":                  [false,   false,  false, true],
+  "shop.manage":                    [false,   false,  false, true],
+  "staff.manage":                   [false,   false,  false, true],
+  "payments.refund":                [false,   false,  false, true],
+  "orders.cancel-released":         [false,   false,  false, true],
+  "engineering.signoff":            [false,   false,  false, true],
+  "mail.outbox":                    [false,   false,  false, true],
+};
+const ROLES = ["customer", "counter", "floor", "owner"] as const;
 
 describe("the one access guard", () => {
-  dbTest("no session → 401", async () => {
+  dbTest("no session → 401, for any permission and for none", async () => {
     await expect(authorize("orders.own", new Headers())).rejects.toMatchObject({ status: 401 });
+    await expect(authorize(null, new Headers())).rejects.toMatchObject({ status: 401 });
   });
 
-  dbTest("a customer is refused every staff permission (403)", async () => {
-    const headers = await signedInAs("customer");
-    for (const permission of STAFF_PERMISSIONS) {
-      const error = await authorize(permission, headers).catch((e: unknown) => e);
-      expect(error, permission).toBeInstanceOf(AccessError);
-      expect((error as AccessError).status).toBe(403);
-    }
-    await expect(authorize("orders.own", headers)).resolves.toMatchObject({ role: "customer" });
-  });
-
-  dbTest("each staff role holds exactly the permissions of the role table", async () => {
-    for (const role of ["counter", "floor", "owner"] as const) {
-      const headers = await signedInAs(role);
-      for (const permission of [...STAFF_PERMISSIONS, "orders.own" as const]) {
-        const allowed = ROLE_PERMISSIONS[role].includes(permission);
-        const outcome = await authorize(permission, headers).then(
-          () => "allowed",
-          (e: AccessError) => e.status,
-        );
-        expect(outcome, `${role} ${permission}`).toBe(allowed ? "allowed" : 403);
+  dbTest(
+    "each role holds exactly the permissions written above (a real session each)",
+    { timeout: 60_000 },
+    async () => {
+      for (const [column, role] of ROLES.entries()) {
+        const headers = await signedInAs(role);
+        await expect(authorize(null, headers), role).resolves.toMatchObject({ role });
+        for (const [permission, row] of Object.entries(EXPECTED) as [Permission, boolean[]][]) {
+          const outcome = await authorize(permission, headers).then(
+            (user) => `allowed as ${user.role}`,
+            (e: AccessError) => e.status,
+          );
+          expect(outcome, `${role} ${permission}`).toBe(row[column] ? `allowed as ${role}` : 403);
+        }
       }
-    }
-  });
+    },
+  );
 });

@@ -2,7 +2,7 @@ import { execFileSync, spawnSync } from "node:child_process";
 import { Client } from "pg";
 import { afterAll, beforeAll, describe, expect } from "vitest";
 import { migrateWithCli } from "../setup/global-setup";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 
 // Each case on its own fresh database: the seed only acts on an empty one.
 const admin = process.env.DATABASE_URL ?? "";
@@ -40,7 +40,7 @@ async function query<T>(url: string, sql: string, params: unknown[] = []): Promi
 }
 
 afterAll(async () => {
-  if (!hasDatabase) return;
+  requireDatabase();
   const client = new Client({ connectionString: admin });
   await client.connect();
   for (const db of databases) await client.query(`drop database if exists ${db} with (force)`);
@@ -49,7 +49,7 @@ afterAll(async () => {
 
 beforeAll(() => {
   // tsx is what `npm start` runs the seed with.
-  if (hasDatabase) execFileSync("npx", ["tsx", "--version"], { stdio: "ignore" });
+  execFileSync("npx", ["tsx", "--version"], { stdio: "ignore" });
 });
 
 describe("seed outside demo mode and the first owner", () => {

@@ -9,7 +9,7 @@ import type { ConfigChange } from "@/lib/catalogue/diff";
 import { getShopEngineering, invalidateShopEngineering } from "@/lib/shop/config";
 import { createStaffUser } from "@/lib/users/staff";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest } from "../setup/db";
 import { streetTruck } from "../setup/orders";
 
 const PASSWORD = "a-long-password-1";
@@ -35,14 +35,12 @@ const post = (body: unknown, cookie: string) =>
 // This file changes the shop's configuration: put it back as it was for the files after it.
 let original: { rows: unknown[] } = { rows: [] };
 beforeAll(async () => {
-  if (!hasDatabase) return;
   const c = new Client({ connectionString: process.env.DATABASE_URL });
   await c.connect();
   original = await c.query("select * from shop_config");
   await c.end();
 });
 afterAll(async () => {
-  if (!hasDatabase) return;
   const c = new Client({ connectionString: process.env.DATABASE_URL });
   await c.connect();
   await c.query("delete from shop_config_version");

@@ -11,7 +11,7 @@ import { createStaffUser } from "@/lib/users/staff";
 import type { ConfigChange } from "@/lib/catalogue/diff";
 import type { ShopConfigDocument } from "@/lib/catalogue/schemas";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 import { newCustomer, saveDesign } from "../setup/orders";
 
 const PASSWORD = "a-long-password-1";
@@ -47,15 +47,15 @@ async function editable(): Promise<{ version: number; doc: ShopConfigDocument }>
 // This file changes the shop's configuration: put it back as it was for the files after it.
 let original: { rows: unknown[] } = { rows: [] };
 beforeAll(async () => {
-  if (!hasDatabase) return;
-  const c = new Client({ connectionString: process.env.DATABASE_URL });
+  requireDatabase();
+  const c = new Client({ connectionString: requireDatabase() });
   await c.connect();
   original = await c.query("select * from shop_config");
   await c.end();
 });
 afterAll(async () => {
-  if (!hasDatabase) return;
-  const c = new Client({ connectionString: process.env.DATABASE_URL });
+  requireDatabase();
+  const c = new Client({ connectionString: requireDatabase() });
   await c.connect();
   await c.query("delete from shop_config_version");
   await c.query("delete from shop_config");

@@ -8,7 +8,7 @@ import { createStaffUser } from "@/lib/users/staff";
 import { GET as searchGet } from "@/app/api/customers/search/route";
 import { createCustomerAction } from "@/lib/actions/create-customer";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 import { newCustomer } from "../setup/orders";
 
 const PASSWORD = "a-long-password-1";
@@ -47,7 +47,7 @@ describe("the counter's customer search (GET /api/customers/search)", () => {
   let counterId = "";
 
   beforeAll(async () => {
-    if (!hasDatabase) return;
+    requireDatabase();
     const email = uniqueEmail("counter");
     counterId = (await createStaffUser({ name: "Counter", email, role: "counter", password: PASSWORD }, null))
       .id;

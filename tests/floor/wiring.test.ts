@@ -6,13 +6,13 @@ import { releaseOrder, submitStep } from "@/lib/floor/work-orders";
 import { startCheckout } from "@/lib/orders/payments";
 import { placeOrder } from "@/lib/orders/place-order";
 import { orderView, populateOrder } from "@/lib/orders/queries";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest } from "../setup/db";
 import { newCustomer, payWithCard, saveDesign, startPaymentsHarness } from "../setup/orders";
 import { code, good, key, staff } from "./helpers";
 
 let harness: Awaited<ReturnType<typeof startPaymentsHarness>>;
 beforeAll(async () => {
-  if (hasDatabase) harness = await startPaymentsHarness();
+  harness = await startPaymentsHarness();
 });
 afterAll(async () => harness?.close());
 

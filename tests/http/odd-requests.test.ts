@@ -16,7 +16,7 @@ import { refundPaymentAction } from "@/lib/actions/refund-payment";
 import { getEm } from "@/lib/db/orm";
 import { createStaffUser } from "@/lib/users/staff";
 import { authRequest, sessionCookie, signUpVerified, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 import { createTestOrder } from "../setup/test-orders";
 
 // Server actions read the session from next/headers; outside a Next request we hand it the cookie.
@@ -34,7 +34,7 @@ let ownerCookie = "";
 let orderId = "";
 
 beforeAll(async () => {
-  if (!hasDatabase) return;
+  requireDatabase();
   const email = uniqueEmail("odd");
   await signUpVerified({ name: "Odd Customer", email, password: PASSWORD });
   const res = await authRequest("/sign-in/email", { email, password: PASSWORD });

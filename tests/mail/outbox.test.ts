@@ -5,7 +5,7 @@ import { deliverEmail, enqueueDelivery, flushQueuedEmails, queueEmail } from "@/
 import { stopBoss } from "@/lib/jobs/boss";
 import { startMailWorkers } from "@/lib/mail/workers";
 import { startMailFake, type MailFake } from "@/fakes/mail/server";
-import { dbTest } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 import { uniqueEmail } from "../setup/auth-requests";
 import { createTestOrder } from "../setup/test-orders";
 import { SAMPLE_PROPS } from "./sample-props";
@@ -79,14 +79,13 @@ beforeAll(async () => {
   process.env.MAIL_RETRY_BACKOFF = "0";
   // Other test files leave e-mails queued (nothing delivers them there): this file's workers must
   // not send them, or they would take the failures this file arranges with fail-next.
-  if (process.env.DATABASE_URL) {
-    const em = await getEm();
-    await em.nativeUpdate(
-      EmailMessage,
-      { status: "queued" },
-      { status: "failed", lastError: "left queued by an earlier test file" },
-    );
-  }
+  requireDatabase();
+  const em = await getEm();
+  await em.nativeUpdate(
+    EmailMessage,
+    { status: "queued" },
+    { status: "failed", lastError: "left queued by an earlier test file" },
+  );
 });
 
 beforeEach(async () => {

@@ -22,7 +22,7 @@ import { invalidateShopEngineering } from "@/lib/shop/config";
 import { defaultCatalogue } from "@/lib/driveline";
 import { defaultPriceBook } from "@/lib/pricing/price-book";
 import { formatStepCode } from "@/lib/traveller/codes";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 import { newCustomer, payWithCard, saveDesign, startPaymentsHarness } from "../setup/orders";
 import { staff } from "../floor/helpers";
 
@@ -31,7 +31,7 @@ const FEE_PERCENT = 10;
 
 let harness: Awaited<ReturnType<typeof startPaymentsHarness>>;
 beforeAll(async () => {
-  if (!hasDatabase) return;
+  requireDatabase();
   harness = await startPaymentsHarness({ duplicateDelivery: false });
   const em = await getEm();
   await em.nativeDelete(ShopConfig, { id: 1 });
@@ -44,7 +44,7 @@ beforeAll(async () => {
   invalidateShopEngineering();
 });
 afterAll(async () => {
-  if (!hasDatabase) return;
+  requireDatabase();
   const em = await getEm();
   await em.nativeDelete(ShopConfig, { id: 1 });
   invalidateShopEngineering();

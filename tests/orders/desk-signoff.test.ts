@@ -22,7 +22,7 @@ import { recordCounterPaymentAction } from "@/lib/actions/record-counter-payment
 import { sendPaymentLinkAction } from "@/lib/actions/send-payment-link";
 import { createStaffUser } from "@/lib/users/staff";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 import { newCustomer, saveDesign, startPaymentsHarness } from "../setup/orders";
 import { exampleReport } from "../traveller/fixtures";
 import { staff } from "../floor/helpers";
@@ -44,7 +44,7 @@ const cookies: Record<"counter" | "owner" | "floor" | "customer", string> = {
 
 let harness: Awaited<ReturnType<typeof startPaymentsHarness>>;
 beforeAll(async () => {
-  if (!hasDatabase) return;
+  requireDatabase();
   harness = await startPaymentsHarness({ duplicateDelivery: false });
   for (const role of ["counter", "owner", "floor"] as const) {
     const email = uniqueEmail(role);

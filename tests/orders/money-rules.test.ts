@@ -4,17 +4,17 @@ import { AuditEvent, Order, OrderEvent, Payment, Refund } from "@/entities";
 import { getEm, inTransaction } from "@/lib/db/orm";
 import { placeOrder } from "@/lib/orders/place-order";
 import { requestBalance, startCheckout } from "@/lib/orders/payments";
-import { payments } from "@/lib/payments/stripe";
+import { payments } from "@/lib/payments";
 import { POST as checkoutPost } from "@/app/api/orders/[id]/checkout/route";
 import { createStaffUser } from "@/lib/users/staff";
 import type { Role } from "@/lib/auth/roles";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest } from "../setup/db";
 import { newCustomer, payWithCard, saveDesign, startPaymentsHarness } from "../setup/orders";
 
 let harness: Awaited<ReturnType<typeof startPaymentsHarness>>;
 beforeAll(async () => {
-  if (hasDatabase) harness = await startPaymentsHarness();
+  harness = await startPaymentsHarness();
 });
 afterAll(async () => harness?.close());
 

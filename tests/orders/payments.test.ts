@@ -7,7 +7,7 @@ import { refundPayment, startCheckout, webhookDeliveries } from "@/lib/orders/pa
 import { POST as webhookPost } from "@/app/api/payments/webhook/route";
 import { createStaffUser } from "@/lib/users/staff";
 import { uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest } from "../setup/db";
 import {
   compoundOffset,
   failingVan,
@@ -19,7 +19,7 @@ import {
 
 let harness: Awaited<ReturnType<typeof startPaymentsHarness>>;
 beforeAll(async () => {
-  if (hasDatabase) harness = await startPaymentsHarness();
+  harness = await startPaymentsHarness();
 });
 afterAll(async () => harness?.close());
 

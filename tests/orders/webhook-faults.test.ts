@@ -10,12 +10,12 @@ import { Order, OrderEvent, Payment } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 import { placeOrder } from "@/lib/orders/place-order";
 import { applyPaymentEvent, startCheckout } from "@/lib/orders/payments";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest } from "../setup/db";
 import { newCustomer, saveDesign, startPaymentsHarness } from "../setup/orders";
 
 let harness: Awaited<ReturnType<typeof startPaymentsHarness>>;
 beforeAll(async () => {
-  if (hasDatabase) harness = await startPaymentsHarness();
+  harness = await startPaymentsHarness();
 });
 afterAll(async () => harness?.close());
 

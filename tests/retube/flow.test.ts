@@ -18,7 +18,7 @@ import { orderView, populateOrder } from "@/lib/orders/queries";
 import { emptyIntake, type RepairBlock } from "@/lib/retube/intake";
 import { createStaffUser } from "@/lib/users/staff";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest } from "../setup/db";
 import { newCustomer, saveDesign } from "../setup/orders";
 import { code, good, key } from "../floor/helpers";
 
@@ -26,7 +26,6 @@ const PASSWORD = "a-long-password-1";
 const staff: Record<"counter" | "owner" | "floor", { user: CurrentUser; cookie: string }> = {} as never;
 
 beforeAll(async () => {
-  if (!hasDatabase) return;
   for (const role of ["counter", "owner", "floor"] as const) {
     const email = uniqueEmail(`retube-${role}`);
     const row = await createStaffUser({ name: `Retube ${role}`, email, role, password: PASSWORD }, null);

@@ -10,7 +10,7 @@ import { emptyIntake } from "@/lib/retube/intake";
 import { getShopEngineering, invalidateShopEngineering } from "@/lib/shop/config";
 import { createStaffUser } from "@/lib/users/staff";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest } from "../setup/db";
 import { streetTruck } from "../setup/orders";
 
 const PASSWORD = "a-long-password-1";
@@ -28,14 +28,12 @@ const post = (body: unknown, cookie: string) =>
 // This file changes the shop's price book: put the configuration back as it was for the files after it.
 let original: { rows: Record<string, unknown>[] } = { rows: [] };
 beforeAll(async () => {
-  if (!hasDatabase) return;
   const c = new Client({ connectionString: process.env.DATABASE_URL });
   await c.connect();
   original = await c.query("select * from shop_config");
   await c.end();
 });
 afterAll(async () => {
-  if (!hasDatabase) return;
   const c = new Client({ connectionString: process.env.DATABASE_URL });
   await c.connect();
   await c.query("delete from shop_config_version");

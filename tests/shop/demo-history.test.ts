@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect } from "vitest";
 import { Client } from "pg";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 import { defaultCatalogue, resolveSettings } from "@/lib/driveline";
 import { defaultPriceBook } from "@/lib/pricing/price-book";
 import { defaultFloorSettings } from "@/lib/traveller/settings";
@@ -18,9 +18,9 @@ let figures: OverviewFigures;
 let ms = 0;
 const q = async <T = Record<string, unknown>>(sql: string) => (await db.query(sql)).rows as T[];
 
-describe.skipIf(!hasDatabase)("the demo history", () => {
+describe("the demo history", () => {
   beforeAll(async () => {
-    db = new Client({ connectionString: process.env.DATABASE_URL });
+    db = new Client({ connectionString: requireDatabase() });
     await db.connect();
     await db.query("begin");
     await db.query(

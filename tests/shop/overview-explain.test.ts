@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect } from "vitest";
 import { Client } from "pg";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 import { defaultCatalogue, resolveSettings } from "@/lib/driveline";
 import { defaultPriceBook } from "@/lib/pricing/price-book";
 import { defaultFloorSettings } from "@/lib/traveller/settings";
@@ -29,9 +29,9 @@ let db: Client;
 let ctx: OverviewQueryContext;
 let made: GenerateResult;
 
-describe.skipIf(!hasDatabase)("overview queries use their indexes", () => {
+describe("overview queries use their indexes", () => {
   beforeAll(async () => {
-    db = new Client({ connectionString: process.env.DATABASE_URL });
+    db = new Client({ connectionString: requireDatabase() });
     await db.connect();
     await db.query("begin");
     const now = new Date();

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { randomUUID } from "node:crypto";
 import { Client } from "pg";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 import { medianOf, overviewFigures, weekStart, type OverviewFigures } from "@/lib/shop/overview";
 import { pgExec } from "@/lib/shop/overview-queries";
 import { defaultFloorSettings } from "@/lib/traveller/settings";
@@ -130,9 +130,9 @@ let customerId = "";
 let sequence = 90_000;
 const ids: Record<string, string> = {};
 
-describe.skipIf(!hasDatabase)("overview figures on a hand-built shop", () => {
+describe("overview figures on a hand-built shop", () => {
   beforeAll(async () => {
-    db = new Client({ connectionString: process.env.DATABASE_URL });
+    db = new Client({ connectionString: requireDatabase() });
     await db.connect();
     await db.query("begin");
     await db.query(

@@ -17,7 +17,7 @@ import { listShaftsQuerySchema } from "@/lib/tables/shafts-spec";
 import { stepTablePage } from "@/lib/tables/steps";
 import { listStepsQuerySchema } from "@/lib/tables/steps-spec";
 import { authRequest, sessionCookie, signUpVerified, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 import { code, good, key, paidOrder, staff } from "../floor/helpers";
 import { readCsv } from "./csv-read";
 
@@ -49,9 +49,10 @@ const call = (handler: typeof exportGet, table: string, search: string, cookie?:
     params: Promise.resolve({ table }),
   });
 
-describe.skipIf(!hasDatabase)("the staff tables on known data", () => {
+describe("the staff tables on known data", () => {
   let customerName = "";
   beforeAll(async () => {
+    requireDatabase();
     const em = await getEm();
     const customer = em.create(Customer, {
       name: `Ada ${tag}`,

@@ -10,7 +10,7 @@ import { getEm } from "@/lib/db/orm";
 import { createStaffUser } from "@/lib/users/staff";
 import type { Role } from "@/lib/auth/roles";
 import { authRequest, sessionCookie, signUpVerified, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 import { createTestOrder } from "../setup/test-orders";
 
 const PASSWORD = "a-long-password-1";
@@ -69,7 +69,7 @@ let aliceOrder: Order;
 beforeAll(async () => {
   uploadsDir = await mkdtemp(path.join(tmpdir(), "yokeline-uploads-"));
   process.env.UPLOADS_DIR = uploadsDir;
-  if (!hasDatabase) return;
+  requireDatabase();
   [alice, bob, counterStaff, floor] = [
     await signIn("customer"),
     await signIn("customer"),

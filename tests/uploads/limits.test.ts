@@ -9,7 +9,7 @@ import { POST as postFile } from "@/app/api/orders/[id]/files/route";
 import { getEm } from "@/lib/db/orm";
 import { MAX_FILES_PER_CUSTOMER_PER_DAY, MAX_FILES_PER_ORDER } from "@/lib/uploads";
 import { authRequest, sessionCookie, signUpVerified, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 import { createTestOrder } from "../setup/test-orders";
 import { chunkedPost, serve } from "../http/chunked-http";
 
@@ -67,7 +67,7 @@ beforeAll(async () => {
   previousUploadsDir = process.env.UPLOADS_DIR;
   uploadsDir = await mkdtemp(path.join(tmpdir(), "yokeline-limits-"));
   process.env.UPLOADS_DIR = uploadsDir;
-  if (!hasDatabase) return;
+  requireDatabase();
 });
 
 afterAll(async () => {

@@ -17,7 +17,7 @@ import { setStaffActiveAction } from "@/lib/actions/set-staff-active";
 import { POST as acceptPost } from "@/app/api/auth/staff-invite/route";
 import { POST as signInPost } from "@/app/api/sign-in/route";
 import { authRequest, sessionCookie, signUpVerified, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, hasDatabase } from "../setup/db";
+import { dbTest, requireDatabase } from "../setup/db";
 
 // Server actions read the session from next/headers; outside a Next request we hand it the cookie.
 const session = vi.hoisted(() => ({ cookie: "" }));
@@ -72,7 +72,7 @@ async function auditOf(subjectId: string, action: string) {
 let owner: Member;
 
 beforeAll(async () => {
-  if (!hasDatabase) return;
+  requireDatabase();
   owner = await staffMember("owner", "Owner Inviting");
 });
 
@@ -333,7 +333,7 @@ describe("the last owner", () => {
    * locked until both calls have started and are waiting, then lets them go at the same moment.
    */
   async function atOnce<T>(ids: string[], calls: (() => Promise<T>)[]) {
-    const holder = new Client({ connectionString: process.env.DATABASE_URL });
+    const holder = new Client({ connectionString: requireDatabase() });
     await holder.connect();
     try {
       await holder.query("begin");

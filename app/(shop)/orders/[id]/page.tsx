@@ -2,18 +2,23 @@ import type { Metadata } from "next";
 import { forbidden, notFound, redirect } from "next/navigation";
 import { requirePermission } from "@/lib/auth/guard";
 import { getEm } from "@/lib/db/orm";
+import { orderPageTitle } from "@/lib/orders/order-title";
 import { loadOrderForUser, seesAllOrders } from "@/lib/orders/access";
 import { can } from "@/lib/auth/permissions";
 import { orderView, populateOrder } from "@/lib/orders/queries";
 import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
 import { OrderPage } from "@/components/orders/order-page";
-import { OrderFilesSection } from "@/components/orders/order-files-section";
+import { OrderFiles } from "@/components/order-files";
+import { listOrderUploads, mayAttachFiles } from "@/lib/uploads";
 import Link from "next/link";
 import { WorkOrder } from "@/entities";
 import { asBuiltHref } from "@/lib/floor/scan";
 
-export const metadata: Metadata = { title: "Order" };
+// The browser tab and history name the order (for those who may see it).
+export async function generateMetadata({ params }: PageProps<"/orders/[id]">): Promise<Metadata> {
+  return { title: await orderPageTitle((await params).id, "orders.own") };
+}
 
 export default async function CustomerOrderPage({ params, searchParams }: PageProps<"/orders/[id]">) {
   const { id } = await params;
@@ -45,7 +50,13 @@ export default async function CustomerOrderPage({ params, searchParams }: PagePr
         returnedFromCheckout={Boolean(query.paid)}
         cancelledCheckout={Boolean(query.cancelled)}
         checkoutUnavailable={Boolean(query["checkout-unavailable"])}
-        files={<OrderFilesSection em={em} order={order} user={user} />}
+        files={
+          <OrderFiles
+            orderId={order.id}
+            files={await listOrderUploads(em, order)}
+            canUpload={mayAttachFiles(user)}
+          />
+        }
       />
       {shafts.length > 0 && (
         <section aria-labelledby="shaft-records" className="mt-6 card p-5">

@@ -1,4 +1,4 @@
-import { payments } from "@/lib/payments/stripe";
+import { payments } from "@/lib/payments";
 import { WebhookSignatureError } from "@/lib/payments/port";
 import { applyPaymentEvent } from "@/lib/orders/payments";
 import { errorResponse, json } from "@/lib/http/route";

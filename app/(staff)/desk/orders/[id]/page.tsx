@@ -3,13 +3,15 @@ import { notFound } from "next/navigation";
 import { requirePermission } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/permissions";
 import { getEm } from "@/lib/db/orm";
+import { orderPageTitle } from "@/lib/orders/order-title";
 import { loadOrderForUser } from "@/lib/orders/access";
 import { orderView, populateOrder } from "@/lib/orders/queries";
 import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
 import { Alert } from "@/components/ui/alert";
 import { OrderPage } from "@/components/orders/order-page";
-import { OrderFilesSection } from "@/components/orders/order-files-section";
+import { OrderFiles } from "@/components/order-files";
+import { listOrderUploads, mayAttachFiles } from "@/lib/uploads";
 import { InviteButton } from "@/components/customers/invite-button";
 import { orderFloorState } from "@/lib/floor/work-orders";
 import { cancellationQuote } from "@/lib/orders/cancel";
@@ -22,7 +24,10 @@ import { CancelOrderPanel } from "./_components/cancel-order-panel";
 import { SignoffPanel } from "./_components/signoff-panel";
 import { OrderDetailsPanel } from "./_components/order-details-panel";
 
-export const metadata: Metadata = { title: "Order" };
+// The browser tab and history name the order (for those who may see it).
+export async function generateMetadata({ params }: PageProps<"/desk/orders/[id]">): Promise<Metadata> {
+  return { title: await orderPageTitle((await params).id, "orders.desk") };
+}
 
 export default async function DeskOrderPage({ params, searchParams }: PageProps<"/desk/orders/[id]">) {
   const { id } = await params;
@@ -76,7 +81,13 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
         payVerb="Take"
         returnedFromCheckout={Boolean(paid)}
         cancelledCheckout={Boolean(leftCheckout)}
-        files={<OrderFilesSection em={em} order={order} user={user} />}
+        files={
+          <OrderFiles
+            orderId={order.id}
+            files={await listOrderUploads(em, order)}
+            canUpload={mayAttachFiles(user)}
+          />
+        }
         staffActions={
           <>
             <TakePayment

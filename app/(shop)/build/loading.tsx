@@ -1,0 +1,5 @@
+import { PageSkeleton } from "@/components/ui/page-skeleton";
+
+export default function Loading() {
+  return <PageSkeleton label="Loading the shaft builder…" />;
+}
