@@ -59,6 +59,7 @@ const HANDLERS: Row[] = [
   ["GET /api/designs/[id]", "/api/designs/{design}", "none", [401, 200, 404, 200, 403, 200]],
   ["PUT /api/designs/[id]", "/api/designs/{design}", "save", [401, 200, 404, 200, 403, 200]],
   ["DELETE /api/designs/[id]", "/api/designs/{freshDesign}", "none", [401, 204, 404, 204, 403, 204]],
+  ["PUT /api/designs/[id]/repair", "/api/designs/{design}/repair", "empty", [401, 403, 403, 422, 403, 422]],
   ["POST /api/designs/evaluate", "/api/designs/evaluate", "design", [200, 200, 200, 200, 200, 200]],
   ["POST /api/designs/quote", "/api/designs/quote", "design", [200, 200, 200, 200, 200, 200]],
   ["GET /api/exports/[table]", "/api/exports/orders", "none", [401, 403, 403, 200, 403, 200]],
@@ -118,6 +119,7 @@ const ACTIONS: ActionRow[] = [
   ["lib/actions/request-balance.ts#requestBalanceAction", {}, [U, F, F, I, F, I]],
   ["lib/actions/send-payment-link.ts#sendPaymentLinkAction", {}, [U, F, F, I, F, I]],
   ["lib/actions/set-staff-active.ts#setStaffActiveAction", {}, [U, F, F, F, F, I]],
+  ["lib/actions/update-order-details.ts#updateOrderDetailsAction", {}, [U, F, F, I, F, I]],
 ];
 
 // ── What is on disk ───────────────────────────────────────────────────────────────────────────
