@@ -1,8 +1,7 @@
 /**
- * The report figures issue 10 adds (design-file.md "Additions"), read through a small optional
- * type while the core that fills them is merged: each is shown only when present.
- * TODO(lead, after the loads/fittings/twopiece merge): replace `ReportAdditions` with the
- * EvaluationReport's own fields and drop `reportAdditions()`.
+ * The report figures the service-load, weld-zone, slip and interface rules add (design-file.md
+ * "Additions"), read defensively: reports frozen on orders placed before those rules existed lack
+ * them, so each is shown only when present.
  */
 import type { EvaluationReport } from "@/lib/driveline";
 import { formatNumber, withUnit, type UnitSystem } from "./model";

@@ -1,4 +1,5 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
+import { USES, type Use } from "@/lib/driveline/schema";
 import { Customer, Design, Order, OrderEvent, OrderShaft, User } from "@/entities";
 import { AccessError, type CurrentUser } from "@/lib/auth/access";
 import { can } from "@/lib/auth/permissions";
@@ -55,10 +56,13 @@ export function quoteDesigns<S extends QuoteSource>(
         `"${design.name}" has fields to fix: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`,
       );
     }
+    // A draft saved before the design file carried `use` still has it on its application.
+    const applicationUse = design.application?.use;
     const report = evaluateDesign(parsed.design, {
       catalogue: shop.catalogue,
       settings: shop.settings,
       tubePreference: shop.priceBook.tubePreference,
+      ...((USES as readonly string[]).includes(applicationUse ?? "") ? { use: applicationUse as Use } : {}),
     });
     const tubePrice = shop.catalogue.tubes.find((t) => t.id === report.tube.tubeId)?.pricePerMetreCents;
     if (tubePrice === undefined) {
