@@ -11,8 +11,8 @@ import {
 } from "./cardan";
 import { defaultCatalogue } from "./catalogue/default";
 import {
+  endReport,
   fittingFitsTube,
-  fittingRatingNm,
   indexCatalogue,
   suggestFitting,
   type CatalogueIndex,
@@ -213,19 +213,7 @@ function resolveMaterial(
   };
 }
 
-export function endReport(f: EndFitting, origin: EndReport["origin"], index: CatalogueIndex): EndReport {
-  return {
-    fittingId: f.id,
-    name: f.name,
-    kind: f.kind,
-    jointSeriesId: f.jointSeriesId,
-    jointCentreToWeldSeatMm: f.jointCentreToWeldSeatMm,
-    massKg: f.massKg,
-    torqueRatingNm: fittingRatingNm(f, index),
-    priceCents: f.priceCents,
-    origin,
-  };
-}
+export { endReport } from "./catalogue/lookup";
 
 /** Pick from a ranking: the first clean pass, else the first that warns, else the stiffest. */
 export function pickTube(

@@ -20,6 +20,7 @@ import {
   CAP_SPAN_TOLERANCE_MM,
   FLANGE_TOLERANCE_MM,
   SPLINE_DIAMETER_TOLERANCE_MM,
+  endReport,
   type CatalogueIndex,
 } from "./catalogue/lookup";
 import type { Catalogue, EndFitting, JointSeries } from "./catalogue/types";
@@ -104,17 +105,7 @@ function endOf(
   origin: EndReport["origin"],
   index: CatalogueIndex,
 ): EndReport & { -readonly [K in "crossSeriesId" | "torqueRatingNm"]?: EndReport[K] } {
-  return {
-    fittingId: f.id,
-    name: f.name,
-    kind: f.kind,
-    jointSeriesId: f.jointSeriesId,
-    jointCentreToWeldSeatMm: f.jointCentreToWeldSeatMm,
-    massKg: f.massKg,
-    torqueRatingNm: fittingRatingNm(f, index),
-    priceCents: f.priceCents,
-    origin,
-  };
+  return endReport(f, origin, index);
 }
 
 /** Sort key: fewer is better, compared item by item. */

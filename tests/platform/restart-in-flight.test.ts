@@ -5,39 +5,17 @@
  * failed ones again (same idempotency keys and event ids) records each exactly once.
  * A cluster of its own, stopped and started by scripts/pg.sh, as in database-recovery.test.ts.
  */
-import { execFile } from "node:child_process";
 import { randomUUID } from "node:crypto";
 import { mkdtempSync, rmSync } from "node:fs";
-import net from "node:net";
 import os from "node:os";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect } from "vitest";
+import { closeAppOrm, freePort, pg } from "../setup/cluster";
 import { dbTest } from "../setup/db";
 import { migrateWithCli } from "../setup/global-setup";
 
-const root = path.resolve(import.meta.dirname, "../..");
 const password = "restart-test-pw";
 let dir = "";
-
-function pg(fn: string, ...args: string[]): Promise<void> {
-  return new Promise((resolve, reject) => {
-    execFile(
-      "bash",
-      ["-c", `source scripts/pg.sh; ${fn} "$@"`, "pg", ...args],
-      { cwd: root, timeout: 60_000 },
-      (err, _out, stderr) => (err ? reject(new Error(`${fn}: ${stderr || err.message}`)) : resolve()),
-    );
-  });
-}
-
-async function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const srv = net.createServer().listen(0, "127.0.0.1", () => {
-      const { port } = srv.address() as net.AddressInfo;
-      srv.close(() => resolve(port));
-    });
-  });
-}
 
 type Outcome = { ok: true } | { ok: false; code: string | undefined; message: string };
 
@@ -51,9 +29,7 @@ describe("a database restart in the middle of use", () => {
     migrateWithCli(process.env.DATABASE_URL);
   }, 120_000);
   afterAll(async () => {
-    const g = globalThis as { yokelineOrm?: Promise<{ close(force?: boolean): Promise<void> }> };
-    void g.yokelineOrm?.then((orm) => orm.close(true)).catch(() => undefined);
-    g.yokelineOrm = undefined;
+    closeAppOrm();
     try {
       await pg("pg_down", path.join(dir, "pg"));
       await pg("pg_forget", path.join(dir, "pg"));

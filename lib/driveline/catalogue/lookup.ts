@@ -1,4 +1,5 @@
 /** Indexed access to a catalogue, cached per catalogue object (catalogues are immutable). */
+import type { EndReport } from "../report";
 import type {
   Catalogue,
   EndFitting,
@@ -173,4 +174,19 @@ export function flangeMatches(a: FlangePattern | undefined | null, b: FlangePatt
     Math.abs(a.boltCircleMm - b.boltCircleMm) <= FLANGE_TOLERANCE_MM &&
     Math.abs(a.pilotMm - b.pilotMm) <= FLANGE_TOLERANCE_MM
   );
+}
+
+/** An end fitting as the report lists it, with the joint rating its fitting and cross allow. */
+export function endReport(f: EndFitting, origin: EndReport["origin"], index: CatalogueIndex): EndReport {
+  return {
+    fittingId: f.id,
+    name: f.name,
+    kind: f.kind,
+    jointSeriesId: f.jointSeriesId,
+    jointCentreToWeldSeatMm: f.jointCentreToWeldSeatMm,
+    massKg: f.massKg,
+    torqueRatingNm: fittingRatingNm(f, index),
+    priceCents: f.priceCents,
+    origin,
+  };
 }
