@@ -80,6 +80,7 @@ test("no serious accessibility problems on the floor's screens with a shaft in t
   const page = await (await browser.newContext()).newPage();
   await signIn(page, ACCOUNTS.floor);
   const scan = page.getByLabel("Scan a traveller barcode or a serial");
+  await page.locator("[data-station-ready]").waitFor();
   await scan.fill(formatStepCode({ serial, step: "CUT", revision: 1 }));
   await scan.press("Enter");
   await expect(page.getByRole("heading", { name: /Step 1 of \d+: Cut tube/ })).toBeVisible();

@@ -49,6 +49,7 @@ export function inside(limit: string | null): string {
 }
 
 export async function scan(page: Page, code: string) {
+  await page.locator("[data-station-ready]").waitFor();
   const input = page.getByLabel("Scan a traveller barcode or a serial");
   await expect(input).toBeFocused();
   await input.pressSequentially(code, { delay: 5 });

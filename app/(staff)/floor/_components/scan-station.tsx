@@ -1,5 +1,5 @@
 "use client";
-import { useCallback, useEffect, useRef, useState } from "react";
+import { useCallback, useEffect, useRef, useState, useSyncExternalStore } from "react";
 import { useRouter } from "next/navigation";
 import { CheckCircle2, Loader2, PauseCircle, ScanLine, XCircle } from "lucide-react";
 import type { ScanResult, StationField } from "@/lib/floor/scan";
@@ -78,8 +78,15 @@ export function ScanStation({ canConcede }: { canConcede: boolean }) {
     setView({ kind: "step", scan: result, key: crypto.randomUUID() });
   }
 
+  // True once React runs in the browser: a scan typed before that would do nothing (tests wait for it).
+  const hydrated = useSyncExternalStore(
+    () => () => undefined,
+    () => true,
+    () => false,
+  );
+
   return (
-    <div className="space-y-5">
+    <div className="space-y-5" data-station-ready={hydrated || undefined}>
       <OutboxPanel />
       <form
         className="card p-4 md:p-5"
