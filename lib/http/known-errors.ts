@@ -5,6 +5,13 @@ import { AppError } from "./errors";
 /** The message callers see while the database cannot be reached. */
 export const DATABASE_DOWN_MESSAGE = "The database is not reachable just now; try again in a moment.";
 
+/**
+ * node-postgres's words for a connection lost under a query (these carry no SQLSTATE): the server
+ * went away mid-statement, or a pooled client broke and was handed back.
+ */
+const CONNECTION_LOST =
+  /Connection terminated|connection error and is not queryable|Client was closed and is not queryable|Connection ended unexpectedly|timeout exceeded when trying to connect/i;
+
 /** Node socket errors and PostgreSQL shutdown/start-up states (57P01–57P03). */
 const DOWN_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "EPIPE", "57P01", "57P02", "57P03"]);
 
@@ -30,9 +37,11 @@ export function knownError(error: unknown): AppError | null {
   if (code === "22003") return new AppError("invalid", "A number is out of range.");
   // A pre-check can lose a race; the database's unique index still says no (e.g. a customer e-mail).
   if (code === "23505") return new AppError("conflict", "That already exists.");
+  const message = error instanceof Error ? error.message : "";
   if (
     error instanceof ConnectionException ||
-    (typeof code === "string" && (DOWN_CODES.has(code) || code.startsWith("08")))
+    (typeof code === "string" && (DOWN_CODES.has(code) || code.startsWith("08"))) ||
+    CONNECTION_LOST.test(message)
   )
     return new AppError("unavailable", DATABASE_DOWN_MESSAGE);
   return null;

@@ -123,7 +123,11 @@ describe("a database restart in the middle of use", () => {
 
       // Every failure says the database is unavailable (a 503 the page shows), never anything else.
       const failed = results.filter((r) => !r.result.ok);
-      for (const f of failed) expect(f.result, `${f.kind} ${f.index}`).toMatchObject({ code: "unavailable" });
+      for (const f of failed)
+        expect(
+          f.result.ok ? null : f.result.code,
+          `${f.kind} ${f.index}: ${f.result.ok ? "" : f.result.message}`,
+        ).toBe("unavailable");
       expect(failed.length, "the restart hit some calls").toBeGreaterThan(0);
 
       // Recovered by itself: acknowledged work is there; failed work left nothing behind.

@@ -1,0 +1,25 @@
+/** Which faults callers are told are "unavailable" (503, try again) rather than a 500. */
+import { describe, expect, test } from "vitest";
+import { knownError } from "@/lib/http/known-errors";
+
+describe("knownError", () => {
+  test.each([
+    // node-postgres's own words when the server goes away under a query (no SQLSTATE on them).
+    "Connection terminated unexpectedly",
+    "Connection terminated",
+    "Client has encountered a connection error and is not queryable",
+    "Client was closed and is not queryable",
+    "Connection ended unexpectedly",
+    "timeout exceeded when trying to connect",
+  ])("a lost connection (%s) is unavailable", (message) => {
+    expect(knownError(new Error(message))?.code).toBe("unavailable");
+  });
+
+  test("SQLSTATE 57P01 (admin shutdown) and class 08 are unavailable; a plain error is not known", () => {
+    expect(knownError(Object.assign(new Error("terminating connection"), { code: "57P01" }))?.code).toBe(
+      "unavailable",
+    );
+    expect(knownError(Object.assign(new Error("x"), { code: "08006" }))?.code).toBe("unavailable");
+    expect(knownError(new Error("something else"))).toBeNull();
+  });
+});
