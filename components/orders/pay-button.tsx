@@ -1,39 +1,27 @@
 "use client";
-import { useState } from "react";
 import { CreditCard } from "lucide-react";
+import { sendJson, useMutation } from "@/lib/browser/mutation";
 
 /** Opens the hosted checkout for the order's next payment. */
 export function PayButton({ orderId, label }: { orderId: string; label: string }) {
-  const [state, setState] = useState<{ pending: boolean; error: string | null }>({
-    pending: false,
-    error: null,
-  });
+  const checkout = useMutation(() => sendJson<{ checkoutUrl?: string }>(`/api/orders/${orderId}/checkout`));
   return (
     <div>
       <button
         type="button"
         className="btn-accent"
-        disabled={state.pending}
+        disabled={checkout.pending}
         onClick={async () => {
-          setState({ pending: true, error: null });
-          const res = await fetch(`/api/orders/${orderId}/checkout`, { method: "POST" });
-          const body = await res.json().catch(() => null);
-          if (res.ok && body?.checkoutUrl) {
-            window.location.assign(body.checkoutUrl);
-            return;
-          }
-          setState({
-            pending: false,
-            error: body?.error?.message ?? "Could not open the payment page. Try again.",
-          });
+          const res = await checkout.run();
+          if (res.ok && res.data.checkoutUrl) window.location.assign(res.data.checkoutUrl);
         }}
       >
         <CreditCard className="size-4" aria-hidden="true" />
-        {state.pending ? "Opening the payment page…" : label}
+        {checkout.pending ? "Opening the payment page…" : label}
       </button>
-      {state.error && (
+      {checkout.error && (
         <p role="alert" className="field-error">
-          {state.error}
+          {checkout.error.message}
         </p>
       )}
     </div>
