@@ -1,6 +1,6 @@
 import { AlertTriangle, ShieldAlert } from "lucide-react";
 import type { ShaftView } from "@/lib/orders/queries";
-import { USE_LABEL } from "@/lib/orders/labels";
+import { shaftUseLabel } from "@/lib/driveline/uses";
 import { formatMoney } from "@/lib/pricing/price-book";
 import { CheckBadge } from "./status-badge";
 import { RetubeBadge, RetubeSummary } from "./retube-summary";
@@ -24,7 +24,7 @@ export function ShaftSummary({
           </h3>
           {shaft.application && (
             <p className="text-sm text-ink-muted">
-              {USE_LABEL[shaft.application.use] ?? shaft.application.use} · {shaft.application.description}
+              {shaftUseLabel(shaft.application.use)} · {shaft.application.description}
             </p>
           )}
         </div>

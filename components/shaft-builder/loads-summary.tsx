@@ -1,16 +1,11 @@
 "use client";
 
-import type { Catalogue, DesignFile, EvaluationReport } from "@/lib/driveline";
+import { shaftUseLabel, type Catalogue, type DesignFile, type EvaluationReport } from "@/lib/driveline";
 import { formatNumber, withUnit, type UnitSystem } from "./model";
 import { interfaceLines, reportAdditions, speedPathText, torqueText } from "./report-additions";
 
-const USE_WORD: Record<string, string> = {
-  street: "street",
-  towing: "towing",
-  "off-road": "off-road",
-  race: "race",
-  industrial: "industrial",
-};
+/** The use in running text ("towing", "off-road"). */
+const wordForUse = (use: string) => shaftUseLabel(use).toLowerCase();
 
 /**
  * Loads, speeds and limits behind the checks: service factor and use, engine-based against
@@ -39,8 +34,8 @@ export function LoadsSummary({
     "use",
     "Use",
     s.serviceFactor != null
-      ? `${(USE_WORD[use] ?? use).replace(/^./, (c) => c.toUpperCase())}: service factor ${s.serviceFactor.toFixed(2)} (the shop's figure for this use)`
-      : `${(USE_WORD[use] ?? use).replace(/^./, (c) => c.toUpperCase())}`,
+      ? `${shaftUseLabel(use)}: service factor ${s.serviceFactor.toFixed(2)} (the shop's figure for this use)`
+      : `${shaftUseLabel(use)}`,
   );
   if (s.engineTorqueAtShaftNm != null) {
     const slip = s.wheelSlipTorqueNm;
@@ -75,7 +70,7 @@ export function LoadsSummary({
     add(
       "critical",
       "Critical speed",
-      `${a.criticalSpeedLengthMm != null ? `checked at ${withUnit(a.criticalSpeedLengthMm, "length", system)}${longer ? " (the slip at full droop, the longest the shaft gets)" : ""}` : ""}${a.criticalSpeedLengthMm != null && a.criticalSpeedRatioLimit != null ? "; " : ""}${a.criticalSpeedRatioLimit != null ? `ratio limit ${a.criticalSpeedRatioLimit.toFixed(2)} for ${USE_WORD[use] ?? use} use (now ${report.criticalSpeedRatio.toFixed(3)})` : ""}.`,
+      `${a.criticalSpeedLengthMm != null ? `checked at ${withUnit(a.criticalSpeedLengthMm, "length", system)}${longer ? " (the slip at full droop, the longest the shaft gets)" : ""}` : ""}${a.criticalSpeedLengthMm != null && a.criticalSpeedRatioLimit != null ? "; " : ""}${a.criticalSpeedRatioLimit != null ? `ratio limit ${a.criticalSpeedRatioLimit.toFixed(2)} for ${wordForUse(use)} use (now ${report.criticalSpeedRatio.toFixed(3)})` : ""}.`,
     );
   }
   if (report.slip) {

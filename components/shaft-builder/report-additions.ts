@@ -3,49 +3,59 @@
  * "Additions"), read defensively: reports frozen on orders placed before those rules existed lack
  * them, so each is shown only when present.
  */
-import type { EvaluationReport } from "@/lib/driveline";
+import type { EvaluationReport, SlipYokeSummary } from "@/lib/driveline";
 import { formatNumber, withUnit, type UnitSystem } from "./model";
 
+type Service = EvaluationReport["service"];
+type Torsion = EvaluationReport["torsion"];
+
+/**
+ * A report as it may have been frozen on an older order: the core's own report type with every
+ * figure the additions brought made optional (no shape of its own, so a renamed field fails to compile).
+ */
+type FrozenReport = Partial<Omit<EvaluationReport, "service" | "torsion" | "slip">> & {
+  service?: Partial<Service>;
+  torsion?: Partial<Torsion>;
+  slip?: { slipYoke?: Partial<SlipYokeSummary> | null } | null;
+};
+
+/** The additions' figures, each present only when the report carries it. */
 export interface ReportAdditions {
-  service?: {
-    engineTorqueAtShaftNm?: number;
-    wheelSlipTorqueNm?: number | null;
-    serviceFactor?: number;
-    use?: string;
-    runningTorqueNm?: number | null;
-  };
-  torsion?: { weldZoneShearYieldMPa?: number; weldZoneSafetyFactor?: number };
-  criticalSpeedLengthMm?: number;
-  criticalSpeedRatioLimit?: number;
-  slip?: {
-    slipYoke?: { id?: string; name?: string; minEngagementMm?: number } | null;
-  } | null;
-  /** The fittings matched to the interface data (shape set by the fittings branch; read loosely). */
-  interface?: unknown;
-  frontJointType?: string;
+  service: Partial<
+    Pick<Service, "engineTorqueAtShaftNm" | "wheelSlipTorqueNm" | "serviceFactor" | "use" | "runningTorqueNm">
+  >;
+  torsion: Partial<Pick<Torsion, "weldZoneShearYieldMPa" | "weldZoneSafetyFactor">>;
+  criticalSpeedLengthMm?: EvaluationReport["criticalSpeedLengthMm"];
+  criticalSpeedRatioLimit?: EvaluationReport["criticalSpeedRatioLimit"];
+  /** The slip yoke as the report named it (older reports may lack some of its fields). */
+  slip: { slipYoke: Partial<SlipYokeSummary> | null } | null;
+  /** The fittings matched to the interface data (read loosely by `interfaceLines`). */
+  interface?: EvaluationReport["interface"];
+  frontJointType?: EvaluationReport["frontJointType"];
 }
 
 const isNum = (x: unknown): x is number => typeof x === "number" && Number.isFinite(x);
+const num = (x: unknown) => (isNum(x) ? x : undefined);
 
 /** The additions of a report, each kept only when it holds a finite number (or a known shape). */
 export function reportAdditions(report: EvaluationReport): ReportAdditions {
-  const r = report as unknown as Record<string, unknown> & ReportAdditions;
+  const r: FrozenReport = report;
   const s = r.service ?? {};
   const t = r.torsion ?? {};
   return {
     service: {
-      engineTorqueAtShaftNm: isNum(s.engineTorqueAtShaftNm) ? s.engineTorqueAtShaftNm : undefined,
-      wheelSlipTorqueNm: isNum(s.wheelSlipTorqueNm) ? s.wheelSlipTorqueNm : undefined,
-      serviceFactor: isNum(s.serviceFactor) ? s.serviceFactor : undefined,
+      engineTorqueAtShaftNm: num(s.engineTorqueAtShaftNm),
+      wheelSlipTorqueNm: num(s.wheelSlipTorqueNm),
+      serviceFactor: num(s.serviceFactor),
       use: typeof s.use === "string" ? s.use : undefined,
-      runningTorqueNm: isNum(s.runningTorqueNm) ? s.runningTorqueNm : undefined,
+      runningTorqueNm: num(s.runningTorqueNm),
     },
     torsion: {
-      weldZoneShearYieldMPa: isNum(t.weldZoneShearYieldMPa) ? t.weldZoneShearYieldMPa : undefined,
-      weldZoneSafetyFactor: isNum(t.weldZoneSafetyFactor) ? t.weldZoneSafetyFactor : undefined,
+      weldZoneShearYieldMPa: num(t.weldZoneShearYieldMPa),
+      weldZoneSafetyFactor: num(t.weldZoneSafetyFactor),
     },
-    criticalSpeedLengthMm: isNum(r.criticalSpeedLengthMm) ? r.criticalSpeedLengthMm : undefined,
-    criticalSpeedRatioLimit: isNum(r.criticalSpeedRatioLimit) ? r.criticalSpeedRatioLimit : undefined,
+    criticalSpeedLengthMm: num(r.criticalSpeedLengthMm),
+    criticalSpeedRatioLimit: num(r.criticalSpeedRatioLimit),
     slip: r.slip && typeof r.slip === "object" ? { slipYoke: r.slip.slipYoke ?? null } : null,
     interface: r.interface,
     frontJointType: typeof r.frontJointType === "string" ? r.frontJointType : undefined,

@@ -13,6 +13,7 @@ import {
   type EvaluationReport,
   type TubeCandidate,
   type TubePreference,
+  sameTube,
 } from "@/lib/driveline";
 import { DrivelineView } from "./driveline-diagram";
 import { SpeedRatioPlot } from "./speed-ratio-plot";
@@ -58,8 +59,6 @@ export function tubeLabel(catalogue: Catalogue, t: TubeChoice, system: UnitSyste
   return `${materialName(catalogue, t.materialId)} ${od} × ${withUnit(t.wallMm, "diameter", system)}`;
 }
 
-const sameTube = (a: TubeChoice, b: TubeChoice) =>
-  a.materialId === b.materialId && Math.abs(a.odMm - b.odMm) < 0.05 && Math.abs(a.wallMm - b.wallMm) < 0.01;
 
 interface ResultsPanelProps {
   report: EvaluationReport;

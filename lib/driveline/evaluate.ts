@@ -10,6 +10,7 @@ import {
   equivalentAngleRad,
 } from "./cardan";
 import { defaultCatalogue } from "./catalogue/default";
+import { findCatalogueTube } from "./catalogue/tube-match";
 import {
   endReport,
   fittingFitsTube,
@@ -294,16 +295,7 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   };
   if (design.tube) {
     tubeSpec = { id: null, ...design.tube, origin: "design" };
-    for (const t of catalogue.tubes) {
-      if (
-        t.materialId === design.tube.materialId &&
-        Math.abs(t.odMm - design.tube.odMm) < 0.05 &&
-        Math.abs(t.wallMm - design.tube.wallMm) < 0.01
-      ) {
-        tubeSpec.id = t.id;
-        break;
-      }
-    }
+    tubeSpec.id = findCatalogueTube(catalogue, design.tube)?.id ?? null;
     if (options?.alternatives) selection = rank();
   } else {
     selection = rank();

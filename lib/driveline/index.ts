@@ -62,6 +62,16 @@ export {
 } from "./tube-selection";
 export { sampleCurves, sampleChainCurves, type CurveSet } from "./curves";
 export { defaultCatalogue } from "./catalogue/default";
+export {
+  TUBE_OD_MATCH_TOLERANCE_MM,
+  TUBE_WALL_MATCH_TOLERANCE_MM,
+  sameTube,
+  sameTubeOd,
+  sameTubeWall,
+  findCatalogueTube,
+  type TubeSpec,
+} from "./catalogue/tube-match";
+export { SHAFT_USE_LABEL, shaftUseLabel } from "./uses";
 export type {
   Catalogue,
   Material,

@@ -43,10 +43,3 @@ export const PAYMENT_STATE_LABEL: Record<PaymentState, string> = {
   refunded: "Refunded",
 };
 
-export const USE_LABEL: Record<string, string> = {
-  street: "Street",
-  towing: "Towing",
-  "off-road": "Off-road",
-  race: "Race",
-  industrial: "Industrial",
-};
