@@ -59,7 +59,6 @@ export function tubeLabel(catalogue: Catalogue, t: TubeChoice, system: UnitSyste
   return `${materialName(catalogue, t.materialId)} ${od} × ${withUnit(t.wallMm, "diameter", system)}`;
 }
 
-
 interface ResultsPanelProps {
   report: EvaluationReport;
   design: DesignFile;

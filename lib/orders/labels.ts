@@ -42,4 +42,3 @@ export const PAYMENT_STATE_LABEL: Record<PaymentState, string> = {
   partially_refunded: "Partly refunded",
   refunded: "Refunded",
 };
-

@@ -24,8 +24,7 @@ export interface TubeSpec {
 export const sameTubeOd = (a: number, b: number): boolean => Math.abs(a - b) < TUBE_OD_MATCH_TOLERANCE_MM;
 
 /** Whether two walls are the same catalogue size. */
-export const sameTubeWall = (a: number, b: number): boolean =>
-  Math.abs(a - b) < TUBE_WALL_MATCH_TOLERANCE_MM;
+export const sameTubeWall = (a: number, b: number): boolean => Math.abs(a - b) < TUBE_WALL_MATCH_TOLERANCE_MM;
 
 /** Whether two tubes are the same material and size. */
 export const sameTube = (a: TubeSpec, b: TubeSpec): boolean =>
