@@ -6,6 +6,7 @@
  */
 import { PDFDocument, type PDFPage } from "pdf-lib";
 import type { EvaluationReport } from "@/lib/driveline/report";
+import { shaftUseLabel } from "@/lib/driveline/uses";
 import { GREY, MARGIN, PAGE, Writer, drawQr, embedFonts, type Fonts } from "./pdf-kit";
 import { describeLimit, type BalanceWeight, type SiValues } from "./measure";
 import type { FieldSpec, StepSpec } from "./steps";
@@ -140,7 +141,7 @@ function header(flow: Flow, title: string, view: PapersHeader, shaft: PaperShaft
   w.text(serialLine, MARGIN, top - 47, 10, f.mono);
   const app = shaft.application;
   w.wrap(
-    `Order ${view.order.number} · ${view.order.customerName} · shaft ${shaft.position} of ${shaft.count}: ${shaft.name}${app ? ` (${app.description}, ${app.use})` : ""}`,
+    `Order ${view.order.number} · ${view.order.customerName} · shaft ${shaft.position} of ${shaft.count}: ${shaft.name}${app ? ` (${app.description}, ${shaftUseLabel(app.use).toLowerCase()})` : ""}`,
     MARGIN,
     top - 61,
     flow.width - 72,

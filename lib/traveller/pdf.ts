@@ -7,6 +7,7 @@
 import { PDFDocument, degrees, type PDFPage } from "pdf-lib";
 import { BLACK, GREY, MARGIN, PAGE, Writer, drawCode128, drawQr, embedFonts, type Fonts } from "./pdf-kit";
 import { describeLimit } from "./measure";
+import { shaftUseLabel } from "@/lib/driveline/uses";
 import {
   balanceLimit,
   phaseTarget,
@@ -356,7 +357,7 @@ export async function addTravellerPage(
   });
   const app = view.shaft.application;
   w.wrap(
-    `${view.shaft.name}${app ? ` · ${app.description} (${app.use})` : ""}`,
+    `${view.shaft.name}${app ? ` · ${app.description} (${shaftUseLabel(app.use).toLowerCase()})` : ""}`,
     left,
     y - 88,
     width - qr - 10,
