@@ -104,12 +104,22 @@ test.describe("shaft builder", () => {
   });
 });
 
-test("a customer deletes a saved design after confirming", async ({ page }) => {
+test("a customer deletes a saved design after confirming (a dropped connection first leaves nothing busy)", async ({
+  page,
+}) => {
   await signIn(page, ACCOUNTS.customer);
   await page.goto("/build");
   await page.locator("[data-builder-ready]").waitFor();
   const name = `Throwaway ${Date.now()}`;
   await page.getByLabel("Design name").fill(name);
+  // The connection drops: the save and the quote say so and both buttons are free again.
+  await page.route("**/api/designs", (r) => r.abort("internetdisconnected"));
+  await page.getByRole("button", { name: "Get a quote" }).click();
+  await expect(page.getByTestId("save-status")).toContainText("No connection to the shop");
+  await expect(page.getByRole("button", { name: "Get a quote" })).toBeEnabled();
+  await expect(page.getByRole("button", { name: /Save (as )?draft/ })).toBeEnabled();
+  await expect(page).toHaveURL(/\/build$/);
+  await page.unroute("**/api/designs");
   await page.getByRole("button", { name: /Save (as )?draft/ }).click();
   await expect(page.getByTestId("save-status")).toContainText("Saved ✓");
   const list = page.getByTestId("draft-list");
