@@ -90,6 +90,29 @@ export function SelectField({
   );
 }
 
+/** Radio choices registered on a form field that always holds one of them (one per line). */
+export function RadioChoices({
+  kit,
+  name,
+  choices,
+}: {
+  kit: FieldKit;
+  name: "speedMode" | "tubeMode";
+  choices: readonly (readonly [value: string, text: string])[];
+}) {
+  return choices.map(([value, text]) => (
+    <label key={value} className="flex items-center gap-2 text-sm">
+      <input
+        type="radio"
+        value={value}
+        className="size-4 accent-steel-700"
+        {...kit.register(name, { onChange: kit.markChanged })}
+      />
+      {text}
+    </label>
+  ));
+}
+
 /** Two or more radio choices bound to a form field that may be "" (shown as the first choice). */
 export function ChoiceField<V extends string>({
   kit,

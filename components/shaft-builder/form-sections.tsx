@@ -3,7 +3,7 @@
 import type { FieldErrors } from "react-hook-form";
 import { SHAFT_USE_LABEL, shaftUseLabel, type EvaluationReport } from "@/lib/driveline";
 import { SHAFT_USES } from "@/lib/designs/schemas";
-import type { FieldKit } from "./field-kit";
+import { RadioChoices, type FieldKit } from "./field-kit";
 import { FrontJointField } from "./layout-fields";
 import type { BuilderForm } from "./model";
 import { reportAdditions, speedPathText } from "./report-additions";
@@ -234,30 +234,20 @@ export function TorqueSection({
 
 /** 5. Shaft speed: from the road (top speed, tire, axle) or a known rpm, and the engine path. */
 export function SpeedSection({ kit, report }: { kit: FieldKit; report: EvaluationReport | null }) {
-  const { num, register, markChanged, errs } = kit;
+  const { num, errs } = kit;
   const speedMode = kit.values.speedMode;
   return (
     <FormSection kit={kit} id="s-sp" title="5. Shaft speed">
       <fieldset className="space-y-1">
         <legend className="field-label">How fast does the shaft turn?</legend>
-        <label className="flex items-center gap-2 text-sm">
-          <input
-            type="radio"
-            value="vehicle"
-            className="size-4 accent-steel-700"
-            {...register("speedMode", { onChange: markChanged })}
-          />
-          From top speed, tire size and axle ratio
-        </label>
-        <label className="flex items-center gap-2 text-sm">
-          <input
-            type="radio"
-            value="rpm"
-            className="size-4 accent-steel-700"
-            {...register("speedMode", { onChange: markChanged })}
-          />
-          I know the maximum shaft rpm
-        </label>
+        <RadioChoices
+          kit={kit}
+          name="speedMode"
+          choices={[
+            ["vehicle", "From top speed, tire size and axle ratio"],
+            ["rpm", "I know the maximum shaft rpm"],
+          ]}
+        />
       </fieldset>
       {speedMode === "rpm" ? (
         num("speed.maxShaftRpm", "Maximum shaft speed", null, { unit: "rpm", guide: "rpm" })

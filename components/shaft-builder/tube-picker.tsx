@@ -1,7 +1,7 @@
 "use client";
 
 import { sameTubeOd, sameTubeWall, type Catalogue } from "@/lib/driveline";
-import type { FieldKit } from "./field-kit";
+import { RadioChoices, type FieldKit } from "./field-kit";
 import { withUnit, type SiNumber } from "./model";
 
 /** The catalogue value nearest to `to` (the first when `to` is empty). */
@@ -23,7 +23,7 @@ const wallsAt = (catalogue: Catalogue, materialId: string, odMm: number) =>
  * then wall, each narrowing the next (a size from a file that the catalogue lacks stays shown as such).
  */
 export function TubePicker({ kit }: { kit: FieldKit }) {
-  const { values, errs, register, markChanged, catalogue } = kit;
+  const { values, errs, markChanged, catalogue } = kit;
   const tube = values.tube;
   const materials = catalogue.materials.filter((m) => catalogue.tubes.some((t) => t.materialId === m.id));
   const ods = [
@@ -47,24 +47,14 @@ export function TubePicker({ kit }: { kit: FieldKit }) {
     <>
       <fieldset className="space-y-1">
         <legend className="sr-only">Tube</legend>
-        <label className="flex items-center gap-2 text-sm">
-          <input
-            type="radio"
-            value="auto"
-            className="size-4 accent-steel-700"
-            {...register("tubeMode", { onChange: markChanged })}
-          />
-          Let Yokeline pick (recommended)
-        </label>
-        <label className="flex items-center gap-2 text-sm">
-          <input
-            type="radio"
-            value="chosen"
-            className="size-4 accent-steel-700"
-            {...register("tubeMode", { onChange: markChanged })}
-          />
-          I want a specific tube
-        </label>
+        <RadioChoices
+          kit={kit}
+          name="tubeMode"
+          choices={[
+            ["auto", "Let Yokeline pick (recommended)"],
+            ["chosen", "I want a specific tube"],
+          ]}
+        />
       </fieldset>
       {values.tubeMode === "chosen" && (
         <div className="grid gap-4 sm:grid-cols-3">
