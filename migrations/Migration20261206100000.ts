@@ -8,10 +8,14 @@ import { Migration } from "@mikro-orm/migrations";
 export class Migration20261206100000 extends Migration {
   override async up(): Promise<void> {
     this.addSql(`create extension if not exists pg_trgm;`);
-    this.addSql(`create index "shop_order_number_trgm_index" on "shop_order" using gin ("number" gin_trgm_ops);`);
+    this.addSql(
+      `create index "shop_order_number_trgm_index" on "shop_order" using gin ("number" gin_trgm_ops);`,
+    );
     this.addSql(`create index "customer_name_trgm_index" on "customer" using gin ("name" gin_trgm_ops);`);
     this.addSql(`create index "customer_email_trgm_index" on "customer" using gin ("email" gin_trgm_ops);`);
-    this.addSql(`create index "customer_company_trgm_index" on "customer" using gin ("company" gin_trgm_ops);`);
+    this.addSql(
+      `create index "customer_company_trgm_index" on "customer" using gin ("company" gin_trgm_ops);`,
+    );
   }
 
   override async down(): Promise<void> {

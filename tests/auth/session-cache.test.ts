@@ -47,9 +47,10 @@ describe("the remembered session is read live on every request", () => {
     await setStaffActive({ userId: b.id, active: false }, owner.id);
     await expect(authorize(null, b.headers)).rejects.toMatchObject({ status: 401 });
 
-    await authPool.query("update auth_session set expires_at = now() - interval '1 second' where user_id = $1", [
-      c.id,
-    ]);
+    await authPool.query(
+      "update auth_session set expires_at = now() - interval '1 second' where user_id = $1",
+      [c.id],
+    );
     await expect(authorize(null, c.headers)).rejects.toMatchObject({ status: 401 });
   });
 

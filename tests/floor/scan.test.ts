@@ -25,7 +25,9 @@ describe("what a scanned code means", () => {
       const cut = await scanCode(em, code(wo.serial, "CUT").toLowerCase());
       expect(cut).toMatchObject({ kind: "step", serial: wo.serial, status: "next", units: "in" });
       // The order's words the station shows, against the order and shaft read apart.
-      const shaft = await em.fork().findOneOrFail(OrderShaft, { order: order.id }, { populate: ["order.customer"] });
+      const shaft = await em
+        .fork()
+        .findOneOrFail(OrderShaft, { order: order.id }, { populate: ["order.customer"] });
       expect(cut).toMatchObject({
         orderNumber: shaft.order.number,
         customerName: shaft.order.customer.name,
