@@ -9,21 +9,26 @@ import { benchTables } from "./tables";
 import { benchPages } from "./pages";
 import { benchTable } from "./table";
 
+/** BENCH_ONLY=api,scan… runs only those benches (names below); unset: every one. */
+const only = process.env.BENCH_ONLY?.split(",").map((s) => s.trim());
+const wanted = (name: string) => !only || only.includes(name);
+
 async function main(): Promise<void> {
-  await benchDriveline();
-  await benchTraveller();
-  const floor = await benchFloor();
+  if (wanted("driveline")) await benchDriveline();
+  if (wanted("traveller")) await benchTraveller();
+  // The scan bench scans the shaft the floor bench releases.
+  const floor = wanted("floor") || wanted("scan") ? await benchFloor() : null;
   if (process.env.BENCH_BASE_URL) {
-    await benchApi(process.env.BENCH_BASE_URL);
-    await benchScan(process.env.BENCH_BASE_URL, floor?.scanCode ?? null);
-    await benchTables(process.env.BENCH_BASE_URL);
-    await benchPages(process.env.BENCH_BASE_URL);
+    if (wanted("api")) await benchApi(process.env.BENCH_BASE_URL);
+    if (wanted("scan")) await benchScan(process.env.BENCH_BASE_URL, floor?.scanCode ?? null);
+    if (wanted("tables")) await benchTables(process.env.BENCH_BASE_URL);
+    if (wanted("pages")) await benchPages(process.env.BENCH_BASE_URL);
   } else
     console.log(
       "\nAPI latency and the scan route: skipped (run through `npm run bench`, which starts the app).",
     );
   // Last: it fills the bench database with a large shop.
-  await benchOverview();
+  if (wanted("overview")) await benchOverview();
   console.log("\nOne table (paste into the README's Performance section after a quiet run):\n");
   console.log(benchTable());
 }

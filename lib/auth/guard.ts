@@ -2,7 +2,8 @@ import "server-only";
 import { cache } from "react";
 import { headers } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
-import { auth } from "./server";
+import { auth, authPool } from "./server";
+import { rememberedSessionUser, rememberSession } from "./session-cache";
 import { can, type Permission } from "./permissions";
 import { isRole, type Role } from "./roles";
 import { AccessError, type CurrentUser } from "./access";
@@ -10,10 +11,18 @@ import { AccessError, type CurrentUser } from "./access";
 export { AccessError, type CurrentUser } from "./access";
 
 async function sessionUser(requestHeaders: Headers): Promise<CurrentUser | null> {
+  const cookie = requestHeaders.get("cookie");
+  // A cookie the auth library accepted a moment ago: its session row and user read live (session-cache.ts).
+  const remembered = cookie ? await rememberedSessionUser(cookie, authPool) : undefined;
+  if (remembered !== undefined) return remembered && currentUser(remembered);
   const session = await auth.api.getSession({ headers: requestHeaders });
   if (!session) return null;
-  const { id, name, email } = session.user;
-  const role = (session.user as { role?: unknown }).role;
+  if (cookie) rememberSession(cookie, session.session.token, session.session.expiresAt);
+  return currentUser(session.user);
+}
+
+function currentUser(user: { id: string; name: string; email: string; role?: unknown }): CurrentUser {
+  const { id, name, email, role } = user;
   return { id, name, email, role: isRole(role) ? role : "customer" };
 }
 

@@ -28,6 +28,9 @@ const pool = (globalForAuth.yokelineAuthPool ??= new Pool({ connectionString: da
     logger.warn({ code: err.code, message: err.message }, "auth database connection lost"),
 ));
 
+/** The auth library's connection pool (the session cache reads session rows through it too). */
+export const authPool = pool;
+
 export const ACCOUNT_DEACTIVATED_MESSAGE =
   "This account has been deactivated. Ask the shop's owner if you need access again.";
 

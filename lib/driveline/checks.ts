@@ -15,8 +15,32 @@ export interface Check {
   readonly source: string;
 }
 
-/** Fixed-point text for a message (rounded, no trailing noise). */
-export const fmt = (x: number, digits = 2): string => (Number.isFinite(x) ? x.toFixed(digits) : String(x));
+const POW10 = [1, 10, 100, 1e3, 1e4, 1e5, 1e6];
+const ZEROS = ["", "0", "00", "000", "0000", "00000", "000000"];
+
+/**
+ * Fixed-point text for a message (rounded, no trailing noise): exactly `x.toFixed(digits)`.
+ * toFixed is a slow runtime call and every check message has two or three of these, so the
+ * common case rounds |x|·10^digits itself; a product within 1e-6 of a half (where the float
+ * product may round the other way than toFixed's exact decimal) or out of range falls back to toFixed.
+ */
+export function fmt(x: number, digits = 2): string {
+  if (!Number.isFinite(x)) return String(x);
+  const p = POW10[digits];
+  if (p === undefined) return x.toFixed(digits);
+  const y = (x < 0 ? -x : x) * p;
+  if (!(y < 1e9)) return x.toFixed(digits);
+  const fl = Math.floor(y);
+  const frac = y - fl;
+  if (frac > 0.499999 && frac < 0.500001) return x.toFixed(digits);
+  const n = frac > 0.5 ? fl + 1 : fl;
+  let s = String(n);
+  if (digits > 0) {
+    if (s.length <= digits) s = ZEROS[digits + 1 - s.length] + s;
+    s = `${s.slice(0, s.length - digits)}.${s.slice(s.length - digits)}`;
+  }
+  return x < 0 ? `-${s}` : s;
+}
 
 /** Worst of several statuses (fail > warn > pass). */
 export function worstStatus(statuses: Iterable<CheckStatus>): CheckStatus {

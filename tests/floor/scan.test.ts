@@ -20,10 +20,21 @@ describe("what a scanned code means", () => {
   dbTest(
     "a step code opens its sheet with limits in the shop's units and says whose turn it is",
     async () => {
-      const { wo } = await releasedShaft();
+      const { order, wo } = await releasedShaft();
       const em = await getEm();
       const cut = await scanCode(em, code(wo.serial, "CUT").toLowerCase());
       expect(cut).toMatchObject({ kind: "step", serial: wo.serial, status: "next", units: "in" });
+      // The order's words the station shows, against the order and shaft read apart.
+      const shaft = await em
+        .fork()
+        .findOneOrFail(OrderShaft, { order: order.id }, { populate: ["order.customer"] });
+      expect(cut).toMatchObject({
+        orderNumber: shaft.order.number,
+        customerName: shaft.order.customer.name,
+        promisedDate: shaft.order.promisedDate,
+        shaftName: shaft.name,
+      });
+      expect(cut.kind === "step" && /^\d{4}-\d{2}-\d{2}$/.test(cut.promisedDate)).toBe(true);
       if (cut.kind !== "step") throw new Error("not a step");
       const length = cut.step.fields.find((f) => f.key === "cutLengthMm");
       // README street truck: 1188.8 mm cut = 46.803 in; ±0.8 mm (the floor default) = ±0.031 in.
