@@ -3,7 +3,7 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { Ban } from "lucide-react";
 import type { CancellationQuote } from "@/lib/orders/cancel";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
 import { cancelOrderAction } from "@/lib/actions/cancel-order";
 import { Alert } from "@/components/ui/alert";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";

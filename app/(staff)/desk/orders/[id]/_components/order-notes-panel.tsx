@@ -5,9 +5,8 @@ import { Eye, Lock } from "lucide-react";
 import type { OrderNoteView } from "@/lib/orders/notes";
 import { addOrderNoteAction } from "@/lib/actions/add-order-note";
 import { Alert } from "@/components/ui/alert";
+import { ShopTime } from "@/components/shop-locale";
 
-const when = (iso: string) =>
-  new Date(iso).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
 
 /** Notes on the order: every note for the shop, with who wrote it and when; add one, staff-only or for the customer. */
 export function OrderNotesPanel({ orderId, notes }: { orderId: string; notes: OrderNoteView[] }) {
@@ -40,7 +39,7 @@ export function OrderNotesPanel({ orderId, notes }: { orderId: string; notes: Or
                     <Lock className="size-3" aria-hidden="true" /> Staff only
                   </span>
                 )}
-                {n.byName} · <time dateTime={n.at}>{when(n.at)}</time>
+                {n.byName} · <ShopTime at={n.at} />
               </p>
             </li>
           ))}

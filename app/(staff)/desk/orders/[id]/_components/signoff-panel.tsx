@@ -6,6 +6,7 @@ import type { SignoffShaftView } from "@/lib/orders/engineering-signoff";
 import { acceptFailedCheckAction } from "@/lib/actions/accept-failed-check";
 import { ACCEPTANCE_REASON_MIN_CHARS } from "@/lib/orders/desk-schemas";
 import { Alert } from "@/components/ui/alert";
+import { ShopTime } from "@/components/shop-locale";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
 /**
@@ -54,7 +55,7 @@ export function SignoffPanel({
               {c.acceptance ? (
                 <p className="mt-1">
                   <span className="font-semibold">Accepted exception</span> by {c.acceptance.byName} on{" "}
-                  {c.acceptance.at.slice(0, 10)}: {c.acceptance.reason}
+                  <ShopTime at={c.acceptance.at} format="date" />: {c.acceptance.reason}
                 </p>
               ) : canAccept ? (
                 <AcceptForm orderId={orderId} shaftId={s.shaftId} checkId={c.checkId} message={c.message} />

@@ -1,7 +1,7 @@
 "use client";
 import { useState } from "react";
 import { useRouter } from "next/navigation";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
 import { refundPaymentAction } from "@/lib/actions/refund-payment";
 import { requestBalanceAction } from "@/lib/actions/request-balance";
 import { Alert } from "@/components/ui/alert";

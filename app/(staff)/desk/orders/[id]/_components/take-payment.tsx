@@ -2,7 +2,7 @@
 import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { Banknote, Mail } from "lucide-react";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
 import { sendPaymentLinkAction } from "@/lib/actions/send-payment-link";
 import { recordCounterPaymentAction } from "@/lib/actions/record-counter-payment";
 import { Alert } from "@/components/ui/alert";
