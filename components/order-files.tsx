@@ -53,7 +53,6 @@ function sendFile(orderId: string, file: File, onProgress: (percent: number) => 
   });
 }
 
-
 /** The photos and measurement sheets of an order, with an upload control for those who may attach. */
 export function OrderFiles({ orderId, files: initialFiles, canUpload }: OrderFilesProps) {
   const [files, setFiles] = useState(initialFiles);

@@ -15,7 +15,13 @@ const ShopLocaleContext = createContext<ShopLocaleView>({
 });
 
 /** Given once by the audience layouts ((staff), (shop)) so every client component formats alike. */
-export function ShopLocaleProvider({ value, children }: { value: ShopLocaleView; children: React.ReactNode }) {
+export function ShopLocaleProvider({
+  value,
+  children,
+}: {
+  value: ShopLocaleView;
+  children: React.ReactNode;
+}) {
   return <ShopLocaleContext.Provider value={value}>{children}</ShopLocaleContext.Provider>;
 }
 

@@ -33,7 +33,14 @@ const STYLES = {
   /** "Dec 4, 2026, 3:05 PM CST" */
   dateTime: { dateStyle: "medium", timeStyle: "short" },
   /** parts for the ISO-like "2026-12-04 15:05" of tables and CSV */
-  iso: { year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit", hourCycle: "h23" },
+  iso: {
+    year: "numeric",
+    month: "2-digit",
+    day: "2-digit",
+    hour: "2-digit",
+    minute: "2-digit",
+    hourCycle: "h23",
+  },
   /** "Thu, Dec 10, 2026" (calendar dates: read in UTC, where they were stored at noon) */
   calendar: { weekday: "short", month: "short", day: "numeric", year: "numeric" },
   /** "Thursday, December 10, 2026" */
@@ -55,7 +62,11 @@ function fmt(style: Style, timeZone: string): Intl.DateTimeFormat {
 }
 
 function isoParts(at: Instant, timeZone: string) {
-  const parts = Object.fromEntries(fmt("iso", timeZone).formatToParts(toDate(at)).map((p) => [p.type, p.value]));
+  const parts = Object.fromEntries(
+    fmt("iso", timeZone)
+      .formatToParts(toDate(at))
+      .map((p) => [p.type, p.value]),
+  );
   return {
     date: `${parts.year}-${parts.month}-${parts.day}`,
     time: `${parts.hour === "24" ? "00" : parts.hour}:${parts.minute}`,
@@ -64,7 +75,11 @@ function isoParts(at: Instant, timeZone: string) {
 
 /** The zone's short name at that instant, e.g. "CST" / "CDT" / "UTC". */
 export function zoneName(at: Instant, timeZone: string): string {
-  return fmt("zoneName", timeZone).formatToParts(toDate(at)).find((p) => p.type === "timeZoneName")?.value ?? timeZone;
+  return (
+    fmt("zoneName", timeZone)
+      .formatToParts(toDate(at))
+      .find((p) => p.type === "timeZoneName")?.value ?? timeZone
+  );
 }
 
 /** An instant's calendar day in the shop, e.g. "Dec 4, 2026". */
@@ -103,7 +118,9 @@ export function formatRelative(at: Instant, now: Instant = Date.now()): string {
  * "Thu, Dec 10, 2026" or (long) "Thursday, December 10, 2026". Calendar dates are not instants: no zone shifts them.
  */
 export function formatCalendarDate(isoDate: string, style: "short" | "long" = "short"): string {
-  return fmt(style === "long" ? "calendarLong" : "calendar", "UTC").format(new Date(`${isoDate.slice(0, 10)}T12:00:00Z`));
+  return fmt(style === "long" ? "calendarLong" : "calendar", "UTC").format(
+    new Date(`${isoDate.slice(0, 10)}T12:00:00Z`),
+  );
 }
 
 /**
@@ -113,6 +130,12 @@ export function formatCalendarDate(isoDate: string, style: "short" | "long" = "s
 export function formatDueDate(isoDate: string, timeZone: string, now: Instant = Date.now()): string {
   const days = differenceInCalendarDays(parseISO(isoDate.slice(0, 10)), parseISO(shopIsoDate(now, timeZone)));
   const when =
-    days === 0 ? "today" : days === 1 ? "tomorrow" : days > 0 ? `in ${days} days` : `${-days} day${days === -1 ? "" : "s"} late`;
+    days === 0
+      ? "today"
+      : days === 1
+        ? "tomorrow"
+        : days > 0
+          ? `in ${days} days`
+          : `${-days} day${days === -1 ? "" : "s"} late`;
   return `${formatCalendarDate(isoDate)} (${when})`;
 }

@@ -53,11 +53,15 @@ const AMOUNT = /^(\d{1,9})(?:\.(\d{1,2}))?$/;
  * cents), negative amounts — with a message, never a guess. Done on the digits, not with floats.
  */
 export function parseMoney(text: string): ParsedMoney {
-  const t = text.trim().replace(/^[$€£]/, "").replace(/,(?=\d{3}(\D|$))/g, "");
+  const t = text
+    .trim()
+    .replace(/^[$€£]/, "")
+    .replace(/,(?=\d{3}(\D|$))/g, "");
   if (t === "") return { ok: false, message: "Enter an amount." };
   const m = AMOUNT.exec(t);
   if (!m) {
-    if (/^\d+\.\d{3,}$/.test(t)) return { ok: false, message: "Enter the amount to the cent (two decimals at most)." };
+    if (/^\d+\.\d{3,}$/.test(t))
+      return { ok: false, message: "Enter the amount to the cent (two decimals at most)." };
     if (/^-/.test(t)) return { ok: false, message: "Enter an amount above zero." };
     return { ok: false, message: "Enter an amount such as 125.00." };
   }

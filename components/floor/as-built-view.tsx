@@ -21,7 +21,6 @@ const STATE: Record<AsBuiltRecord["state"], string> = {
   picked_up: "Picked up",
 };
 
-
 /**
  * A shaft's as-built record: the frozen design and evaluation, then every step's measurements,
  * lots, who and when. Customers see what was signed off, not the shop's internal holds.
@@ -134,10 +133,11 @@ export function AsBuiltView({
                       <>
                         Signed off <ShopTime at={s.completedAt.toISOString()} />
                       </>
-                    )
-                      : s.state === "on_hold" && audience === "staff"
-                        ? "On hold"
-                        : "Not yet"}
+                    ) : s.state === "on_hold" && audience === "staff" ? (
+                      "On hold"
+                    ) : (
+                      "Not yet"
+                    )}
                   </span>
                 </div>
                 {records.length > 0 && (

@@ -50,7 +50,8 @@ export function OrderPage({
         <OrderStatusBadge status={order.status} label={order.statusLabel} onHold={order.onHold} />
         <PaymentBadge state={order.paymentState} />
         <span className="text-sm text-ink-muted">
-          Promised {formatCalendarDate(order.promisedDate)} · {order.fulfilment === "ship" ? "Shipping" : "Pickup at the shop"}
+          Promised {formatCalendarDate(order.promisedDate)} ·{" "}
+          {order.fulfilment === "ship" ? "Shipping" : "Pickup at the shop"}
         </span>
         {order.late && (
           <span className="rounded-full bg-fail-soft px-2.5 py-0.5 text-xs font-semibold text-fail">

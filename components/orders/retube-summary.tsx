@@ -55,8 +55,7 @@ export function RetubeSummary({
         <p className="mt-1">No part reused: all new parts.</p>
       )}
       <p className="mt-1 text-xs text-ink-muted">
-        Recorded by {retube.recordedBy} on{" "}
-        <ShopTime at={retube.recordedAt} />
+        Recorded by {retube.recordedBy} on <ShopTime at={retube.recordedAt} />
       </p>
     </section>
   );

@@ -120,3 +120,17 @@ export function useConfirmedMutation<P>(
     },
   };
 }
+
+/**
+ * Puts a failed mutation's field messages on a react-hook-form form (`setError` from `useForm`),
+ * for the fields the form has; the rest stay in the error's message.
+ */
+export function showFieldErrors<F extends string>(
+  setError: (field: F, error: { message: string }) => void,
+  error: MutationError,
+  fields: readonly F[],
+): void {
+  for (const [field, message] of Object.entries(error.fields ?? {})) {
+    if ((fields as readonly string[]).includes(field)) setError(field as F, { message });
+  }
+}

@@ -23,7 +23,8 @@ export interface ColumnSpec<R> {
 export const csvMoney = centsToDecimal;
 
 /** A timestamp in a file and on screen: "2026-12-04 08:03", in the shop's time zone. */
-export const shortTimestamp = (iso: string, timeZone: string) => formatTimestamp(iso, timeZone, { zone: false });
+export const shortTimestamp = (iso: string, timeZone: string) =>
+  formatTimestamp(iso, timeZone, { zone: false });
 
 /** The ids of the columns that may be hidden, as zod wants them (a non-empty tuple). */
 export function hideableIds<R>(columns: readonly ColumnSpec<R>[]): [string, ...string[]] {

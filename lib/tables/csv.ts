@@ -54,7 +54,9 @@ export async function csvResponse<R>(
     async pull(controller) {
       try {
         const next = await batches.next();
-        const records = next.done ? [] : next.value.map((row) => columns.map((c) => safeCell(c.csv(row, ctx))));
+        const records = next.done
+          ? []
+          : next.value.map((row) => columns.map((c) => safeCell(c.csv(row, ctx))));
         if (records.length || header)
           controller.enqueue(
             encoder.encode(stringify(records, { header, columns: columns.map((c) => c.label) })),

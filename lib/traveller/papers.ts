@@ -251,7 +251,6 @@ function valueText(field: FieldSpec, values: SiValues, units: FloorUnits): strin
   }
 }
 
-
 function asBuiltPage(flow: Flow, view: AsBuiltView, shaft: AsBuiltView["shafts"][number]): void {
   const when = (d: Date | null) => (d ? formatTimestamp(d, view.shop.timeZone) : "—");
   flow.newPage();

@@ -144,7 +144,9 @@ export default async function OverviewPage() {
                   </div>
                   <p className="mt-1">
                     <span className="font-medium">At {h.step}</span>
-                    {h.since && <span className="text-ink-muted"> since {shopIsoDate(h.since, timeZone)}</span>}
+                    {h.since && (
+                      <span className="text-ink-muted"> since {shopIsoDate(h.since, timeZone)}</span>
+                    )}
                   </p>
                   {h.reasons.length > 0 ? (
                     <ul className="mt-1 list-disc pl-5 text-ink-soft">

@@ -22,7 +22,6 @@ const ROLE_SHORT = {
   owner: "everything",
 } as const;
 
-
 export default async function StaffPage() {
   const me = await requirePermission("staff.manage", "/overview/staff");
   const [staff, invitations, { timeZone }] = await Promise.all([

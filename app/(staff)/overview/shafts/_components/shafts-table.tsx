@@ -39,7 +39,9 @@ const columns = tableColumns<ShaftTableRow>(SHAFT_COLUMNS, {
       <span className="font-semibold text-warn">
         At {r.holdStep ?? "a step"}
         {r.holdSince && (
-          <span className="block text-xs font-normal">since <ShopTime at={r.holdSince} format="timestamp" /></span>
+          <span className="block text-xs font-normal">
+            since <ShopTime at={r.holdSince} format="timestamp" />
+          </span>
         )}
       </span>
     ) : (

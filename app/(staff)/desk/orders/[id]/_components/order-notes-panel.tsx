@@ -9,7 +9,6 @@ import { Alert } from "@/components/ui/alert";
 import { TextAreaField } from "@/components/ui/field";
 import { ShopTime } from "@/components/shop-locale";
 
-
 /** Notes on the order: every note for the shop, with who wrote it and when; add one, staff-only or for the customer. */
 export function OrderNotesPanel({ orderId, notes }: { orderId: string; notes: OrderNoteView[] }) {
   const router = useRouter();
