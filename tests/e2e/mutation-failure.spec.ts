@@ -1,32 +1,9 @@
-import { readFileSync } from "node:fs";
-import { expect, test, type Page } from "@playwright/test";
-import { ACCOUNTS, signIn } from "./fixtures";
+import { expect, test } from "@playwright/test";
+import { ACCOUNTS, customerOrder, signIn } from "./fixtures";
 
 // A failed network call never leaves a button stuck busy (lib/browser/mutation.ts): the customer's
 // pay button (a fetch through sendJson) and the desk's note form (a server action), each with its
 // request aborted as a dropped connection would, then sent again once the network is back.
-const streetTruck = JSON.parse(readFileSync("examples/street-truck.json", "utf8")) as unknown;
-
-async function customerOrder(page: Page): Promise<{ id: string; number: string }> {
-  const origin = new URL(page.url()).origin;
-  const design = await page.request.post("/api/designs", {
-    headers: { origin },
-    data: {
-      name: `Dropped call ${Date.now()}`,
-      design: streetTruck,
-      application: { description: "Ranch pickup", use: "street" },
-    },
-  });
-  expect(design.status()).toBe(201);
-  const { id: designId } = (await design.json()) as { id: string };
-  const order = await page.request.post("/api/orders", {
-    headers: { origin },
-    data: { designIds: [designId], fulfilment: "pickup" },
-  });
-  expect(order.status()).toBe(201);
-  return (await order.json()) as { id: string; number: string };
-}
-
 const UNREACHABLE = /could not be reached/i;
 
 test("a dropped connection frees the button and says so; the retry goes through", async ({
@@ -35,7 +12,7 @@ test("a dropped connection frees the button and says so; the retry goes through"
 }) => {
   test.setTimeout(90_000);
   await signIn(page, ACCOUNTS.customer);
-  const order = await customerOrder(page);
+  const order = await customerOrder(page, `Dropped call ${Date.now()}`);
 
   // The customer's pay button: its POST to the checkout route is aborted.
   await page.goto(`/orders/${order.id}`);
