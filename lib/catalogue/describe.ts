@@ -66,6 +66,7 @@ export const FIELD_LABELS: Record<string, string> = {
   minEngagementMm: "Least engagement (mm)",
   value: "Value",
   currency: "Currency",
+  timeZone: "Time zone",
   labourPerShaftCents: "Labour per shaft",
   balancingPerShaftCents: "Balancing per shaft",
   teardownPerShaftCents: "Re-tube teardown and inspection per shaft",
