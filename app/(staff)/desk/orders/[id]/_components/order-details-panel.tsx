@@ -5,7 +5,7 @@ import { updateOrderDetailsAction } from "@/lib/actions/update-order-details";
 import type { OrderDetailsView } from "@/lib/orders/details";
 import { useMutation } from "@/lib/browser/mutation";
 import { Alert } from "@/components/ui/alert";
-import { TextAreaField } from "@/components/ui/field";
+import { Field, TextAreaField } from "@/components/ui/field";
 
 /**
  * The order's details the counter may change: the promised date and, for an order that ships, the
@@ -49,25 +49,14 @@ export function OrderDetailsPanel({ orderId, details }: { orderId: string; detai
           }
         }}
       >
-        <div>
-          <label htmlFor="details-promised" className="field-label">
-            Promised date
-          </label>
-          <input
-            id="details-promised"
-            type="date"
-            className="field-input"
-            value={promisedDate}
-            onChange={(e) => setPromisedDate(e.target.value)}
-            aria-invalid={Boolean(errors.promisedDate)}
-            aria-describedby={errors.promisedDate ? "details-promised-error" : undefined}
-          />
-          {errors.promisedDate && (
-            <p id="details-promised-error" className="field-error">
-              {errors.promisedDate}
-            </p>
-          )}
-        </div>
+        <Field
+          id="details-promised"
+          label="Promised date"
+          type="date"
+          value={promisedDate}
+          onChange={(e) => setPromisedDate(e.target.value)}
+          error={errors.promisedDate}
+        />
         {details.fulfilment === "ship" && (
           <TextAreaField
             id="details-ship-to"

@@ -8,6 +8,7 @@ import { sendPaymentLinkAction } from "@/lib/actions/send-payment-link";
 import { recordCounterPaymentAction } from "@/lib/actions/record-counter-payment";
 import { Alert } from "@/components/ui/alert";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
+import { Field } from "@/components/ui/field";
 
 type Method = "cash" | "cheque" | "terminal";
 const METHODS: { value: Method; label: string; reference: string }[] = [
@@ -146,44 +147,23 @@ export function TakePayment({
             ))}
           </div>
         </fieldset>
-        <div>
-          <label htmlFor="counter-amount" className="field-label">
-            Amount taken ({currency})
-          </label>
-          <input
-            id="counter-amount"
-            inputMode="decimal"
-            className="field-input tabular-nums"
-            value={amount}
-            onChange={(e) => setAmount(e.target.value)}
-            aria-invalid={errors.amountCents ? true : undefined}
-            aria-describedby={errors.amountCents ? "counter-amount-error" : undefined}
-          />
-          {errors.amountCents && (
-            <p id="counter-amount-error" className="field-error">
-              {errors.amountCents}
-            </p>
-          )}
-        </div>
-        <div>
-          <label htmlFor="counter-reference" className="field-label">
-            {methodInfo.reference}
-          </label>
-          <input
-            id="counter-reference"
-            className="field-input"
-            value={reference}
-            maxLength={120}
-            onChange={(e) => setReference(e.target.value)}
-            aria-invalid={errors.reference ? true : undefined}
-            aria-describedby={errors.reference ? "counter-reference-error" : undefined}
-          />
-          {errors.reference && (
-            <p id="counter-reference-error" className="field-error">
-              {errors.reference}
-            </p>
-          )}
-        </div>
+        <Field
+          id="counter-amount"
+          label={`Amount taken (${currency})`}
+          inputMode="decimal"
+          className="field-input tabular-nums"
+          value={amount}
+          onChange={(e) => setAmount(e.target.value)}
+          error={errors.amountCents}
+        />
+        <Field
+          id="counter-reference"
+          label={methodInfo.reference}
+          value={reference}
+          maxLength={120}
+          onChange={(e) => setReference(e.target.value)}
+          error={errors.reference}
+        />
         <button type="submit" className="btn-primary w-full" disabled={busy}>
           <Banknote className="size-4" aria-hidden="true" />
           {recordMutation.pending ? "Recording…" : "Record payment"}
