@@ -1,6 +1,7 @@
 "use client";
 import { useId, useRef, useState } from "react";
 import { FileText, Paperclip } from "lucide-react";
+import { ShopTime } from "@/components/shop-locale";
 import {
   formatBytes,
   MAX_UPLOAD_BYTES,
@@ -51,8 +52,6 @@ function sendFile(orderId: string, file: File, onProgress: (percent: number) => 
     xhr.send(form);
   });
 }
-
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });
 
 /** The photos and measurement sheets of an order, with an upload control for those who may attach. */
 export function OrderFiles({ orderId, files: initialFiles, canUpload }: OrderFilesProps) {
@@ -141,7 +140,7 @@ export function OrderFiles({ orderId, files: initialFiles, canUpload }: OrderFil
                 </a>
                 <span className="text-ink-muted">
                   {f.kind === "pdf" ? "PDF" : "Photo"} · {formatBytes(f.sizeBytes)} ·{" "}
-                  <time dateTime={f.createdAt}>{dateFormat.format(new Date(f.createdAt))}</time>
+                  <ShopTime at={f.createdAt} />
                   {f.uploadedBy && <> · {f.uploadedBy}</>}
                 </span>
               </div>

@@ -1,32 +1,31 @@
 "use client";
-import { useState, useTransition } from "react";
+import { useState } from "react";
 import { inviteCustomerAction } from "@/lib/actions/invite-customer";
+import { useMutation } from "@/lib/browser/mutation";
 
 /**
  * "Invite to an account": e-mails a phone customer a one-time sign-up link (desk screens). The
  * button is named by its row or sentence (the customer's name is beside it on every screen).
  */
 export function InviteButton({ customerId }: { customerId: string }) {
-  const [pending, startTransition] = useTransition();
+  const invite = useMutation(inviteCustomerAction);
   const [outcome, setOutcome] = useState<{ ok: boolean; text: string } | null>(null);
   return (
     <span className="inline-flex flex-wrap items-center gap-2">
       <button
         type="button"
         className="btn-quiet px-2 py-1 text-xs"
-        disabled={pending}
-        onClick={() =>
-          startTransition(async () => {
-            const result = await inviteCustomerAction({ customerId });
-            setOutcome(
-              result.ok
-                ? { ok: true, text: `Invitation sent to ${result.data.email}.` }
-                : { ok: false, text: result.error.message },
-            );
-          })
-        }
+        disabled={invite.pending}
+        onClick={async () => {
+          const result = await invite.run({ customerId });
+          setOutcome(
+            result.ok
+              ? { ok: true, text: `Invitation sent to ${result.data.email}.` }
+              : { ok: false, text: result.error.message },
+          );
+        }}
       >
-        {pending ? "Sending…" : "Invite to an account"}
+        {invite.pending ? "Sending…" : "Invite to an account"}
       </button>
       {outcome && (
         <span role="status" className={`text-xs ${outcome.ok ? "text-ink-muted" : "text-fail"}`}>

@@ -1,6 +1,7 @@
 "use client";
 import type { ColumnDef } from "@tanstack/react-table";
 import type { ColumnSpec } from "@/lib/tables/columns";
+import { useShopLocale } from "@/components/shop-locale";
 
 export interface ColumnMeta {
   align?: "right";
@@ -18,7 +19,8 @@ export function tableColumns<R>(
   return specs.map((spec) => ({
     id: spec.id,
     // The file's text: TanStack sorts only columns with an accessor (the server does the sorting).
-    accessorFn: (row: R) => spec.csv(row),
+    // (A sort key only, never shown: UTC keeps it stable.)
+    accessorFn: (row: R) => spec.csv(row, { timeZone: "UTC" }),
     header: spec.label,
     enableSorting: spec.sortable,
     enableHiding: spec.hideable,
@@ -26,8 +28,14 @@ export function tableColumns<R>(
     cell: ({ row }) => {
       const custom = cells[spec.id];
       if (custom) return custom(row.original);
-      const v = spec.csv(row.original);
-      return v == null || v === "" ? <span className="text-ink-muted">—</span> : v;
+      return <FileText spec={spec} row={row.original} />;
     },
   }));
+}
+
+/** A cell with the file's text, in the shop's time zone. */
+function FileText<R>({ spec, row }: { spec: ColumnSpec<R>; row: R }) {
+  const { timeZone } = useShopLocale();
+  const v = spec.csv(row, { timeZone });
+  return v == null || v === "" ? <span className="text-ink-muted">—</span> : v;
 }

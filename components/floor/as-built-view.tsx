@@ -1,4 +1,5 @@
 import type { AsBuiltRecord } from "@/lib/floor/queries";
+import { ShopTime } from "@/components/shop-locale";
 import { RetubeBadge, RetubeSummary } from "@/components/orders/retube-summary";
 import type { EvaluationReport } from "@/lib/driveline/report";
 import { shownValue } from "@/lib/floor/scan";
@@ -19,8 +20,6 @@ const STATE: Record<AsBuiltRecord["state"], string> = {
   shipped: "Shipped",
   picked_up: "Picked up",
 };
-
-const when = (d: Date) => d.toISOString().slice(0, 16).replace("T", " ") + " UTC";
 
 /**
  * A shaft's as-built record: the frozen design and evaluation, then every step's measurements,
@@ -130,11 +129,15 @@ export function AsBuiltView({
                     {s.position}. {s.spec.name}
                   </h3>
                   <span className="text-sm text-ink-muted">
-                    {s.state === "done" && s.completedAt
-                      ? `Signed off ${when(s.completedAt)}`
-                      : s.state === "on_hold" && audience === "staff"
-                        ? "On hold"
-                        : "Not yet"}
+                    {s.state === "done" && s.completedAt ? (
+                      <>
+                        Signed off <ShopTime at={s.completedAt.toISOString()} />
+                      </>
+                    ) : s.state === "on_hold" && audience === "staff" ? (
+                      "On hold"
+                    ) : (
+                      "Not yet"
+                    )}
                   </span>
                 </div>
                 {records.length > 0 && (
@@ -147,7 +150,7 @@ export function AsBuiltView({
                           >
                             {OUTCOME[rec.outcome]?.label ?? rec.outcome}
                           </span>
-                          {rec.byName ?? "—"} · {when(rec.at)}
+                          {rec.byName ?? "—"} · <ShopTime at={rec.at.toISOString()} />
                         </p>
                         <dl className="mt-1 grid gap-x-6 gap-y-1 text-sm sm:grid-cols-2">
                           {Object.entries(rec.values).map(([key, value]) => {

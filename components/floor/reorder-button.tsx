@@ -1,6 +1,7 @@
 "use client";
 import { useState } from "react";
 import { useRouter } from "next/navigation";
+import { useMutation } from "@/lib/browser/mutation";
 import { RotateCcw } from "lucide-react";
 import type { ActionResult } from "@/lib/actions/define-action";
 
@@ -13,8 +14,10 @@ export function ReorderButton({
   action: (input: unknown) => Promise<ActionResult<{ draftId: string; href: string }>>;
 }) {
   const router = useRouter();
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
+  const reorder = useMutation(action);
+  // Stays busy after success while the builder opens.
+  const [opening, setOpening] = useState(false);
+  const busy = reorder.pending || opening;
   return (
     <div>
       <button
@@ -22,22 +25,19 @@ export function ReorderButton({
         className="btn-primary min-h-12"
         disabled={busy}
         onClick={async () => {
-          setBusy(true);
-          setError(null);
-          const res = await action({ serial });
-          if (res.ok) router.push(res.data.href);
-          else {
-            setBusy(false);
-            setError(res.error.message);
+          const res = await reorder.run({ serial });
+          if (res.ok) {
+            setOpening(true);
+            router.push(res.data.href);
           }
         }}
       >
         <RotateCcw className="size-4" aria-hidden="true" />
         {busy ? "Making the draft…" : "Reorder this shaft"}
       </button>
-      {error && (
+      {reorder.error && (
         <p role="alert" className="field-error">
-          {error}
+          {reorder.error.message}
         </p>
       )}
     </div>

@@ -1,5 +1,7 @@
 import type { OrderView } from "@/lib/orders/queries";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
+import { formatCalendarDate } from "@/lib/dates";
+import { ShopTime } from "@/components/shop-locale";
 import { Alert } from "@/components/ui/alert";
 import { OrderStatusBadge, PaymentBadge } from "./status-badge";
 import { OrderTimeline } from "./order-timeline";
@@ -21,8 +23,6 @@ const METHOD_LABEL: Record<string, string> = {
   cheque: "cheque",
   terminal: "card at the shop",
 };
-const noteDate = (iso: string) =>
-  new Date(iso).toLocaleDateString("en-US", { dateStyle: "medium", timeZone: "UTC" });
 
 /** The body of an order page, for the customer and (with `staffActions`) for the shop. */
 export function OrderPage({
@@ -50,7 +50,8 @@ export function OrderPage({
         <OrderStatusBadge status={order.status} label={order.statusLabel} onHold={order.onHold} />
         <PaymentBadge state={order.paymentState} />
         <span className="text-sm text-ink-muted">
-          Promised {order.promisedDate} · {order.fulfilment === "ship" ? "Shipping" : "Pickup at the shop"}
+          Promised {formatCalendarDate(order.promisedDate)} ·{" "}
+          {order.fulfilment === "ship" ? "Shipping" : "Pickup at the shop"}
         </span>
         {order.late && (
           <span className="rounded-full bg-fail-soft px-2.5 py-0.5 text-xs font-semibold text-fail">
@@ -115,7 +116,7 @@ export function OrderPage({
                   <li key={n.id} className="text-sm">
                     <p className="whitespace-pre-wrap">{n.body}</p>
                     <p className="mt-1 text-xs text-ink-muted">
-                      {n.byName} · <time dateTime={n.at}>{noteDate(n.at)}</time>
+                      {n.byName} · <ShopTime at={n.at} format="date" />
                     </p>
                   </li>
                 ))}
@@ -173,7 +174,14 @@ export function OrderPage({
                     </span>
                     <span className="text-ink-muted">
                       {PAYMENT_STATUS[p.status] ?? p.status}
-                      {p.paidAt ? ` ${p.paidAt.slice(0, 10)}` : ""}
+                      {p.paidAt ? (
+                        <>
+                          {" "}
+                          <ShopTime at={p.paidAt} format="date" />
+                        </>
+                      ) : (
+                        ""
+                      )}
                     </span>
                     <span className="tabular-nums">{formatMoney(p.amountCents, order.currency)}</span>
                   </li>

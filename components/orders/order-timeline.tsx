@@ -11,6 +11,7 @@ import {
   Wrench,
 } from "lucide-react";
 import type { OrderView } from "@/lib/orders/queries";
+import { ShopTime } from "@/components/shop-locale";
 
 const ICON = {
   received: CircleDot,
@@ -47,14 +48,7 @@ export function OrderTimeline({ order }: { order: OrderView }) {
               <Icon className="size-4 text-steel-700" aria-hidden="true" />
             </span>
             <p className="font-medium">{e.label}</p>
-            <time dateTime={e.at} className="text-sm text-ink-muted">
-              {new Date(e.at).toLocaleString("en-US", {
-                dateStyle: "medium",
-                timeStyle: "short",
-                timeZone: "UTC",
-              })}{" "}
-              UTC
-            </time>
+            <ShopTime at={e.at} className="text-sm text-ink-muted" />
           </li>
         );
       })}

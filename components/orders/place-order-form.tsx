@@ -3,7 +3,9 @@ import { useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { placeOrderBodySchema, type PlaceOrderBody } from "@/lib/orders/schemas";
-import { formatMoney, type OrderQuote } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
+import { sendJson, useMutation } from "@/lib/browser/mutation";
+import type { OrderQuote } from "@/lib/pricing/price-book";
 import { Totals } from "./shaft-summary";
 import { Alert } from "@/components/ui/alert";
 import type { AckItem } from "@/lib/orders/acknowledgements";
@@ -31,6 +33,9 @@ export function PlaceOrderForm({
   acknowledge = [],
 }: Props) {
   const [error, setError] = useState<string | null>(null);
+  const place = useMutation((body: unknown) =>
+    sendJson<{ id: string; checkoutUrl?: string | null }>("/api/orders", { body }),
+  );
   // Ticked check ids per design (by id: removing a shaft from the quote never moves a tick to
   // another); the server re-evaluates and refuses any warning left out.
   const [ackedById, setAcked] = useState<Record<string, string[]>>({});
@@ -57,7 +62,7 @@ export function PlaceOrderForm({
     register,
     handleSubmit,
     control,
-    formState: { errors, isSubmitting },
+    formState: { errors },
   } = useForm<PlaceOrderBody>({
     resolver: zodResolver(placeOrderBodySchema),
     defaultValues: { designIds, customerId, fulfilment: "pickup", shipTo: "", notes: "" },
@@ -78,27 +83,23 @@ export function PlaceOrderForm({
       focusFirstUnticked();
       return;
     }
-    const res = await fetch("/api/orders", {
-      method: "POST",
-      headers: { "content-type": "application/json" },
-      body: JSON.stringify({
-        ...values,
-        shafts: designIds.map((_, i) => ({ acknowledgements: acked[i] ?? [] })),
-      }),
+    const res = await place.run({
+      ...values,
+      shafts: designIds.map((_, i) => ({ acknowledgements: acked[i] ?? [] })),
     });
-    const body = await res.json().catch(() => null);
     if (!res.ok) {
-      const fields = (body?.error?.fields ?? {}) as Record<string, string>;
+      const fields = res.error.fields ?? {};
       const fromServer = Object.fromEntries(Object.entries(fields).filter(([k]) => k.startsWith("shafts[")));
       setAckErrors(fromServer);
-      setError(body?.error?.message ?? "The order could not be placed. Nothing was charged.");
+      setError(res.error.message);
       if (Object.keys(fromServer).length > 0) focusFirstUnticked();
       return;
     }
+    const placed = res.data;
     window.location.assign(
       counter
-        ? `/desk/orders/${body.id}?placed=1`
-        : (body.checkoutUrl ?? `/orders/${body.id}?checkout-unavailable=1`),
+        ? `/desk/orders/${placed.id}?placed=1`
+        : (placed.checkoutUrl ?? `/orders/${placed.id}?checkout-unavailable=1`),
     );
   });
 
@@ -234,8 +235,8 @@ export function PlaceOrderForm({
             : `The shop asks for a ${depositPercent} % deposit now; the balance is due when the shaft passes final inspection.`}
         </p>
       </div>
-      <button type="submit" className="btn-accent w-full sm:w-auto" disabled={isSubmitting}>
-        {isSubmitting
+      <button type="submit" className="btn-accent w-full sm:w-auto" disabled={place.pending}>
+        {place.pending
           ? "Placing the order…"
           : counter
             ? `Place order (${formatMoney(quote.dueNowCents, currency)} due now)`

@@ -1,5 +1,6 @@
 import { Wrench } from "lucide-react";
 import type { RetubeView } from "@/lib/orders/queries";
+import { ShopTime } from "@/components/shop-locale";
 import { formatQuantity, type FloorUnits } from "@/lib/traveller/units";
 
 /** "Re-tube" beside a shaft's name. */
@@ -54,8 +55,7 @@ export function RetubeSummary({
         <p className="mt-1">No part reused: all new parts.</p>
       )}
       <p className="mt-1 text-xs text-ink-muted">
-        Recorded by {retube.recordedBy} on{" "}
-        <time dateTime={retube.recordedAt}>{retube.recordedAt.slice(0, 16).replace("T", " ")} UTC</time>
+        Recorded by {retube.recordedBy} on <ShopTime at={retube.recordedAt} />
       </p>
     </section>
   );

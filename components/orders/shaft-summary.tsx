@@ -1,7 +1,8 @@
 import { AlertTriangle, ShieldAlert } from "lucide-react";
 import type { ShaftView } from "@/lib/orders/queries";
 import { shaftUseLabel } from "@/lib/driveline/uses";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
+import { ShopTime } from "@/components/shop-locale";
 import { CheckBadge } from "./status-badge";
 import { RetubeBadge, RetubeSummary } from "./retube-summary";
 
@@ -75,7 +76,7 @@ export function ShaftSummary({
                 <span className="block">{a.message}</span>
                 <span className="text-xs text-ink-muted">
                   Acknowledged by {a.byName} {a.channel === "counter" ? "(counter, by phone)" : "(online)"} on{" "}
-                  <time dateTime={a.at}>{a.at.slice(0, 16).replace("T", " ")} UTC</time>
+                  <ShopTime at={a.at} />
                 </span>
               </li>
             ))}

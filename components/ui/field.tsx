@@ -2,12 +2,30 @@ import { useId } from "react";
 
 interface FieldProps extends React.InputHTMLAttributes<HTMLInputElement> {
   label: string;
-  error?: string;
+  error?: string | null;
   hint?: string;
 }
 
-/** A labelled input whose hint and error are tied to it for assistive technology. */
-export function Field({ label, error, hint, id, ...input }: FieldProps) {
+interface TextAreaFieldProps extends React.TextareaHTMLAttributes<HTMLTextAreaElement> {
+  label: string;
+  error?: string | null;
+  hint?: string;
+}
+
+/** The label, hint and error around one control, tied to it for assistive technology. */
+function FieldFrame({
+  id,
+  label,
+  error,
+  hint,
+  control,
+}: {
+  id?: string;
+  label: string;
+  error?: string | null;
+  hint?: string;
+  control: (props: { id: string; "aria-invalid"?: true; "aria-describedby"?: string }) => React.ReactNode;
+}) {
   const autoId = useId();
   const inputId = id ?? autoId;
   const describedBy = [hint ? `${inputId}-hint` : null, error ? `${inputId}-error` : null]
@@ -18,13 +36,11 @@ export function Field({ label, error, hint, id, ...input }: FieldProps) {
       <label htmlFor={inputId} className="field-label">
         {label}
       </label>
-      <input
-        id={inputId}
-        className="field-input"
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy || undefined}
-        {...input}
-      />
+      {control({
+        id: inputId,
+        "aria-invalid": error ? true : undefined,
+        "aria-describedby": describedBy || undefined,
+      })}
       {hint && (
         <p id={`${inputId}-hint`} className="field-hint">
           {hint}
@@ -36,5 +52,33 @@ export function Field({ label, error, hint, id, ...input }: FieldProps) {
         </p>
       )}
     </div>
+  );
+}
+
+/** A labelled input whose hint and error are tied to it for assistive technology. */
+export function Field({ label, error, hint, id, ...input }: FieldProps) {
+  return (
+    <FieldFrame
+      id={id}
+      label={label}
+      error={error}
+      hint={hint}
+      control={(tie) => <input {...tie} className="field-input" {...input} />}
+    />
+  );
+}
+
+/** A labelled text area, as `Field` is for inputs. */
+export function TextAreaField({ label, error, hint, id, className, ...textarea }: TextAreaFieldProps) {
+  return (
+    <FieldFrame
+      id={id}
+      label={label}
+      error={error}
+      hint={hint}
+      control={(tie) => (
+        <textarea {...tie} className={className ? `field-input ${className}` : "field-input"} {...textarea} />
+      )}
+    />
   );
 }

@@ -81,3 +81,56 @@ export function useMutation<A extends unknown[], T>(action: (...args: A) => Prom
   const reset = useCallback(() => setError(null), []);
   return { run, pending, error, reset };
 }
+
+/**
+ * A mutation asked for first (a `ConfirmDialog`): `ask(choice)` opens the dialog for one choice
+ * (a row and what to do to it), `dialog` is spread onto the `ConfirmDialog` (open, busy, the
+ * error inside it, confirm, close). On success the dialog closes and `onDone(choice)` runs; on a
+ * failure it stays open with the message and its button usable again.
+ */
+export function useConfirmedMutation<P>(
+  perform: (choice: P) => Promise<ActionResult<unknown>>,
+  onDone: (choice: P) => void,
+) {
+  const [choice, setChoice] = useState<P | null>(null);
+  const mutation = useMutation(perform);
+  const { reset } = mutation;
+  const ask = useCallback(
+    (next: P) => {
+      reset();
+      setChoice(next);
+    },
+    [reset],
+  );
+  return {
+    choice,
+    ask,
+    dialog: {
+      open: choice !== null,
+      busy: mutation.pending,
+      error: mutation.error?.message ?? null,
+      onClose: () => setChoice(null),
+      onConfirm: async () => {
+        if (choice === null) return;
+        const res = await mutation.run(choice);
+        if (!res.ok) return;
+        setChoice(null);
+        onDone(choice);
+      },
+    },
+  };
+}
+
+/**
+ * Puts a failed mutation's field messages on a react-hook-form form (`setError` from `useForm`),
+ * for the fields the form has; the rest stay in the error's message.
+ */
+export function showFieldErrors<F extends string>(
+  setError: (field: F, error: { message: string }) => void,
+  error: MutationError,
+  fields: readonly F[],
+): void {
+  for (const [field, message] of Object.entries(error.fields ?? {})) {
+    if ((fields as readonly string[]).includes(field)) setError(field as F, { message });
+  }
+}

@@ -2,7 +2,7 @@
  * Changes and field paths in words, for the history, the confirmation and the error summary:
  * "Tubes › YL-T-DOM-3000-083 › Price per metre: $25.10 → $27.00". Pure.
  */
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
 import type { ConfigChange } from "./diff";
 import { FLOOR_LIMIT_META, LIMIT_META } from "./limits";
 
@@ -66,6 +66,7 @@ export const FIELD_LABELS: Record<string, string> = {
   minEngagementMm: "Least engagement (mm)",
   value: "Value",
   currency: "Currency",
+  timeZone: "Time zone",
   labourPerShaftCents: "Labour per shaft",
   balancingPerShaftCents: "Balancing per shaft",
   teardownPerShaftCents: "Re-tube teardown and inspection per shaft",

@@ -17,6 +17,7 @@ import { checkMeasurements, type Failure, type SiValues } from "@/lib/traveller/
 import type { StepKind } from "@/lib/traveller/settings";
 import type { StepSpec } from "@/lib/traveller/steps";
 import { fromSi } from "@/lib/traveller/units";
+import { formatMoney } from "@/lib/money";
 import { demoDesigns, type DemoDesign } from "./designs";
 
 const HOUR = 3_600_000;
@@ -81,12 +82,7 @@ export interface GenerateResult {
   byStatus: Record<string, number>;
 }
 
-const USD = new Intl.NumberFormat("en-US", { style: "currency", currency: "USD" });
-/** As formatMoney (lib/pricing/price-book.ts), with one formatter for the whole run. */
-const formatMoney = (cents: number, currency: string) =>
-  currency === "USD"
-    ? USD.format(cents / 100)
-    : new Intl.NumberFormat("en-US", { style: "currency", currency }).format(cents / 100);
+/* Money in event labels: lib/money.ts (its formatters are cached per currency). */
 
 /** A small, fast, seeded random sequence (mulberry32). */
 export function randomSequence(seed: number): () => number {

@@ -23,7 +23,11 @@ async function headerFor(em: EntityManager, order: Order): Promise<PapersHeader>
   await em.populate(order, ["customer"]);
   const [shop, engineering] = await Promise.all([em.findOne(Shop, { id: 1 }), getShopEngineering()]);
   return {
-    shop: { name: shop?.name ?? "Yokeline", phone: shop?.phone ?? null },
+    shop: {
+      name: shop?.name ?? "Yokeline",
+      phone: shop?.phone ?? null,
+      timeZone: engineering.priceBook.timeZone,
+    },
     order: { number: order.number, customerName: order.customer.name, fulfilment: order.fulfilment },
     units: engineering.floor.units,
     paperSize: engineering.floor.paperSize,

@@ -601,7 +601,11 @@ export async function travellerViewFor(
   ]);
   const shaft = wo.orderShaft;
   return buildTravellerView({
-    shop: { name: shop?.name ?? "Yokeline", phone: shop?.phone ?? null },
+    shop: {
+      name: shop?.name ?? "Yokeline",
+      phone: shop?.phone ?? null,
+      timeZone: engineering.priceBook.timeZone,
+    },
     serial: wo.serial,
     revision: rev,
     voidedBy: rev < wo.revision ? wo.revision : null,

@@ -8,7 +8,7 @@ import { AppError } from "@/lib/http/errors";
 import { logger } from "@/lib/logger";
 import { payments } from "@/lib/payments";
 import { PaymentsUnavailableError } from "@/lib/payments/port";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
 import { getShopEngineering } from "@/lib/shop/config";
 import { afterCommit, notifyOrderCancelled } from "./notify";
 import { applyRefund, lockOrder, methodLabel } from "./payments";

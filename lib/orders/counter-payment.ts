@@ -4,7 +4,7 @@ import { can } from "@/lib/auth/permissions";
 import { recordAudit } from "@/lib/audit";
 import { inTransaction } from "@/lib/db/orm";
 import { AppError } from "@/lib/http/errors";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
 import { releaseAfterPayment } from "@/lib/floor/hooks";
 import { assertSignedOff } from "./engineering-signoff";
 import { afterCommit, notifyPaymentReceived } from "./notify";

@@ -6,6 +6,8 @@ import { inTransaction } from "@/lib/db/orm";
 import { AppError } from "@/lib/http/errors";
 import type { UpdateOrderDetailsInput } from "./desk-schemas";
 import { lockOrder } from "./payments";
+import { formatDateTime } from "@/lib/dates";
+import { getShopLocale } from "@/lib/shop/locale";
 
 const AUDIT_ACTION = "order.details";
 
@@ -38,7 +40,7 @@ export async function updateOrderDetails(
         { orderBy: { at: "desc" } },
       );
       const who = last?.actor ? (await em.findOne(User, { id: last.actor.id }))?.name : null;
-      const when = last ? last.at.toISOString().slice(0, 16).replace("T", " ") + " UTC" : null;
+      const when = last ? formatDateTime(last.at, (await getShopLocale()).timeZone) : null;
       throw new AppError(
         "conflict",
         `${who ?? "Someone"} saved this order's details${when ? ` at ${when}` : ""} after you opened it. ` +

@@ -2,16 +2,11 @@ import type { EntityManager } from "@mikro-orm/postgresql";
 import type { Order, Payment } from "@/entities";
 import { flushQueuedEmails, queueEmail, type EmailLine } from "@/lib/mail";
 import { appUrl } from "@/lib/http/app-url";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
+import { formatCalendarDate, formatLongDate } from "@/lib/dates";
+import { getShopLocale } from "@/lib/shop/locale";
 
-const longDate = (iso: string) =>
-  new Date(`${iso}T12:00:00Z`).toLocaleDateString("en-US", {
-    weekday: "long",
-    day: "numeric",
-    month: "long",
-    year: "numeric",
-    timeZone: "UTC",
-  });
+const longDate = (iso: string) => formatCalendarDate(iso, "long");
 
 async function shaftLines(em: EntityManager, order: Order): Promise<EmailLine[]> {
   if (!order.shafts.isInitialized()) await em.populate(order, ["shafts"]);
@@ -75,10 +70,7 @@ export async function notifyPaymentReceived(
       customerName: order.customer.name,
       paymentLabel: paymentLabel(payment.kind),
       amountPaid: money(order, payment.amountCents),
-      paidOn: (payment.paidAt ?? new Date()).toLocaleDateString("en-US", {
-        dateStyle: "long",
-        timeZone: "UTC",
-      }),
+      paidOn: formatLongDate(payment.paidAt ?? new Date(), (await getShopLocale()).timeZone),
       totalPaid: money(order, order.paidCents),
       balanceRemaining: money(order, Math.max(0, order.totalCents - order.paidCents)),
       lines: await shaftLines(em, order),
@@ -199,7 +191,7 @@ export async function notifyOrderShipped(
       trackingNumber: unique(parcels.map((p) => p.trackingNumber)),
       trackingUrl: null,
       shipTo: order.shipTo ?? "",
-      shippedOn: shippedAt.toLocaleDateString("en-US", { dateStyle: "long", timeZone: "UTC" }),
+      shippedOn: formatLongDate(shippedAt, (await getShopLocale()).timeZone),
       lines: await shaftLines(em, order),
       orderUrl: `${appUrl()}/orders/${order.id}`,
     },

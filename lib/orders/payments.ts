@@ -11,7 +11,7 @@ import { payments } from "@/lib/payments";
 import { PaymentsUnavailableError, type PaymentEvent } from "@/lib/payments/port";
 import { can } from "@/lib/auth/permissions";
 import { appUrl } from "@/lib/http/app-url";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
 import { releaseAfterPayment } from "@/lib/floor/hooks";
 import { afterCommit, notifyBalanceDue, notifyPaymentLink, notifyPaymentReceived } from "./notify";
 import { assertSignedOff } from "./engineering-signoff";

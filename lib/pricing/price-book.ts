@@ -1,5 +1,7 @@
 import { addBusinessDays, formatISO } from "date-fns";
 import { z } from "zod";
+import { DEFAULT_TIME_ZONE, isTimeZone } from "../dates";
+import { DEFAULT_CURRENCY } from "../money";
 
 const money = () =>
   z
@@ -25,6 +27,11 @@ export const priceBookSchema = z.object({
   currency: z.string({ error: "must be a three-letter currency code" }).regex(/^[A-Z]{3}$/, {
     error: "must be a three-letter currency code",
   }),
+  /** The shop's time zone (IANA name): dates on screens, e-mails, papers and exports are its days. */
+  timeZone: z
+    .string({ error: "must be a time zone such as America/Chicago" })
+    .refine(isTimeZone, { error: "must be a time zone such as America/Chicago" })
+    .default(DEFAULT_TIME_ZONE),
   /** Cutting, welding, phasing and straightening one shaft. */
   labourPerShaftCents: money(),
   balancingPerShaftCents: money(),
@@ -57,7 +64,8 @@ export type PriceBook = z.infer<typeof priceBookSchema>;
 
 /** Demo data: an invented shop's prices. */
 export const defaultPriceBook: PriceBook = {
-  currency: "USD",
+  currency: DEFAULT_CURRENCY,
+  timeZone: DEFAULT_TIME_ZONE,
   labourPerShaftCents: 14500,
   balancingPerShaftCents: 6500,
   teardownPerShaftCents: 4500,
@@ -296,9 +304,4 @@ export function quoteOrder(
 /** The promised date: `workingDays` weekdays after `from`, as an ISO date. */
 export function promisedDate(from: Date, workingDays: number): string {
   return formatISO(addBusinessDays(from, workingDays), { representation: "date" });
-}
-
-/** Formats cents for people, e.g. 123456 → "$1,234.56". */
-export function formatMoney(cents: number, currency = "USD"): string {
-  return new Intl.NumberFormat("en-US", { style: "currency", currency }).format(cents / 100);
 }

@@ -1,7 +1,7 @@
 import "server-only";
 import { stringify } from "csv-stringify/sync";
 import { logger } from "@/lib/logger";
-import type { ColumnSpec } from "./columns";
+import type { CellContext, ColumnSpec } from "./columns";
 import type { Page } from "./sql";
 
 /** Rows fetched per statement while a file streams. */
@@ -44,6 +44,7 @@ export async function csvResponse<R>(
   filename: string,
   columns: readonly ColumnSpec<R>[],
   fetchPage: (limit: number, offset: number) => Promise<Page<R>>,
+  ctx: CellContext,
 ): Promise<Response> {
   const first = await fetchPage(EXPORT_BATCH, 0);
   const batches = allRows(fetchPage, first);
@@ -53,7 +54,9 @@ export async function csvResponse<R>(
     async pull(controller) {
       try {
         const next = await batches.next();
-        const records = next.done ? [] : next.value.map((row) => columns.map((c) => safeCell(c.csv(row))));
+        const records = next.done
+          ? []
+          : next.value.map((row) => columns.map((c) => safeCell(c.csv(row, ctx))));
         if (records.length || header)
           controller.enqueue(
             encoder.encode(stringify(records, { header, columns: columns.map((c) => c.label) })),

@@ -46,7 +46,7 @@ export const CUSTOMER_COLUMNS: readonly ColumnSpec<CustomerTableRow>[] = [
     label: "Customer since",
     sortable: true,
     hideable: true,
-    csv: (r) => shortTimestamp(r.createdAt),
+    csv: (r, { timeZone }) => shortTimestamp(r.createdAt, timeZone),
   },
 ];
 

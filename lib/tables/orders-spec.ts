@@ -93,7 +93,13 @@ export const ORDER_COLUMNS: readonly ColumnSpec<OrderTableRow>[] = [
     csv: (r) => csvMoney(r.balanceCents),
   },
   { id: "currency", label: "Currency", sortable: false, hideable: true, csv: (r) => r.currency },
-  { id: "created", label: "Placed", sortable: true, hideable: true, csv: (r) => shortTimestamp(r.createdAt) },
+  {
+    id: "created",
+    label: "Placed",
+    sortable: true,
+    hideable: true,
+    csv: (r, { timeZone }) => shortTimestamp(r.createdAt, timeZone),
+  },
   { id: "promised", label: "Promised", sortable: true, hideable: true, csv: (r) => r.promisedDate },
   { id: "late", label: "Late", sortable: false, hideable: true, csv: (r) => (r.late ? "late" : "") },
 ];

@@ -65,9 +65,9 @@ export const SHAFT_COLUMNS: readonly ColumnSpec<ShaftTableRow>[] = [
     label: "Hold",
     sortable: false,
     hideable: true,
-    csv: (r) =>
+    csv: (r, { timeZone }) =>
       r.onHold
-        ? `On hold at ${r.holdStep ?? "a step"}${r.holdSince ? ` since ${shortTimestamp(r.holdSince)}` : ""}`
+        ? `On hold at ${r.holdStep ?? "a step"}${r.holdSince ? ` since ${shortTimestamp(r.holdSince, timeZone)}` : ""}`
         : "",
   },
   { id: "tube", label: "Tube", sortable: false, hideable: true, csv: (r) => r.tube },
@@ -77,7 +77,7 @@ export const SHAFT_COLUMNS: readonly ColumnSpec<ShaftTableRow>[] = [
     label: "Released",
     sortable: true,
     hideable: true,
-    csv: (r) => shortTimestamp(r.releasedAt),
+    csv: (r, { timeZone }) => shortTimestamp(r.releasedAt, timeZone),
   },
 ];
 

@@ -32,7 +32,13 @@ export interface StepTableRow {
 export const STEP_SORTS = ["at", "serial", "step", "result", "user"] as const;
 
 export const STEP_COLUMNS: readonly ColumnSpec<StepTableRow>[] = [
-  { id: "at", label: "When (UTC)", sortable: true, hideable: false, csv: (r) => shortTimestamp(r.at) },
+  {
+    id: "at",
+    label: "When",
+    sortable: true,
+    hideable: false,
+    csv: (r, { timeZone }) => shortTimestamp(r.at, timeZone),
+  },
   { id: "serial", label: "Serial", sortable: true, hideable: true, csv: (r) => r.serial },
   { id: "order", label: "Order", sortable: false, hideable: true, csv: (r) => r.orderNumber },
   {

@@ -11,6 +11,7 @@ import { GREY, MARGIN, PAGE, Writer, drawQr, embedFonts, type Fonts } from "./pd
 import { describeLimit, type BalanceWeight, type SiValues } from "./measure";
 import type { FieldSpec, StepSpec } from "./steps";
 import { formatQuantity, type FloorUnits } from "./units";
+import { formatTimestamp } from "../dates";
 
 /** 1 lbf·ft = 0.3048 m × 4.4482216152605 N (exact by definition of the pound-force and the foot). */
 const NM_PER_LBF_FT = 0.3048 * 4.4482216152605;
@@ -45,7 +46,8 @@ export interface PaperShaft {
 }
 
 export interface PapersHeader {
-  shop: { name: string; phone: string | null };
+  /** `timeZone`: the shop's (price book), for the dates printed. */
+  shop: { name: string; phone: string | null; timeZone: string };
   order: { number: string; customerName: string; fulfilment: "pickup" | "ship" };
   units: FloorUnits;
   paperSize: keyof typeof PAGE;
@@ -250,9 +252,8 @@ function valueText(field: FieldSpec, values: SiValues, units: FloorUnits): strin
   }
 }
 
-const when = (d: Date | null) => (d ? d.toISOString().slice(0, 16).replace("T", " ") + " UTC" : "—");
-
 function asBuiltPage(flow: Flow, view: AsBuiltView, shaft: AsBuiltView["shafts"][number]): void {
+  const when = (d: Date | null) => (d ? formatTimestamp(d, view.shop.timeZone) : "—");
   flow.newPage();
   header(
     flow,

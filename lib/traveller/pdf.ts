@@ -20,6 +20,7 @@ import {
 import { formatQuantity, type FloorUnits } from "./units";
 import { addTwoPieceTravellerPages } from "./pdf-two-piece";
 import type { TravellerStep, TravellerView } from "./view";
+import { DEFAULT_TIME_ZONE, shopIsoDate } from "../dates";
 
 /** Looking rearward: the front yoke's plane as a dashed reference, the rear yoke rotated by the index. */
 export function drawPhaseDiagram(w: Writer, cx: number, cy: number, r: number, indexDeg: number): void {
@@ -269,7 +270,7 @@ function exceptionsBlock(w: Writer, view: TravellerView, top: number, left: numb
   const lines: { text: string; bold: boolean }[] = view.acceptedExceptions.flatMap((a) => [
     { text: `ACCEPTED EXCEPTION - check "${a.checkId}" FAILED: ${a.message}`, bold: true },
     {
-      text: `Reason: ${a.reason} - accepted by ${a.byName} on ${a.at.slice(0, 10)} for this order only; the shop's limits are unchanged.`,
+      text: `Reason: ${a.reason} - accepted by ${a.byName} on ${shopIsoDate(a.at, view.shop.timeZone ?? DEFAULT_TIME_ZONE)} for this order only; the shop's limits are unchanged.`,
       bold: false,
     },
   ]);

@@ -24,7 +24,8 @@ export interface AcceptedException {
 }
 
 export interface TravellerView {
-  shop: { name: string; phone: string | null };
+  /** `timeZone`: the shop's (price book), for the dates printed; absent: the default shop's. */
+  shop: { name: string; phone: string | null; timeZone?: string };
   serial: string;
   /** What the serial's QR code holds (the serial itself, or a link to the as-built record). */
   serialQrText: string;

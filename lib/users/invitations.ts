@@ -11,6 +11,8 @@ import { appUrl } from "@/lib/http/app-url";
 import { AppError } from "@/lib/http/errors";
 import { enqueueDelivery, queueEmail } from "@/lib/mail";
 import { ROLE_LABEL } from "@/lib/navigation";
+import { formatLongDate } from "@/lib/dates";
+import { getShopLocale } from "@/lib/shop/locale";
 import type { AcceptStaffInviteBody, InviteStaffBody } from "./schemas";
 
 /** How long an owner's invitation link works (the first owner's printed link: FIRST_OWNER_HOURS). */
@@ -48,7 +50,6 @@ const toRow = (i: StaffInvitation, now = new Date()): InvitationRow => ({
 });
 
 const linkFor = (token: string) => `${appUrl()}/set-password?token=${token}`;
-const dateInWords = (d: Date) => d.toLocaleDateString("en-US", { dateStyle: "long", timeZone: "UTC" });
 
 /** The account, if any, that already uses `email` (any capitals). */
 async function accountWithEmail(em: EntityManager, email: string): Promise<User | null> {
@@ -88,7 +89,7 @@ async function queueInvitationEmail(
       roleDuties: ROLE_DUTIES[invitation.role],
       invitedBy,
       url: linkFor(token),
-      expiresOn: dateInWords(invitation.expiresAt),
+      expiresOn: formatLongDate(invitation.expiresAt, (await getShopLocale()).timeZone),
     },
   });
 }

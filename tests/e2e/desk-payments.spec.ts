@@ -1,30 +1,7 @@
-import { readFileSync } from "node:fs";
 import { expect, test, type Page } from "@playwright/test";
-import { ACCOUNTS, mailTo, signIn } from "./fixtures";
+import { ACCOUNTS, customerOrder, mailTo, signIn } from "./fixtures";
 
 // The counter's money on the desk order page, against the local Stripe and mail fakes.
-const streetTruck = JSON.parse(readFileSync("examples/street-truck.json", "utf8")) as unknown;
-
-/**
- * The signed-in customer saves the README street truck and orders it (as the shop page does). It is
- * a street shaft: ordered for towing, the service factor takes its torsion margin below the limit.
- */
-async function customerOrder(page: Page, name: string): Promise<{ id: string; number: string }> {
-  const origin = new URL(page.url()).origin;
-  const design = await page.request.post("/api/designs", {
-    headers: { origin },
-    data: { name, design: streetTruck, application: { description: "Ranch pickup", use: "street" } },
-  });
-  expect(design.status()).toBe(201);
-  const { id: designId } = (await design.json()) as { id: string };
-  const order = await page.request.post("/api/orders", {
-    headers: { origin },
-    data: { designIds: [designId], fulfilment: "pickup" },
-  });
-  expect(order.status()).toBe(201);
-  return (await order.json()) as { id: string; number: string };
-}
-
 async function payOnCheckoutPage(page: Page, card = "4242 4242 4242 4242") {
   await expect(page).toHaveURL(/127\.0\.0\.1:\d+\/pay\/cs_/);
   await page.getByLabel("Card number").fill(card);

@@ -1,3 +1,4 @@
+import { readFileSync } from "node:fs";
 import { expect, type Page } from "@playwright/test";
 import { DEMO_CUSTOMERS, DEMO_PASSWORD, DEMO_STAFF } from "../../lib/demo";
 
@@ -30,4 +31,26 @@ export async function mailTo(email: string, subject: RegExp): Promise<{ subject:
     await new Promise((r) => setTimeout(r, 500));
   }
   throw new Error(`no e-mail to ${email} matching ${subject}`);
+}
+
+const streetTruck = JSON.parse(readFileSync("examples/street-truck.json", "utf8")) as unknown;
+
+/**
+ * The signed-in customer saves the README street truck and orders it (as the shop page does). It is
+ * a street shaft: ordered for towing, the service factor takes its torsion margin below the limit.
+ */
+export async function customerOrder(page: Page, name: string): Promise<{ id: string; number: string }> {
+  const origin = new URL(page.url()).origin;
+  const design = await page.request.post("/api/designs", {
+    headers: { origin },
+    data: { name, design: streetTruck, application: { description: "Ranch pickup", use: "street" } },
+  });
+  expect(design.status()).toBe(201);
+  const { id: designId } = (await design.json()) as { id: string };
+  const order = await page.request.post("/api/orders", {
+    headers: { origin },
+    data: { designIds: [designId], fulfilment: "pickup" },
+  });
+  expect(order.status()).toBe(201);
+  return (await order.json()) as { id: string; number: string };
 }

@@ -4,7 +4,7 @@ import { ClipboardList } from "lucide-react";
 import { requirePermission } from "@/lib/auth/guard";
 import { getEm } from "@/lib/db/orm";
 import { listOrders } from "@/lib/orders/queries";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
 import { CELL, TableCard } from "@/components/ui/table-card";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState } from "@/components/ui/empty-state";

@@ -5,7 +5,9 @@ import { requirePermission } from "@/lib/auth/guard";
 import { ORDER_STATUS_LABEL } from "@/lib/orders/labels";
 import { CHART_WEEKS, DEFAULT_STEP_HOURS, overviewActivity, overviewFigures } from "@/lib/shop/overview";
 import { AVERAGE_WINDOW_DAYS } from "@/lib/shop/overview";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
+import { getShopLocale } from "@/lib/shop/locale";
+import { formatTimestamp, shopIsoDate } from "@/lib/dates";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
 import { CELL, TableCard } from "@/components/ui/table-card";
@@ -14,14 +16,18 @@ import { DaysToShipChart, FinishedChart, MoneyChart, StepTimeChart } from "./_co
 
 export const metadata: Metadata = { title: "Overview" };
 
-const money = (cents: number) => formatMoney(cents, "USD");
 /** The orders table's filters (app/(staff)/desk/orders). */
 const ordersHref = (query: string) => `/desk/orders?${query}`;
 const hours = (h: number) => (h >= 24 ? `${(h / 24).toFixed(1)} days` : `${h.toFixed(1)} h`);
 
 export default async function OverviewPage() {
   await requirePermission("shop.overview", "/overview");
-  const [f, activity] = await Promise.all([overviewFigures(), overviewActivity()]);
+  const [f, activity, { currency, timeZone }] = await Promise.all([
+    overviewFigures(),
+    overviewActivity(),
+    getShopLocale(),
+  ]);
+  const money = (cents: number) => formatMoney(cents, currency);
   const openValue = f.byState
     .filter((s) => s.status !== "shipped" && s.status !== "cancelled")
     .reduce((sum, s) => sum + s.valueCents, 0);
@@ -138,7 +144,9 @@ export default async function OverviewPage() {
                   </div>
                   <p className="mt-1">
                     <span className="font-medium">At {h.step}</span>
-                    {h.since && <span className="text-ink-muted"> since {h.since.slice(0, 10)}</span>}
+                    {h.since && (
+                      <span className="text-ink-muted"> since {shopIsoDate(h.since, timeZone)}</span>
+                    )}
                   </p>
                   {h.reasons.length > 0 ? (
                     <ul className="mt-1 list-disc pl-5 text-ink-soft">
@@ -329,7 +337,7 @@ export default async function OverviewPage() {
                   <span className="font-mono text-xs">{e.action}</span> · {e.subject}
                 </span>
                 <time dateTime={e.at} className="text-ink-muted">
-                  {e.at.slice(0, 16).replace("T", " ")} UTC
+                  {formatTimestamp(e.at, timeZone)}
                 </time>
               </li>
             ))}

@@ -8,6 +8,7 @@ import { can } from "@/lib/auth/permissions";
 import { orderView, populateOrder } from "@/lib/orders/queries";
 import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
+import { ShopTime } from "@/components/shop-locale";
 import { OrderPage } from "@/components/orders/order-page";
 import { OrderFiles } from "@/components/order-files";
 import { listOrderUploads, mayAttachFiles } from "@/lib/uploads";
@@ -43,7 +44,11 @@ export default async function CustomerOrderPage({ params, searchParams }: PagePr
     <>
       <PageHeader
         title={`Order ${order.number}`}
-        description={`Placed ${order.createdAt.toISOString().slice(0, 10)}`}
+        description={
+          <>
+            Placed <ShopTime at={order.createdAt.toISOString()} format="date" />
+          </>
+        }
       />
       <OrderPage
         order={orderView(order, user)}

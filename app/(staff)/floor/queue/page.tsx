@@ -9,6 +9,7 @@ import { workQueue, type QueueItem } from "@/lib/floor/queries";
 import { asBuiltHref } from "@/lib/floor/scan";
 import { getShopEngineering } from "@/lib/shop/config";
 import { PageHeader } from "@/components/ui/page-header";
+import { ShopTime } from "@/components/shop-locale";
 import { EmptyState } from "@/components/ui/empty-state";
 import { SerialSearch } from "../_components/serial-search";
 
@@ -56,7 +57,7 @@ function ShaftCard({ item, today, deskLinks }: { item: QueueItem; today: string;
         <div className="mt-2 rounded-md bg-warn-soft p-3 text-warn">
           <p className="flex items-center gap-2 font-semibold">
             <PauseCircle className="size-4" aria-hidden="true" /> On hold at {item.hold.step} since{" "}
-            {item.hold.at.toISOString().slice(0, 16).replace("T", " ")}
+            <ShopTime at={item.hold.at.toISOString()} />
           </p>
           <ul className="mt-1 list-disc pl-5 text-ink">
             {item.hold.failures.map((f) => (

@@ -12,6 +12,8 @@ import {
   XAxis,
   YAxis,
 } from "recharts";
+import { formatMoneyWhole } from "@/lib/money";
+import { useShopLocale } from "@/components/shop-locale";
 
 /** The charts' colours: the theme's steel, brass and fail (tailwind.config.ts). */
 const STEEL = "#3a516c";
@@ -23,10 +25,6 @@ const shortWeek = (iso: string) => {
   const [, m, d] = iso.split("-");
   return `${Number(d)}/${Number(m)}`;
 };
-const dollars = (cents: number) =>
-  new Intl.NumberFormat("en-US", { style: "currency", currency: "USD", maximumFractionDigits: 0 }).format(
-    cents / 100,
-  );
 
 /** Shafts that passed final inspection, per week. */
 export function FinishedChart({ data }: { data: { week: string; shafts: number }[] }) {
@@ -84,6 +82,8 @@ export function MoneyChart({
 }: {
   data: { week: string; depositsCents: number; balancesCents: number; refundsCents: number }[];
 }) {
+  const { currency } = useShopLocale();
+  const dollars = (cents: number) => formatMoneyWhole(cents, currency);
   return (
     <ResponsiveContainer width="100%" height={260}>
       <ComposedChart data={data} accessibilityLayer={false} margin={{ top: 8, right: 8, left: 8, bottom: 0 }}>

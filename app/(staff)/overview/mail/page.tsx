@@ -7,6 +7,7 @@ import { isDemo } from "@/lib/shop/shop";
 import { listOutbox } from "@/lib/mail/outbox-view";
 import { CELL, TableCard } from "@/components/ui/table-card";
 import { PageHeader } from "@/components/ui/page-header";
+import { ShopTime } from "@/components/shop-locale";
 import { EmptyState } from "@/components/ui/empty-state";
 import { MailStatus } from "./_components/mail-status";
 
@@ -35,7 +36,7 @@ export default async function SentMailPage() {
           {messages.map((m) => (
             <tr key={m.id} className="align-top">
               <td className={`${CELL} whitespace-nowrap`}>
-                <time dateTime={m.createdAt}>{m.createdAt.slice(0, 16).replace("T", " ")} UTC</time>
+                <ShopTime at={m.createdAt} />
               </td>
               <td className={CELL}>{m.to}</td>
               <td className={CELL}>

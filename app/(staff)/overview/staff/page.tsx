@@ -1,5 +1,7 @@
 import type { Metadata } from "next";
 import { UserPlus } from "lucide-react";
+import { formatDate, formatDateTime } from "@/lib/dates";
+import { getShopLocale } from "@/lib/shop/locale";
 import { requirePermission } from "@/lib/auth/guard";
 import { isStaffRole, STAFF_ROLES } from "@/lib/auth/roles";
 import { ROLE_LABEL } from "@/lib/navigation";
@@ -20,15 +22,16 @@ const ROLE_SHORT = {
   owner: "everything",
 } as const;
 
-// Times as the order timeline shows them (UTC, the server's clock).
-const when = (iso: string) =>
-  `${new Date(iso).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" })} UTC`;
-const day = (iso: string) =>
-  new Date(iso).toLocaleDateString("en-US", { dateStyle: "medium", timeZone: "UTC" });
-
 export default async function StaffPage() {
   const me = await requirePermission("staff.manage", "/overview/staff");
-  const [staff, invitations] = await Promise.all([listStaff(), listOpenInvitations()]);
+  const [staff, invitations, { timeZone }] = await Promise.all([
+    listStaff(),
+    listOpenInvitations(),
+    getShopLocale(),
+  ]);
+  // Times in the shop's zone, as the order timeline shows them.
+  const when = (iso: string) => formatDateTime(iso, timeZone);
+  const day = (iso: string) => formatDate(iso, timeZone);
   const roles = STAFF_ROLES.map((r) => ({ value: r, label: ROLE_LABEL[r] }));
   const members: StaffMemberView[] = staff.flatMap((s) =>
     isStaffRole(s.role)

@@ -6,7 +6,8 @@ import { route } from "@/lib/http/route";
 import { csvResponse } from "@/lib/tables/csv";
 import { tableQueryOrThrow } from "@/lib/tables/http";
 import { exportColumns, tableNamed } from "@/lib/tables/registry";
-import { todayIso } from "@/lib/tables/sql";
+import { getShopLocale } from "@/lib/shop/locale";
+import { shopIsoDate } from "@/lib/dates";
 
 export const dynamic = "force-dynamic";
 
@@ -17,8 +18,11 @@ export const GET = route<{ table: string }>({ permission: null }, async ({ req, 
   // The table's own permission: the same as its page's.
   if (!can(user!.role, table.permission)) throw new AccessError(403);
   const query = tableQueryOrThrow(table.schema, req.nextUrl.searchParams);
-  const em = await getEm();
-  return csvResponse(`${params.table}-${todayIso()}.csv`, exportColumns(table, query), (limit, offset) =>
-    table.fetch(em, query, { limit, offset }),
+  const [em, { timeZone }] = await Promise.all([getEm(), getShopLocale()]);
+  return csvResponse(
+    `${params.table}-${shopIsoDate(new Date(), timeZone)}.csv`,
+    exportColumns(table, query),
+    (limit, offset) => table.fetch(em, query, { limit, offset }),
+    { timeZone },
   );
 });

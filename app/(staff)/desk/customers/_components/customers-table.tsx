@@ -1,4 +1,5 @@
 "use client";
+import { ShopTime } from "@/components/shop-locale";
 import Link from "next/link";
 import { DataTable, type TableQueryState } from "@/components/data-table/data-table";
 import { tableColumns } from "@/components/data-table/columns";
@@ -25,7 +26,7 @@ const columns = tableColumns<CustomerTableRow>(CUSTOMER_COLUMNS, {
     ),
   orders: (r) =>
     r.orderCount ? <Link href={`/desk/orders?q=${encodeURIComponent(r.email)}`}>{r.orderCount}</Link> : "0",
-  created: (r) => <span className="whitespace-nowrap">{r.createdAt.slice(0, 10)}</span>,
+  created: (r) => <ShopTime at={r.createdAt} format="isoDate" className="whitespace-nowrap" />,
   last: (r) => <span className="whitespace-nowrap">{r.lastOrderOn ?? "—"}</span>,
 });
 

@@ -9,6 +9,10 @@ import { createCustomerBodySchema, type CreateCustomerBody } from "@/lib/custome
 import { createCustomerAction } from "@/lib/actions/create-customer";
 import { Field } from "@/components/ui/field";
 import { Alert } from "@/components/ui/alert";
+import { SubmitButton } from "@/components/ui/submit-button";
+import { showFieldErrors, useMutation } from "@/lib/browser/mutation";
+
+const CUSTOMER_FIELDS = Object.keys(createCustomerBodySchema.shape) as (keyof CreateCustomerBody)[];
 
 type SearchState =
   | { kind: "idle" }
@@ -53,13 +57,14 @@ export function CustomerPicker() {
   const [choosing, setChoosing] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [existing, setExisting] = useState<CustomerRow | null>(null);
+  const create = useMutation(createCustomerAction);
   const {
     register,
     handleSubmit,
     setValue,
     setFocus,
     setError: setFieldError,
-    formState: { errors, isSubmitting },
+    formState: { errors },
   } = useForm<CreateCustomerBody>({
     resolver: zodResolver(createCustomerBodySchema),
     defaultValues: { name: "", email: "", phone: "", company: "" },
@@ -142,10 +147,9 @@ export function CustomerPicker() {
   const onCreate = handleSubmit(async (values) => {
     setError(null);
     setExisting(null);
-    const res = await createCustomerAction(values);
+    const res = await create.run(values);
     if (res.ok) return choose(res.data);
-    for (const [field, message] of Object.entries(res.error.fields ?? {}))
-      setFieldError(field as keyof CreateCustomerBody, { message });
+    showFieldErrors(setFieldError, res.error, CUSTOMER_FIELDS);
     setError(res.error.message);
     // The e-mail is already a customer's: offer that customer instead.
     if (res.error.code === "conflict") {
@@ -298,9 +302,9 @@ export function CustomerPicker() {
             {...register("company")}
             error={errors.company?.message}
           />
-          <button type="submit" className="btn-primary" disabled={isSubmitting}>
-            {isSubmitting ? "Saving…" : "Save and start the order"}
-          </button>
+          <SubmitButton pending={create.pending} busyLabel="Saving…">
+            Save and start the order
+          </SubmitButton>
         </form>
       </section>
     </div>

@@ -3,7 +3,8 @@ import Link from "next/link";
 import { DataTable, type TableQueryState } from "@/components/data-table/data-table";
 import { tableColumns } from "@/components/data-table/columns";
 import { OrderStatusBadge, PaymentBadge } from "@/components/orders/status-badge";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
+import { ShopTime } from "@/components/shop-locale";
 import { ORDER_COLUMNS, type OrderTableRow } from "@/lib/tables/orders-spec";
 
 const columns = tableColumns<OrderTableRow>(ORDER_COLUMNS, {
@@ -20,7 +21,7 @@ const columns = tableColumns<OrderTableRow>(ORDER_COLUMNS, {
   payment: (r) => <PaymentBadge state={r.paymentState} />,
   total: (r) => formatMoney(r.totalCents, r.currency),
   balance: (r) => (r.balanceCents ? formatMoney(r.balanceCents, r.currency) : "—"),
-  created: (r) => <span className="whitespace-nowrap">{r.createdAt.slice(0, 10)}</span>,
+  created: (r) => <ShopTime at={r.createdAt} format="isoDate" className="whitespace-nowrap" />,
   promised: (r) => <span className="whitespace-nowrap">{r.promisedDate}</span>,
   late: (r) => (r.late ? <span className="font-semibold text-fail">Late</span> : ""),
 });

@@ -5,6 +5,7 @@ import { requirePermission } from "@/lib/auth/guard";
 import { isDemo } from "@/lib/shop/shop";
 import { getOutboxMessage } from "@/lib/mail/outbox-view";
 import { PageHeader } from "@/components/ui/page-header";
+import { ShopTime } from "@/components/shop-locale";
 import { Alert } from "@/components/ui/alert";
 import { MailStatus } from "../_components/mail-status";
 
@@ -24,7 +25,7 @@ export default async function SentMailMessagePage({ params }: { params: Promise<
         description={
           <>
             To {message.to} · <span className="font-mono text-xs">{message.template}</span> ·{" "}
-            <time dateTime={message.createdAt}>{message.createdAt.slice(0, 16).replace("T", " ")} UTC</time>
+            <ShopTime at={message.createdAt} />
           </>
         }
         actions={

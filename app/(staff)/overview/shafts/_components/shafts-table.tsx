@@ -2,7 +2,7 @@
 import Link from "next/link";
 import { DataTable, type TableQueryState } from "@/components/data-table/data-table";
 import { tableColumns } from "@/components/data-table/columns";
-import { shortTimestamp } from "@/lib/tables/columns";
+import { ShopTime } from "@/components/shop-locale";
 import { SHAFT_COLUMNS, WORK_ORDER_STATE_LABEL, type ShaftTableRow } from "@/lib/tables/shafts-spec";
 
 const pill = "inline-flex items-center rounded-full px-2.5 py-0.5 text-xs font-semibold whitespace-nowrap";
@@ -39,7 +39,9 @@ const columns = tableColumns<ShaftTableRow>(SHAFT_COLUMNS, {
       <span className="font-semibold text-warn">
         At {r.holdStep ?? "a step"}
         {r.holdSince && (
-          <span className="block text-xs font-normal">since {shortTimestamp(r.holdSince)}</span>
+          <span className="block text-xs font-normal">
+            since <ShopTime at={r.holdSince} format="timestamp" />
+          </span>
         )}
       </span>
     ) : (
@@ -52,7 +54,7 @@ const columns = tableColumns<ShaftTableRow>(SHAFT_COLUMNS, {
       {r.late && " late"}
     </span>
   ),
-  released: (r) => <span className="whitespace-nowrap">{r.releasedAt.slice(0, 10)}</span>,
+  released: (r) => <ShopTime at={r.releasedAt} format="isoDate" className="whitespace-nowrap" />,
 });
 
 export function ShaftsTable(props: {

@@ -4,17 +4,19 @@ import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { inviteStaffBodySchema, type InviteStaffBody } from "@/lib/users/schemas";
 import { inviteStaffAction } from "@/lib/actions/invite-staff";
+import { useMutation } from "@/lib/browser/mutation";
 import { Field } from "@/components/ui/field";
 import { Alert } from "@/components/ui/alert";
 
 export function InviteStaffForm({ roles }: { roles: { value: InviteStaffBody["role"]; label: string }[] }) {
   const [result, setResult] = useState<{ tone: "success" | "error"; text: string } | null>(null);
+  const invite = useMutation(inviteStaffAction);
   const {
     register,
     handleSubmit,
     reset,
     setError,
-    formState: { errors, isSubmitting },
+    formState: { errors },
   } = useForm<InviteStaffBody>({
     resolver: zodResolver(inviteStaffBodySchema),
     defaultValues: { role: "counter" },
@@ -22,7 +24,7 @@ export function InviteStaffForm({ roles }: { roles: { value: InviteStaffBody["ro
 
   const onSubmit = handleSubmit(async (values) => {
     setResult(null);
-    const res = await inviteStaffAction(values);
+    const res = await invite.run(values);
     if (res.ok) {
       setResult({
         tone: "success",
@@ -66,8 +68,8 @@ export function InviteStaffForm({ roles }: { roles: { value: InviteStaffBody["ro
         </select>
         {errors.role && <p className="field-error">{errors.role.message}</p>}
       </div>
-      <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
-        {isSubmitting ? "Sending…" : "Send invitation"}
+      <button type="submit" className="btn-primary w-full" disabled={invite.pending}>
+        {invite.pending ? "Sending…" : "Send invitation"}
       </button>
     </form>
   );

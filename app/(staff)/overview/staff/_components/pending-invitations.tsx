@@ -2,6 +2,7 @@
 import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { resendStaffInvitationAction, revokeStaffInvitationAction } from "@/lib/actions/invite-staff";
+import { useConfirmedMutation } from "@/lib/browser/mutation";
 import { Alert } from "@/components/ui/alert";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
@@ -18,15 +19,27 @@ export interface InvitationView {
   invitedBy: string | null;
 }
 
+type Choice = { kind: "resend" | "revoke"; invitation: InvitationView };
+
 /** Invitations not yet accepted, each with Resend and Withdraw (both confirmed). */
 export function PendingInvitations({ invitations }: { invitations: InvitationView[] }) {
   const router = useRouter();
-  const [pending, setPending] = useState<{ kind: "resend" | "revoke"; invitation: InvitationView } | null>(
-    null,
-  );
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
+  const act = useConfirmedMutation(
+    ({ kind, invitation }: Choice) =>
+      kind === "resend"
+        ? resendStaffInvitationAction({ invitationId: invitation.id })
+        : revokeStaffInvitationAction({ invitationId: invitation.id }),
+    ({ kind, invitation }) => {
+      setNotice(
+        kind === "resend"
+          ? `A new link went to ${invitation.email}; the earlier one no longer works.`
+          : `The invitation to ${invitation.email} is withdrawn.`,
+      );
+      router.refresh();
+    },
+  );
+  const pending = act.choice;
 
   if (invitations.length === 0 && !notice) {
     return (
@@ -35,29 +48,6 @@ export function PendingInvitations({ invitations }: { invitations: InvitationVie
       </p>
     );
   }
-
-  const confirm = async () => {
-    if (!pending) return;
-    setBusy(true);
-    setError(null);
-    const input = { invitationId: pending.invitation.id };
-    const res =
-      pending.kind === "resend"
-        ? await resendStaffInvitationAction(input)
-        : await revokeStaffInvitationAction(input);
-    setBusy(false);
-    if (!res.ok) {
-      setError(res.error.message);
-      return;
-    }
-    setNotice(
-      pending.kind === "resend"
-        ? `A new link went to ${pending.invitation.email}; the earlier one no longer works.`
-        : `The invitation to ${pending.invitation.email} is withdrawn.`,
-    );
-    setPending(null);
-    router.refresh();
-  };
 
   return (
     <div className="space-y-3">
@@ -87,9 +77,8 @@ export function PendingInvitations({ invitations }: { invitations: InvitationVie
                 className="btn-quiet px-3 py-1.5 text-xs"
                 aria-label={`Resend the invitation to ${i.email}`}
                 onClick={() => {
-                  setError(null);
                   setNotice(null);
-                  setPending({ kind: "resend", invitation: i });
+                  act.ask({ kind: "resend", invitation: i });
                 }}
               >
                 Resend
@@ -99,9 +88,8 @@ export function PendingInvitations({ invitations }: { invitations: InvitationVie
                 className="btn-quiet px-3 py-1.5 text-xs"
                 aria-label={`Withdraw the invitation to ${i.email}`}
                 onClick={() => {
-                  setError(null);
                   setNotice(null);
-                  setPending({ kind: "revoke", invitation: i });
+                  act.ask({ kind: "revoke", invitation: i });
                 }}
               >
                 Withdraw
@@ -111,9 +99,7 @@ export function PendingInvitations({ invitations }: { invitations: InvitationVie
         ))}
       </ul>
       <ConfirmDialog
-        open={pending !== null}
-        busy={busy}
-        error={error}
+        {...act.dialog}
         tone={pending?.kind === "revoke" ? "danger" : "primary"}
         title={
           pending?.kind === "revoke"
@@ -121,8 +107,6 @@ export function PendingInvitations({ invitations }: { invitations: InvitationVie
             : `Send ${pending?.invitation.name ?? ""} a new link?`
         }
         confirmLabel={pending?.kind === "revoke" ? "Withdraw" : "Send new link"}
-        onConfirm={confirm}
-        onClose={() => setPending(null)}
       >
         {pending?.kind === "revoke" ? (
           <p>The link in their e-mail stops working at once. You can invite them again later.</p>

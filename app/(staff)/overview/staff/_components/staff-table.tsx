@@ -4,6 +4,7 @@ import { useRouter } from "next/navigation";
 import { changeStaffRoleAction } from "@/lib/actions/change-staff-role";
 import { setStaffActiveAction } from "@/lib/actions/set-staff-active";
 import { CELL, TableCard } from "@/components/ui/table-card";
+import { useConfirmedMutation } from "@/lib/browser/mutation";
 import { Alert } from "@/components/ui/alert";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
@@ -44,41 +45,28 @@ function StatusBadge({ active }: { active: boolean }) {
 /** The staff list with its row actions: change role, deactivate, reactivate (each confirmed). */
 export function StaffTable({ members, roles }: { members: StaffMemberView[]; roles: RoleOption[] }) {
   const router = useRouter();
-  const [pending, setPending] = useState<Pending | null>(null);
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
-
+  const change = useConfirmedMutation(
+    (p: Pending) =>
+      p.kind === "role"
+        ? changeStaffRoleAction({ userId: p.member.id, role: p.role })
+        : setStaffActiveAction({ userId: p.member.id, active: p.active }),
+    (p) => {
+      const roleLabel = roles.find((r) => p.kind === "role" && r.value === p.role)?.label;
+      setNotice(
+        p.kind === "role"
+          ? `${p.member.name} is now ${roleLabel ?? p.role}.`
+          : p.active
+            ? `${p.member.name} can sign in again.`
+            : `${p.member.name} is deactivated and signed out everywhere.`,
+      );
+      router.refresh();
+    },
+  );
+  const pending = change.choice;
   const open = (next: Pending) => {
-    setError(null);
     setNotice(null);
-    setPending(next);
-  };
-
-  const confirm = async () => {
-    if (!pending) return;
-    setBusy(true);
-    setError(null);
-    const { member } = pending;
-    const res =
-      pending.kind === "role"
-        ? await changeStaffRoleAction({ userId: member.id, role: pending.role })
-        : await setStaffActiveAction({ userId: member.id, active: pending.active });
-    setBusy(false);
-    if (!res.ok) {
-      setError(res.error.message);
-      return;
-    }
-    const roleLabel = roles.find((r) => pending.kind === "role" && r.value === pending.role)?.label;
-    setNotice(
-      pending.kind === "role"
-        ? `${member.name} is now ${roleLabel ?? pending.role}.`
-        : pending.active
-          ? `${member.name} can sign in again.`
-          : `${member.name} is deactivated and signed out everywhere.`,
-    );
-    setPending(null);
-    router.refresh();
+    change.ask(next);
   };
 
   const actions = (m: StaffMemberView) =>
@@ -159,9 +147,7 @@ export function StaffTable({ members, roles }: { members: StaffMemberView[]; rol
         </TableCard>
       </div>
       <ConfirmDialog
-        open={pending !== null}
-        busy={busy}
-        error={error}
+        {...change.dialog}
         tone={pending?.kind === "active" && !pending.active ? "danger" : "primary"}
         title={
           !pending
@@ -181,8 +167,6 @@ export function StaffTable({ members, roles }: { members: StaffMemberView[]; rol
                 ? "Reactivate"
                 : "Deactivate"
         }
-        onConfirm={confirm}
-        onClose={() => setPending(null)}
       >
         {pending?.kind === "role" && (
           <p>

@@ -2,7 +2,7 @@
 import Link from "next/link";
 import { DataTable, type TableQueryState } from "@/components/data-table/data-table";
 import { tableColumns } from "@/components/data-table/columns";
-import { shortTimestamp } from "@/lib/tables/columns";
+import { ShopTime } from "@/components/shop-locale";
 import { STEP_COLUMNS, STEP_OUTCOME_LABEL, type StepTableRow } from "@/lib/tables/steps-spec";
 
 const pill = "inline-flex items-center rounded-full px-2.5 py-0.5 text-xs font-semibold whitespace-nowrap";
@@ -14,7 +14,7 @@ const TONE: Record<StepTableRow["outcome"], string> = {
 };
 
 const columns = tableColumns<StepTableRow>(STEP_COLUMNS, {
-  at: (r) => <span className="whitespace-nowrap tabular-nums">{shortTimestamp(r.at)}</span>,
+  at: (r) => <ShopTime at={r.at} format="timestamp" className="whitespace-nowrap tabular-nums" />,
   serial: (r) => (
     <Link href={`/floor/shafts/${r.serial}`} className="font-mono whitespace-nowrap">
       {r.serial}

@@ -3,6 +3,7 @@ import { useId, useState } from "react";
 import { useRouter } from "next/navigation";
 import { Loader2 } from "lucide-react";
 import { Alert } from "@/components/ui/alert";
+import { sendJson, useMutation } from "@/lib/browser/mutation";
 import {
   RETUBE_PARTS,
   RETUBE_PART_LABEL,
@@ -51,7 +52,10 @@ export function RetubeIntake({ designId, shaftName, job, initial, geometry, unit
   const [parts, setParts] = useState<RepairIntake["parts"]>(start.parts);
   const [errors, setErrors] = useState<Errors>({});
   const [message, setMessage] = useState<{ tone: "error" | "success"; text: string } | null>(null);
-  const [saving, setSaving] = useState(false);
+  const saveRepair = useMutation((body: unknown) =>
+    sendJson(`/api/designs/${designId}/repair`, { method: "PUT", body }),
+  );
+  const saving = saveRepair.pending;
 
   const weldNumber = weld.trim() === "" ? NaN : Number(weld.trim().replace(",", "."));
   const weldMm = Number.isFinite(weldNumber) ? toSi("length", units, weldNumber) : NaN;
@@ -74,35 +78,25 @@ export function RetubeIntake({ designId, shaftName, job, initial, geometry, unit
       return;
     }
     setErrors({});
-    setSaving(true);
-    try {
-      const res = await fetch(`/api/designs/${designId}/repair`, {
-        method: "PUT",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify(parsed.data),
-      });
-      const data = (await res.json().catch(() => null)) as {
-        error?: { message: string; fields?: Errors };
-      } | null;
-      if (!res.ok) {
-        setErrors(data?.error?.fields ?? {});
-        setMessage({ tone: "error", text: data?.error?.message ?? "Not saved. Try again." });
-        return;
-      }
-      setMessage({
-        tone: "success",
-        text:
-          choice === "retube" ? "Saved: the quote is priced as a re-tube." : "Saved: priced as a new shaft.",
-      });
-      router.refresh();
-    } catch {
+    // A failed call keeps every entry here and frees the button.
+    const res = await saveRepair.run(parsed.data);
+    if (!res.ok) {
+      setErrors(res.error.fields ?? {});
       setMessage({
         tone: "error",
-        text: "No connection to the shop. Your entries are still here; try again.",
+        text:
+          res.error.code === "unreachable"
+            ? "No connection to the shop. Your entries are still here; try again."
+            : res.error.message,
       });
-    } finally {
-      setSaving(false);
+      return;
     }
+    setMessage({
+      tone: "success",
+      text:
+        choice === "retube" ? "Saved: the quote is priced as a re-tube." : "Saved: priced as a new shaft.",
+    });
+    router.refresh();
   }
 
   const weldError = errors["repair.weldToWeldMm"];

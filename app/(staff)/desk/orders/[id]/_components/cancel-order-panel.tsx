@@ -3,9 +3,11 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { Ban } from "lucide-react";
 import type { CancellationQuote } from "@/lib/orders/cancel";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney } from "@/lib/money";
 import { cancelOrderAction } from "@/lib/actions/cancel-order";
+import { useMutation } from "@/lib/browser/mutation";
 import { Alert } from "@/components/ui/alert";
+import { TextAreaField } from "@/components/ui/field";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
 /**
@@ -30,7 +32,7 @@ export function CancelOrderPanel({
   const [reason, setReason] = useState("");
   const [error, setError] = useState<string | null>(null);
   const [open, setOpen] = useState(false);
-  const [busy, setBusy] = useState(false);
+  const cancel = useMutation(cancelOrderAction);
   const money = (c: number) => formatMoney(c, currency);
 
   return (
@@ -61,27 +63,16 @@ export function CancelOrderPanel({
               Released to the shop: cancelling voids its travellers; the floor&apos;s scans are refused.
             </Alert>
           )}
-          <div>
-            <label htmlFor="cancel-reason" className="field-label">
-              Reason (the customer reads it)
-            </label>
-            <textarea
-              id="cancel-reason"
-              rows={2}
-              className="field-input"
-              value={reason}
-              maxLength={500}
-              onChange={(e) => setReason(e.target.value)}
-              aria-invalid={error ? true : undefined}
-              aria-describedby={error ? "cancel-reason-error" : undefined}
-            />
-            {error && (
-              <p id="cancel-reason-error" className="field-error">
-                {error}
-              </p>
-            )}
-          </div>
-          <button type="submit" className="btn-quiet w-full text-fail" disabled={busy}>
+          <TextAreaField
+            id="cancel-reason"
+            label="Reason (the customer reads it)"
+            rows={2}
+            value={reason}
+            maxLength={500}
+            onChange={(e) => setReason(e.target.value)}
+            error={error}
+          />
+          <button type="submit" className="btn-quiet w-full text-fail" disabled={cancel.pending}>
             <Ban className="size-4" aria-hidden="true" />
             Cancel order…
           </button>
@@ -94,12 +85,10 @@ export function CancelOrderPanel({
           quote.refundCents > 0 ? `Cancel and refund ${money(quote.refundCents)}` : "Cancel order"
         }
         tone="danger"
-        busy={busy}
+        busy={cancel.pending}
         onClose={() => setOpen(false)}
         onConfirm={async () => {
-          setBusy(true);
-          const res = await cancelOrderAction({ orderId, reason });
-          setBusy(false);
+          const res = await cancel.run({ orderId, reason });
           setOpen(false);
           if (res.ok) router.refresh();
           else setError(res.error.fields?.reason ?? res.error.message);

@@ -6,6 +6,7 @@ import { Factory, Printer } from "lucide-react";
 import type { OrderFloorSummary } from "@/lib/floor/work-orders";
 import { releaseOrderAction } from "@/lib/actions/release-order";
 import { reissueTravellerAction } from "@/lib/actions/reissue-traveller";
+import { useMutation } from "@/lib/browser/mutation";
 import { Alert } from "@/components/ui/alert";
 
 /** The counter's floor actions on an order: release to the shop, print the travellers, void and reissue. */
@@ -24,7 +25,9 @@ export function FloorActions({
   floor: OrderFloorSummary;
 }) {
   const router = useRouter();
-  const [busy, setBusy] = useState(false);
+  const release = useMutation(releaseOrderAction);
+  const reissue = useMutation(reissueTravellerAction);
+  const busy = release.pending || reissue.pending;
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const released = floor.state !== "not_released";
 
@@ -42,9 +45,7 @@ export function FloorActions({
           onSubmit={async (e) => {
             e.preventDefault();
             const reason = String(new FormData(e.currentTarget).get("reason") ?? "");
-            setBusy(true);
-            const res = await releaseOrderAction({ orderId, reason: reason || undefined });
-            setBusy(false);
+            const res = await release.run({ orderId, reason: reason || undefined });
             setMessage(
               res.ok
                 ? { tone: "success", text: `Released: ${res.data.serials.join(", ")}. Print the traveller.` }
@@ -63,7 +64,7 @@ export function FloorActions({
           )}
           <button type="submit" className="btn-primary w-full" disabled={busy}>
             <Factory className="size-4" aria-hidden="true" />
-            Release to the shop
+            {release.pending ? "Releasing…" : "Release to the shop"}
           </button>
         </form>
       )}
@@ -111,9 +112,7 @@ export function FloorActions({
                           )
                         )
                           return;
-                        setBusy(true);
-                        const res = await reissueTravellerAction({ workOrderId: s.workOrderId, reason });
-                        setBusy(false);
+                        const res = await reissue.run({ workOrderId: s.workOrderId, reason });
                         setMessage(
                           res.ok
                             ? {

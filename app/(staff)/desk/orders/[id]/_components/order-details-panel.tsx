@@ -3,7 +3,9 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { updateOrderDetailsAction } from "@/lib/actions/update-order-details";
 import type { OrderDetailsView } from "@/lib/orders/details";
+import { useMutation } from "@/lib/browser/mutation";
 import { Alert } from "@/components/ui/alert";
+import { Field, TextAreaField } from "@/components/ui/field";
 
 /**
  * The order's details the counter may change: the promised date and, for an order that ships, the
@@ -14,7 +16,7 @@ export function OrderDetailsPanel({ orderId, details }: { orderId: string; detai
   const router = useRouter();
   const [promisedDate, setPromisedDate] = useState(details.promisedDate);
   const [shipTo, setShipTo] = useState(details.shipTo ?? "");
-  const [busy, setBusy] = useState(false);
+  const save = useMutation(updateOrderDetailsAction);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const changed = promisedDate !== details.promisedDate || (shipTo || null) !== details.shipTo;
@@ -29,75 +31,45 @@ export function OrderDetailsPanel({ orderId, details }: { orderId: string; detai
         noValidate
         onSubmit={async (e) => {
           e.preventDefault();
-          setBusy(true);
           setMessage(null);
-          try {
-            const res = await updateOrderDetailsAction({
-              orderId,
-              version: details.version,
-              promisedDate,
-              shipTo: details.fulfilment === "ship" ? shipTo : null,
-            });
-            if (res.ok) {
-              setErrors({});
-              setMessage({ tone: "success", text: "Saved." });
-              router.refresh();
-            } else {
-              setErrors(res.error.fields ?? {});
-              setMessage({ tone: "error", text: res.error.message });
-            }
-          } catch {
-            setMessage({
-              tone: "error",
-              text: "The server cannot be reached; nothing was saved. Try again.",
-            });
-          } finally {
-            setBusy(false);
+          // A failed call (even a dropped connection) keeps what was typed and frees the button.
+          const res = await save.run({
+            orderId,
+            version: details.version,
+            promisedDate,
+            shipTo: details.fulfilment === "ship" ? shipTo : null,
+          });
+          if (res.ok) {
+            setErrors({});
+            setMessage({ tone: "success", text: "Saved." });
+            router.refresh();
+          } else {
+            setErrors(res.error.fields ?? {});
+            setMessage({ tone: "error", text: res.error.message });
           }
         }}
       >
-        <div>
-          <label htmlFor="details-promised" className="field-label">
-            Promised date
-          </label>
-          <input
-            id="details-promised"
-            type="date"
-            className="field-input"
-            value={promisedDate}
-            onChange={(e) => setPromisedDate(e.target.value)}
-            aria-invalid={Boolean(errors.promisedDate)}
-            aria-describedby={errors.promisedDate ? "details-promised-error" : undefined}
-          />
-          {errors.promisedDate && (
-            <p id="details-promised-error" className="field-error">
-              {errors.promisedDate}
-            </p>
-          )}
-        </div>
+        <Field
+          id="details-promised"
+          label="Promised date"
+          type="date"
+          value={promisedDate}
+          onChange={(e) => setPromisedDate(e.target.value)}
+          error={errors.promisedDate}
+        />
         {details.fulfilment === "ship" && (
-          <div>
-            <label htmlFor="details-ship-to" className="field-label">
-              Ship to
-            </label>
-            <textarea
-              id="details-ship-to"
-              className="field-input min-h-20"
-              value={shipTo}
-              onChange={(e) => setShipTo(e.target.value)}
-              aria-invalid={Boolean(errors.shipTo)}
-              aria-describedby={errors.shipTo ? "details-ship-to-error" : undefined}
-            />
-            {errors.shipTo && (
-              <p id="details-ship-to-error" className="field-error">
-                {errors.shipTo}
-              </p>
-            )}
-          </div>
+          <TextAreaField
+            id="details-ship-to"
+            label="Ship to"
+            className="min-h-20"
+            value={shipTo}
+            onChange={(e) => setShipTo(e.target.value)}
+            error={errors.shipTo}
+          />
         )}
         {message && <Alert tone={message.tone === "success" ? "success" : "error"} title={message.text} />}
-        <button type="submit" className="btn-secondary" disabled={busy || !changed}>
-          {busy ? "Saving…" : "Save details"}
+        <button type="submit" className="btn-secondary" disabled={save.pending || !changed}>
+          {save.pending ? "Saving…" : "Save details"}
         </button>
       </form>
     </section>

@@ -4,17 +4,17 @@ import { useRouter } from "next/navigation";
 import { Eye, Lock } from "lucide-react";
 import type { OrderNoteView } from "@/lib/orders/notes";
 import { addOrderNoteAction } from "@/lib/actions/add-order-note";
+import { useMutation } from "@/lib/browser/mutation";
 import { Alert } from "@/components/ui/alert";
-
-const when = (iso: string) =>
-  new Date(iso).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
+import { TextAreaField } from "@/components/ui/field";
+import { ShopTime } from "@/components/shop-locale";
 
 /** Notes on the order: every note for the shop, with who wrote it and when; add one, staff-only or for the customer. */
 export function OrderNotesPanel({ orderId, notes }: { orderId: string; notes: OrderNoteView[] }) {
   const router = useRouter();
   const [body, setBody] = useState("");
   const [visibility, setVisibility] = useState<"staff" | "customer">("staff");
-  const [busy, setBusy] = useState(false);
+  const add = useMutation(addOrderNoteAction);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<string | null>(null);
 
@@ -40,7 +40,7 @@ export function OrderNotesPanel({ orderId, notes }: { orderId: string; notes: Or
                     <Lock className="size-3" aria-hidden="true" /> Staff only
                   </span>
                 )}
-                {n.byName} · <time dateTime={n.at}>{when(n.at)}</time>
+                {n.byName} · <ShopTime at={n.at} />
               </p>
             </li>
           ))}
@@ -50,9 +50,7 @@ export function OrderNotesPanel({ orderId, notes }: { orderId: string; notes: Or
         className="space-y-3 border-t border-line pt-4"
         onSubmit={async (e) => {
           e.preventDefault();
-          setBusy(true);
-          const res = await addOrderNoteAction({ orderId, body, visibility });
-          setBusy(false);
+          const res = await add.run({ orderId, body, visibility });
           if (res.ok) {
             setBody("");
             setErrors({});
@@ -67,26 +65,15 @@ export function OrderNotesPanel({ orderId, notes }: { orderId: string; notes: Or
         }}
       >
         {message && <Alert tone="success">{message}</Alert>}
-        <div>
-          <label htmlFor="note-body" className="field-label">
-            Add a note
-          </label>
-          <textarea
-            id="note-body"
-            rows={3}
-            className="field-input"
-            value={body}
-            maxLength={2000}
-            onChange={(e) => setBody(e.target.value)}
-            aria-invalid={errors.body ? true : undefined}
-            aria-describedby={errors.body ? "note-body-error" : undefined}
-          />
-          {errors.body && (
-            <p id="note-body-error" className="field-error">
-              {errors.body}
-            </p>
-          )}
-        </div>
+        <TextAreaField
+          id="note-body"
+          label="Add a note"
+          rows={3}
+          value={body}
+          maxLength={2000}
+          onChange={(e) => setBody(e.target.value)}
+          error={errors.body}
+        />
         <fieldset className="space-y-1 text-sm">
           <legend className="field-label">Who sees it</legend>
           <label className="flex items-center gap-2">
@@ -109,8 +96,8 @@ export function OrderNotesPanel({ orderId, notes }: { orderId: string; notes: Or
           </label>
           {errors.visibility && <p className="field-error">{errors.visibility}</p>}
         </fieldset>
-        <button type="submit" className="btn-quiet w-full" disabled={busy || !body.trim()}>
-          {busy ? "Adding…" : "Add note"}
+        <button type="submit" className="btn-quiet w-full" disabled={add.pending || !body.trim()}>
+          {add.pending ? "Adding…" : "Add note"}
         </button>
       </form>
     </section>

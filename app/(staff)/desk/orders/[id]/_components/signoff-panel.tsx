@@ -5,7 +5,10 @@ import { ShieldAlert, ShieldCheck } from "lucide-react";
 import type { SignoffShaftView } from "@/lib/orders/engineering-signoff";
 import { acceptFailedCheckAction } from "@/lib/actions/accept-failed-check";
 import { ACCEPTANCE_REASON_MIN_CHARS } from "@/lib/orders/desk-schemas";
+import { useMutation } from "@/lib/browser/mutation";
 import { Alert } from "@/components/ui/alert";
+import { TextAreaField } from "@/components/ui/field";
+import { ShopTime } from "@/components/shop-locale";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
 /**
@@ -54,7 +57,7 @@ export function SignoffPanel({
               {c.acceptance ? (
                 <p className="mt-1">
                   <span className="font-semibold">Accepted exception</span> by {c.acceptance.byName} on{" "}
-                  {c.acceptance.at.slice(0, 10)}: {c.acceptance.reason}
+                  <ShopTime at={c.acceptance.at} format="date" />: {c.acceptance.reason}
                 </p>
               ) : canAccept ? (
                 <AcceptForm orderId={orderId} shaftId={s.shaftId} checkId={c.checkId} message={c.message} />
@@ -84,7 +87,7 @@ function AcceptForm({
   const [reason, setReason] = useState("");
   const [error, setError] = useState<string | null>(null);
   const [open, setOpen] = useState(false);
-  const [busy, setBusy] = useState(false);
+  const accept = useMutation(acceptFailedCheckAction);
   const id = `accept-${shaftId}-${checkId}`;
   return (
     <form
@@ -102,25 +105,16 @@ function AcceptForm({
         setOpen(true);
       }}
     >
-      <label htmlFor={id} className="field-label">
-        Why this check does not apply to this order
-      </label>
-      <textarea
+      <TextAreaField
         id={id}
+        label="Why this check does not apply to this order"
         rows={2}
-        className="field-input"
         value={reason}
         maxLength={1000}
         onChange={(e) => setReason(e.target.value)}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
+        error={error}
       />
-      {error && (
-        <p id={`${id}-error`} className="field-error">
-          {error}
-        </p>
-      )}
-      <button type="submit" className="btn-quiet" disabled={busy}>
+      <button type="submit" className="btn-quiet" disabled={accept.pending}>
         Accept for this order…
       </button>
       <ConfirmDialog
@@ -128,12 +122,10 @@ function AcceptForm({
         title="Accept this failed check?"
         confirmLabel="Accept for this order"
         tone="danger"
-        busy={busy}
+        busy={accept.pending}
         onClose={() => setOpen(false)}
         onConfirm={async () => {
-          setBusy(true);
-          const res = await acceptFailedCheckAction({ orderId, shaftId, checkId, reason });
-          setBusy(false);
+          const res = await accept.run({ orderId, shaftId, checkId, reason });
           setOpen(false);
           if (res.ok) router.refresh();
           else setError(res.error.fields?.reason ?? res.error.message);

@@ -1,7 +1,8 @@
 "use client";
 import { useState } from "react";
 import { useRouter } from "next/navigation";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { formatMoney, parseMoney } from "@/lib/money";
+import { useMutation } from "@/lib/browser/mutation";
 import { refundPaymentAction } from "@/lib/actions/refund-payment";
 import { requestBalanceAction } from "@/lib/actions/request-balance";
 import { Alert } from "@/components/ui/alert";
@@ -38,7 +39,9 @@ export function StaffActions({
 }) {
   const router = useRouter();
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
-  const [busy, setBusy] = useState(false);
+  const requestBalance = useMutation(requestBalanceAction);
+  const refund = useMutation(refundPaymentAction);
+  const busy = requestBalance.pending || refund.pending;
   const refundable = payments.filter((p) => p.status === "succeeded" && p.amountCents > p.refundedCents);
   if (!canRequestBalance && !(canRefund && refundable.length > 0) && !message) return null;
 
@@ -55,9 +58,7 @@ export function StaffActions({
           disabled={busy}
           onClick={async () => {
             if (!window.confirm("E-mail the customer a link to pay the balance?")) return;
-            setBusy(true);
-            const res = await requestBalanceAction({ orderId });
-            setBusy(false);
+            const res = await requestBalance.run({ orderId });
             setMessage(
               res.ok
                 ? {
@@ -69,7 +70,7 @@ export function StaffActions({
             router.refresh();
           }}
         >
-          Request the balance
+          {requestBalance.pending ? "Requesting…" : "Request the balance"}
         </button>
       )}
       {canRefund && refundable.length > 0 && (
@@ -77,28 +78,32 @@ export function StaffActions({
           className="space-y-3 border-t border-line pt-4"
           onSubmit={async (e) => {
             e.preventDefault();
-            const data = new FormData(e.currentTarget);
-            const amount = Math.round(Number(data.get("amount")) * 100);
+            const form = e.currentTarget;
+            const data = new FormData(form);
+            const parsed = parseMoney(String(data.get("amount") ?? ""));
+            if (!parsed.ok) {
+              setMessage({ tone: "error", text: parsed.message });
+              return;
+            }
+            const amount = parsed.cents;
             const paymentId = String(data.get("paymentId"));
             const reason = String(data.get("reason") ?? "");
             const method = refundable.find((p) => p.id === paymentId)?.method ?? "checkout";
             if (
               !window.confirm(
                 method === "checkout"
-                  ? `Refund ${formatMoney(amount || 0, currency)}? This sends money back to the customer's card.`
-                  : `Record a refund of ${formatMoney(amount || 0, currency)} given back by ${METHOD[method]}? Give the money back by hand.`,
+                  ? `Refund ${formatMoney(amount, currency)}? This sends money back to the customer's card.`
+                  : `Record a refund of ${formatMoney(amount, currency)} given back by ${METHOD[method]}? Give the money back by hand.`,
               )
             )
               return;
-            setBusy(true);
-            const res = await refundPaymentAction({ paymentId, amountCents: amount, reason });
-            setBusy(false);
+            const res = await refund.run({ paymentId, amountCents: amount, reason });
             if (res.ok) {
               setMessage({
                 tone: "success",
                 text: `Refunded ${formatMoney(res.data.amountCents, currency)}.`,
               });
-              e.currentTarget?.reset();
+              form.reset();
             } else {
               setMessage({
                 tone: "error",
@@ -129,9 +134,8 @@ export function StaffActions({
             <input
               id="refund-amount"
               name="amount"
-              type="number"
-              min="0.01"
-              step="0.01"
+              inputMode="decimal"
+              autoComplete="off"
               required
               className="field-input"
             />
@@ -143,7 +147,7 @@ export function StaffActions({
             <input id="refund-reason" name="reason" required minLength={3} className="field-input" />
           </div>
           <button type="submit" className="btn-quiet w-full" disabled={busy}>
-            Refund
+            {refund.pending ? "Refunding…" : "Refund"}
           </button>
         </form>
       )}

@@ -2,11 +2,13 @@
 import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { Banknote, Mail } from "lucide-react";
-import { formatMoney } from "@/lib/pricing/price-book";
+import { centsToDecimal, formatMoney, parseMoney } from "@/lib/money";
+import { useMutation } from "@/lib/browser/mutation";
 import { sendPaymentLinkAction } from "@/lib/actions/send-payment-link";
 import { recordCounterPaymentAction } from "@/lib/actions/record-counter-payment";
 import { Alert } from "@/components/ui/alert";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
+import { Field } from "@/components/ui/field";
 
 type Method = "cash" | "cheque" | "terminal";
 const METHODS: { value: Method; label: string; reference: string }[] = [
@@ -15,13 +17,6 @@ const METHODS: { value: Method; label: string; reference: string }[] = [
   { value: "cheque", label: "Cheque", reference: "Cheque number" },
 ];
 const KIND = { deposit: "deposit", balance: "balance", full: "full payment" } as const;
-
-/** Dollars and cents typed by a person → integer cents (NaN when it is not an amount). */
-function toCents(text: string): number {
-  const clean = text.replace(/[$,\s]/g, "");
-  if (!/^\d+(\.\d{1,2})?$/.test(clean)) return Number.NaN;
-  return Math.round(Number(clean) * 100);
-}
 
 /** The counter takes the money: e-mail the customer a payment link, or record a payment taken here. */
 export function TakePayment({
@@ -41,16 +36,19 @@ export function TakePayment({
   blocked: string | null;
 }) {
   const router = useRouter();
-  const [busy, setBusy] = useState(false);
+  const sendLinkMutation = useMutation(sendPaymentLinkAction);
+  const recordMutation = useMutation(recordCounterPaymentAction);
+  const busy = sendLinkMutation.pending || recordMutation.pending;
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const [confirm, setConfirm] = useState<"link" | "record" | null>(null);
   const [method, setMethod] = useState<Method>("terminal");
-  const [amount, setAmount] = useState(due ? (due.amountCents / 100).toFixed(2) : "");
+  const [amount, setAmount] = useState(due ? centsToDecimal(due.amountCents) : "");
   const [reference, setReference] = useState("");
   const [errors, setErrors] = useState<Record<string, string>>({});
   const money = (c: number) => formatMoney(c, currency);
   const methodInfo = METHODS.find((m) => m.value === method)!;
-  const cents = toCents(amount);
+  const parsed = parseMoney(amount);
+  const cents = parsed.ok ? parsed.cents : Number.NaN;
 
   if (blocked)
     return (
@@ -64,9 +62,7 @@ export function TakePayment({
   if (!due || owedCents <= 0) return null;
 
   async function sendLink() {
-    setBusy(true);
-    const res = await sendPaymentLinkAction({ orderId });
-    setBusy(false);
+    const res = await sendLinkMutation.run({ orderId });
     setConfirm(null);
     setMessage(
       res.ok
@@ -80,14 +76,12 @@ export function TakePayment({
   }
 
   async function record() {
-    setBusy(true);
-    const res = await recordCounterPaymentAction({
+    const res = await recordMutation.run({
       orderId,
       method,
       amountCents: cents,
       reference: reference.trim() || undefined,
     });
-    setBusy(false);
     setConfirm(null);
     if (res.ok) {
       setErrors({});
@@ -123,8 +117,8 @@ export function TakePayment({
         onSubmit={(e) => {
           e.preventDefault();
           const local: Record<string, string> = {};
-          if (!Number.isFinite(cents) || cents <= 0)
-            local.amountCents = "Enter the amount taken, e.g. 125.00.";
+          if (!parsed.ok) local.amountCents = parsed.message;
+          else if (cents <= 0) local.amountCents = "Enter the amount taken, e.g. 125.00.";
           else if (cents > owedCents) local.amountCents = `At most ${money(owedCents)} (what is still owed).`;
           if (method !== "cash" && !reference.trim())
             local.reference = `${methodInfo.reference} is required.`;
@@ -153,47 +147,26 @@ export function TakePayment({
             ))}
           </div>
         </fieldset>
-        <div>
-          <label htmlFor="counter-amount" className="field-label">
-            Amount taken ({currency})
-          </label>
-          <input
-            id="counter-amount"
-            inputMode="decimal"
-            className="field-input tabular-nums"
-            value={amount}
-            onChange={(e) => setAmount(e.target.value)}
-            aria-invalid={errors.amountCents ? true : undefined}
-            aria-describedby={errors.amountCents ? "counter-amount-error" : undefined}
-          />
-          {errors.amountCents && (
-            <p id="counter-amount-error" className="field-error">
-              {errors.amountCents}
-            </p>
-          )}
-        </div>
-        <div>
-          <label htmlFor="counter-reference" className="field-label">
-            {methodInfo.reference}
-          </label>
-          <input
-            id="counter-reference"
-            className="field-input"
-            value={reference}
-            maxLength={120}
-            onChange={(e) => setReference(e.target.value)}
-            aria-invalid={errors.reference ? true : undefined}
-            aria-describedby={errors.reference ? "counter-reference-error" : undefined}
-          />
-          {errors.reference && (
-            <p id="counter-reference-error" className="field-error">
-              {errors.reference}
-            </p>
-          )}
-        </div>
+        <Field
+          id="counter-amount"
+          label={`Amount taken (${currency})`}
+          inputMode="decimal"
+          className="field-input tabular-nums"
+          value={amount}
+          onChange={(e) => setAmount(e.target.value)}
+          error={errors.amountCents}
+        />
+        <Field
+          id="counter-reference"
+          label={methodInfo.reference}
+          value={reference}
+          maxLength={120}
+          onChange={(e) => setReference(e.target.value)}
+          error={errors.reference}
+        />
         <button type="submit" className="btn-primary w-full" disabled={busy}>
           <Banknote className="size-4" aria-hidden="true" />
-          Record payment
+          {recordMutation.pending ? "Recording…" : "Record payment"}
         </button>
       </form>
       <ConfirmDialog
