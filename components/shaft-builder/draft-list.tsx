@@ -1,4 +1,5 @@
 "use client";
+import { ShopTime } from "@/components/shop-locale";
 
 import { FolderOpen } from "lucide-react";
 import { shaftUseLabel } from "@/lib/driveline";
@@ -35,7 +36,7 @@ export function DraftList({
                 )}
                 <span className="block text-xs text-ink-muted">
                   {d.lengthMm != null ? withUnit(d.lengthMm, "length", system) : ""} · {shaftUseLabel(d.use)}{" "}
-                  · saved {new Date(d.updatedAt).toLocaleString()}
+                  · saved <ShopTime at={d.updatedAt} />
                 </span>
               </span>
               <span className="flex gap-1">

@@ -1,4 +1,6 @@
 "use client";
+import { useShopLocale } from "@/components/shop-locale";
+import { formatMoney } from "@/lib/money";
 
 import { useState } from "react";
 import { AlertTriangle, CheckCircle2, XCircle } from "lucide-react";
@@ -43,10 +45,14 @@ export interface TubeChoice {
   wallMm: number;
 }
 
-const money = (cents: number) =>
-  new Intl.NumberFormat("en-US", { style: "currency", currency: "USD" }).format(cents / 100);
 const mass = (kg: number, system: UnitSystem) =>
   system === "imperial" ? `${formatNumber(kgToLb(kg), 1)} lb` : `${formatNumber(kg, 1)} kg`;
+
+/** Cents in the shop's currency (the builder sits under a layout that gives the shop's locale). */
+function useMoney(): (cents: number) => string {
+  const { currency } = useShopLocale();
+  return (cents) => formatMoney(cents, currency);
+}
 
 function materialName(catalogue: Catalogue, id: string): string {
   const name = catalogue.materials.find((m) => m.id === id)?.name ?? id;
@@ -133,6 +139,7 @@ interface ViewProps {
 
 /** The overall result, the tube, speed and torque in one line, and the safety caution. */
 function Verdict({ report, system, catalogue }: ViewProps) {
+  const money = useMoney();
   const failing = report.checks.filter((c) => c.status === "fail").length;
   const warning = report.checks.filter((c) => c.status === "warn").length;
   return (
@@ -182,6 +189,7 @@ function SuggestedTube({
   suggested,
   onUseTube,
 }: ViewProps & { suggested: TubeCandidate | undefined; onUseTube: (tube: TubeChoice) => void }) {
+  const money = useMoney();
   return (
     <section aria-labelledby="suggested" className="card border-fail/40 p-4" data-testid="suggested-tube">
       <h3 id="suggested" className="font-semibold">
@@ -346,6 +354,7 @@ function TubeRanking({
   order: string;
   onUseTube: (tube: TubeChoice) => void;
 }) {
+  const money = useMoney();
   return (
     <section aria-labelledby="tubes-h" className="card p-4">
       <h3 id="tubes-h" className="font-semibold">
