@@ -1,3 +1,4 @@
+import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { AuditEvent, User } from "@/entities";
 import { getEm } from "@/lib/db/orm";

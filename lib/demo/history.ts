@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * The demo shop's past months (demo data): a few hundred orders in every state with their work
  * orders, step records, payments and refunds, for the named demo customers and some invented

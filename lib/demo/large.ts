@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * Large generated data sets for benchmarks (`npm run seed -- --orders 100000`): invented phone
  * customers and that many orders through the same simulation as the demo shop, committed batch

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * What happens on the floor's milestones, inside the transaction that reached them: the order's
  * status, its public timeline and the customer's e-mails (outbox rows in the same transaction).

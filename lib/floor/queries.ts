@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * Read models for the floor's screens (plain objects, not entities): the work queue and a shaft's
  * as-built record.

@@ -1,3 +1,4 @@
+import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { EmailMessage, Shop } from "@/entities";
 import type { EmailShop } from "@/emails/components/email-layout";

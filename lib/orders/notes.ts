@@ -1,3 +1,4 @@
+import "server-only";
 import { Order, OrderNote, User, type NoteVisibility } from "@/entities";
 import type { CurrentUser } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/permissions";

@@ -1,3 +1,4 @@
+import "server-only";
 import { RETUBE_PARTS, RETUBE_PART_LABEL, type RepairBlock, type RetubePart } from "@/lib/retube/intake";
 import {
   Order,
