@@ -1,4 +1,4 @@
-import type { OrderView } from "@/lib/orders/queries";
+import type { OrderView } from "@/lib/orders/views";
 import { formatMoney } from "@/lib/pricing/price-book";
 import { Alert } from "@/components/ui/alert";
 import { OrderStatusBadge, PaymentBadge } from "./status-badge";

@@ -1,5 +1,5 @@
 import { Wrench } from "lucide-react";
-import type { RetubeView } from "@/lib/orders/queries";
+import type { RetubeView } from "@/lib/orders/views";
 import { formatQuantity, type FloorUnits } from "@/lib/traveller/units";
 
 /** "Re-tube" beside a shaft's name. */

@@ -1,5 +1,5 @@
 import { AlertTriangle, ShieldAlert } from "lucide-react";
-import type { ShaftView } from "@/lib/orders/queries";
+import type { ShaftView } from "@/lib/orders/views";
 import { USE_LABEL } from "@/lib/orders/labels";
 import { formatMoney } from "@/lib/pricing/price-book";
 import { CheckBadge } from "./status-badge";

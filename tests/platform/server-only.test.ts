@@ -32,12 +32,19 @@ function libFiles(dir: string): string[] {
   });
 }
 
-const serverModules = libFiles("lib").filter((f) => SERVER_IMPORT.test(readFileSync(path.join(root, f), "utf8")));
+const serverModules = libFiles("lib").filter((f) =>
+  SERVER_IMPORT.test(readFileSync(path.join(root, f), "utf8")),
+);
 
 describe("server-only on every server module", () => {
   it("finds the modules that reach the database (the scan itself works)", () => {
     // A few we know reach the database or a provider; if the scan misses these, it misses others.
-    for (const known of ["lib/db/orm.ts", "lib/orders/queries.ts", "lib/orders/access.ts", "lib/payments/stripe.ts"])
+    for (const known of [
+      "lib/db/orm.ts",
+      "lib/orders/queries.ts",
+      "lib/orders/access.ts",
+      "lib/payments/stripe.ts",
+    ])
       expect(serverModules).toContain(known);
     expect(serverModules.length).toBeGreaterThan(60);
   });
@@ -46,7 +53,9 @@ describe("server-only on every server module", () => {
     const missing = serverModules.filter(
       (f) => !(f in EXCEPTIONS) && !/^import "server-only";$/m.test(readFileSync(path.join(root, f), "utf8")),
     );
-    expect(missing, `add import "server-only"; to these (or list them in EXCEPTIONS with a reason)`).toEqual([]);
+    expect(missing, `add import "server-only"; to these (or list them in EXCEPTIONS with a reason)`).toEqual(
+      [],
+    );
   });
 
   it("every exception is still a server module (no stale entries)", () => {
