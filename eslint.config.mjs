@@ -20,7 +20,8 @@ const clientBoundary = {
   },
   create(context) {
     const file = context.filename.split("\\").join("/");
-    let client = /\/_?components\//.test(file);
+    // View-model modules (lib/<area>/views.ts) are what those components import: same rule.
+    let client = /\/_?components\//.test(file) || /\/lib\/.+\/views\.ts$/.test(file);
     const check = (node, source) => {
       if (client && source && SERVER_ONLY_IMPORT.test(String(source.value)))
         context.report({ node, messageId: "server", data: { source: String(source.value) } });

@@ -46,6 +46,14 @@ describe("ESLint boundaries", () => {
     expect(found).toEqual([expect.stringContaining("entities")]);
   });
 
+  it("view-model modules (lib/*/views.ts) name no entity types", async () => {
+    const found = await problems(
+      "lib/orders/views.ts",
+      `import type { WarningAcknowledgement } from "@/entities";\nexport interface V { acks: WarningAcknowledgement[] }\n`,
+    );
+    expect(found).toEqual([expect.stringContaining("@/entities")]);
+  });
+
   it("pages (server components) still load data", async () => {
     const found = await problems(
       "app/(shop)/orders/boundary-probe/page.tsx",
