@@ -12,16 +12,20 @@ import { dbTest } from "../setup/db";
  */
 const root = path.resolve(import.meta.dirname, "../..");
 
-dbTest("one entity manager per server render, a fresh one per call elsewhere", async ({ database }) => {
-  const { stdout } = await promisify(execFile)(
-    path.join(root, "node_modules/.bin/tsx"),
-    ["--conditions=react-server", "--tsconfig", "scripts/tsconfig.json", "tests/setup/request-em-probe.ts"],
-    { cwd: root, env: { ...process.env, DATABASE_URL: database }, timeout: 40_000 },
-  );
-  expect(JSON.parse(stdout.trim().split("\n").at(-1) ?? "{}")).toEqual({
-    sameInRender: true,
-    otherComponentShares: true,
-    freshInRender: true,
-    freshOutside: true,
-  });
-}, 60_000);
+dbTest(
+  "one entity manager per server render, a fresh one per call elsewhere",
+  async ({ database }) => {
+    const { stdout } = await promisify(execFile)(
+      path.join(root, "node_modules/.bin/tsx"),
+      ["--conditions=react-server", "--tsconfig", "scripts/tsconfig.json", "tests/setup/request-em-probe.ts"],
+      { cwd: root, env: { ...process.env, DATABASE_URL: database }, timeout: 40_000 },
+    );
+    expect(JSON.parse(stdout.trim().split("\n").at(-1) ?? "{}")).toEqual({
+      sameInRender: true,
+      otherComponentShares: true,
+      freshInRender: true,
+      freshOutside: true,
+    });
+  },
+  60_000,
+);

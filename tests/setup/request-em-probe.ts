@@ -32,7 +32,9 @@ async function main() {
   await new Promise<void>((resolve, reject) => {
     const sink = new Writable({ write: (_c, _e, next) => next(), final: (done) => (done(), resolve()) });
     sink.on("error", reject);
-    renderToPipeableStream(createElement("div", null, createElement(Page), createElement(Other)), {}).pipe(sink);
+    renderToPipeableStream(createElement("div", null, createElement(Page), createElement(Other)), {}).pipe(
+      sink,
+    );
   });
   const [x, y] = [await getEm(), await getEm()];
   seen.freshOutside = x !== y;
