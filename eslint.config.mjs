@@ -1,21 +1,31 @@
 import nextVitals from "eslint-config-next/core-web-vitals";
 import nextTs from "eslint-config-next/typescript";
 
-const SERVER_ONLY_IMPORT = /^(@mikro-orm\/|pg($|\/)|@\/lib\/db($|\/)|@\/entities($|\/))/;
+const SERVER_ONLY_IMPORT =
+  /^(@mikro-orm\/|pg($|\/)|@\/lib\/db($|\/)|@\/entities($|\/)|(\.\.?\/)+entities($|\/))/;
 
-/** Reports a database, ORM or entity import in a client component or anywhere under components/. */
+/**
+ * Reports a database, ORM or entity import — `import type` included — in a client component ("use
+ * client"), anywhere under components/, or in a route's own app/…/_components/: they get plain view
+ * models (e.g. lib/orders/views.ts), never entities or an entity manager.
+ */
 const clientBoundary = {
   meta: {
     type: "problem",
     messages: {
       server:
-        "{{source}}: client components and components/ get plain view models, never the database, the ORM or entities.",
+        "{{source}}: client components, components/ and _components/ get plain view models, never the database, the ORM or entities.",
     },
     schema: [],
   },
   create(context) {
     const file = context.filename.split("\\").join("/");
-    let client = /\/components\//.test(file);
+    // View-model modules (lib/<area>/views.ts) are what those components import: same rule.
+    let client = /\/_?components\//.test(file) || /\/lib\/.+\/views\.ts$/.test(file);
+    const check = (node, source) => {
+      if (client && source && SERVER_ONLY_IMPORT.test(String(source.value)))
+        context.report({ node, messageId: "server", data: { source: String(source.value) } });
+    };
     return {
       Program(node) {
         for (const statement of node.body) {
@@ -23,10 +33,10 @@ const clientBoundary = {
           if (statement.directive === "use client") client = true;
         }
       },
-      ImportDeclaration(node) {
-        if (client && SERVER_ONLY_IMPORT.test(String(node.source.value)))
-          context.report({ node, messageId: "server", data: { source: String(node.source.value) } });
-      },
+      ImportDeclaration: (node) => check(node, node.source),
+      ExportNamedDeclaration: (node) => check(node, node.source),
+      ExportAllDeclaration: (node) => check(node, node.source),
+      ImportExpression: (node) => check(node, node.source.type === "Literal" ? node.source : null),
     };
   },
 };

@@ -3,8 +3,9 @@ import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import { User } from "./user.entity";
 
-export const NOTE_VISIBILITIES = ["staff", "customer"] as const;
-export type NoteVisibility = (typeof NOTE_VISIBILITIES)[number];
+import { NOTE_VISIBILITIES, type NoteVisibility } from "../lib/orders/states";
+
+export { NOTE_VISIBILITIES, type NoteVisibility };
 
 /** A note on an order by the shop: staff-only, or shown to the customer on their order page. */
 @Entity({ tableName: "order_note" })

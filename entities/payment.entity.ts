@@ -3,9 +3,9 @@ import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import { User } from "./user.entity";
 
-export const PAYMENT_METHODS = ["checkout", "cash", "cheque", "terminal"] as const;
-/** How the money came in: the hosted card checkout, or at the counter (cash, cheque, card terminal). */
-export type PaymentMethod = (typeof PAYMENT_METHODS)[number];
+import { PAYMENT_METHODS, type PaymentMethod } from "../lib/orders/states";
+
+export { PAYMENT_METHODS, type PaymentMethod };
 
 /**
  * Money on an order (deposit, balance or full): a request through a hosted checkout, or a payment

@@ -1,6 +1,7 @@
+import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { AuditEvent, User } from "@/entities";
-import { getEm } from "@/lib/db/orm";
+import { freshEm } from "@/lib/db/orm";
 
 export interface AuditInput {
   actorId: string | null;
@@ -15,7 +16,7 @@ export interface AuditInput {
  * transaction as the change it records; without one it is written on its own.
  */
 export async function recordAudit(input: AuditInput, em?: EntityManager): Promise<void> {
-  const target = em ?? (await getEm());
+  const target = em ?? (await freshEm());
   const event = target.create(AuditEvent, {
     action: input.action,
     subjectType: input.subjectType,

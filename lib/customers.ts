@@ -1,3 +1,4 @@
+import "server-only";
 import { Customer, User } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 import { recordAudit } from "@/lib/audit";

@@ -1,3 +1,4 @@
+import "server-only";
 import { Customer, Design, Shop, ShopConfig, User } from "@/entities";
 import type { CurrentUser } from "@/lib/auth/guard";
 import { placeOrder } from "@/lib/orders/place-order";

@@ -1,6 +1,10 @@
 #!/usr/bin/env bash
 # Environment of a local (development or test) run: the app talks to the project's own fakes.
 # Ports: app 3000, Stripe fake 12111, mail fake SMTP 12525 / HTTP 12580 (tests use others).
+# Scripts run with tsx (seed, bench, the CLI, the fakes) read scripts/tsconfig.json, where `server-only`
+# is an empty module: tsx has no react-server condition, and the real package throws outside it.
+export TSX_TSCONFIG_PATH="$PWD/scripts/tsconfig.json"
+
 yokeline_env_local() {
   export NEXT_TELEMETRY_DISABLED=1
   export YOKELINE_DEMO="${YOKELINE_DEMO:-1}"

@@ -1,4 +1,4 @@
-import type { OrderView } from "@/lib/orders/queries";
+import type { OrderView } from "@/lib/orders/views";
 import { formatMoney } from "@/lib/money";
 import { formatCalendarDate } from "@/lib/dates";
 import { ShopTime } from "@/components/shop-locale";

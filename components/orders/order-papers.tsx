@@ -1,5 +1,5 @@
 import { FileText } from "lucide-react";
-import type { OrderView } from "@/lib/orders/queries";
+import type { OrderView } from "@/lib/orders/views";
 
 /** The customer's papers: the install sheet always, the as-built certificate once every shaft passed final inspection. */
 export function OrderPapers({ order }: { order: OrderView }) {

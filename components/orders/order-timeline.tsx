@@ -10,7 +10,7 @@ import {
   TriangleAlert,
   Wrench,
 } from "lucide-react";
-import type { OrderView } from "@/lib/orders/queries";
+import type { OrderView } from "@/lib/orders/views";
 import { ShopTime } from "@/components/shop-locale";
 
 const ICON = {

@@ -1,5 +1,5 @@
 import { Wrench } from "lucide-react";
-import type { RetubeView } from "@/lib/orders/queries";
+import type { RetubeView } from "@/lib/orders/views";
 import { ShopTime } from "@/components/shop-locale";
 import { formatQuantity, type FloorUnits } from "@/lib/traveller/units";
 

@@ -1,5 +1,5 @@
 import { AlertTriangle, ShieldAlert } from "lucide-react";
-import type { ShaftView } from "@/lib/orders/queries";
+import type { ShaftView } from "@/lib/orders/views";
 import { shaftUseLabel } from "@/lib/driveline/uses";
 import { formatMoney } from "@/lib/money";
 import { ShopTime } from "@/components/shop-locale";

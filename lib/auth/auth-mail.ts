@@ -1,3 +1,4 @@
+import "server-only";
 import { enqueueDelivery, queueEmail, type TemplateName, type TemplateProps } from "@/lib/mail";
 import { getEm } from "@/lib/db/orm";
 

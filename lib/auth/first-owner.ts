@@ -1,3 +1,4 @@
+import "server-only";
 import { StaffInvitation, User } from "@/entities";
 import { inTransaction } from "@/lib/db/orm";
 import { AppError } from "@/lib/http/errors";

@@ -1,3 +1,4 @@
+import "server-only";
 import { Customer } from "@/entities";
 import { recordAudit } from "@/lib/audit";
 import { getEm } from "@/lib/db/orm";

@@ -1,3 +1,4 @@
+import "server-only";
 import { DEV_DATABASE_URL, isLoopbackHost } from "@/lib/db/url";
 
 type Env = Record<string, string | undefined>;

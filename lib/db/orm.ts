@@ -1,4 +1,6 @@
+import "server-only";
 import "reflect-metadata";
+import { cache } from "react";
 import { MikroORM, type EntityManager } from "@mikro-orm/postgresql";
 import config from "@/mikro-orm.config";
 import { AppError } from "@/lib/http/errors";
@@ -23,13 +25,22 @@ export function getOrm(): Promise<MikroORM> {
   return globalForOrm.yokelineOrm;
 }
 
-/** A fresh entity manager for one request or job; never use the global one. */
-export async function getEm(): Promise<EntityManager> {
+/** A new entity manager of its own (an empty identity map); never use the global one. */
+export async function freshEm(): Promise<EntityManager> {
   return (await getOrm()).em.fork();
 }
 
-/** Runs `work` in a transaction on a fresh entity manager. */
+/**
+ * The entity manager of this request. Inside one server render (layouts, pages, generateMetadata,
+ * server components) React's `cache()` hands every caller the same fork, so an order loaded for the
+ * title and again for the page is one entity. Everywhere else — route handlers, server actions
+ * (Next runs them before, not inside, React's render), background jobs, scripts, tests — `cache()`
+ * does not memoize and each call gets a fresh fork, as before.
+ */
+export const getEm: () => Promise<EntityManager> = cache(freshEm);
+
+/** Runs `work` in a transaction (em.transactional: a fork of its own, committed or rolled back). */
 export async function inTransaction<T>(work: (em: EntityManager) => Promise<T>): Promise<T> {
-  const em = await getEm();
+  const em = await freshEm();
   return em.transactional(work);
 }

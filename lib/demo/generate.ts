@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * Generates a shop's history (demo data): orders over past weeks in every state, with their
  * shafts, work orders, routing steps, step records (holds and rework included), payments,

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * The demo shop's past months (demo data): a few hundred orders in every state with their work
  * orders, step records, payments and refunds, for the named demo customers and some invented
@@ -5,7 +6,7 @@
  */
 import { Client } from "pg";
 import { Customer, User } from "@/entities";
-import { getEm } from "@/lib/db/orm";
+import { freshEm } from "@/lib/db/orm";
 import { databaseUrl } from "@/lib/db/url";
 import { DEMO_STAFF } from "@/lib/demo";
 import { getShopEngineering, invalidateShopEngineering } from "@/lib/shop/config";
@@ -26,7 +27,7 @@ export const DEMO_HISTORY_SHAPE = {
 
 /** Writes the demo shop's history in one transaction (after its users and customers exist). */
 export async function seedDemoHistory(now = new Date()): Promise<GenerateResult> {
-  const em = (await getEm()).fork();
+  const em = await freshEm();
   const [customers, staff] = await Promise.all([
     em.find(Customer, {}, { orderBy: { createdAt: "asc" } }),
     em.find(User, { email: { $in: DEMO_STAFF.map((s) => s.email) } }),

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * Large generated data sets for benchmarks (`npm run seed -- --orders 100000`): invented phone
  * customers and that many orders through the same simulation as the demo shop, committed batch
@@ -5,7 +6,7 @@
  */
 import { Client } from "pg";
 import { User } from "@/entities";
-import { getEm } from "@/lib/db/orm";
+import { freshEm } from "@/lib/db/orm";
 import { assertLoopbackDatabase, databaseUrl } from "@/lib/db/url";
 import { getShopEngineering, invalidateShopEngineering } from "@/lib/shop/config";
 import { generateShop, insertCustomers, type GenerateResult } from "./generate";
@@ -25,7 +26,7 @@ export async function generateLargeShop(opts: LargeShopOptions): Promise<Generat
   const url = opts.url ?? databaseUrl();
   assertLoopbackDatabase(url);
   const log = opts.log ?? (() => undefined);
-  const em = (await getEm()).fork();
+  const em = await freshEm();
   const byRole = async (role: "owner" | "counter" | "floor") =>
     (await em.findOne(User, { role }, { orderBy: { createdAt: "asc" } }))?.id ?? null;
   const staff = {

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * What happens on the floor's milestones, inside the transaction that reached them: the order's
  * status, its public timeline and the customer's e-mails (outbox rows in the same transaction).
@@ -11,7 +12,7 @@ import { AppError } from "@/lib/http/errors";
 import { logger } from "@/lib/logger";
 import { afterCommit, notifyOrderReady, notifyOrderShipped } from "@/lib/orders/notify";
 import { requestBalance } from "@/lib/orders/payments";
-import { getEm } from "@/lib/db/orm";
+import { freshEm } from "@/lib/db/orm";
 import { releaseOrderOnDeposit } from "./work-orders";
 
 /** Work left for after the commit (collected by the hooks; cleared at the start of each transaction). */
@@ -135,7 +136,7 @@ export function onReissued(order: Order): void {
 
 async function staffNote(orderId: string, label: string): Promise<void> {
   try {
-    const em = await getEm();
+    const em = await freshEm();
     em.create(OrderEvent, { order: orderId, kind: "note", label, public: false, at: new Date() });
     await em.flush();
   } catch (err) {

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * The customer's papers of an order (lib/traveller/papers.ts draws them): the install sheet from
  * the frozen evaluations and the shop's catalogue, and the as-built certificate from each shaft's

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * Read models for the floor's screens (plain objects, not entities): the work queue and a shaft's
  * as-built record.
@@ -7,7 +8,8 @@ import { StepRecord, WorkOrder, WorkOrderStep, type StepOutcome, type WorkOrderS
 import type { Failure, SiValues } from "@/lib/traveller/measure";
 import type { StepSpec } from "@/lib/traveller/steps";
 import { findWorkOrderBySerial } from "./work-orders";
-import { retubeView, type RetubeView } from "@/lib/orders/queries";
+import { retubeView } from "@/lib/orders/queries";
+import type { RetubeView } from "@/lib/orders/views";
 
 export interface QueueItem {
   workOrderId: string;
@@ -96,6 +98,17 @@ export interface AsBuiltRecord {
   }[];
   /** Revisions replaced after a design change, newest first. */
   voidRevisions: number[];
+}
+
+/** The serials of an order's shafts, in order (links to their as-built records). */
+export async function orderShaftSerials(em: EntityManager, orderId: string): Promise<string[]> {
+  const wos = await em.find(WorkOrder, { order: orderId }, { orderBy: { serialSequence: "asc" } });
+  return wos.map((w) => w.serial);
+}
+
+/** Whether a shaft with this (parsed) serial exists: the find-a-shaft form's answer. */
+export async function shaftExists(em: EntityManager, serial: string): Promise<boolean> {
+  return (await em.count(WorkOrder, { serial })) > 0;
 }
 
 /** Everything measured on one shaft (found by its serial), in routing order, for its revision in force. */

@@ -1,5 +1,5 @@
 import "server-only";
-import { getEm } from "@/lib/db/orm";
+import { freshEm } from "@/lib/db/orm";
 import { logger } from "@/lib/logger";
 import { releaseOrderOnDeposit } from "./work-orders";
 
@@ -13,7 +13,7 @@ export const RELEASE_SWEEP_AFTER_SECONDS = 60;
  * refuses them quietly). Returns the numbers released.
  */
 export async function releasePaidOrders(options: { olderThanSeconds?: number } = {}): Promise<string[]> {
-  const em = (await getEm()).fork();
+  const em = await freshEm();
   const rows = await em.getConnection().execute<{ id: string }[]>(
     `select o.id from shop_order o
       where o.status = 'received' and o.paid_cents > 0 and o.paid_cents >= o.deposit_cents

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * What a scanned code means at the scan station (read only, plain data for the screen): a step
  * of a shaft with its record sheet and limits in the shop's units, or a serial (its as-built

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * The shop floor's service: releasing orders into work orders, signing off steps with measured
  * values, holds and concessions, void-and-reissue, and the order's floor state. Each function

@@ -1,3 +1,4 @@
+import "server-only";
 import { ConnectionException, NotFoundError } from "@mikro-orm/core";
 import { z } from "zod";
 import { AppError } from "./errors";

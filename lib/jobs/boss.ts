@@ -1,3 +1,4 @@
+import "server-only";
 import PgBoss from "pg-boss";
 import { databaseUrl } from "@/lib/db/url";
 import { logger } from "@/lib/logger";

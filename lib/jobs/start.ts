@@ -1,3 +1,4 @@
+import "server-only";
 import { logger } from "@/lib/logger";
 import { registerFloorWorkers } from "@/lib/floor/workers";
 import { startMailWorkers } from "@/lib/mail/workers";

@@ -1,3 +1,4 @@
+import "server-only";
 import { ResendTransport } from "./resend-transport";
 import { SmtpTransport } from "./smtp-transport";
 import type { MailTransport } from "./transport";

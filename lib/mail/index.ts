@@ -1,3 +1,4 @@
+import "server-only";
 /** The mail port: templates, the outbox and its delivery. The rest of the app imports from here. */
 export {
   queueEmail,

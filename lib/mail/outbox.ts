@@ -1,7 +1,8 @@
+import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { EmailMessage, Shop } from "@/entities";
 import type { EmailShop } from "@/emails/components/email-layout";
-import { getEm } from "@/lib/db/orm";
+import { freshEm } from "@/lib/db/orm";
 import { getBoss, JOBS, mailRetryOptions, type MailDeliverJob } from "@/lib/jobs/boss";
 import { logger } from "@/lib/logger";
 import { getMailTransport, mailFrom } from "./config";
@@ -80,7 +81,7 @@ export async function flushQueuedEmails(
   options: { olderThanSeconds?: number; limit?: number } = {},
 ): Promise<number> {
   try {
-    const em = await getEm();
+    const em = await freshEm();
     const before = options.olderThanSeconds
       ? new Date(Date.now() - options.olderThanSeconds * 1000)
       : undefined;
@@ -107,7 +108,7 @@ export async function deliverEmail(
   messageId: string,
   { finalAttempt }: { finalAttempt: boolean },
 ): Promise<DeliveryOutcome> {
-  const em = await getEm();
+  const em = await freshEm();
   const message = await em.findOne(EmailMessage, { id: messageId });
   if (!message) {
     logger.warn({ messageId }, "e-mail to deliver no longer exists");

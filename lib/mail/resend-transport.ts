@@ -1,3 +1,4 @@
+import "server-only";
 import { Resend } from "resend";
 import { MailSendError, type MailTransport, type OutgoingMail, type SentMail } from "./transport";
 

@@ -1,3 +1,4 @@
+import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
 import { MailSendError, type MailTransport, type OutgoingMail, type SentMail } from "./transport";
 

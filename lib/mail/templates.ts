@@ -1,3 +1,4 @@
+import "server-only";
 import { createElement, type ReactElement } from "react";
 import { render } from "@react-email/render";
 import type { EmailShop } from "@/emails/components/email-layout";

@@ -1,3 +1,4 @@
+import "server-only";
 /** One e-mail, rendered and addressed, as the port hands it to a provider. */
 export interface OutgoingMail {
   from: string;

@@ -1,3 +1,4 @@
+import "server-only";
 import type PgBoss from "pg-boss";
 import { getBoss, JOBS, type MailDeliverJob } from "@/lib/jobs/boss";
 import { logger } from "@/lib/logger";

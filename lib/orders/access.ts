@@ -1,3 +1,4 @@
+import "server-only";
 import { isUuid } from "@/lib/http/known-errors";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { Order } from "@/entities";

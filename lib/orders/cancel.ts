@@ -1,3 +1,4 @@
+import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { OrderEvent, Payment, Refund, User, WorkOrder, type Order } from "@/entities";
 import type { CurrentUser } from "@/lib/auth/guard";

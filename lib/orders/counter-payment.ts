@@ -1,3 +1,4 @@
+import "server-only";
 import { OrderEvent, Payment, User, type PaymentMethod } from "@/entities";
 import type { CurrentUser } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/permissions";

@@ -1,4 +1,4 @@
-import type { OrderStatus, PaymentState } from "@/entities";
+import type { OrderStatus, PaymentState } from "./states";
 
 export const ORDER_STATUS_LABEL: Record<OrderStatus, string> = {
   awaiting_payment: "Awaiting payment",

@@ -1,4 +1,7 @@
-import { Order, OrderNote, User, type NoteVisibility } from "@/entities";
+import "server-only";
+import { Order, OrderNote, User } from "@/entities";
+import type { NoteVisibility } from "./states";
+import type { OrderNoteView } from "./views";
 import type { CurrentUser } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/permissions";
 import { recordAudit } from "@/lib/audit";
@@ -6,13 +9,7 @@ import { inTransaction } from "@/lib/db/orm";
 import { AppError } from "@/lib/http/errors";
 
 /** A note as the screens show it. */
-export interface OrderNoteView {
-  id: string;
-  body: string;
-  visibility: NoteVisibility;
-  byName: string;
-  at: string;
-}
+export type { OrderNoteView };
 
 /**
  * The notes a user may read: staff see every note; anyone else (the customer) only the ones

@@ -1,3 +1,4 @@
+import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { Order, Payment } from "@/entities";
 import { flushQueuedEmails, queueEmail, type EmailLine } from "@/lib/mail";

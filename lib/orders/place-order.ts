@@ -1,3 +1,4 @@
+import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { USES, type Use } from "@/lib/driveline/schema";
 import { Customer, Design, Order, OrderEvent, OrderShaft, User } from "@/entities";

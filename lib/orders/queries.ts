@@ -1,11 +1,8 @@
-import { RETUBE_PARTS, RETUBE_PART_LABEL, type RepairBlock, type RetubePart } from "@/lib/retube/intake";
-import {
-  Order,
-  type OrderStatus,
-  type PaymentMethod,
-  type PaymentState,
-  type WarningAcknowledgement,
-} from "@/entities";
+import "server-only";
+import { RETUBE_PARTS, RETUBE_PART_LABEL, type RepairBlock } from "@/lib/retube/intake";
+import { Order, type WarningAcknowledgement } from "@/entities";
+import type { OrderStatus } from "./states";
+import type { AcknowledgementView, OrderRow, OrderView, RetubeView, ShaftView } from "./views";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { CurrentUser } from "@/lib/auth/guard";
 import type { QuoteLine } from "@/lib/pricing/price-book";
@@ -14,28 +11,10 @@ import { seesAllOrders } from "./access";
 import { orderStatusLabel, type FloorProgress } from "./labels";
 import { nextPaymentKind, amountDue } from "./payments";
 import { needsEngineeringSignoff } from "./acknowledgements";
-import { notesFor, type OrderNoteView } from "./notes";
+import { notesFor } from "./notes";
 import { frozenChecks } from "./engineering-signoff";
 
-export interface OrderRow {
-  id: string;
-  number: string;
-  customerName: string;
-  createdAt: string;
-  promisedDate: string;
-  status: OrderStatus;
-  paymentState: PaymentState;
-  totalCents: number;
-  paidCents: number;
-  currency: string;
-  shafts: string[];
-  channel: "online" | "counter";
-  late: boolean;
-  /** The status in words, e.g. "In the shop — step 3 of 6" (lib/orders/labels.ts). */
-  statusLabel: string;
-  /** Staff only: a shaft is on hold on the floor. */
-  onHold: boolean;
-}
+export type { AcknowledgementView, OrderRow, OrderView, RetubeView, ShaftView } from "./views";
 
 /** The least advanced shaft's step of its step count, once released (work orders populated). */
 function floorProgress(o: Order): FloorProgress | null {
@@ -90,33 +69,6 @@ export async function listOrders(
   return orders.map((o) => toRow(o, today, all));
 }
 
-export interface ShaftView {
-  id: string;
-  position: number;
-  name: string;
-  application: { description: string; use: string } | null;
-  overall: string;
-  priceLines: QuoteLine[];
-  priceCents: number;
-  facts: { label: string; value: string }[];
-  checks: { id: string; status: string; message: string }[];
-  cautions: string[];
-  /** Who acknowledged each warning when the order was placed (none on a quote). */
-  warningAcknowledgements: WarningAcknowledgement[];
-  /** A check fails and the owner has not accepted it for this order. */
-  needsSignoff: boolean;
-  /** A re-tube of the customer's shaft: the counter's intake (null for a new shaft). */
-  retube: RetubeView | null;
-}
-
-export interface RetubeView {
-  weldToWeldMm: number;
-  parts: { part: RetubePart; label: string; reuse: boolean; note: string }[];
-  recordedBy: string;
-  /** ISO date-time. */
-  recordedAt: string;
-}
-
 /** A re-tube's intake as plain data for the screens. */
 export function retubeView(repair: RepairBlock | null | undefined): RetubeView | null {
   if (!repair) return null;
@@ -131,44 +83,6 @@ export function retubeView(repair: RepairBlock | null | undefined): RetubeView |
     recordedBy: repair.recordedBy.name,
     recordedAt: repair.recordedAt,
   };
-}
-
-export interface OrderView extends OrderRow {
-  customerEmail: string;
-  fulfilment: "pickup" | "ship";
-  shipTo: string | null;
-  notes: string | null;
-  subtotalCents: number;
-  taxCents: number;
-  shippingCents: number;
-  depositCents: number;
-  refundedCents: number;
-  shaftViews: ShaftView[];
-  payments: {
-    id: string;
-    kind: string;
-    amountCents: number;
-    status: string;
-    refundedCents: number;
-    createdAt: string;
-    paidAt: string | null;
-    failureMessage: string | null;
-    checkoutUrl: string | null;
-    /** How it was paid: the online checkout, or at the counter (cash, cheque, card terminal). */
-    method: PaymentMethod;
-    /** Counter payments: the cheque number or terminal reference. */
-    reference: string | null;
-  }[];
-  /** Notes from the shop: every note for staff, only customer-visible ones for the customer. */
-  shopNotes: OrderNoteView[];
-  /** A shaft fails a check no owner has accepted: no payment or release until an owner reviews it. */
-  needsSignoff: boolean;
-  cancelReason: string | null;
-  events: { id: string; at: string; kind: string; label: string }[];
-  /** Every shaft passed final inspection: the as-built certificate can be downloaded. */
-  asBuiltReady: boolean;
-  /** What the order asks for next, if anything. */
-  due: { kind: "deposit" | "balance" | "full"; amountCents: number } | null;
 }
 
 const fmt = (n: unknown, digits = 0, unit = "") =>
@@ -261,7 +175,13 @@ export function shaftView(s: ShaftSource): ShaftView {
     ],
     checks: (r.checks ?? []).map((c) => ({ id: c.id, status: c.status, message: c.message })),
     cautions: [...(r.cautions ?? [])],
-    warningAcknowledgements: s.warningAcknowledgements ?? [],
+    warningAcknowledgements: (s.warningAcknowledgements ?? []).map((a): AcknowledgementView => ({
+      checkId: a.checkId,
+      message: a.message,
+      byName: a.byName,
+      channel: a.channel,
+      at: a.at,
+    })),
     needsSignoff: needsEngineeringSignoff(r.checks ?? [], s.failedCheckAcceptances),
     retube: retubeView(s.repair),
   };

@@ -14,3 +14,11 @@ export type OrderStatus = (typeof ORDER_STATUSES)[number];
 
 export const PAYMENT_STATES = ["unpaid", "deposit_paid", "paid", "partially_refunded", "refunded"] as const;
 export type PaymentState = (typeof PAYMENT_STATES)[number];
+
+export const PAYMENT_METHODS = ["checkout", "cash", "cheque", "terminal"] as const;
+/** How the money came in: the hosted card checkout, or at the counter (cash, cheque, card terminal). */
+export type PaymentMethod = (typeof PAYMENT_METHODS)[number];
+
+export const NOTE_VISIBILITIES = ["staff", "customer"] as const;
+/** Who may read an order note: staff only, or the customer too. */
+export type NoteVisibility = (typeof NOTE_VISIBILITIES)[number];

@@ -1,3 +1,4 @@
+import "server-only";
 import type { PaymentsPort } from "./port";
 import { createStripePayments } from "./stripe";
 

@@ -1,3 +1,4 @@
+import "server-only";
 import Stripe from "stripe";
 import type { CheckoutInput, PaymentEvent, PaymentsPort } from "./port";
 import { PaymentsUnavailableError, WebhookSignatureError } from "./port";

@@ -1,3 +1,4 @@
+import "server-only";
 import { ShopConfig } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 import {

@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * The owner's overview queries as plain SQL (knex `?` placeholders), one entry each, so the page,
  * the EXPLAIN test and the bench run exactly the same text. The indexes each one uses are made in

@@ -1,3 +1,4 @@
+import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { AuditEvent, Customer, User, type OrderStatus } from "@/entities";
 import { getEm } from "@/lib/db/orm";

@@ -1,3 +1,4 @@
+import "server-only";
 import { cache } from "react";
 import { Shop } from "@/entities";
 import { getEm } from "@/lib/db/orm";

@@ -1,3 +1,4 @@
+import "server-only";
 import path from "node:path";
 import { randomUUID } from "node:crypto";
 import { LocalFileStorage } from "./local";

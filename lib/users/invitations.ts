@@ -1,3 +1,4 @@
+import "server-only";
 import { LockMode } from "@mikro-orm/core";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { StaffInvitation, User } from "@/entities";

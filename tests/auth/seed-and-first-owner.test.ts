@@ -23,7 +23,7 @@ async function freshDatabase(name: string): Promise<string> {
 
 function run(script: string, url: string, env: Record<string, string | undefined>, args: string[] = []) {
   const { YOKELINE_DEMO: _demo, ...rest } = process.env;
-  return spawnSync("npx", ["tsx", script, ...args], {
+  return spawnSync("npx", ["tsx", "--tsconfig", "scripts/tsconfig.json", script, ...args], {
     env: { ...rest, DATABASE_URL: url, APP_URL: "http://127.0.0.1:3999", YOKELINE_JOBS: "0", ...env },
     encoding: "utf8",
   });

@@ -93,6 +93,8 @@ describe("the server's start-up hook", () => {
           HOME: process.env.HOME,
           NEXT_RUNTIME: "nodejs",
           YOKELINE_JOBS: "0",
+          // As scripts run: `server-only` is an empty module under tsx (scripts/tsconfig.json).
+          TSX_TSCONFIG_PATH: path.join(root, "scripts/tsconfig.json"),
           ...env,
         },
       },

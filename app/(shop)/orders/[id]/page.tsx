@@ -13,8 +13,8 @@ import { OrderPage } from "@/components/orders/order-page";
 import { OrderFiles } from "@/components/order-files";
 import { listOrderUploads, mayAttachFiles } from "@/lib/uploads";
 import Link from "next/link";
-import { WorkOrder } from "@/entities";
 import { asBuiltHref } from "@/lib/floor/scan";
+import { orderShaftSerials } from "@/lib/floor/queries";
 
 // The browser tab and history name the order (for those who may see it).
 export async function generateMetadata({ params }: PageProps<"/orders/[id]">): Promise<Metadata> {
@@ -39,31 +39,26 @@ export default async function CustomerOrderPage({ params, searchParams }: PagePr
     throw e;
   });
   await populateOrder(em, order);
-  const shafts = await em.find(WorkOrder, { order: order.id }, { orderBy: { serialSequence: "asc" } });
+  const view = orderView(order, user);
+  const [serials, files] = await Promise.all([orderShaftSerials(em, order.id), listOrderUploads(em, order)]);
   return (
     <>
       <PageHeader
-        title={`Order ${order.number}`}
+        title={`Order ${view.number}`}
         description={
           <>
-            Placed <ShopTime at={order.createdAt.toISOString()} format="date" />
+            Placed <ShopTime at={view.createdAt} format="date" />
           </>
         }
       />
       <OrderPage
-        order={orderView(order, user)}
+        order={view}
         returnedFromCheckout={Boolean(query.paid)}
         cancelledCheckout={Boolean(query.cancelled)}
         checkoutUnavailable={Boolean(query["checkout-unavailable"])}
-        files={
-          <OrderFiles
-            orderId={order.id}
-            files={await listOrderUploads(em, order)}
-            canUpload={mayAttachFiles(user)}
-          />
-        }
+        files={<OrderFiles orderId={view.id} files={files} canUpload={mayAttachFiles(user)} />}
       />
-      {shafts.length > 0 && (
+      {serials.length > 0 && (
         <section aria-labelledby="shaft-records" className="mt-6 card p-5">
           <h2 id="shaft-records" className="mb-2 text-lg font-semibold">
             Your shafts&apos; records
@@ -72,10 +67,10 @@ export default async function CustomerOrderPage({ params, searchParams }: PagePr
             What the shop measured on each shaft as it was built; reorder the same shaft from its record.
           </p>
           <ul className="space-y-1">
-            {shafts.map((w) => (
-              <li key={w.id}>
-                <Link href={asBuiltHref(w.serial, "customer")} className="font-mono underline">
-                  {w.serial}
+            {serials.map((serial) => (
+              <li key={serial}>
+                <Link href={asBuiltHref(serial, "customer")} className="font-mono underline">
+                  {serial}
                 </Link>
               </li>
             ))}

@@ -3,8 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { isUuid } from "@/lib/http/known-errors";
 import { requirePermission } from "@/lib/auth/guard";
-import { getEm } from "@/lib/db/orm";
-import { Customer } from "@/entities";
+import { customerRow } from "@/lib/customers";
 import { findDraft, listDrafts } from "@/lib/designs/drafts";
 import { getShopEngineering } from "@/lib/shop/config";
 import { PageHeader } from "@/components/ui/page-header";
@@ -31,8 +30,7 @@ export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/de
     );
   }
 
-  const em = await getEm();
-  const customer = await em.findOne(Customer, { id: customerId });
+  const customer = await customerRow(customerId);
   if (!customer) notFound();
   const draftId = typeof draftParam === "string" ? draftParam : undefined;
   const [shop, drafts, draft] = await Promise.all([
@@ -47,7 +45,7 @@ export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/de
         description={[customer.company, customer.email, customer.phone].filter(Boolean).join(" · ")}
         actions={
           <>
-            {!customer.user && <InviteButton customerId={customer.id} />}
+            {!customer.hasAccount && <InviteButton customerId={customer.id} />}
             <Link href="/desk/new" className="btn-quiet no-underline">
               Change customer
             </Link>

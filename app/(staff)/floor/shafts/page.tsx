@@ -4,9 +4,9 @@ import { SearchX } from "lucide-react";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { getEm } from "@/lib/db/orm";
-import { WorkOrder } from "@/entities";
 import { parseSerial } from "@/lib/traveller/codes";
 import { asBuiltHref } from "@/lib/floor/scan";
+import { shaftExists } from "@/lib/floor/queries";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
 import { SerialSearch } from "../_components/serial-search";
@@ -22,8 +22,7 @@ export default async function FindShaftPage({ searchParams }: PageProps<"/floor/
   let message = "Type or scan a shaft's serial.";
   if (parsed && !parsed.ok) message = parsed.message;
   if (parsed?.ok) {
-    const wo = await (await getEm()).findOne(WorkOrder, { serial: parsed.serial });
-    if (wo) redirect(asBuiltHref(wo.serial));
+    if (await shaftExists(await getEm(), parsed.serial)) redirect(asBuiltHref(parsed.serial));
     message = `No shaft with serial ${parsed.serial}.`;
   }
   return (

@@ -2,7 +2,7 @@
 import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { Eye, Lock } from "lucide-react";
-import type { OrderNoteView } from "@/lib/orders/notes";
+import type { OrderNoteView } from "@/lib/orders/views";
 import { addOrderNoteAction } from "@/lib/actions/add-order-note";
 import { useMutation } from "@/lib/browser/mutation";
 import { Alert } from "@/components/ui/alert";
