@@ -78,21 +78,20 @@ const coordinate = () => {
 };
 const pointSchema = object({ x: coordinate(), y: coordinate(), z: coordinate() });
 
+/** A tube's wall must leave a bore: less than half its outside diameter (reported on `wallMm`). */
+const wallLeavesABore =
+  (message: string) =>
+  <T extends { odMm: number; wallMm: number }>(ctx: z.core.ParsePayload<T>) => {
+    const t = ctx.value;
+    if (t.wallMm * 2 >= t.odMm)
+      ctx.issues.push({ code: "custom", input: t.wallMm, path: ["wallMm"], message });
+  };
+
 const tubeSchema = object({
   materialId: id(),
   odMm: bounded(PHYSICAL_MAX.tubeOdMm, "mm"),
   wallMm: bounded(PHYSICAL_MAX.tubeWallMm, "mm"),
-}).check((ctx) => {
-  const t = ctx.value;
-  if (t.wallMm * 2 >= t.odMm) {
-    ctx.issues.push({
-      code: "custom",
-      input: t.wallMm,
-      path: ["wallMm"],
-      message: "must be less than half of odMm",
-    });
-  }
-});
+}).check(wallLeavesABore("must be less than half of odMm"));
 
 const materialSchema = object({
   elasticModulusGPa: optionalBounded(PHYSICAL_MAX.elasticModulusGPa, "GPa"),
@@ -454,17 +453,7 @@ const tubeEntrySchema = object({
   wallMm: bounded(PHYSICAL_MAX.tubeWallMm, "mm"),
   maxLengthMm: bounded(PHYSICAL_MAX.lengthMm, "mm"),
   pricePerMetreCents: cents(),
-}).check((ctx) => {
-  const t = ctx.value;
-  if (t.wallMm * 2 >= t.odMm) {
-    ctx.issues.push({
-      code: "custom",
-      input: t.wallMm,
-      path: ["wallMm"],
-      message: "must be less than half the outside diameter",
-    });
-  }
-});
+}).check(wallLeavesABore("must be less than half the outside diameter"));
 
 /** Blank select in the editor → not given. */
 const optionalChoice = <const T extends readonly [string, ...string[]]>(values: T, message: string) =>
