@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import { expect, test, type Page } from "@playwright/test";
-import { ACCOUNTS, mailTo, signIn } from "./fixtures";
+import { ACCOUNTS, mailTo, signIn, payOnCheckoutPage } from "./fixtures";
 
 // The counter's money on the desk order page, against the local Stripe and mail fakes.
 const streetTruck = JSON.parse(readFileSync("examples/street-truck.json", "utf8")) as unknown;
@@ -23,14 +23,6 @@ async function customerOrder(page: Page, name: string): Promise<{ id: string; nu
   });
   expect(order.status()).toBe(201);
   return (await order.json()) as { id: string; number: string };
-}
-
-async function payOnCheckoutPage(page: Page, card = "4242 4242 4242 4242") {
-  await expect(page).toHaveURL(/127\.0\.0\.1:\d+\/pay\/cs_/);
-  await page.getByLabel("Card number").fill(card);
-  await page.getByLabel("Expiry (MM/YY)").fill("12/34");
-  await page.getByLabel("CVC").fill("123");
-  await page.getByRole("button", { name: /^Pay / }).click();
 }
 
 test("the counter e-mails a payment link that the customer pays; records a terminal payment on another order; the owner cancels it with a refund", async ({

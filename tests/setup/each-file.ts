@@ -10,7 +10,12 @@ else process.env.DATABASE_URL = NO_DATABASE_URL;
 process.env.BETTER_AUTH_SECRET ??= "test-secret-that-is-long-enough-for-hmac-0001";
 process.env.BETTER_AUTH_URL ??= "http://127.0.0.1:3999";
 
+// Files may share one process (vitest.config.mts): what a file sets in the environment is put back after it.
+const environment = { ...process.env };
+
 afterAll(async () => {
+  for (const key of Object.keys(process.env)) if (!(key in environment)) delete process.env[key];
+  Object.assign(process.env, environment);
   // Stop a pg-boss this file started (flushQueuedEmails/enqueueDelivery start one), then close the pools.
   const b = globalThis as { yokelineBoss?: Promise<{ stop(options?: object): Promise<void> }> };
   if (b.yokelineBoss) await (await b.yokelineBoss.catch(() => null))?.stop({ graceful: false });
