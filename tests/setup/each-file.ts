@@ -16,6 +16,8 @@ const environment = { ...process.env };
 afterAll(async () => {
   for (const key of Object.keys(process.env)) if (!(key in environment)) delete process.env[key];
   Object.assign(process.env, environment);
+  // The shop's configuration as the next file finds it in the database, not as this file cached it.
+  (await import("@/lib/shop/config")).invalidateShopEngineering();
   // Stop a pg-boss this file started (flushQueuedEmails/enqueueDelivery start one), then close the pools.
   const b = globalThis as { yokelineBoss?: Promise<{ stop(options?: object): Promise<void> }> };
   if (b.yokelineBoss) await (await b.yokelineBoss.catch(() => null))?.stop({ graceful: false });
