@@ -4,7 +4,7 @@ import { renderTraveller } from "@/lib/traveller/pdf";
 import { defaultFloorSettings, resolveFloorSettings } from "@/lib/traveller/settings";
 import { deriveSteps, type FieldSpec, type StepSpec } from "@/lib/traveller/steps";
 import { scanPdf } from "../setup/scan-pdf";
-import { exampleReport, exampleView } from "./fixtures";
+import { exampleReport, exampleView, TWO_PIECE_STEP_CODES } from "./fixtures";
 
 const report = exampleReport("two-piece-van.json");
 const steps = deriveSteps({ report, fulfilment: "ship", floor: defaultFloorSettings });
@@ -15,19 +15,7 @@ const step = (code: string) => steps.find((s) => s.code === code);
 
 describe("a two-piece shaft's routing", () => {
   test("each piece has its own cut, weld/phase, runout and balance steps, then assembly, inspection, dispatch", () => {
-    expect(steps.map((s) => s.code)).toEqual([
-      "CUA",
-      "CUB",
-      "WLA",
-      "WLB",
-      "RUA",
-      "RUB",
-      "BAA",
-      "BAB",
-      "ASM",
-      "FIN",
-      "SHP",
-    ]);
+    expect(steps.map((s) => s.code)).toEqual(TWO_PIECE_STEP_CODES);
     expect(steps.map((s) => s.position)).toEqual([1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11]);
     expect(steps.filter((s) => s.piece === "A").map((s) => s.kind)).toEqual([
       "cut",

@@ -181,42 +181,18 @@ export default async function OverviewPage() {
             ]}
           >
             {f.late.items.map((o) => (
-              <tr key={o.id}>
-                <td className={`${CELL} font-mono font-semibold`}>
-                  <Link href={`/desk/orders/${o.id}`}>{o.number}</Link>
-                </td>
-                <td className={CELL}>{o.customerName}</td>
-                <td className={CELL}>
-                  {ORDER_STATUS_LABEL[o.status as keyof typeof ORDER_STATUS_LABEL] ?? o.status}
-                </td>
-                <td className={`${CELL} whitespace-nowrap`}>
-                  {o.promisedDate} <span className="font-semibold text-fail">late</span>
-                </td>
-                <td className={CELL}>—</td>
-                <td className={`${CELL} text-right tabular-nums`}>{money(o.totalCents)}</td>
-              </tr>
+              <RiskRow key={o.id} order={o} mark={<span className="font-semibold text-fail">late</span>}>
+                —
+              </RiskRow>
             ))}
             {f.atRisk.items.map((o) => (
-              <tr key={o.id}>
-                <td className={`${CELL} font-mono font-semibold`}>
-                  <Link href={`/desk/orders/${o.id}`}>{o.number}</Link>
-                </td>
-                <td className={CELL}>{o.customerName}</td>
-                <td className={CELL}>
-                  {ORDER_STATUS_LABEL[o.status as keyof typeof ORDER_STATUS_LABEL] ?? o.status}
-                </td>
-                <td className={`${CELL} whitespace-nowrap`}>
-                  {o.promisedDate} <span className="font-semibold text-warn">at risk</span>
-                </td>
-                <td className={`${CELL} whitespace-nowrap`}>
-                  {o.expectedDate}{" "}
-                  <span className="text-ink-muted">
-                    ({o.stepsLeft ? `${o.stepsLeft} step${o.stepsLeft === 1 ? "" : "s"}` : "not started"},{" "}
-                    {hours(o.remainingHours)})
-                  </span>
-                </td>
-                <td className={`${CELL} text-right tabular-nums`}>{money(o.totalCents)}</td>
-              </tr>
+              <RiskRow key={o.id} order={o} mark={<span className="font-semibold text-warn">at risk</span>}>
+                {o.expectedDate}{" "}
+                <span className="text-ink-muted">
+                  ({o.stepsLeft ? `${o.stepsLeft} step${o.stepsLeft === 1 ? "" : "s"}` : "not started"},{" "}
+                  {hours(o.remainingHours)})
+                </span>
+              </RiskRow>
             ))}
           </TableCard>
         )}
@@ -337,5 +313,38 @@ export default async function OverviewPage() {
         )}
       </section>
     </>
+  );
+}
+
+/** A late or at-risk order: number, customer, state, promised date with its mark, when expected (`children`), value. */
+function RiskRow({
+  order: o,
+  mark,
+  children,
+}: {
+  order: {
+    id: string;
+    number: string;
+    customerName: string;
+    status: string;
+    promisedDate: string;
+    totalCents: number;
+  };
+  mark: React.ReactNode;
+  children: React.ReactNode;
+}) {
+  return (
+    <tr>
+      <td className={`${CELL} font-mono font-semibold`}>
+        <Link href={`/desk/orders/${o.id}`}>{o.number}</Link>
+      </td>
+      <td className={CELL}>{o.customerName}</td>
+      <td className={CELL}>{ORDER_STATUS_LABEL[o.status as keyof typeof ORDER_STATUS_LABEL] ?? o.status}</td>
+      <td className={`${CELL} whitespace-nowrap`}>
+        {o.promisedDate} {mark}
+      </td>
+      <td className={`${CELL} whitespace-nowrap`}>{children}</td>
+      <td className={`${CELL} text-right tabular-nums`}>{money(o.totalCents)}</td>
+    </tr>
   );
 }
