@@ -3,10 +3,11 @@ import { afterAll } from "vitest";
 import { assertLoopbackDatabase } from "../../lib/db/url";
 import { NO_DATABASE_URL } from "./db";
 
-if (process.env.DATABASE_URL) assertLoopbackDatabase(process.env.DATABASE_URL);
+const url = process.env.DATABASE_URL;
 // Without a test database, database tests fail (tests/setup/db.ts); nothing may fall back to the
-// development cluster's default URL.
-else process.env.DATABASE_URL = NO_DATABASE_URL;
+// development cluster's default URL. (In a shared process an earlier file has set it already.)
+if (!url) process.env.DATABASE_URL = NO_DATABASE_URL;
+else if (url !== NO_DATABASE_URL) assertLoopbackDatabase(url);
 process.env.BETTER_AUTH_SECRET ??= "test-secret-that-is-long-enough-for-hmac-0001";
 process.env.BETTER_AUTH_URL ??= "http://127.0.0.1:3999";
 
