@@ -4,7 +4,7 @@ import { History } from "lucide-react";
 import { requirePermission } from "@/lib/auth/guard";
 import { ORDER_STATUS_LABEL } from "@/lib/orders/labels";
 import { CHART_WEEKS, DEFAULT_STEP_HOURS, overviewActivity, overviewFigures } from "@/lib/shop/overview";
-import { AVERAGE_WINDOW_DAYS } from "@/lib/shop/overview";
+import { AVERAGE_WINDOW_DAYS, type OrderListItem } from "@/lib/shop/overview";
 import { formatMoney } from "@/lib/pricing/price-book";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
@@ -322,14 +322,7 @@ function RiskRow({
   mark,
   children,
 }: {
-  order: {
-    id: string;
-    number: string;
-    customerName: string;
-    status: string;
-    promisedDate: string;
-    totalCents: number;
-  };
+  order: OrderListItem;
   mark: React.ReactNode;
   children: React.ReactNode;
 }) {
