@@ -1,6 +1,6 @@
-import { Heading, Link } from "@react-email/components";
-import { EmailLayout, heading, mutedText, type EmailShop } from "./components/email-layout";
-import { ActionButton, Facts, LineItems, Paragraph, type EmailLine } from "./components/parts";
+import { Heading } from "@react-email/components";
+import { EmailLayout, heading, type EmailShop } from "./components/email-layout";
+import { Paragraph, PaymentRequest, type EmailLine } from "./components/parts";
 
 export interface BalanceDueProps {
   shop: EmailShop;
@@ -30,22 +30,15 @@ export function BalanceDueEmail(p: BalanceDueProps) {
         Hello {p.customerName}, the balance of <strong>{p.balanceDue}</strong> is due on order{" "}
         <strong>{p.orderNumber}</strong>. You can pay it online in a minute:
       </Paragraph>
-      <ActionButton href={p.payUrl}>{`Pay ${p.balanceDue}`}</ActionButton>
-      <Facts
-        facts={[
-          ["Order total", p.total],
-          ["Paid so far", p.paidSoFar],
-          ["Balance due", p.balanceDue],
-          ["Promised for", p.promisedDate],
-        ]}
+      <PaymentRequest
+        payUrl={p.payUrl}
+        orderUrl={p.orderUrl}
+        due={{ label: "Balance due", amount: p.balanceDue }}
+        total={p.total}
+        paidSoFar={p.paidSoFar}
+        promisedDate={p.promisedDate}
+        lines={p.lines}
       />
-      <LineItems lines={p.lines} />
-      <Paragraph>
-        <span style={mutedText}>
-          If the button does not work, open <Link href={p.payUrl}>{p.payUrl}</Link>. Your order:{" "}
-          <Link href={p.orderUrl}>{p.orderUrl}</Link>
-        </span>
-      </Paragraph>
     </EmailLayout>
   );
 }

@@ -1,6 +1,6 @@
-import { Heading, Link } from "@react-email/components";
-import { EmailLayout, heading, mutedText, type EmailShop } from "./components/email-layout";
-import { ActionButton, Facts, LineItems, Paragraph, type EmailLine } from "./components/parts";
+import { Heading } from "@react-email/components";
+import { EmailLayout, heading, type EmailShop } from "./components/email-layout";
+import { Paragraph, PaymentRequest, type EmailLine } from "./components/parts";
 
 export interface PaymentLinkProps {
   shop: EmailShop;
@@ -34,22 +34,15 @@ export function PaymentLinkEmail(p: PaymentLinkProps) {
         {p.paymentLabel.toLowerCase()} of <strong>{p.amountDue}</strong> on order{" "}
         <strong>{p.orderNumber}</strong> by card:
       </Paragraph>
-      <ActionButton href={p.payUrl}>{`Pay ${p.amountDue}`}</ActionButton>
-      <Facts
-        facts={[
-          ["Order total", p.total],
-          ["Paid so far", p.paidSoFar],
-          [p.paymentLabel, p.amountDue],
-          ["Promised for", p.promisedDate],
-        ]}
+      <PaymentRequest
+        payUrl={p.payUrl}
+        orderUrl={p.orderUrl}
+        due={{ label: p.paymentLabel, amount: p.amountDue }}
+        total={p.total}
+        paidSoFar={p.paidSoFar}
+        promisedDate={p.promisedDate}
+        lines={p.lines}
       />
-      <LineItems lines={p.lines} />
-      <Paragraph>
-        <span style={mutedText}>
-          If the button does not work, open <Link href={p.payUrl}>{p.payUrl}</Link>. Your order:{" "}
-          <Link href={p.orderUrl}>{p.orderUrl}</Link>
-        </span>
-      </Paragraph>
     </EmailLayout>
   );
 }

@@ -24,6 +24,20 @@ export interface TableQueryState {
 
 const count = (n: number) => n.toLocaleString("en-US");
 
+/** What a table page hands its table: this page's rows, how many match, the query, whether a filter is on. */
+export interface TablePage<R> {
+  rows: R[];
+  total: number;
+  query: TableQueryState;
+  filtered: boolean;
+}
+
+/** What an empty table says: when nothing exists yet, and when the filters match nothing. */
+export interface EmptyWords {
+  none: { title: string; text: string };
+  noMatch: { title: string; text?: string };
+}
+
 /**
  * A server-driven table: the server sorts, filters and pages (manual mode), this draws the page it
  * was given and turns clicks into new URLs. Headers sort (a button per sortable column, with
@@ -33,9 +47,7 @@ const count = (n: number) => n.toLocaleString("en-US");
 export function DataTable<R>({
   caption,
   columns,
-  rows,
-  total,
-  query,
+  page: { rows, total, query, filtered },
   defaults,
   getRowId,
   exportHref,
@@ -44,17 +56,21 @@ export function DataTable<R>({
 }: {
   caption: string;
   columns: ColumnDef<R>[];
-  rows: R[];
-  total: number;
-  query: TableQueryState;
+  page: TablePage<R>;
   defaults: { sort: string; dir: "asc" | "desc" };
   getRowId: (row: R) => string;
   /** e.g. "/api/exports/orders": the current query is added. */
   exportHref?: string;
-  empty: { title: string; text: string; filtered: boolean };
+  empty: EmptyWords;
   rowClassName?: (row: R) => string | undefined;
 }) {
   const { navigate, pending, searchParams } = useTableUrl();
+  const words = filtered
+    ? {
+        title: empty.noMatch.title,
+        text: empty.noMatch.text ?? "Loosen a filter or clear them all to see more.",
+      }
+    : empty.none;
   const sorting: SortingState = useMemo(() => [{ id: query.sort, desc: query.dir === "desc" }], [query]);
   // A column switched off disappears at once; the URL (replaced, not pushed) catches up.
   const urlHide = query.hide.join(",");
@@ -137,9 +153,9 @@ export function DataTable<R>({
       {rows.length === 0 ? (
         <div className="flex flex-col items-center card px-6 py-12 text-center">
           <SearchX className="size-10 text-steel-500" aria-hidden="true" />
-          <h2 className="mt-3 text-lg font-semibold">{empty.title}</h2>
+          <h2 className="mt-3 text-lg font-semibold">{words.title}</h2>
           <p className="mt-1 max-w-md text-sm text-ink-muted">
-            {total > 0 ? `There are only ${pageCount} page${pageCount === 1 ? "" : "s"}.` : empty.text}
+            {total > 0 ? `There are only ${pageCount} page${pageCount === 1 ? "" : "s"}.` : words.text}
           </p>
           {total > 0 && (
             <button type="button" className="mt-4 btn-quiet" onClick={() => navigate({ page: null })}>

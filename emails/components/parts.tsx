@@ -1,5 +1,5 @@
-import { Button, Column, Row, Section, Text } from "@react-email/components";
-import { colors, text } from "./email-layout";
+import { Button, Column, Link, Row, Section, Text } from "@react-email/components";
+import { colors, mutedText, text } from "./email-layout";
 
 /** One line of an order as an e-mail shows it; amounts are already formatted (e.g. "$412.00"). */
 export interface EmailLine {
@@ -110,4 +110,40 @@ export function ActionButton({ href, children }: { href: string; children: React
 
 export function Paragraph({ children }: { children: React.ReactNode }) {
   return <Text style={text}>{children}</Text>;
+}
+
+/**
+ * What a payment e-mail asks: the button to the hosted payment page, the order's money and
+ * promised date, its lines, and both links written out for a mail client without buttons.
+ */
+export function PaymentRequest(p: {
+  payUrl: string;
+  orderUrl: string;
+  /** What is asked now, with its name ("Balance due", "Deposit"…). */
+  due: { label: string; amount: string };
+  total: string;
+  paidSoFar: string;
+  promisedDate: string;
+  lines: EmailLine[];
+}) {
+  return (
+    <>
+      <ActionButton href={p.payUrl}>{`Pay ${p.due.amount}`}</ActionButton>
+      <Facts
+        facts={[
+          ["Order total", p.total],
+          ["Paid so far", p.paidSoFar],
+          [p.due.label, p.due.amount],
+          ["Promised for", p.promisedDate],
+        ]}
+      />
+      <LineItems lines={p.lines} />
+      <Paragraph>
+        <span style={mutedText}>
+          If the button does not work, open <Link href={p.payUrl}>{p.payUrl}</Link>. Your order:{" "}
+          <Link href={p.orderUrl}>{p.orderUrl}</Link>
+        </span>
+      </Paragraph>
+    </>
+  );
 }

@@ -7,7 +7,7 @@
 import type { PDFDocument } from "pdf-lib";
 import type { ShaftPieceReport } from "@/lib/driveline/report";
 import { GREY, type Fonts, type Writer } from "./pdf-kit";
-import { addTravellerPage, drawPhaseDiagram } from "./pdf";
+import { addTravellerPage, drawPhaseDiagram, drawVerdict } from "./pdf";
 import { assembledLengthMm, pieceReport } from "./two-piece-steps";
 import { formatQuantity } from "./units";
 import type { TravellerView } from "./view";
@@ -80,19 +80,7 @@ function summaryBlock(w: Writer, view: TravellerView, top: number, left: number,
     2,
   );
   y -= 2;
-  const notPassing = report.checks.filter((c) => c.status !== "pass");
-  w.text(
-    `Checks: ${report.overall.toUpperCase()} (${report.checks.length - notPassing.length} of ${report.checks.length} pass)`,
-    left,
-    y,
-    9,
-    f.bold,
-  );
-  y -= 11;
-  for (const c of notPassing.slice(0, 3))
-    y = w.wrap(`${c.status.toUpperCase()}: ${c.message}`, left, y, colW - 8, 7, f.regular, 2);
-  for (const caution of report.cautions.slice(0, 2))
-    y = w.wrap(caution, left, y, colW - 8, 6.5, f.regular, 3);
+  y = drawVerdict(w, report, left, y, colW - 8);
 
   // Right column: each piece's rear-yoke index, looking rearward.
   const rx = left + colW;

@@ -6,6 +6,7 @@
  */
 import { PDFDocument, degrees, type PDFPage } from "pdf-lib";
 import { BLACK, GREY, MARGIN, PAGE, Writer, drawCode128, drawQr, embedFonts, type Fonts } from "./pdf-kit";
+import type { EvaluationReport } from "@/lib/driveline/report";
 import { describeLimit } from "./measure";
 import { shaftUseLabel } from "@/lib/driveline/uses";
 import {
@@ -47,6 +48,34 @@ export function drawPhaseDiagram(w: Writer, cx: number, cy: number, r: number, i
     p.drawEllipse({ x: cx + s * dx, y: cy + s * dy, xScale: 3.2, yScale: 3.2, color: BLACK });
   }
   w.text("front", cx + 3, cy + r + 1, 5.5, w.f.regular, GREY);
+}
+
+/**
+ * The evaluation's verdict (how many checks pass), the first three that do not and two cautions,
+ * from `y` down within `width`; returns the y below. Both travellers print it.
+ */
+export function drawVerdict(
+  w: Writer,
+  report: EvaluationReport,
+  left: number,
+  top: number,
+  width: number,
+): number {
+  const { f } = w;
+  let y = top;
+  const notPassing = report.checks.filter((c) => c.status !== "pass");
+  w.text(
+    `Checks: ${report.overall.toUpperCase()} (${report.checks.length - notPassing.length} of ${report.checks.length} pass)`,
+    left,
+    y,
+    9,
+    f.bold,
+  );
+  y -= 11;
+  for (const c of notPassing.slice(0, 3))
+    y = w.wrap(`${c.status.toUpperCase()}: ${c.message}`, left, y, width, 7, f.regular, 2);
+  for (const caution of report.cautions.slice(0, 2)) y = w.wrap(caution, left, y, width, 6.5, f.regular, 3);
+  return y;
 }
 
 function fieldLine(field: FieldSpec, units: FloorUnits): string {
@@ -132,19 +161,7 @@ function shaftBlock(w: Writer, view: TravellerView, top: number, left: number, w
   y -= 2;
   label("Verdict and cautions", left, y);
   y -= 11;
-  const notPassing = report.checks.filter((c) => c.status !== "pass");
-  w.text(
-    `Checks: ${report.overall.toUpperCase()} (${report.checks.length - notPassing.length} of ${report.checks.length} pass)`,
-    left,
-    y,
-    9,
-    f.bold,
-  );
-  y -= 11;
-  for (const c of notPassing.slice(0, 3))
-    y = w.wrap(`${c.status.toUpperCase()}: ${c.message}`, left, y, colW - 8, 7, f.regular, 2);
-  for (const caution of report.cautions.slice(0, 2))
-    y = w.wrap(caution, left, y, colW - 8, 6.5, f.regular, 3);
+  y = drawVerdict(w, report, left, y, colW - 8);
   const leftBottom = y;
 
   // Right column: phase drawing, runout, balance, speed.

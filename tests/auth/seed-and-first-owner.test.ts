@@ -1,10 +1,12 @@
-import { execFileSync, spawnSync } from "node:child_process";
+import { spawnSync } from "node:child_process";
+import path from "node:path";
 import { Client } from "pg";
-import { afterAll, beforeAll, describe, expect } from "vitest";
-import { migrateWithCli } from "../setup/global-setup";
+import { afterAll, describe, expect } from "vitest";
+import { templateDatabase } from "../setup/global-setup";
 import { dbTest, requireDatabase } from "../setup/db";
 
-// Each case on its own fresh database: the seed only acts on an empty one.
+// Each case on its own fresh database (a copy of the migrated, empty one the global setup keeps):
+// the seed only acts on an empty one.
 const admin = process.env.DATABASE_URL ?? "";
 const databases: string[] = [];
 
@@ -12,18 +14,20 @@ async function freshDatabase(name: string): Promise<string> {
   const db = `${name}_${Math.random().toString(36).slice(2, 8)}`;
   const client = new Client({ connectionString: admin });
   await client.connect();
-  await client.query(`create database ${db}`);
+  await client.query(`create database ${db} template ${templateDatabase(admin)}`);
   await client.end();
   databases.push(db);
   const url = new URL(admin);
   url.pathname = `/${db}`;
-  migrateWithCli(url.toString());
   return url.toString();
 }
 
+/** tsx is what `npm start` runs the seed with (called directly: npx would only look it up again). */
+const TSX = path.resolve(import.meta.dirname, "../../node_modules/.bin/tsx");
+
 function run(script: string, url: string, env: Record<string, string | undefined>, args: string[] = []) {
   const { YOKELINE_DEMO: _demo, ...rest } = process.env;
-  return spawnSync("npx", ["tsx", "--tsconfig", "scripts/tsconfig.json", script, ...args], {
+  return spawnSync(TSX, ["--tsconfig", "scripts/tsconfig.json", script, ...args], {
     env: { ...rest, DATABASE_URL: url, APP_URL: "http://127.0.0.1:3999", YOKELINE_JOBS: "0", ...env },
     encoding: "utf8",
   });
@@ -45,11 +49,6 @@ afterAll(async () => {
   await client.connect();
   for (const db of databases) await client.query(`drop database if exists ${db} with (force)`);
   await client.end();
-});
-
-beforeAll(() => {
-  // tsx is what `npm start` runs the seed with.
-  execFileSync("npx", ["tsx", "--version"], { stdio: "ignore" });
 });
 
 describe("seed outside demo mode and the first owner", () => {

@@ -1,5 +1,5 @@
 import { describe, expect } from "vitest";
-import { AuditEvent, Customer, EmailMessage, Order, User } from "@/entities";
+import { AuditEvent, Customer, EmailMessage, User } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 import { authorize } from "@/lib/auth/guard";
 import { createPhoneCustomer, customerForUser } from "@/lib/customers";
@@ -7,30 +7,13 @@ import { createStaffUser } from "@/lib/users/staff";
 import { listOrders } from "@/lib/orders/queries";
 import { authRequest, openLink, sessionCookie, uniqueEmail, verificationLink } from "../setup/auth-requests";
 import { dbTest } from "../setup/db";
+import { createTestOrder } from "../setup/test-orders";
 
 const PASSWORD = "a-long-password-1";
 
 /** An order the counter took for a phone customer (demo data). */
 async function placeCounterOrder(customerId: string): Promise<string> {
-  const em = await getEm();
-  const number = `T-${Math.random().toString(36).slice(2, 10)}`;
-  em.create(Order, {
-    number,
-    customer: em.getReference(Customer, customerId),
-    channel: "counter",
-    fulfilment: "pickup",
-    currency: "USD",
-    subtotalCents: 10_000,
-    taxCents: 800,
-    shippingCents: 0,
-    totalCents: 10_800,
-    depositCents: 5_400,
-    promisedDate: "2026-12-24",
-    createdAt: new Date(),
-    updatedAt: new Date(),
-  });
-  await em.flush();
-  return number;
+  return (await createTestOrder(await getEm(), { customerId })).number;
 }
 
 /** The order numbers a customer's order list shows. */

@@ -1,67 +1,24 @@
-import { afterAll, beforeAll, describe, expect } from "vitest";
-import { NextRequest } from "next/server";
-import { Client } from "pg";
-import { POST } from "@/app/api/catalogue/versions/route";
+import { describe, expect } from "vitest";
 import { evaluateDesign, parseDesign } from "@/lib/driveline";
 import { currentShopConfig } from "@/lib/catalogue/versions";
 import { describePath } from "@/lib/catalogue/describe";
 import type { ConfigChange } from "@/lib/catalogue/diff";
 import { getShopEngineering, invalidateShopEngineering } from "@/lib/shop/config";
-import { createStaffUser } from "@/lib/users/staff";
-import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
+import { staffCookie } from "../setup/auth-requests";
+import { keepShopConfig, postCatalogueVersion } from "../setup/shop-config";
 import { dbTest } from "../setup/db";
 import { streetTruck } from "../setup/orders";
 
-const PASSWORD = "a-long-password-1";
-
-async function ownerCookie() {
-  const user = await createStaffUser(
-    { name: "Test owner", email: uniqueEmail("owner"), role: "owner", password: PASSWORD },
-    null,
-  );
-  return sessionCookie(await authRequest("/sign-in/email", { email: user.email, password: PASSWORD }));
-}
-
-const post = (body: unknown, cookie: string) =>
-  POST(
-    new NextRequest("http://127.0.0.1/api/catalogue/versions", {
-      method: "POST",
-      headers: { "content-type": "application/json", cookie },
-      body: JSON.stringify(body),
-    }),
-    { params: Promise.resolve({}) },
-  );
+const post = postCatalogueVersion;
 
 // This file changes the shop's configuration: put it back as it was for the files after it.
-let original: { rows: unknown[] } = { rows: [] };
-beforeAll(async () => {
-  const c = new Client({ connectionString: process.env.DATABASE_URL });
-  await c.connect();
-  original = await c.query("select * from shop_config");
-  await c.end();
-});
-afterAll(async () => {
-  const c = new Client({ connectionString: process.env.DATABASE_URL });
-  await c.connect();
-  await c.query("delete from shop_config_version");
-  await c.query("delete from shop_config");
-  for (const r of original.rows as Record<string, unknown>[]) {
-    await c.query(
-      "insert into shop_config (id, catalogue, settings, price_book, floor, version, updated_at) values ($1, $2, $3, $4, $5, $6, $7)",
-      [r.id, r.catalogue, r.settings, r.price_book, r.floor, r.version, r.updated_at].map((v) =>
-        typeof v === "object" && v !== null && !(v instanceof Date) ? JSON.stringify(v) : v,
-      ),
-    );
-  }
-  await c.end();
-  invalidateShopEngineering();
-});
+keepShopConfig();
 
 describe("the editor's loads fields: weld zone, continuous rating, the limits per use", () => {
   dbTest(
     "a weld-zone yield without its source, or a continuous rating above the peak, is refused by field",
     async () => {
-      const owner = await ownerCookie();
+      const owner = await staffCookie("owner");
       const { version, document } = await currentShopConfig();
       const cases = [
         {
@@ -102,7 +59,7 @@ describe("the editor's loads fields: weld zone, continuous rating, the limits pe
     "saved figures are kept, named in the history, and used by the next evaluation",
     { timeout: 60_000 },
     async () => {
-      const owner = await ownerCookie();
+      const owner = await staffCookie("owner");
       const { version, document } = await currentShopConfig();
       const d = structuredClone(document);
       const dom = d.catalogue.materials.findIndex((m) => m.id === "steel-dom");

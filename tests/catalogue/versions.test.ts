@@ -1,35 +1,21 @@
-import { afterAll, beforeAll, describe, expect } from "vitest";
+import { describe, expect } from "vitest";
 import { NextRequest } from "next/server";
-import { Client } from "pg";
-import { GET, POST } from "@/app/api/catalogue/versions/route";
+import { GET } from "@/app/api/catalogue/versions/route";
 import { AuditEvent, Order, ShopConfigVersion } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 import { currentShopConfig, SAVE_ACTION } from "@/lib/catalogue/versions";
 import { placeOrder, quoteDesigns } from "@/lib/orders/place-order";
-import { getShopEngineering, invalidateShopEngineering } from "@/lib/shop/config";
-import { createStaffUser } from "@/lib/users/staff";
+import { getShopEngineering } from "@/lib/shop/config";
 import type { ConfigChange } from "@/lib/catalogue/diff";
 import type { ShopConfigDocument } from "@/lib/catalogue/schemas";
-import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
-import { dbTest, requireDatabase } from "../setup/db";
+import { authRequest, sessionCookie, staffCookie } from "../setup/auth-requests";
+import { keepShopConfig, postCatalogueVersion } from "../setup/shop-config";
+import { dbTest } from "../setup/db";
 import { newCustomer, saveDesign } from "../setup/orders";
 
 const PASSWORD = "a-long-password-1";
 
-async function staffCookie(role: "owner" | "counter" | "floor", name = `Test ${role}`) {
-  const user = await createStaffUser({ name, email: uniqueEmail(role), role, password: PASSWORD }, null);
-  return sessionCookie(await authRequest("/sign-in/email", { email: user.email, password: PASSWORD }));
-}
-
-const post = (body: unknown, cookie?: string) =>
-  POST(
-    new NextRequest("http://127.0.0.1/api/catalogue/versions", {
-      method: "POST",
-      headers: { "content-type": "application/json", ...(cookie ? { cookie } : {}) },
-      body: JSON.stringify(body),
-    }),
-    { params: Promise.resolve({}) },
-  );
+const post = postCatalogueVersion;
 
 const get = (cookie?: string) =>
   GET(new NextRequest("http://127.0.0.1/api/catalogue/versions", { headers: cookie ? { cookie } : {} }), {
@@ -45,31 +31,7 @@ async function editable(): Promise<{ version: number; doc: ShopConfigDocument }>
 }
 
 // This file changes the shop's configuration: put it back as it was for the files after it.
-let original: { rows: unknown[] } = { rows: [] };
-beforeAll(async () => {
-  requireDatabase();
-  const c = new Client({ connectionString: requireDatabase() });
-  await c.connect();
-  original = await c.query("select * from shop_config");
-  await c.end();
-});
-afterAll(async () => {
-  requireDatabase();
-  const c = new Client({ connectionString: requireDatabase() });
-  await c.connect();
-  await c.query("delete from shop_config_version");
-  await c.query("delete from shop_config");
-  for (const r of original.rows as Record<string, unknown>[]) {
-    await c.query(
-      "insert into shop_config (id, catalogue, settings, price_book, floor, version, updated_at) values ($1, $2, $3, $4, $5, $6, $7)",
-      [r.id, r.catalogue, r.settings, r.price_book, r.floor, r.version, r.updated_at].map((v) =>
-        typeof v === "object" && v !== null && !(v instanceof Date) ? JSON.stringify(v) : v,
-      ),
-    );
-  }
-  await c.end();
-  invalidateShopEngineering();
-});
+keepShopConfig();
 
 describe("the owner's catalogue and price book editor", () => {
   dbTest("refuses bad values with the field named, and saves nothing", async () => {
@@ -184,10 +146,12 @@ describe("the owner's catalogue and price book editor", () => {
       ]);
 
       const check = await getEm();
-      const audit = await check.findOneOrFail(AuditEvent, {
-        action: SAVE_ACTION,
-        subjectId: String(version + 1),
-      });
+      // The newest save of that number: a file before this one may have saved (and put back) one too.
+      const audit = await check.findOneOrFail(
+        AuditEvent,
+        { action: SAVE_ACTION, subjectId: String(version + 1) },
+        { orderBy: { at: "desc" } },
+      );
       expect(audit.actor?.id).toBeTruthy();
       expect(audit.details).toMatchObject({
         version: version + 1,

@@ -1,6 +1,5 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { readFileSync } from "node:fs";
 import {
   DISCLAIMER,
   SAFETY_CAUTION,
@@ -8,19 +7,15 @@ import {
   designFileSchema,
   evaluateDesign,
   parseAndEvaluate,
-  parseDesign,
   rankTubes,
   resolveSettings,
   sampleCurves,
   type DesignFile,
   type EvaluationReport,
 } from "@/lib/driveline";
+import { loadExample } from "./fixtures";
 
-function load(name: string): DesignFile {
-  const r = parseDesign(JSON.parse(readFileSync(`examples/${name}.json`, "utf8")));
-  if (!r.ok) throw new Error(r.issues.map((i) => i.message).join("\n"));
-  return r.design;
-}
+const load = loadExample;
 
 function expectConsistent(report: EvaluationReport): void {
   const statuses = report.checks.map((c) => c.status);

@@ -8,21 +8,14 @@ import {
   type DesignFile,
   type EvaluationReport,
 } from "@/lib/driveline";
+import { truckDesign } from "./fixtures";
 import { defaultPriceBook, quoteShaft } from "@/lib/pricing/price-book";
 
 // Demo design (invented). Design torque 250 N·m × 3.06 × 1.8 = 1376.9 N·m, so on a 3.5 in steel
 // tube Yokeline's own pick at each end is the cheapest weld yoke that carries it: YL-X30 (1700 N·m).
 const base = {
   name: "Interface test truck",
-  lengthMm: 1320.8,
-  tube: { materialId: "steel-dom", odMm: 88.9, wallMm: 2.108 },
-  geometry: {
-    transmission: { verticalDeg: 3, horizontalDeg: 0 },
-    driveshaft: { verticalDeg: 5, horizontalDeg: 0 },
-    pinion: { verticalDeg: 3, horizontalDeg: 0 },
-  },
-  torque: { engineTorqueNm: 250, firstGearRatio: 3.06, converterStallRatio: 1.8 },
-  speed: { maxShaftRpm: 4000 },
+  ...truckDesign,
 };
 
 function evaluate(extra: Record<string, unknown>, catalogue: Catalogue = defaultCatalogue): EvaluationReport {

@@ -1,5 +1,4 @@
 import { describe, expect, it } from "vitest";
-import { readFileSync } from "node:fs";
 import {
   catalogueSchema,
   chainResponse,
@@ -17,12 +16,9 @@ import {
   type DesignFile,
   type EvaluationReport,
 } from "@/lib/driveline";
+import { loadExample } from "./fixtures";
 
-function load(name: string): DesignFile {
-  const r = parseDesign(JSON.parse(readFileSync(`examples/${name}.json`, "utf8")));
-  if (!r.ok) throw new Error(r.issues.map((i) => i.message).join("\n"));
-  return r.design;
-}
+const load = loadExample;
 
 function parse(input: unknown): DesignFile {
   const r = parseDesign(input);

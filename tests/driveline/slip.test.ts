@@ -7,20 +7,13 @@ import {
   type DesignFile,
   type EvaluationReport,
 } from "@/lib/driveline";
+import { truckDesign } from "./fixtures";
 
 // Demo design (invented): a street truck shaft with a slip yoke on the transmission output.
 // Lengths joint centre to joint centre; ride height 22 mm out from fully collapsed, 40 mm more at droop.
 const base = {
   name: "Slip test truck",
-  lengthMm: 1320.8,
-  tube: { materialId: "steel-dom", odMm: 88.9, wallMm: 2.108 },
-  geometry: {
-    transmission: { verticalDeg: 3, horizontalDeg: 0 },
-    driveshaft: { verticalDeg: 5, horizontalDeg: 0 },
-    pinion: { verticalDeg: 3, horizontalDeg: 0 },
-  },
-  torque: { engineTorqueNm: 250, firstGearRatio: 3.06, converterStallRatio: 1.8 },
-  speed: { maxShaftRpm: 4000 },
+  ...truckDesign,
   slip: { collapsedLengthMm: 1298.8, travelMm: 90, droopExtensionMm: 40, bumpCompressionMm: 15 },
 };
 

@@ -1,18 +1,12 @@
 import { expect, test, type APIRequestContext } from "@playwright/test";
+import { truckDesign } from "../driveline/fixtures";
 import { ACCOUNTS, signIn } from "./fixtures";
 
 // Demo design (invented): a slip yoke on a 27-spline 1.25 in output, a 4-bolt companion flange at the pinion.
 const design = {
   name: "Fittings journey truck",
-  lengthMm: 1320.8,
+  ...truckDesign,
   tube: { materialId: "steel-dom", odMm: 101.6, wallMm: 2.108 },
-  geometry: {
-    transmission: { verticalDeg: 3, horizontalDeg: 0 },
-    driveshaft: { verticalDeg: 5, horizontalDeg: 0 },
-    pinion: { verticalDeg: 3, horizontalDeg: 0 },
-  },
-  torque: { engineTorqueNm: 250, firstGearRatio: 3.06, converterStallRatio: 1.8 },
-  speed: { maxShaftRpm: 4000 },
   slip: { collapsedLengthMm: 1298.8, travelMm: 90, droopExtensionMm: 40 },
   interface: {
     transmissionOutput: { splineCount: 27, majorDiameterMm: 31.75 },

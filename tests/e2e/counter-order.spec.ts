@@ -1,13 +1,5 @@
-import { expect, test, type Page } from "@playwright/test";
-import { ACCOUNTS, signIn } from "./fixtures";
-
-async function payOnCheckoutPage(page: Page, card = "4242 4242 4242 4242") {
-  await expect(page).toHaveURL(/127\.0\.0\.1:\d+\/pay\/cs_/);
-  await page.getByLabel("Card number").fill(card);
-  await page.getByLabel("Expiry (MM/YY)").fill("12/34");
-  await page.getByLabel("CVC").fill("123");
-  await page.getByRole("button", { name: /^Pay / }).click();
-}
+import { expect, test } from "@playwright/test";
+import { ACCOUNTS, signIn, payOnCheckoutPage } from "./fixtures";
 
 test("the counter enters a phone order for a new customer, takes the deposit, and the owner refunds part of it", async ({
   page,

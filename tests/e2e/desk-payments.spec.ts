@@ -1,15 +1,7 @@
-import { expect, test, type Page } from "@playwright/test";
-import { ACCOUNTS, customerOrder, mailTo, signIn } from "./fixtures";
+import { expect, test } from "@playwright/test";
+import { ACCOUNTS, customerOrder, mailTo, payOnCheckoutPage, signIn } from "./fixtures";
 
 // The counter's money on the desk order page, against the local Stripe and mail fakes.
-async function payOnCheckoutPage(page: Page, card = "4242 4242 4242 4242") {
-  await expect(page).toHaveURL(/127\.0\.0\.1:\d+\/pay\/cs_/);
-  await page.getByLabel("Card number").fill(card);
-  await page.getByLabel("Expiry (MM/YY)").fill("12/34");
-  await page.getByLabel("CVC").fill("123");
-  await page.getByRole("button", { name: /^Pay / }).click();
-}
-
 test("the counter e-mails a payment link that the customer pays; records a terminal payment on another order; the owner cancels it with a refund", async ({
   page,
   browser,

@@ -1,28 +1,9 @@
 /** The floor's helpers for browser tests: traveller codes read back as a scanner would, scanning, recording. */
-import { execFileSync } from "node:child_process";
-import { mkdtempSync, readdirSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
-import path from "node:path";
-import { expect, type APIRequestContext, type Page } from "@playwright/test";
+import { expect, type APIRequestContext, type Browser, type Page } from "@playwright/test";
+import { ACCOUNTS, payOnCheckoutPage, signIn } from "./fixtures";
+import { readCodes } from "../setup/scan-pdf";
 
-/** Every symbol on every page of a PDF, read by zbarimg from a 300 dpi render (as a scanner would). */
-export function readCodes(pdf: Buffer): string[] {
-  const work = mkdtempSync(path.join(tmpdir(), "traveller-e2e-"));
-  const file = path.join(work, "t.pdf");
-  writeFileSync(file, pdf);
-  execFileSync("pdftoppm", ["-r", "300", "-gray", "-png", file, path.join(work, "p")]);
-  const codes: string[] = [];
-  for (const png of readdirSync(work).filter((f) => f.endsWith(".png"))) {
-    const out = execFileSync("zbarimg", ["-q", path.join(work, png)], { encoding: "utf8" });
-    codes.push(
-      ...out
-        .split("\n")
-        .filter(Boolean)
-        .map((l) => l.replace(/^[^:]+:/, "")),
-    );
-  }
-  return codes;
-}
+export { readCodes };
 
 export async function traveller(request: APIRequestContext, orderId: string): Promise<string[]> {
   const res = await request.get(`/desk/orders/${orderId}/traveller`);
@@ -79,4 +60,36 @@ export async function fillStep(page: Page, code: string, override: Record<string
 export async function record(page: Page, code: string, override: Record<string, string> = {}) {
   await fillStep(page, code, override);
   await page.getByRole("button", { name: /^Submit/ }).click();
+}
+
+/** Pays the order just placed on the checkout page; back on the order, returns its id. */
+export async function payAndConfirm(page: Page): Promise<string> {
+  await payOnCheckoutPage(page);
+  await expect(page.getByText("Payment received")).toBeVisible({ timeout: 30_000 });
+  return new URL(page.url()).pathname.split("/").pop()!;
+}
+
+/**
+ * The counter (in a browser of their own) releases the order, unless the paid deposit already
+ * did, and prints its traveller: its serial and every code read back from the PDF.
+ */
+export async function releaseAndPrint(browser: Browser, orderId: string) {
+  const desk = await (await browser.newContext()).newPage();
+  await signIn(desk, ACCOUNTS.counter);
+  await desk.goto(`/desk/orders/${orderId}`);
+  const floorBox = desk.getByRole("region", { name: "Shop floor" });
+  await expect(floorBox).toBeVisible();
+  const release = floorBox.getByRole("button", { name: "Release to the shop" });
+  if (await release.isVisible()) await release.click();
+  await expect(floorBox.getByRole("link", { name: "Print traveller" })).toBeVisible();
+  const serial = (await floorBox.locator("a.font-mono").first().textContent())!.trim();
+  return { desk, floorBox, serial, printed: await traveller(desk.request, orderId) };
+}
+
+/** The floor's scan station in a browser of its own. */
+export async function floorStation(browser: Browser): Promise<Page> {
+  const floor = await (await browser.newContext()).newPage();
+  await signIn(floor, ACCOUNTS.floor);
+  await expect(floor).toHaveURL(/\/floor$/);
+  return floor;
 }

@@ -1,5 +1,5 @@
 import { expect, test, type Page } from "@playwright/test";
-import { mailTo } from "./fixtures";
+import { mailTo, payOnCheckoutPage } from "./fixtures";
 
 // The issue's acceptance journey, end to end in Chromium, against the local Stripe and mail fakes.
 // A 1×1 PNG (the smallest valid image; demo data).
@@ -60,16 +60,9 @@ test("a new customer designs a shaft, fixes it, uploads a photo, pays a deposit 
   await page.getByRole("button", { name: /Place order and pay/ }).click();
 
   // The local Stripe fake's hosted checkout: a declined card first, then the success card.
-  await expect(page).toHaveURL(/127\.0\.0\.1:\d+\/pay\/cs_/);
-  await page.getByLabel("Card number").fill("4000 0000 0000 0002");
-  await page.getByLabel("Expiry (MM/YY)").fill("12/34");
-  await page.getByLabel("CVC").fill("123");
-  await page.getByRole("button", { name: /^Pay / }).click();
+  await payOnCheckoutPage(page, "4000 0000 0000 0002");
   await expect(page.getByText("The bank turned this card down.")).toBeVisible();
-  await page.getByLabel("Card number").fill("4242 4242 4242 4242");
-  await page.getByLabel("Expiry (MM/YY)").fill("12/34");
-  await page.getByLabel("CVC").fill("123");
-  await page.getByRole("button", { name: /^Pay / }).click();
+  await payOnCheckoutPage(page);
 
   // Back on the order: confirmed by the webhook, shown as paid.
   await expect(page).toHaveURL(/\/orders\/[0-9a-f-]{36}\?paid=cs_/);

@@ -1,74 +1,11 @@
-import { execFileSync } from "node:child_process";
-import { mkdtempSync, readdirSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
-import path from "node:path";
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test } from "@playwright/test";
 import { ACCOUNTS, signIn } from "./fixtures";
+import { readCodes, record, scan } from "./floor-helpers";
 
 // Issue 10's re-tube journey: the counter quotes a re-tube of a walk-in customer's shaft (weld-to-
 // weld, the parts reused, priced without them and with the teardown line), places and releases it;
 // the traveller starts with teardown and inspection; the floor scans every step — a reused joint
 // fails inspection, is replaced and passes as rework — through to pickup.
-
-/** Every Code 128 and QR code on every page of a PDF, read by zbarimg from a 300 dpi render. */
-function readCodes(pdf: Buffer): string[] {
-  const work = mkdtempSync(path.join(tmpdir(), "retube-e2e-"));
-  const file = path.join(work, "t.pdf");
-  writeFileSync(file, pdf);
-  execFileSync("pdftoppm", ["-r", "300", "-gray", "-png", file, path.join(work, "p")]);
-  return readdirSync(work)
-    .filter((f) => f.endsWith(".png"))
-    .flatMap((png) =>
-      execFileSync("zbarimg", ["-q", path.join(work, png)], { encoding: "utf8" })
-        .split("\n")
-        .filter(Boolean)
-        .map((l) => l.replace(/^[^:]+:/, "")),
-    );
-}
-
-interface Field {
-  key: string;
-  label: string;
-  type: string;
-  unit: string | null;
-  limit: string | null;
-}
-
-/** A value inside a limit as the station shows it ("46.803 in ± 0.031 in", "at most 0.0100 in"). */
-function inside(limit: string | null): string {
-  const tol = /^(-?[\d.]+)\S* ?\S* ± /.exec(limit ?? "");
-  if (tol) return tol[1]!;
-  const max = /^at most ([\d.]+)/.exec(limit ?? "");
-  if (max) return String(Number(max[1]) / 2);
-  return "2500"; // the balancing speed: "at least 1 rpm"
-}
-
-async function scan(page: Page, code: string) {
-  const input = page.getByLabel("Scan a traveller barcode or a serial");
-  await expect(input).toBeFocused();
-  await input.pressSequentially(code, { delay: 5 });
-  await input.press("Enter");
-}
-
-/** Fills the open step's form with in-limit values (or `override`s) and submits it. */
-async function record(page: Page, code: string, override: Record<string, string> = {}) {
-  const res = await page.request.get(`/api/floor/scan?code=${encodeURIComponent(code)}`);
-  const { step } = (await res.json()) as { step: { fields: Field[] } };
-  for (const f of step.fields) {
-    const value = override[f.key];
-    if (f.type === "number") {
-      await page.getByLabel(`${f.label} (${f.unit})`, { exact: true }).fill(value ?? inside(f.limit));
-    } else if (f.type === "text") {
-      await page.getByLabel(f.label, { exact: true }).fill(value ?? `${f.key} as expected`);
-    } else if (f.type === "confirm") {
-      await page
-        .getByRole("group", { name: f.label })
-        .getByLabel(value === "no" ? "No" : "Yes")
-        .check();
-    }
-  }
-  await page.getByRole("button", { name: /^Submit/ }).click();
-}
 
 test("a re-tube goes from the counter's quote through teardown, inspection and the floor to pickup", async ({
   page,

@@ -1,5 +1,5 @@
 import { expect, test } from "@playwright/test";
-import { ACCOUNTS, signIn } from "./fixtures";
+import { ACCOUNTS, signInWithForm } from "./fixtures";
 
 const HOMES = [
   {
@@ -22,7 +22,7 @@ for (const home of HOMES) {
   test(`${home.role} signs in, lands on their home with their navigation, and signs out`, async ({
     page,
   }) => {
-    await signIn(page, ACCOUNTS[home.role]);
+    await signInWithForm(page, ACCOUNTS[home.role]);
     await expect(page).toHaveURL(home.path);
     await expect(page.getByRole("heading", { level: 1, name: home.heading })).toBeVisible();
     const nav = page.getByRole("navigation", { name: "Main" }).first();

@@ -1,6 +1,6 @@
 import { expect, test } from "@playwright/test";
 import { ACCOUNTS, mailTo, signIn } from "./fixtures";
-import { record, scan, traveller } from "./floor-helpers";
+import { floorStation, payAndConfirm, record, releaseAndPrint, scan, traveller } from "./floor-helpers";
 
 // The shop floor issue's "Done when" journey: a paid order is released at the desk, its traveller
 // PDF's codes are read back from the rendered page, the floor signs off every step by "scanning"
@@ -23,27 +23,12 @@ test("a paid order goes through the shop: release, traveller, scans, a hold and 
   await page.getByLabel("Ship it").check();
   await page.getByLabel("Shipping address").fill("12 Prairie Road\nHutchinson KS 67501");
   await page.getByRole("button", { name: /Place order and pay/ }).click();
-  await expect(page).toHaveURL(/127\.0\.0\.1:\d+\/pay\/cs_/);
-  await page.getByLabel("Card number").fill("4242 4242 4242 4242");
-  await page.getByLabel("Expiry (MM/YY)").fill("12/34");
-  await page.getByLabel("CVC").fill("123");
-  await page.getByRole("button", { name: /^Pay / }).click();
-  await expect(page.getByText("Payment received")).toBeVisible({ timeout: 30_000 });
-  const orderId = new URL(page.url()).pathname.split("/").pop()!;
+  const orderId = await payAndConfirm(page);
 
   // The counter releases it (unless the deposit already did) and prints the traveller.
-  const desk = await (await browser.newContext()).newPage();
-  await signIn(desk, ACCOUNTS.counter);
-  await desk.goto(`/desk/orders/${orderId}`);
-  const floorBox = desk.getByRole("region", { name: "Shop floor" });
-  await expect(floorBox).toBeVisible();
-  const release = floorBox.getByRole("button", { name: "Release to the shop" });
-  if (await release.isVisible()) await release.click();
-  await expect(floorBox.getByRole("link", { name: "Print traveller" })).toBeVisible();
-  const serial = (await floorBox.locator("a.font-mono").first().textContent())!.trim();
+  const { desk, floorBox, serial, printed } = await releaseAndPrint(browser, orderId);
   expect(serial).toMatch(/^[A-Z]{2,4}-\d{2}-\d{5}-[0-9A-Z]$/);
 
-  const printed = await traveller(desk.request, orderId);
   const steps = ["CUT", "WLD", "RUN", "BAL", "FIN", "SHP"];
   // A Code 128 per step (serial, step, revision, check character) and the serial's QR code.
   expect(printed).toContain(serial);
@@ -62,9 +47,7 @@ test("a paid order goes through the shop: release, traveller, scans, a hold and 
   for (const s of steps) expect(codeOf(s)).toBeTruthy();
 
   // The floor: scans are typed into the one input, which always has focus.
-  const floor = await (await browser.newContext()).newPage();
-  await signIn(floor, ACCOUNTS.floor);
-  await expect(floor).toHaveURL(/\/floor$/);
+  const floor = await floorStation(browser);
 
   // A void traveller's code is refused with a clear message; a mistyped code too.
   await scan(

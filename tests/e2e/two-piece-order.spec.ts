@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import { expect, test } from "@playwright/test";
 import { ACCOUNTS, signIn } from "./fixtures";
-import { record, scan, traveller } from "./floor-helpers";
+import { floorStation, payAndConfirm, record, releaseAndPrint, scan } from "./floor-helpers";
 
 // Issue 10's "Done when": a two-piece shaft goes from quote through the floor. The customer saves a
 // two-piece design (through the builder's own API: the builder has no two-piece control of its own
@@ -35,32 +35,15 @@ test("a two-piece shaft from quote through the floor", async ({ page, browser })
   await expect(main.getByText("Dynamic balance, each piece")).toBeVisible();
   await page.getByLabel("Pick up at the shop").check();
   await page.getByRole("button", { name: /Place order and pay/ }).click();
-  await expect(page).toHaveURL(/127\.0\.0\.1:\d+\/pay\/cs_/);
-  await page.getByLabel("Card number").fill("4242 4242 4242 4242");
-  await page.getByLabel("Expiry (MM/YY)").fill("12/34");
-  await page.getByLabel("CVC").fill("123");
-  await page.getByRole("button", { name: /^Pay / }).click();
-  await expect(page.getByText("Payment received")).toBeVisible({ timeout: 30_000 });
-  const orderId = new URL(page.url()).pathname.split("/").pop()!;
+  const orderId = await payAndConfirm(page);
 
   // The counter releases it (unless the paid deposit already did) and prints the traveller.
-  const desk = await (await browser.newContext()).newPage();
-  await signIn(desk, ACCOUNTS.counter);
-  await desk.goto(`/desk/orders/${orderId}`);
-  const floorBox = desk.getByRole("region", { name: "Shop floor" });
-  await expect(floorBox).toBeVisible();
-  const release = floorBox.getByRole("button", { name: "Release to the shop" });
-  if (await release.isVisible()) await release.click();
-  await expect(floorBox.getByRole("link", { name: "Print traveller" })).toBeVisible();
-  const serial = (await floorBox.locator("a.font-mono").first().textContent())!.trim();
-  const printed = await traveller(desk.request, orderId);
+  const { serial, printed } = await releaseAndPrint(browser, orderId);
   const codeOf = (s: string) => printed.find((c) => c.startsWith(`${serial}-${s}-R1-`))!;
   for (const s of STEPS) expect(codeOf(s), `code ${s} on the traveller`).toBeTruthy();
 
   // The floor scans and records each piece's steps, then the assembly, inspection and pickup.
-  const floor = await (await browser.newContext()).newPage();
-  await signIn(floor, ACCOUNTS.floor);
-  await expect(floor).toHaveURL(/\/floor$/);
+  const floor = await floorStation(browser);
   for (const s of STEPS.slice(0, -1)) {
     await scan(floor, codeOf(s));
     await record(floor, codeOf(s));

@@ -10,6 +10,7 @@ import { fromSi } from "@/lib/traveller/units";
 import { dbTest } from "../setup/db";
 import { newCustomer, saveDesign } from "../setup/orders";
 import { code, key, staff } from "./helpers";
+import { TWO_PIECE_STEP_CODES } from "../traveller/fixtures";
 
 const twoPieceVan = JSON.parse(readFileSync("examples/two-piece-van.json", "utf8")) as Record<
   string,
@@ -78,19 +79,7 @@ describe("a two-piece shaft through the shop", () => {
       const em = (await getEm()).fork();
       const wo = await em.findOneOrFail(WorkOrder, { serial });
       const steps = await em.find(WorkOrderStep, { workOrder: wo.id }, { orderBy: { position: "asc" } });
-      expect(steps.map((s) => s.code)).toEqual([
-        "CUA",
-        "CUB",
-        "WLA",
-        "WLB",
-        "RUA",
-        "RUB",
-        "BAA",
-        "BAB",
-        "ASM",
-        "FIN",
-        "SHP",
-      ]);
+      expect(steps.map((s) => s.code)).toEqual(TWO_PIECE_STEP_CODES);
       const spec = (c: string) => steps.find((s) => s.code === c)!.spec;
 
       // Piece A's cut: in limit.

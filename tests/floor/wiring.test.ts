@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect } from "vitest";
+import { describe, expect } from "vitest";
 import { AuditEvent, EmailMessage, Order, OrderEvent, OrderShaft, Payment, WorkOrder } from "@/entities";
 import type { CurrentUser } from "@/lib/auth/guard";
 import { getEm } from "@/lib/db/orm";
@@ -7,14 +7,10 @@ import { startCheckout } from "@/lib/orders/payments";
 import { placeOrder } from "@/lib/orders/place-order";
 import { orderView, populateOrder } from "@/lib/orders/queries";
 import { dbTest } from "../setup/db";
-import { newCustomer, payWithCard, saveDesign, startPaymentsHarness } from "../setup/orders";
+import { newCustomer, payWithCard, paymentsHarnessForFile, saveDesign } from "../setup/orders";
 import { code, good, key, staff } from "./helpers";
 
-let harness: Awaited<ReturnType<typeof startPaymentsHarness>>;
-beforeAll(async () => {
-  harness = await startPaymentsHarness();
-});
-afterAll(async () => harness?.close());
+const harness = paymentsHarnessForFile();
 
 async function placed(fulfilment: "ship" | "pickup" = "ship") {
   const { user, customer } = await newCustomer();

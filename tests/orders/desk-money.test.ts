@@ -11,7 +11,6 @@ import {
   WorkOrder,
 } from "@/entities";
 import { getEm } from "@/lib/db/orm";
-import { placeOrder } from "@/lib/orders/place-order";
 import { refundPayment, sendPaymentLink, startCheckout } from "@/lib/orders/payments";
 import { recordCounterPayment } from "@/lib/orders/counter-payment";
 import { cancelOrder, cancellationQuote } from "@/lib/orders/cancel";
@@ -23,7 +22,7 @@ import { defaultCatalogue } from "@/lib/driveline";
 import { defaultPriceBook } from "@/lib/pricing/price-book";
 import { formatStepCode } from "@/lib/traveller/codes";
 import { dbTest, requireDatabase } from "../setup/db";
-import { newCustomer, payWithCard, saveDesign, startPaymentsHarness } from "../setup/orders";
+import { payWithCard, placedOrder, reloadOrder, startPaymentsHarness } from "../setup/orders";
 import { staff } from "../floor/helpers";
 
 // Demo data: the invented shop keeps 10 % of the deposit when an order is cancelled before release.
@@ -51,18 +50,6 @@ afterAll(async () => {
   await harness?.close();
 });
 
-async function placedOrder() {
-  const { user, customer } = await newCustomer();
-  const design = await saveDesign(customer, user.id);
-  const order = await placeOrder(user, { designIds: [design.id], fulfilment: "pickup" });
-  return { user, customer, order };
-}
-
-async function reload(orderId: string) {
-  const em = await getEm();
-  return em.findOneOrFail(Order, { id: orderId }, { populate: ["payments", "events"], refresh: true });
-}
-
 const released = async (orderId: string) => (await getEm()).count(WorkOrder, { order: orderId });
 
 describe("payments taken at the counter", () => {
@@ -88,7 +75,7 @@ describe("payments taken at the counter", () => {
         checkoutSessionId: null,
       });
 
-      const after = await reload(order.id);
+      const after = await reloadOrder(order.id);
       expect(after.paidCents).toBe(order.depositCents);
       expect(after.paymentState).toBe("deposit_paid");
       expect(after.status).toBe("in_shop"); // deposit met: released through the floor hooks
@@ -137,7 +124,7 @@ describe("payments taken at the counter", () => {
     });
     expect(balance.kind).toBe("balance");
     expect(balance.amountCents).toBe(order.totalCents - order.depositCents);
-    const after = await reload(order.id);
+    const after = await reloadOrder(order.id);
     expect(after.paidCents).toBe(order.totalCents);
     expect(after.paymentState).toBe("paid");
   });
@@ -148,7 +135,7 @@ describe("payments taken at the counter", () => {
     await expect(
       recordCounterPayment(counter, { orderId: order.id, method: "cash", amountCents: order.totalCents + 1 }),
     ).rejects.toMatchObject({ code: "invalid", fields: { amountCents: expect.stringContaining("At most") } });
-    const after = await reload(order.id);
+    const after = await reloadOrder(order.id);
     expect(after.paidCents).toBe(0);
     expect(after.payments).toHaveLength(0);
     expect(await released(order.id)).toBe(0);
@@ -181,7 +168,7 @@ describe("payments taken at the counter", () => {
         reason: "Overcharged for pickup",
         method: "cash",
       });
-      const after = await reload(order.id);
+      const after = await reloadOrder(order.id);
       expect(after.refundedCents).toBe(500);
       expect(after.paymentState).toBe("partially_refunded");
     },
@@ -214,7 +201,7 @@ describe("cancelling an order", () => {
 
       const result = await cancelOrder(counter, { orderId: order.id, reason: "Customer sold the truck" });
       expect(result).toEqual({ refundCents: paidCents - feeCents, feeCents });
-      const after = await reload(order.id);
+      const after = await reloadOrder(order.id);
       expect(after.status).toBe("cancelled");
       expect(after.cancelReason).toBe("Customer sold the truck");
       expect(after.refundedCents).toBe(paidCents - feeCents);
@@ -257,7 +244,7 @@ describe("cancelling an order", () => {
           message: expect.stringContaining("only an owner"),
         },
       );
-      expect((await reload(order.id)).status).toBe("in_shop");
+      expect((await reloadOrder(order.id)).status).toBe("in_shop");
 
       const feeCents = Math.round((order.depositCents * FEE_PERCENT) / 100);
       const result = await cancelOrder(owner, { orderId: order.id, reason: "Vehicle written off" });
@@ -276,7 +263,7 @@ describe("cancelling an order", () => {
       const paid = await em.findOneOrFail(Payment, { id: checkout.id }, { refresh: true });
       const atProvider = await stripe.refunds.list({ payment_intent: paid.paymentIntentId! });
       expect(atProvider.data.map((r) => r.amount)).toEqual([order.depositCents - feeCents]);
-      expect((await reload(order.id)).refundedCents).toBe(order.depositCents - feeCents);
+      expect((await reloadOrder(order.id)).refundedCents).toBe(order.depositCents - feeCents);
 
       const [wo] = await em.find(WorkOrder, { order: order.id }, { refresh: true });
       expect(wo!.voidedAt).toBeInstanceOf(Date);
@@ -322,7 +309,7 @@ describe("the payment link", () => {
 
       await payWithCard(harness.fake, payment.checkoutSessionId, "4242424242424242");
       await harness.fake.idle(10_000);
-      const after = await reload(order.id);
+      const after = await reloadOrder(order.id);
       expect(after.paidCents).toBe(order.depositCents);
       expect(after.paymentState).toBe("deposit_paid");
     },

@@ -6,7 +6,6 @@ import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, vi } from "vitest";
 import { AuditEvent, Order, OrderShaft, ShopConfig, WorkOrder } from "@/entities";
 import { getEm } from "@/lib/db/orm";
-import { placeOrder } from "@/lib/orders/place-order";
 import { sendPaymentLink, startCheckout } from "@/lib/orders/payments";
 import { recordCounterPayment } from "@/lib/orders/counter-payment";
 import { acceptFailedCheck, needsSignoff } from "@/lib/orders/engineering-signoff";
@@ -23,7 +22,7 @@ import { sendPaymentLinkAction } from "@/lib/actions/send-payment-link";
 import { createStaffUser } from "@/lib/users/staff";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
 import { dbTest, requireDatabase } from "../setup/db";
-import { newCustomer, saveDesign, startPaymentsHarness } from "../setup/orders";
+import { placedOrder, startPaymentsHarness } from "../setup/orders";
 import { exampleReport } from "../traveller/fixtures";
 import { staff } from "../floor/helpers";
 
@@ -56,13 +55,6 @@ afterAll(async () => harness?.close());
 
 async function signIn(email: string) {
   return sessionCookie(await authRequest("/sign-in/email", { email, password: PASSWORD }));
-}
-
-async function placedOrder() {
-  const { user, customer } = await newCustomer();
-  const design = await saveDesign(customer, user.id);
-  const order = await placeOrder(user, { designIds: [design.id], fulfilment: "pickup" });
-  return { user, customer, order };
 }
 
 /**

@@ -1,8 +1,7 @@
-import { afterAll, beforeAll, describe, expect } from "vitest";
+import { describe, expect } from "vitest";
 import { NextRequest } from "next/server";
 import { AuditEvent, Order, OrderEvent, Payment, Refund } from "@/entities";
 import { getEm, inTransaction } from "@/lib/db/orm";
-import { placeOrder } from "@/lib/orders/place-order";
 import { requestBalance, startCheckout } from "@/lib/orders/payments";
 import { payments } from "@/lib/payments";
 import { POST as checkoutPost } from "@/app/api/orders/[id]/checkout/route";
@@ -10,25 +9,9 @@ import { createStaffUser } from "@/lib/users/staff";
 import type { Role } from "@/lib/auth/roles";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
 import { dbTest } from "../setup/db";
-import { newCustomer, payWithCard, saveDesign, startPaymentsHarness } from "../setup/orders";
+import { newCustomer, payWithCard, paymentsHarnessForFile, placedOrder, reloadOrder } from "../setup/orders";
 
-let harness: Awaited<ReturnType<typeof startPaymentsHarness>>;
-beforeAll(async () => {
-  harness = await startPaymentsHarness();
-});
-afterAll(async () => harness?.close());
-
-async function placedOrder() {
-  const { user, customer } = await newCustomer();
-  const design = await saveDesign(customer, user.id);
-  const order = await placeOrder(user, { designIds: [design.id], fulfilment: "pickup" });
-  return { user, customer, order };
-}
-
-async function reload(orderId: string) {
-  const em = await getEm();
-  return em.findOneOrFail(Order, { id: orderId }, { populate: ["payments", "events"] });
-}
+const harness = paymentsHarnessForFile();
 
 async function staff(role: Exclude<Role, "customer">) {
   const email = uniqueEmail(role);
@@ -110,7 +93,7 @@ describe("at most one open checkout per order", () => {
     });
     // The deposit checkout is untouched and still the only one.
     expect(await sessionStatus(deposit.checkoutSessionId!)).toBe("open");
-    expect((await reload(order.id)).payments.getItems().map((p) => p.status)).toEqual(["open"]);
+    expect((await reloadOrder(order.id)).payments.getItems().map((p) => p.status)).toEqual(["open"]);
   });
 
   dbTest("asking for the balance expires the open deposit checkout at the provider", async () => {
@@ -143,7 +126,7 @@ describe("the webhook never credits more than is owed", () => {
       expect(balance.kind).toBe("balance");
       await payWithCard(harness.fake, balance.checkoutSessionId, "4242424242424242");
       await harness.fake.idle(10_000);
-      expect((await reload(order.id)).paymentState).toBe("paid");
+      expect((await reloadOrder(order.id)).paymentState).toBe("paid");
 
       // …and a stale session (made at the provider before these rules, never expired) is paid late.
       const em = await getEm();
@@ -174,7 +157,7 @@ describe("the webhook never credits more than is owed", () => {
       expect((await payWithCard(harness.fake, staleSession.id, "4242424242424242")).status).toBe(200);
       await harness.fake.idle(10_000);
 
-      const after = await reload(order.id);
+      const after = await reloadOrder(order.id);
       expect(after.paidCents).toBe(order.totalCents);
       expect(after.refundedCents).toBe(0); // the order never counted the excess as paid
       expect(after.paymentState).toBe("paid");
@@ -219,7 +202,7 @@ describe("the webhook never credits more than is owed", () => {
       // The customer still had the checkout page open and pays on it.
       await payWithCard(harness.fake, open.checkoutSessionId, "4242424242424242");
       await harness.fake.idle(10_000);
-      const after = await reload(order.id);
+      const after = await reloadOrder(order.id);
       expect(after.status).toBe("cancelled");
       expect(after.paidCents).toBe(0);
       expect(after.paymentState).toBe("unpaid");

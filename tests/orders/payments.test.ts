@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect } from "vitest";
+import { describe, expect } from "vitest";
 import Stripe from "stripe";
 import { EmailMessage, Order, OrderEvent, Payment, Refund, WebhookEvent } from "@/entities";
 import { getEm } from "@/lib/db/orm";
@@ -13,27 +13,13 @@ import {
   failingVan,
   newCustomer,
   payWithCard,
+  paymentsHarnessForFile,
+  placedOrder,
+  reloadOrder,
   saveDesign,
-  startPaymentsHarness,
 } from "../setup/orders";
 
-let harness: Awaited<ReturnType<typeof startPaymentsHarness>>;
-beforeAll(async () => {
-  harness = await startPaymentsHarness();
-});
-afterAll(async () => harness?.close());
-
-async function placedOrder() {
-  const { user, customer } = await newCustomer();
-  const design = await saveDesign(customer, user.id);
-  const order = await placeOrder(user, { designIds: [design.id], fulfilment: "pickup" });
-  return { user, customer, order };
-}
-
-async function reload(orderId: string) {
-  const em = await getEm();
-  return em.findOneOrFail(Order, { id: orderId }, { populate: ["payments", "events"] });
-}
+const harness = paymentsHarnessForFile();
 
 describe("paying an order through the local Stripe fake", () => {
   dbTest(
@@ -53,7 +39,7 @@ describe("paying an order through the local Stripe fake", () => {
       expect(paid.status).toBe(200);
       expect(await harness.fake.idle(10_000)).toBe(true);
 
-      const after = await reload(order.id);
+      const after = await reloadOrder(order.id);
       expect(after.status).toBe("in_shop"); // the deposit met the policy: released to the shop (lib/floor/hooks.ts)
       expect(after.paymentState).toBe("deposit_paid");
       expect(after.paidCents).toBe(order.depositCents);
@@ -80,7 +66,7 @@ describe("paying an order through the local Stripe fake", () => {
     expect(declined.status).toBe(402);
     await harness.fake.idle(10_000);
 
-    const after = await reload(order.id);
+    const after = await reloadOrder(order.id);
     expect(after.paymentState).toBe("unpaid");
     expect(after.paidCents).toBe(0);
     const row = after.payments.getItems()[0]!;
@@ -91,7 +77,7 @@ describe("paying an order through the local Stripe fake", () => {
     // …and a good card afterwards completes it.
     expect((await payWithCard(harness.fake, payment.checkoutSessionId, "4242424242424242")).status).toBe(200);
     await harness.fake.idle(10_000);
-    expect((await reload(order.id)).paymentState).toBe("deposit_paid");
+    expect((await reloadOrder(order.id)).paymentState).toBe("deposit_paid");
   });
 
   dbTest("a webhook with a tampered signature is refused and changes nothing", async () => {
@@ -122,7 +108,7 @@ describe("paying an order through the local Stripe fake", () => {
     }
     const em = await getEm();
     expect(await em.findOne(WebhookEvent, { id: "evt_tampered_1" })).toBeNull();
-    expect((await reload(order.id)).paymentState).toBe("unpaid");
+    expect((await reloadOrder(order.id)).paymentState).toBe("unpaid");
   });
 
   dbTest(

@@ -5,19 +5,16 @@
  * verified webhook route does.
  */
 import { randomUUID } from "node:crypto";
-import { afterAll, beforeAll, describe, expect } from "vitest";
+import { describe, expect } from "vitest";
 import { Order, OrderEvent, Payment } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 import { placeOrder } from "@/lib/orders/place-order";
 import { applyPaymentEvent, startCheckout } from "@/lib/orders/payments";
 import { dbTest } from "../setup/db";
-import { newCustomer, saveDesign, startPaymentsHarness } from "../setup/orders";
+import { newCustomer, paymentsHarnessForFile, saveDesign } from "../setup/orders";
 
-let harness: Awaited<ReturnType<typeof startPaymentsHarness>>;
-beforeAll(async () => {
-  harness = await startPaymentsHarness();
-});
-afterAll(async () => harness?.close());
+// Checkouts open at the Stripe fake.
+paymentsHarnessForFile();
 
 async function openCheckout() {
   const { user, customer } = await newCustomer();

@@ -1,54 +1,22 @@
-import { afterAll, beforeAll, describe, expect } from "vitest";
-import { NextRequest } from "next/server";
-import { Client } from "pg";
-import { POST } from "@/app/api/catalogue/versions/route";
+import { describe, expect } from "vitest";
 import { AuditEvent } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 import { currentShopConfig, SAVE_ACTION } from "@/lib/catalogue/versions";
 import { quoteDesigns } from "@/lib/orders/place-order";
 import { emptyIntake } from "@/lib/retube/intake";
-import { getShopEngineering, invalidateShopEngineering } from "@/lib/shop/config";
+import { getShopEngineering } from "@/lib/shop/config";
 import { createStaffUser } from "@/lib/users/staff";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
+import { keepShopConfig, postCatalogueVersion } from "../setup/shop-config";
 import { dbTest } from "../setup/db";
 import { streetTruck } from "../setup/orders";
 
 const PASSWORD = "a-long-password-1";
 
-const post = (body: unknown, cookie: string) =>
-  POST(
-    new NextRequest("http://127.0.0.1/api/catalogue/versions", {
-      method: "POST",
-      headers: { "content-type": "application/json", cookie },
-      body: JSON.stringify(body),
-    }),
-    { params: Promise.resolve({}) },
-  );
+const post = postCatalogueVersion;
 
 // This file changes the shop's price book: put the configuration back as it was for the files after it.
-let original: { rows: Record<string, unknown>[] } = { rows: [] };
-beforeAll(async () => {
-  const c = new Client({ connectionString: process.env.DATABASE_URL });
-  await c.connect();
-  original = await c.query("select * from shop_config");
-  await c.end();
-});
-afterAll(async () => {
-  const c = new Client({ connectionString: process.env.DATABASE_URL });
-  await c.connect();
-  await c.query("delete from shop_config_version");
-  await c.query("delete from shop_config");
-  for (const r of original.rows) {
-    await c.query(
-      "insert into shop_config (id, catalogue, settings, price_book, floor, version, updated_at) values ($1, $2, $3, $4, $5, $6, $7)",
-      [r.id, r.catalogue, r.settings, r.price_book, r.floor, r.version, r.updated_at].map((v) =>
-        typeof v === "object" && v !== null && !(v instanceof Date) ? JSON.stringify(v) : v,
-      ),
-    );
-  }
-  await c.end();
-  invalidateShopEngineering();
-});
+keepShopConfig();
 
 describe("the re-tube teardown line in the price book", () => {
   dbTest(

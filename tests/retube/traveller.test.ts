@@ -1,5 +1,5 @@
 import { execFileSync } from "node:child_process";
-import { mkdtempSync, readdirSync, rmSync, writeFileSync } from "node:fs";
+import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { afterAll, describe, expect, test } from "vitest";
@@ -8,6 +8,7 @@ import { parseStepCode } from "@/lib/traveller/codes";
 import { renderTraveller } from "@/lib/traveller/pdf";
 import { deriveSteps } from "@/lib/traveller/steps";
 import { buildTravellerView } from "@/lib/traveller/view";
+import { scanPdf } from "../setup/scan-pdf";
 import { exampleView } from "../traveller/fixtures";
 
 const work = process.env.KEEP_RETUBE_PDF ?? mkdtempSync(path.join(tmpdir(), "retube-pdf-"));
@@ -45,23 +46,10 @@ describe("re-tube traveller PDF", () => {
       const text = execFileSync("pdftotext", ["-raw", file, "-"], { encoding: "utf8" });
       expect(text).toMatch(/TRAVELLER · RE-TUBE/);
       expect(text).toMatch(/CUT LENGTH \(RE-TUBE: THE CUSTOMER'S WELD-TO-WELD\)\s+46\.803 in/);
-      execFileSync("pdftoppm", ["-r", "300", "-gray", "-png", file, path.join(work, "retube")]);
-      const pages = readdirSync(work)
-        .filter((f) => f.startsWith("retube-") && f.endsWith(".png"))
-        .sort();
-      const codes = pages.flatMap((png) => {
-        let out = "";
-        try {
-          out = execFileSync("zbarimg", ["-q", path.join(work, png)], { encoding: "utf8" });
-        } catch (error) {
-          out = (error as { stdout?: string }).stdout ?? ""; // zbarimg exits 4 when it finds nothing
-        }
-        return out
-          .trim()
-          .split("\n")
-          .filter((l) => l.startsWith("CODE-128:"))
-          .map((l) => l.slice(9));
-      });
+      const codes = scanPdf(pdf)
+        .flat()
+        .filter((l) => l.startsWith("CODE-128:"))
+        .map((l) => l.slice(9));
       expect(codes.sort()).toEqual(view.steps.map((s) => s.barcodeText).sort());
       expect(codes.map((c) => (parseStepCode(c) as { step: string }).step).sort()).toEqual(
         ["TDN", "INS", "CUT", "WLD", "RUN", "BAL", "FIN", "SHP"].sort(),

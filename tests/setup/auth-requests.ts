@@ -1,3 +1,4 @@
+import { createStaffUser } from "@/lib/users/staff";
 import { EmailMessage } from "@/entities";
 import { auth } from "@/lib/auth/server";
 import { CLIENT_ADDRESS_HEADER } from "@/lib/auth/client-address";
@@ -77,4 +78,14 @@ let counter = 0;
 export function uniqueEmail(prefix = "user"): string {
   counter += 1;
   return `${prefix}-${Date.now().toString(36)}-${counter}@test.example`;
+}
+
+/** A new staff member of `role`, signed in: their session cookie. */
+export async function staffCookie(
+  role: "owner" | "counter" | "floor",
+  name = `Test ${role}`,
+  password = "a-long-password-1",
+): Promise<string> {
+  const user = await createStaffUser({ name, email: uniqueEmail(role), role, password }, null);
+  return sessionCookie(await authRequest("/sign-in/email", { email: user.email, password }));
 }

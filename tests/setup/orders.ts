@@ -1,7 +1,9 @@
 import { readFileSync } from "node:fs";
 import { createServer, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
-import { Customer, Design, User } from "@/entities";
+import { afterAll, beforeAll } from "vitest";
+import { Customer, Design, Order, User } from "@/entities";
+import { placeOrder } from "@/lib/orders/place-order";
 import { getEm } from "@/lib/db/orm";
 import type { CurrentUser } from "@/lib/auth/guard";
 import { startStripeFake, type StripeFake } from "@/fakes/stripe/server";
@@ -110,4 +112,33 @@ export async function payWithCard(
     body: JSON.stringify({ card }),
   });
   return { status: res.status, body: await res.json() };
+}
+
+/**
+ * The payments harness for a whole test file: started before its tests, closed after them.
+ * `harness.fake` is the Stripe fake once the file's tests run.
+ */
+export function paymentsHarnessForFile(options: { duplicateDelivery?: boolean } = {}): { fake: StripeFake } {
+  const holder = {} as { fake: StripeFake };
+  let harness: Awaited<ReturnType<typeof startPaymentsHarness>> | undefined;
+  beforeAll(async () => {
+    harness = await startPaymentsHarness(options);
+    holder.fake = harness.fake;
+  });
+  afterAll(async () => harness?.close());
+  return holder;
+}
+
+/** A new customer's order of one saved shaft, for pickup, placed as the customer does online. */
+export async function placedOrder() {
+  const { user, customer } = await newCustomer();
+  const design = await saveDesign(customer, user.id);
+  const order = await placeOrder(user, { designIds: [design.id], fulfilment: "pickup" });
+  return { user, customer, order };
+}
+
+/** The order as it is in the database now, with its payments and events. */
+export async function reloadOrder(orderId: string): Promise<Order> {
+  const em = await getEm();
+  return em.findOneOrFail(Order, { id: orderId }, { populate: ["payments", "events"], refresh: true });
 }

@@ -3,15 +3,20 @@ import type { EntityManager } from "@mikro-orm/postgresql";
 import { Customer, Order, User } from "@/entities";
 
 /**
- * A minimal order for tests that need something to attach to: for the customer record of `userId`
- * (the one sign-up made, or a new one), or for a new customer without an account.
+ * A minimal counter order for tests that need something to attach to: for the customer `customerId`,
+ * the customer record of `userId` (the one sign-up made, or a new one), or a new customer without
+ * an account.
  */
 export async function createTestOrder(
   em: EntityManager,
-  options: { userId?: string; email?: string } = {},
+  options: { userId?: string; email?: string; customerId?: string } = {},
 ): Promise<Order> {
   const suffix = randomUUID().slice(0, 8);
-  const existing = options.userId ? await em.findOne(Customer, { user: options.userId }) : null;
+  const existing = options.customerId
+    ? em.getReference(Customer, options.customerId)
+    : options.userId
+      ? await em.findOne(Customer, { user: options.userId })
+      : null;
   const customer =
     existing ??
     em.create(Customer, {
@@ -35,6 +40,6 @@ export async function createTestOrder(
     createdAt: new Date(),
     updatedAt: new Date(),
   });
-  await em.persistAndFlush([customer, order]);
+  await em.persistAndFlush(existing ? [order] : [customer, order]);
   return order;
 }

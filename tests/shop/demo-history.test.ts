@@ -1,8 +1,7 @@
 import { afterAll, beforeAll, describe, expect } from "vitest";
 import { Client } from "pg";
 import { dbTest, requireDatabase } from "../setup/db";
-import { defaultCatalogue, resolveSettings } from "@/lib/driveline";
-import { defaultPriceBook } from "@/lib/pricing/price-book";
+import { defaultGeneration } from "./helpers";
 import { defaultFloorSettings } from "@/lib/traveller/settings";
 import { generateShop, insertCustomers, type GenerateResult } from "@/lib/demo/generate";
 import { DEMO_HISTORY_ORDERS, DEMO_HISTORY_SHAPE } from "@/lib/demo/history";
@@ -32,15 +31,7 @@ describe("the demo history", () => {
     made = await generateShop(db, {
       orders: DEMO_HISTORY_ORDERS,
       customers,
-      staff: { ownerId: null, counterId: null, floorId: null },
-      shop: {
-        catalogue: defaultCatalogue,
-        settings: resolveSettings({}),
-        settingOverrides: {},
-        version: 1,
-        priceBook: defaultPriceBook,
-        floor: defaultFloorSettings,
-      },
+      ...defaultGeneration,
       now,
       ...DEMO_HISTORY_SHAPE,
     });

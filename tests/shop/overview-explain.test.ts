@@ -1,8 +1,7 @@
 import { afterAll, beforeAll, describe, expect } from "vitest";
 import { Client } from "pg";
 import { dbTest, requireDatabase } from "../setup/db";
-import { defaultCatalogue, resolveSettings } from "@/lib/driveline";
-import { defaultPriceBook } from "@/lib/pricing/price-book";
+import { defaultGeneration } from "./helpers";
 import { defaultFloorSettings } from "@/lib/traveller/settings";
 import { generateShop, insertCustomers, type GenerateResult } from "@/lib/demo/generate";
 import { measuredStepAverages, overviewContext } from "@/lib/shop/overview";
@@ -39,15 +38,7 @@ describe("overview queries use their indexes", () => {
     made = await generateShop(db, {
       orders: ORDERS,
       customers,
-      staff: { ownerId: null, counterId: null, floorId: null },
-      shop: {
-        catalogue: defaultCatalogue,
-        settings: resolveSettings({}),
-        settingOverrides: {},
-        version: 1,
-        priceBook: defaultPriceBook,
-        floor: defaultFloorSettings,
-      },
+      ...defaultGeneration,
       now,
       weeks: 104,
       events: false,

@@ -34,3 +34,18 @@ export function exampleView(
     steps: deriveSteps({ report, fulfilment: "ship", floor }),
   });
 }
+
+/** A two-piece shaft's routing, in order: each piece's cut, weld/phase, runout and balance, then assembly, inspection, dispatch. */
+export const TWO_PIECE_STEP_CODES = [
+  "CUA",
+  "CUB",
+  "WLA",
+  "WLB",
+  "RUA",
+  "RUB",
+  "BAA",
+  "BAB",
+  "ASM",
+  "FIN",
+  "SHP",
+];

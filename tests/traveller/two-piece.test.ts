@@ -1,13 +1,10 @@
-import { execFileSync } from "node:child_process";
-import { mkdtempSync, readdirSync, rmSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
-import path from "node:path";
-import { afterAll, describe, expect, test } from "vitest";
+import { describe, expect, test } from "vitest";
 import { parseStepCode } from "@/lib/traveller/codes";
 import { renderTraveller } from "@/lib/traveller/pdf";
 import { defaultFloorSettings, resolveFloorSettings } from "@/lib/traveller/settings";
 import { deriveSteps, type FieldSpec, type StepSpec } from "@/lib/traveller/steps";
-import { exampleReport, exampleView } from "./fixtures";
+import { scanPdf } from "../setup/scan-pdf";
+import { exampleReport, exampleView, TWO_PIECE_STEP_CODES } from "./fixtures";
 
 const report = exampleReport("two-piece-van.json");
 const steps = deriveSteps({ report, fulfilment: "ship", floor: defaultFloorSettings });
@@ -18,19 +15,7 @@ const step = (code: string) => steps.find((s) => s.code === code);
 
 describe("a two-piece shaft's routing", () => {
   test("each piece has its own cut, weld/phase, runout and balance steps, then assembly, inspection, dispatch", () => {
-    expect(steps.map((s) => s.code)).toEqual([
-      "CUA",
-      "CUB",
-      "WLA",
-      "WLB",
-      "RUA",
-      "RUB",
-      "BAA",
-      "BAB",
-      "ASM",
-      "FIN",
-      "SHP",
-    ]);
+    expect(steps.map((s) => s.code)).toEqual(TWO_PIECE_STEP_CODES);
     expect(steps.map((s) => s.position)).toEqual([1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11]);
     expect(steps.filter((s) => s.piece === "A").map((s) => s.kind)).toEqual([
       "cut",
@@ -114,38 +99,13 @@ describe("a two-piece shaft's routing", () => {
   });
 });
 
-const work = mkdtempSync(path.join(tmpdir(), "traveller-two-piece-"));
-afterAll(() => rmSync(work, { recursive: true, force: true }));
-
-/** Each page at 300 dpi through pdftoppm, every symbol read back with zbarimg (as tests/traveller/pdf.test.ts). */
-function scan(pdf: Uint8Array): string[][] {
-  const file = path.join(work, "t.pdf");
-  writeFileSync(file, pdf);
-  execFileSync("pdftoppm", ["-r", "300", "-gray", "-png", file, path.join(work, "t")]);
-  return readdirSync(work)
-    .filter((f) => f.startsWith("t-") && f.endsWith(".png"))
-    .sort()
-    .map((png) => {
-      let out = "";
-      try {
-        out = execFileSync("zbarimg", ["-q", path.join(work, png)], {
-          encoding: "utf8",
-          stdio: ["ignore", "pipe", "ignore"],
-        });
-      } catch (error) {
-        out = (error as { stdout?: string }).stdout ?? ""; // exit 4: nothing found
-      }
-      return out.trim().split("\n").filter(Boolean).sort();
-    });
-}
-
 describe("a two-piece shaft's traveller PDF", () => {
   test(
     "a cover with the assembly steps, then one page per piece, every code scannable",
     { timeout: 90_000 },
     async () => {
       const view = exampleView({ file: "two-piece-van.json" });
-      const pages = scan(await renderTraveller(view));
+      const pages = scanPdf(await renderTraveller(view));
       expect(pages).toHaveLength(3);
       const codesOn = (page: string[] | undefined) =>
         (page ?? [])

@@ -4,7 +4,7 @@ import { History } from "lucide-react";
 import { requirePermission } from "@/lib/auth/guard";
 import { ORDER_STATUS_LABEL } from "@/lib/orders/labels";
 import { CHART_WEEKS, DEFAULT_STEP_HOURS, overviewActivity, overviewFigures } from "@/lib/shop/overview";
-import { AVERAGE_WINDOW_DAYS } from "@/lib/shop/overview";
+import { AVERAGE_WINDOW_DAYS, type OrderListItem } from "@/lib/shop/overview";
 import { formatMoney } from "@/lib/money";
 import { getShopLocale } from "@/lib/shop/locale";
 import { formatTimestamp, shopIsoDate } from "@/lib/dates";
@@ -189,42 +189,28 @@ export default async function OverviewPage() {
             ]}
           >
             {f.late.items.map((o) => (
-              <tr key={o.id}>
-                <td className={`${CELL} font-mono font-semibold`}>
-                  <Link href={`/desk/orders/${o.id}`}>{o.number}</Link>
-                </td>
-                <td className={CELL}>{o.customerName}</td>
-                <td className={CELL}>
-                  {ORDER_STATUS_LABEL[o.status as keyof typeof ORDER_STATUS_LABEL] ?? o.status}
-                </td>
-                <td className={`${CELL} whitespace-nowrap`}>
-                  {o.promisedDate} <span className="font-semibold text-fail">late</span>
-                </td>
-                <td className={CELL}>—</td>
-                <td className={`${CELL} text-right tabular-nums`}>{money(o.totalCents)}</td>
-              </tr>
+              <RiskRow
+                key={o.id}
+                order={o}
+                value={money(o.totalCents)}
+                mark={<span className="font-semibold text-fail">late</span>}
+              >
+                —
+              </RiskRow>
             ))}
             {f.atRisk.items.map((o) => (
-              <tr key={o.id}>
-                <td className={`${CELL} font-mono font-semibold`}>
-                  <Link href={`/desk/orders/${o.id}`}>{o.number}</Link>
-                </td>
-                <td className={CELL}>{o.customerName}</td>
-                <td className={CELL}>
-                  {ORDER_STATUS_LABEL[o.status as keyof typeof ORDER_STATUS_LABEL] ?? o.status}
-                </td>
-                <td className={`${CELL} whitespace-nowrap`}>
-                  {o.promisedDate} <span className="font-semibold text-warn">at risk</span>
-                </td>
-                <td className={`${CELL} whitespace-nowrap`}>
-                  {o.expectedDate}{" "}
-                  <span className="text-ink-muted">
-                    ({o.stepsLeft ? `${o.stepsLeft} step${o.stepsLeft === 1 ? "" : "s"}` : "not started"},{" "}
-                    {hours(o.remainingHours)})
-                  </span>
-                </td>
-                <td className={`${CELL} text-right tabular-nums`}>{money(o.totalCents)}</td>
-              </tr>
+              <RiskRow
+                key={o.id}
+                order={o}
+                value={money(o.totalCents)}
+                mark={<span className="font-semibold text-warn">at risk</span>}
+              >
+                {o.expectedDate}{" "}
+                <span className="text-ink-muted">
+                  ({o.stepsLeft ? `${o.stepsLeft} step${o.stepsLeft === 1 ? "" : "s"}` : "not started"},{" "}
+                  {hours(o.remainingHours)})
+                </span>
+              </RiskRow>
             ))}
           </TableCard>
         )}
@@ -345,5 +331,34 @@ export default async function OverviewPage() {
         )}
       </section>
     </>
+  );
+}
+
+/** A late or at-risk order: number, customer, state, promised date with its mark, when expected (`children`), value. */
+function RiskRow({
+  order: o,
+  value,
+  mark,
+  children,
+}: {
+  order: OrderListItem;
+  /** The order's total in the shop's currency. */
+  value: string;
+  mark: React.ReactNode;
+  children: React.ReactNode;
+}) {
+  return (
+    <tr>
+      <td className={`${CELL} font-mono font-semibold`}>
+        <Link href={`/desk/orders/${o.id}`}>{o.number}</Link>
+      </td>
+      <td className={CELL}>{o.customerName}</td>
+      <td className={CELL}>{ORDER_STATUS_LABEL[o.status as keyof typeof ORDER_STATUS_LABEL] ?? o.status}</td>
+      <td className={`${CELL} whitespace-nowrap`}>
+        {o.promisedDate} {mark}
+      </td>
+      <td className={`${CELL} whitespace-nowrap`}>{children}</td>
+      <td className={`${CELL} text-right tabular-nums`}>{value}</td>
+    </tr>
   );
 }

@@ -1,7 +1,7 @@
 "use client";
 import { ShopTime } from "@/components/shop-locale";
 import Link from "next/link";
-import { DataTable, type TableQueryState } from "@/components/data-table/data-table";
+import { DataTable, type TablePage } from "@/components/data-table/data-table";
 import { tableColumns } from "@/components/data-table/columns";
 import { InviteButton } from "@/components/customers/invite-button";
 import { CUSTOMER_COLUMNS, type CustomerTableRow } from "@/lib/tables/customers-spec";
@@ -30,28 +30,24 @@ const columns = tableColumns<CustomerTableRow>(CUSTOMER_COLUMNS, {
   last: (r) => <span className="whitespace-nowrap">{r.lastOrderOn ?? "—"}</span>,
 });
 
-export function CustomersTable(props: {
-  rows: CustomerTableRow[];
-  total: number;
-  query: TableQueryState;
-  filtered: boolean;
-}) {
+export function CustomersTable(props: TablePage<CustomerTableRow>) {
   return (
     <DataTable
       caption="Customers"
       columns={columns}
-      rows={props.rows}
-      total={props.total}
-      query={props.query}
+      page={props}
       defaults={{ sort: "created", dir: "desc" }}
       getRowId={(r) => r.id}
       exportHref="/api/exports/customers"
       empty={{
-        title: props.filtered ? "No customers match" : "No customers yet",
-        text: props.filtered
-          ? "Try part of the name, the phone number's digits, the e-mail or the company."
-          : "Customers appear here when they sign up online or the counter enters a phone order.",
-        filtered: props.filtered,
+        none: {
+          title: "No customers yet",
+          text: "Customers appear here when they sign up online or the counter enters a phone order.",
+        },
+        noMatch: {
+          title: "No customers match",
+          text: "Try part of the name, the phone number's digits, the e-mail or the company.",
+        },
       }}
     />
   );

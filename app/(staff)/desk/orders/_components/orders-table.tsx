@@ -1,6 +1,6 @@
 "use client";
 import Link from "next/link";
-import { DataTable, type TableQueryState } from "@/components/data-table/data-table";
+import { DataTable, type TablePage } from "@/components/data-table/data-table";
 import { tableColumns } from "@/components/data-table/columns";
 import { OrderStatusBadge, PaymentBadge } from "@/components/orders/status-badge";
 import { formatMoney } from "@/lib/money";
@@ -26,29 +26,19 @@ const columns = tableColumns<OrderTableRow>(ORDER_COLUMNS, {
   late: (r) => (r.late ? <span className="font-semibold text-fail">Late</span> : ""),
 });
 
-export function OrdersTable(props: {
-  rows: OrderTableRow[];
-  total: number;
-  query: TableQueryState;
-  filtered: boolean;
-}) {
+export function OrdersTable(props: TablePage<OrderTableRow>) {
   return (
     <DataTable
       caption="Orders"
       columns={columns}
-      rows={props.rows}
-      total={props.total}
-      query={props.query}
+      page={props}
       defaults={{ sort: "created", dir: "desc" }}
       getRowId={(r) => r.id}
       exportHref="/api/exports/orders"
       rowClassName={(r) => (r.late ? "bg-fail-soft/40" : undefined)}
       empty={{
-        title: props.filtered ? "No orders match these filters" : "No orders yet",
-        text: props.filtered
-          ? "Loosen a filter or clear them all to see more."
-          : "Orders placed online and by phone are listed here.",
-        filtered: props.filtered,
+        none: { title: "No orders yet", text: "Orders placed online and by phone are listed here." },
+        noMatch: { title: "No orders match these filters" },
       }}
     />
   );

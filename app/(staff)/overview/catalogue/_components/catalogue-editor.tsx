@@ -4,25 +4,25 @@ import { useRouter } from "next/navigation";
 import { FormProvider, useForm, useFormContext, useFormState, type FieldErrors } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Alert } from "@/components/ui/alert";
-import { describeChange, describePath } from "@/lib/catalogue/describe";
+import { describePath } from "@/lib/catalogue/describe";
 import { diffConfig, type ConfigChange } from "@/lib/catalogue/diff";
 import {
   shopConfigDocumentSchema,
   type ShopConfigDocument,
   type ShopConfigDocumentInput,
 } from "@/lib/catalogue/schemas";
+import { sendJson, useMutation } from "@/lib/browser/mutation";
+import { FloorSection, LimitsSection, PolicySection } from "./editor-sections";
 import {
+  CentreBearingsSection,
   FittingsSection,
-  FloorSection,
   JointsSection,
-  LimitsSection,
   MaterialsSection,
-  PolicySection,
   SlipYokesSection,
   TubesSection,
-} from "./editor-sections";
+} from "./catalogue-lists";
+import { ChangesTable } from "./changes-table";
 import type { Path } from "./editor-inputs";
-import { CentreBearingsSection } from "./centre-bearings-section";
 
 /** Every field message in the form's error tree, with its dotted path. */
 function flatten(errors: FieldErrors, prefix: string[] = []): { at: string[]; message: string }[] {
@@ -68,7 +68,6 @@ export function CatalogueEditor({
   const [pending, setPending] = useState<{ doc: ShopConfigDocument; changes: ConfigChange[] } | null>(null);
   const [note, setNote] = useState("");
   const [noteError, setNoteError] = useState<string | null>(null);
-  const [saving, setSaving] = useState(false);
   // Looked up when used (in handlers only): the confirmation dialog and the error summary.
   const dialog = {
     open: () => (document.getElementById(DIALOG_ID) as HTMLDialogElement | null)?.showModal(),
@@ -96,60 +95,44 @@ export function CatalogueEditor({
     () => setProblem(null),
   );
 
+  const send = useMutation((body: object) =>
+    sendJson<{ version: number }>("/api/catalogue/versions", { body }),
+  );
+  const saving = send.pending;
+
   async function save() {
     if (!pending) return;
     if (!note.trim()) {
       setNoteError("Say in a few words what changed and why.");
       return;
     }
-    setSaving(true);
-    try {
-      const res = await fetch("/api/catalogue/versions", {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ ...pending.doc, basedOnVersion: version, note: note.trim() }),
-      });
-      const body = (await res.json().catch(() => null)) as
-        | { version: number }
-        | { error: { code: string; message: string; fields?: Record<string, string> } }
-        | null;
-      if (res.status === 201 && body && "version" in body) {
-        dialog.close();
-        form.reset(pending.doc);
-        router.replace(`/overview/catalogue?saved=${body.version}`, { scroll: true });
-        router.refresh();
-        return;
-      }
-      const error =
-        body && "error" in body
-          ? body.error
-          : { code: "internal", message: "Something went wrong on our side." };
-      if (error.fields) {
-        for (const [path, message] of Object.entries(error.fields)) {
-          if (path === "note") setNoteError(message);
-          else setError(path as Path, { type: "server", message });
-        }
-        if (Object.keys(error.fields).some((p) => p !== "note")) dialog.close();
-      }
-      if (!error.fields || Object.keys(error.fields).some((p) => p !== "note")) {
-        dialog.close();
-        setProblem({
-          tone: "error",
-          title: res.status === 409 ? "Someone saved a newer version" : "Not saved",
-          text: error.message,
-        });
-        focusSummary();
-      }
-    } catch {
+    const result = await send.run({ ...pending.doc, basedOnVersion: version, note: note.trim() });
+    if (result.ok) {
       dialog.close();
-      setProblem({
-        tone: "error",
-        title: "Not saved",
-        text: "The shop's server could not be reached. Your changes are still here; try again in a moment.",
-      });
-    } finally {
-      setSaving(false);
+      form.reset(pending.doc);
+      router.replace(`/overview/catalogue?saved=${result.data.version}`, { scroll: true });
+      router.refresh();
+      return;
     }
+    const { error } = result;
+    if (error.code === "busy") return;
+    const fields = Object.entries(error.fields ?? {});
+    for (const [path, message] of fields) {
+      if (path === "note") setNoteError(message);
+      else setError(path as Path, { type: "server", message });
+    }
+    // A message about the note stays in the dialog; anything else is shown above the form.
+    if (fields.length > 0 && fields.every(([path]) => path === "note")) return;
+    dialog.close();
+    setProblem({
+      tone: "error",
+      title: error.code === "conflict" ? "Someone saved a newer version" : "Not saved",
+      text:
+        error.code === "unreachable"
+          ? "The shop's server could not be reached. Your changes are still here; try again in a moment."
+          : error.message,
+    });
+    focusSummary();
   }
 
   return (
@@ -173,7 +156,6 @@ export function CatalogueEditor({
         id={DIALOG_ID}
         aria-labelledby="confirm-title"
         className="m-auto w-[min(44rem,calc(100vw-2rem))] rounded-card border border-line bg-paper-raised p-0 shadow-card backdrop:bg-ink/40"
-        onClose={() => setSaving(false)}
       >
         {pending && (
           <div className="space-y-4 p-5">
@@ -185,38 +167,12 @@ export function CatalogueEditor({
               checks they were placed with.
             </p>
             <div className="max-h-72 overflow-y-auto rounded-md border border-line">
-              <table className="w-full text-left text-sm">
-                <caption className="sr-only">Changes in this version</caption>
-                <thead className="sticky top-0 bg-paper-sunk text-xs text-ink-muted uppercase">
-                  <tr>
-                    <th scope="col" className="px-3 py-2">
-                      Changed
-                    </th>
-                    <th scope="col" className="px-3 py-2">
-                      Before
-                    </th>
-                    <th scope="col" className="px-3 py-2">
-                      After
-                    </th>
-                  </tr>
-                </thead>
-                <tbody className="divide-y divide-line">
-                  {pending.changes.map((c) => {
-                    const w = describeChange(c, currency);
-                    return (
-                      <tr key={c.path}>
-                        <td className="px-3 py-1.5">{w.where}</td>
-                        <td className="px-3 py-1.5 text-ink-muted">
-                          {w.kind === "added" ? "(new)" : w.before}
-                        </td>
-                        <td className="px-3 py-1.5 font-medium">
-                          {w.kind === "removed" ? "(removed)" : w.after}
-                        </td>
-                      </tr>
-                    );
-                  })}
-                </tbody>
-              </table>
+              <ChangesTable
+                changes={pending.changes}
+                currency={currency}
+                caption="Changes in this version"
+                sticky
+              />
             </div>
             <div>
               <label htmlFor="version-note" className="field-label">

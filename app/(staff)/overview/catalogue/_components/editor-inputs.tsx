@@ -26,6 +26,57 @@ function FieldMessage({ id, error, hint }: { id: string; error?: string; hint?: 
   );
 }
 
+/**
+ * A form field's controller with what its box needs: an id, the accessible name (when the label is
+ * not shown), invalid state and the message it is described by.
+ */
+function useBox(name: Path, label: string, visibleLabel?: boolean, hint?: string) {
+  const { field, fieldState } = useController<ShopConfigDocumentInput>({ name });
+  const id = useId();
+  const error = fieldState.error?.message;
+  const box = {
+    id,
+    ref: field.ref,
+    name: field.name,
+    onBlur: field.onBlur,
+    "aria-label": visibleLabel ? undefined : label,
+    "aria-invalid": error ? true : undefined,
+    "aria-describedby": error ? `${id}-error` : hint ? `${id}-hint` : undefined,
+  } as const;
+  return { field, fieldState, id, error, box };
+}
+
+/** A box with its visible label (when asked) above and its message below. */
+function Labelled({
+  id,
+  label,
+  visibleLabel,
+  className,
+  error,
+  hint,
+  children,
+}: {
+  id: string;
+  label: string;
+  visibleLabel?: boolean;
+  className?: string;
+  error?: string;
+  hint?: string;
+  children: React.ReactNode;
+}) {
+  return (
+    <div className={className}>
+      {visibleLabel && (
+        <label htmlFor={id} className="field-label">
+          {label}
+        </label>
+      )}
+      {children}
+      <FieldMessage id={id} error={error} hint={hint} />
+    </div>
+  );
+}
+
 /** Up to 10 significant digits: 3 × 25.4 shows as 76.2, not 76.19999999999999. */
 const tidy = (n: number) => String(Number(n.toPrecision(10)));
 
@@ -72,11 +123,8 @@ export function NumberInput({
   visibleLabel,
   placeholder,
 }: NumberInputProps) {
-  const {
-    field: { ref, name: fieldName, value: fieldValue, onChange, onBlur },
-    fieldState,
-  } = useController<ShopConfigDocumentInput>({ name });
-  const id = useId();
+  const { field, error, box, id } = useBox(name, label, visibleLabel);
+  const fieldValue = field.value;
   const [text, setText] = useState(() => format(fieldValue, money));
   const [seen, setSeen] = useState<unknown>(fieldValue);
   if (!Object.is(seen, fieldValue)) {
@@ -84,17 +132,10 @@ export function NumberInput({
     setSeen(fieldValue);
     if (!Object.is(parse(text, money, empty), fieldValue)) setText(format(fieldValue, money));
   }
-  const error = fieldState.error?.message;
   const hintText =
     hint && typeof fieldValue === "number" && Number.isFinite(fieldValue) ? hint(fieldValue) : undefined;
-  const describedBy = error ? `${id}-error` : hintText ? `${id}-hint` : undefined;
   return (
-    <div className={className}>
-      {visibleLabel && (
-        <label htmlFor={id} className="field-label">
-          {label}
-        </label>
-      )}
+    <Labelled {...{ id, label, visibleLabel, className, error }} hint={hintText}>
       <div className="relative">
         {money && (
           <span className="pointer-events-none absolute top-1/2 left-2 -translate-y-1/2 text-sm text-ink-muted">
@@ -102,27 +143,21 @@ export function NumberInput({
           </span>
         )}
         <input
-          id={id}
-          ref={ref}
-          name={fieldName}
+          {...box}
+          aria-describedby={error ? `${id}-error` : hintText ? `${id}-hint` : undefined}
           type="text"
           inputMode="decimal"
           autoComplete="off"
-          aria-label={visibleLabel ? undefined : label}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={describedBy}
           className={`${CELL_INPUT} text-right ${money ? "pl-5" : ""}`}
           value={text}
           placeholder={placeholder}
           onChange={(e) => {
             setText(e.target.value);
-            onChange(parse(e.target.value, money, empty));
+            field.onChange(parse(e.target.value, money, empty));
           }}
-          onBlur={onBlur}
         />
       </div>
-      <FieldMessage id={id} error={error} hint={hintText} />
-    </div>
+    </Labelled>
   );
 }
 
@@ -141,36 +176,19 @@ export function TextInput({
   mono?: boolean;
   placeholder?: string;
 }) {
-  const {
-    field: { ref, name: fieldName, value: fieldValue, onChange, onBlur },
-    fieldState,
-  } = useController<ShopConfigDocumentInput>({ name });
-  const id = useId();
-  const error = fieldState.error?.message;
+  const { field, error, box, id } = useBox(name, label, visibleLabel);
   return (
-    <div className={className}>
-      {visibleLabel && (
-        <label htmlFor={id} className="field-label">
-          {label}
-        </label>
-      )}
+    <Labelled {...{ id, label, visibleLabel, className, error }}>
       <input
-        id={id}
-        ref={ref}
-        name={fieldName}
+        {...box}
         type="text"
         autoComplete="off"
-        aria-label={visibleLabel ? undefined : label}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
         className={`${CELL_INPUT} ${mono ? "font-mono text-xs" : ""}`}
-        value={typeof fieldValue === "string" ? fieldValue : ""}
+        value={typeof field.value === "string" ? field.value : ""}
         placeholder={placeholder}
-        onChange={(e) => onChange(e.target.value)}
-        onBlur={onBlur}
+        onChange={(e) => field.onChange(e.target.value)}
       />
-      <FieldMessage id={id} error={error} />
-    </div>
+    </Labelled>
   );
 }
 
@@ -187,33 +205,12 @@ export function SelectInput({
   className?: string;
   visibleLabel?: boolean;
 }) {
-  const {
-    field: { ref, name: fieldName, value: fieldValue, onChange, onBlur },
-    fieldState,
-  } = useController<ShopConfigDocumentInput>({ name });
-  const id = useId();
-  const error = fieldState.error?.message;
-  const value = typeof fieldValue === "string" ? fieldValue : "";
+  const { field, error, box, id } = useBox(name, label, visibleLabel);
+  const value = typeof field.value === "string" ? field.value : "";
   const known = options.some((o) => o.value === value);
   return (
-    <div className={className}>
-      {visibleLabel && (
-        <label htmlFor={id} className="field-label">
-          {label}
-        </label>
-      )}
-      <select
-        id={id}
-        ref={ref}
-        name={fieldName}
-        aria-label={visibleLabel ? undefined : label}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
-        className={CELL_INPUT}
-        value={value}
-        onChange={(e) => onChange(e.target.value)}
-        onBlur={onBlur}
-      >
+    <Labelled {...{ id, label, visibleLabel, className, error }}>
+      <select {...box} className={CELL_INPUT} value={value} onChange={(e) => field.onChange(e.target.value)}>
         {!known && <option value={value}>{value ? `${value} (not in this catalogue)` : "Choose…"}</option>}
         {options.map((o) => (
           <option key={o.value} value={o.value}>
@@ -221,19 +218,14 @@ export function SelectInput({
           </option>
         ))}
       </select>
-      <FieldMessage id={id} error={error} />
-    </div>
+    </Labelled>
   );
 }
 
 /** A routing step's instructions: one per line in the box, a list in the form. */
 export function LinesInput({ name, label }: { name: Path; label: string }) {
-  const {
-    field: { ref, name: fieldName, value: fieldValue, onChange, onBlur },
-    fieldState,
-  } = useController<ShopConfigDocumentInput>({ name });
-  const id = useId();
-  const lines = Array.isArray(fieldValue) ? (fieldValue as string[]) : [];
+  const { field, fieldState, box, id } = useBox(name, label);
+  const lines = Array.isArray(field.value) ? (field.value as string[]) : [];
   const [text, setText] = useState(() => lines.join("\n"));
   // zod names a line by its index (instructions.2): show the first such message.
   const error =
@@ -243,30 +235,25 @@ export function LinesInput({ name, label }: { name: Path; label: string }) {
           ?.message
       : undefined);
   return (
-    <div>
+    <Labelled id={id} label={label} error={error}>
       <textarea
-        id={id}
-        ref={ref}
-        name={fieldName}
-        rows={Math.min(5, Math.max(2, lines.length + 1))}
-        aria-label={label}
+        {...box}
         aria-invalid={error ? true : undefined}
         aria-describedby={error ? `${id}-error` : undefined}
+        rows={Math.min(5, Math.max(2, lines.length + 1))}
         className={`${CELL_INPUT} min-w-64 text-left`}
         value={text}
         onChange={(e) => {
           setText(e.target.value);
-          onChange(
+          field.onChange(
             e.target.value
               .split("\n")
               .map((l) => l.trim())
               .filter(Boolean),
           );
         }}
-        onBlur={onBlur}
       />
-      <FieldMessage id={id} error={error} />
-    </div>
+    </Labelled>
   );
 }
 

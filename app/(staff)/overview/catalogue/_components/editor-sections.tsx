@@ -1,5 +1,6 @@
 "use client";
 import { ArrowDown, ArrowUp, Plus, RotateCcw, Trash2 } from "lucide-react";
+import { TableCard } from "@/components/ui/table-card";
 import { get, useFieldArray, useFormContext, useFormState, useWatch } from "react-hook-form";
 import { defaultSettings, mmToIn, type SettingKey } from "@/lib/driveline";
 import { FLOOR_LIMIT_META, LIMIT_META, type LimitMeta } from "@/lib/catalogue/limits";
@@ -7,20 +8,8 @@ import type { ShopConfigDocumentInput } from "@/lib/catalogue/schemas";
 import { defaultFloorLimits, STEP_KINDS, type FloorLimitKey } from "@/lib/traveller/settings";
 import { CheckboxInput, LinesInput, NumberInput, SelectInput, TextInput, type Path } from "./editor-inputs";
 
-const TH = "px-2 py-2 font-semibold whitespace-nowrap";
 export const TD = "px-2 py-1.5 align-top";
 export const inches = (digits: number) => (mm: number) => `${mmToIn(mm).toFixed(digits)} in`;
-
-export const WELD_FAMILIES = [
-  { value: "steel", label: "Steel" },
-  { value: "aluminium", label: "Aluminium" },
-  { value: "composite", label: "Composite" },
-];
-const FITTING_KINDS = [
-  { value: "weld-yoke", label: "Weld yoke" },
-  { value: "slip-yoke-assembly", label: "Slip yoke assembly" },
-  { value: "flange-yoke", label: "Flange yoke" },
-];
 
 export function Section({
   id,
@@ -48,37 +37,6 @@ export function Section({
       </div>
       {children}
     </section>
-  );
-}
-
-export function Table({
-  caption,
-  headings,
-  children,
-}: {
-  caption: string;
-  headings: (string | { label: string; srOnly?: boolean; right?: boolean })[];
-  children: React.ReactNode;
-}) {
-  return (
-    <div className="overflow-x-auto card">
-      <table className="w-full text-left text-sm">
-        <caption className="sr-only">{caption}</caption>
-        <thead className="border-b border-line bg-paper-sunk text-xs tracking-wide text-ink-muted uppercase">
-          <tr>
-            {headings.map((h) => {
-              const { label, srOnly, right } = typeof h === "string" ? { label: h } : h;
-              return (
-                <th key={label} scope="col" className={`${TH} ${right ? "text-right" : ""}`}>
-                  {srOnly ? <span className="sr-only">{label}</span> : label}
-                </th>
-              );
-            })}
-          </tr>
-        </thead>
-        <tbody className="divide-y divide-line">{children}</tbody>
-      </table>
-    </div>
   );
 }
 
@@ -179,710 +137,6 @@ export function PolicySection({ currency }: { currency: string }) {
   );
 }
 
-function MaterialRow({ index, onRemove }: { index: number; onRemove: () => void }) {
-  const p = `catalogue.materials.${index}` as const;
-  const row = useRowName(`${p}.id`, "material", index);
-  return (
-    <tr>
-      <td className={TD}>
-        <TextInput name={`${p}.id`} label={`Id of ${row}`} mono className="w-36" />
-      </td>
-      <td className={TD}>
-        <TextInput name={`${p}.name`} label={`Name of ${row}`} className="w-64" />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.elasticModulusGPa`} label={`E (GPa) of ${row}`} className="w-24" />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.densityKgM3`} label={`Density (kg/m³) of ${row}`} className="w-24" />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.tensileYieldMPa`} label={`Minimum yield (MPa) of ${row}`} className="w-24" />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.shearYieldMPa`} label={`Shear yield (MPa) of ${row}`} className="w-24" />
-      </td>
-      <td className={TD}>
-        <TextInput name={`${p}.condition`} label={`Condition of ${row}`} className="w-48" />
-      </td>
-      <td className={TD}>
-        <SelectInput name={`${p}.weldFamily`} label={`Weld family of ${row}`} options={WELD_FAMILIES} />
-      </td>
-      <td className={TD}>
-        <TextInput name={`${p}.source`} label={`Source of ${row}`} className="w-72" />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.weldZoneTensileYieldMPa`}
-          label={`Weld-zone yield (MPa) of ${row}`}
-          empty={undefined}
-          placeholder="—"
-          className="w-24"
-        />
-      </td>
-      <td className={TD}>
-        <TextInput name={`${p}.weldZoneSource`} label={`Weld-zone yield source of ${row}`} className="w-72" />
-      </td>
-      <td className={TD}>
-        <RemoveButton label={`Remove ${row}`} onClick={onRemove} />
-      </td>
-    </tr>
-  );
-}
-
-export function MaterialsSection() {
-  const { fields, append, remove } = useFieldArray<ShopConfigDocumentInput, "catalogue.materials">({
-    name: "catalogue.materials",
-  });
-  return (
-    <Section
-      id="materials"
-      title={`Materials (${fields.length})`}
-      description="Tube materials and their constants. Yields are minimums for the condition named, not typical values. Welding softens the tube next to the weld: the weld-zone yield is checked in torsion too. Each figure names its source (a standard, a handbook or the mill's certificate)."
-      action={
-        <AddButton
-          label="Add material"
-          onClick={() =>
-            append({ id: "", name: "", weldFamily: "steel", source: "" } as never, {
-              focusName: `catalogue.materials.${fields.length}.id`,
-            })
-          }
-        />
-      }
-    >
-      <Table
-        caption="Tube materials"
-        headings={[
-          "Id",
-          "Name",
-          { label: "E (GPa)", right: true },
-          { label: "Density (kg/m³)", right: true },
-          { label: "Minimum yield (MPa)", right: true },
-          { label: "Shear yield (MPa)", right: true },
-          "Condition",
-          "Weld family",
-          "Source",
-          { label: "Weld-zone yield (MPa)", right: true },
-          "Weld-zone source",
-          { label: "Remove", srOnly: true },
-        ]}
-      >
-        {fields.map((f, i) => (
-          <MaterialRow key={f.id} index={i} onRemove={() => remove(i)} />
-        ))}
-      </Table>
-    </Section>
-  );
-}
-
-function useMaterialOptions() {
-  const materials = useWatch<ShopConfigDocumentInput, "catalogue.materials">({ name: "catalogue.materials" });
-  return (materials ?? []).filter((m) => m?.id).map((m) => ({ value: m.id, label: m.name || m.id }));
-}
-
-function TubeRow({
-  index,
-  onRemove,
-  materials,
-}: {
-  index: number;
-  onRemove: () => void;
-  materials: { value: string; label: string }[];
-}) {
-  const p = `catalogue.tubes.${index}` as const;
-  const row = useRowName(`${p}.id`, "tube", index);
-  return (
-    <tr>
-      <td className={TD}>
-        <TextInput name={`${p}.id`} label={`Part id of ${row}`} mono className="w-44" />
-      </td>
-      <td className={TD}>
-        <SelectInput
-          name={`${p}.materialId`}
-          label={`Material of ${row}`}
-          options={materials}
-          className="w-56"
-        />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.odMm`} label={`OD (mm) of ${row}`} hint={inches(3)} className="w-24" />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.wallMm`} label={`Wall (mm) of ${row}`} hint={inches(3)} className="w-24" />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.maxLengthMm`}
-          label={`Longest piece (mm) of ${row}`}
-          hint={inches(1)}
-          className="w-24"
-        />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.pricePerMetreCents`}
-          label={`Price per metre of ${row}`}
-          money
-          className="w-28"
-        />
-      </td>
-      <td className={TD}>
-        <RemoveButton label={`Remove ${row}`} onClick={onRemove} />
-      </td>
-    </tr>
-  );
-}
-
-export function TubesSection() {
-  const { fields, append, remove } = useFieldArray<ShopConfigDocumentInput, "catalogue.tubes">({
-    name: "catalogue.tubes",
-  });
-  const materials = useMaterialOptions();
-  return (
-    <Section
-      id="tubes"
-      title={`Tubes (${fields.length})`}
-      description="Tube sizes in stock, in millimetres (inches shown under each). The wall must be less than half the outside diameter."
-      action={
-        <AddButton
-          label="Add tube"
-          onClick={() =>
-            append({ id: "", materialId: materials[0]?.value ?? "" } as never, {
-              focusName: `catalogue.tubes.${fields.length}.id`,
-            })
-          }
-        />
-      }
-    >
-      <Table
-        caption="Tube sizes in stock"
-        headings={[
-          "Part id",
-          "Material",
-          { label: "OD (mm)", right: true },
-          { label: "Wall (mm)", right: true },
-          { label: "Longest piece (mm)", right: true },
-          { label: "Price per metre", right: true },
-          { label: "Remove", srOnly: true },
-        ]}
-      >
-        {fields.map((f, i) => (
-          <TubeRow key={f.id} index={i} onRemove={() => remove(i)} materials={materials} />
-        ))}
-      </Table>
-    </Section>
-  );
-}
-
-export function useSeriesOptions() {
-  const series = useWatch<ShopConfigDocumentInput, "catalogue.jointSeries">({
-    name: "catalogue.jointSeries",
-  });
-  return (series ?? []).filter((s) => s?.id).map((s) => ({ value: s.id, label: s.id }));
-}
-
-function FittingRow({
-  index,
-  onRemove,
-  series,
-}: {
-  index: number;
-  onRemove: () => void;
-  series: { value: string; label: string }[];
-}) {
-  const p = `catalogue.endFittings.${index}` as const;
-  const row = useRowName(`${p}.id`, "fitting", index);
-  return (
-    <tr>
-      <td className={TD}>
-        <TextInput name={`${p}.id`} label={`Id of ${row}`} mono className="w-36" />
-      </td>
-      <td className={TD}>
-        <TextInput name={`${p}.name`} label={`Name of ${row}`} className="w-72" />
-      </td>
-      <td className={TD}>
-        <SelectInput name={`${p}.kind`} label={`Kind of ${row}`} options={FITTING_KINDS} className="w-40" />
-      </td>
-      <td className={TD}>
-        <SelectInput
-          name={`${p}.jointSeriesId`}
-          label={`Joint series of ${row}`}
-          options={series}
-          className="w-28"
-        />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.tubeOdMm`}
-          label={`Tube OD (mm) of ${row}`}
-          hint={inches(3)}
-          className="w-24"
-        />
-      </td>
-      <td className={TD}>
-        <SelectInput name={`${p}.weldFamily`} label={`Weld family of ${row}`} options={WELD_FAMILIES} />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.jointCentreToWeldSeatMm`}
-          label={`Joint centre to weld seat (mm) of ${row}`}
-          hint={inches(2)}
-          className="w-24"
-        />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.massKg`} label={`Mass (kg) of ${row}`} className="w-20" />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.torqueRatingNm`} label={`Torque rating (N·m) of ${row}`} className="w-24" />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.priceCents`} label={`Price of ${row}`} money className="w-28" />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.fastenerTorqueNm`}
-          label={`Flange bolt torque (N·m) of ${row}`}
-          empty={undefined}
-          placeholder="—"
-          className="w-20"
-        />
-      </td>
-      <td className={TD}>
-        <TextInput
-          name={`${p}.fastenerTorqueSource`}
-          label={`Flange bolt torque source of ${row}`}
-          className="w-56"
-        />
-      </td>
-      <FlangeCells p={p} row={row} />
-      <td className={TD}>
-        <RemoveButton label={`Remove ${row}`} onClick={onRemove} />
-      </td>
-    </tr>
-  );
-}
-
-export function FittingsSection() {
-  const { fields, append, remove } = useFieldArray<ShopConfigDocumentInput, "catalogue.endFittings">({
-    name: "catalogue.endFittings",
-  });
-  const series = useSeriesOptions();
-  return (
-    <Section
-      id="fittings"
-      title={`End fittings (${fields.length})`}
-      description="Yokes welded to the tube: dimensions in millimetres, mass, torque rating including the weld, price. A flange bolt torque, when given, names its source. A flange yoke's bolt pattern (bolts, bolt circle, pilot) is matched to the vehicle's companion flange: give all three or none."
-      action={
-        <AddButton
-          label="Add end fitting"
-          onClick={() =>
-            append(
-              {
-                id: "",
-                name: "",
-                kind: "weld-yoke",
-                jointSeriesId: series[0]?.value ?? "",
-                weldFamily: "steel",
-              } as never,
-              { focusName: `catalogue.endFittings.${fields.length}.id` },
-            )
-          }
-        />
-      }
-    >
-      <Table
-        caption="End fittings"
-        headings={[
-          "Id",
-          "Name",
-          "Kind",
-          "Joint series",
-          { label: "Tube OD (mm)", right: true },
-          "Weld family",
-          { label: "Joint centre to weld seat (mm)", right: true },
-          { label: "Mass (kg)", right: true },
-          { label: "Torque rating (N·m)", right: true },
-          { label: "Price", right: true },
-          { label: "Flange bolt torque (N·m)", right: true },
-          "Bolt torque source",
-          ...FLANGE_HEADINGS,
-          { label: "Remove", srOnly: true },
-        ]}
-      >
-        {fields.map((f, i) => (
-          <FittingRow key={f.id} index={i} onRemove={() => remove(i)} series={series} />
-        ))}
-      </Table>
-    </Section>
-  );
-}
-
-function JointRow({
-  index,
-  onRemove,
-  series,
-}: {
-  index: number;
-  onRemove: () => void;
-  series: { value: string; label: string }[];
-}) {
-  const p = `catalogue.jointSeries.${index}` as const;
-  const row = useRowName(`${p}.id`, "joint series", index);
-  return (
-    <tr>
-      <td className={TD}>
-        <TextInput name={`${p}.id`} label={`Id of ${row}`} mono className="w-28" />
-      </td>
-      <td className={TD}>
-        <TextInput name={`${p}.name`} label={`Name of ${row}`} className="w-56" />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.torqueRatingNm`}
-          label={`Peak torque rating (N·m) of ${row}`}
-          className="w-24"
-        />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.continuousTorqueNm`}
-          label={`Continuous rating (N·m) of ${row}`}
-          empty={undefined}
-          placeholder="—"
-          className="w-24"
-        />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.maxWorkingAngleDeg`}
-          label={`Largest working angle (°) of ${row}`}
-          className="w-20"
-        />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.massKg`} label={`Mass (kg) of ${row}`} className="w-20" />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.priceCents`} label={`Price of ${row}`} money className="w-28" />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.strapTorqueNm`}
-          label={`Strap torque (N·m) of ${row}`}
-          empty={undefined}
-          placeholder="—"
-          className="w-20"
-        />
-      </td>
-      <td className={TD}>
-        <TextInput name={`${p}.strapTorqueSource`} label={`Strap torque source of ${row}`} className="w-56" />
-      </td>
-      <JointInterfaceCells p={p} row={row} series={series} />
-      <td className={TD}>
-        <RemoveButton label={`Remove ${row}`} onClick={onRemove} />
-      </td>
-    </tr>
-  );
-}
-
-export function JointsSection() {
-  const { fields, append, remove } = useFieldArray<ShopConfigDocumentInput, "catalogue.jointSeries">({
-    name: "catalogue.jointSeries",
-  });
-  const series = useSeriesOptions();
-  return (
-    <Section
-      id="joints"
-      title={`Universal joints (${fields.length})`}
-      description="Joint (cross) series: peak (static) torque rating against the design torque, continuous rating against the running torque, largest working angle, mass, price, and the strap or U-bolt torque with its source. The caps (diameter, span across them, how the vehicle's yoke holds them) match a vehicle's yoke; a conversion cross has these caps on one side and the other series' on the other; a double-Cardan joint's largest angle is the whole joint's."
-      action={
-        <AddButton
-          label="Add joint series"
-          onClick={() =>
-            append({ id: "", name: "" } as never, { focusName: `catalogue.jointSeries.${fields.length}.id` })
-          }
-        />
-      }
-    >
-      <Table
-        caption="Universal joint series"
-        headings={[
-          "Id",
-          "Name",
-          { label: "Peak torque rating (N·m)", right: true },
-          { label: "Continuous rating (N·m)", right: true },
-          { label: "Largest working angle (°)", right: true },
-          { label: "Mass (kg)", right: true },
-          { label: "Price", right: true },
-          { label: "Strap torque (N·m)", right: true },
-          "Strap torque source",
-          ...JOINT_INTERFACE_HEADINGS,
-          { label: "Remove", srOnly: true },
-        ]}
-      >
-        {fields.map((f, i) => (
-          <JointRow key={f.id} index={i} onRemove={() => remove(i)} series={series} />
-        ))}
-      </Table>
-    </Section>
-  );
-}
-
-const RETENTIONS = [
-  { value: "", label: "—" },
-  { value: "strap", label: "Straps" },
-  { value: "u-bolt", label: "U-bolts" },
-  { value: "round", label: "Round bores" },
-];
-const LUBRICATIONS = [
-  { value: "", label: "—" },
-  { value: "sealed", label: "Sealed" },
-  { value: "greaseable", label: "Greaseable" },
-];
-const JOINT_KINDS = [
-  { value: "", label: "Single cross" },
-  { value: "double-cardan", label: "Double-Cardan" },
-];
-
-const FLANGE_HEADINGS = [
-  { label: "Flange bolts", right: true },
-  { label: "Bolt circle (mm)", right: true },
-  { label: "Pilot (mm)", right: true },
-];
-
-/** A flange yoke's bolt pattern (matched to the vehicle's companion flange). */
-function FlangeCells({ p, row }: { p: `catalogue.endFittings.${number}`; row: string }) {
-  return (
-    <>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.flange.boltCount`}
-          label={`Flange bolts of ${row}`}
-          empty={undefined}
-          placeholder="—"
-          className="w-16"
-        />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.flange.boltCircleMm`}
-          label={`Bolt circle (mm) of ${row}`}
-          empty={undefined}
-          placeholder="—"
-          hint={inches(3)}
-          className="w-24"
-        />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.flange.pilotMm`}
-          label={`Pilot (mm) of ${row}`}
-          empty={undefined}
-          placeholder="—"
-          hint={inches(3)}
-          className="w-24"
-        />
-      </td>
-    </>
-  );
-}
-
-const JOINT_INTERFACE_HEADINGS = [
-  { label: "Cap diameter (mm)", right: true },
-  { label: "Span across caps (mm)", right: true },
-  "Held by",
-  "Lubrication",
-  "Kind",
-  "Conversion: other side",
-];
-
-/** What a vehicle's yoke takes (caps, span, retention), lubrication, kind and a conversion's other side. */
-function JointInterfaceCells({
-  p,
-  row,
-  series,
-}: {
-  p: `catalogue.jointSeries.${number}`;
-  row: string;
-  series: { value: string; label: string }[];
-}) {
-  return (
-    <>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.capDiameterMm`}
-          label={`Cap diameter (mm) of ${row}`}
-          empty={undefined}
-          placeholder="—"
-          hint={inches(3)}
-          className="w-20"
-        />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.capSpanMm`}
-          label={`Span across caps (mm) of ${row}`}
-          empty={undefined}
-          placeholder="—"
-          hint={inches(3)}
-          className="w-24"
-        />
-      </td>
-      <td className={TD}>
-        <SelectInput
-          name={`${p}.retention`}
-          label={`Held by (${row})`}
-          options={RETENTIONS}
-          className="w-32"
-        />
-      </td>
-      <td className={TD}>
-        <SelectInput
-          name={`${p}.lubrication`}
-          label={`Lubrication of ${row}`}
-          options={LUBRICATIONS}
-          className="w-32"
-        />
-      </td>
-      <td className={TD}>
-        <SelectInput name={`${p}.kind`} label={`Kind of ${row}`} options={JOINT_KINDS} className="w-36" />
-      </td>
-      <td className={TD}>
-        <SelectInput
-          name={`${p}.otherSeriesId`}
-          label={`Conversion other side of ${row}`}
-          options={[{ value: "", label: "— (not a conversion)" }, ...series]}
-          className="w-40"
-        />
-      </td>
-    </>
-  );
-}
-
-function SlipYokeRow({
-  index,
-  onRemove,
-  series,
-}: {
-  index: number;
-  onRemove: () => void;
-  series: { value: string; label: string }[];
-}) {
-  const p = `catalogue.slipYokes.${index}` as const;
-  const row = useRowName(`${p}.id`, "slip yoke", index);
-  return (
-    <tr>
-      <td className={TD}>
-        <TextInput name={`${p}.id`} label={`Id of ${row}`} mono className="w-40" />
-      </td>
-      <td className={TD}>
-        <TextInput name={`${p}.name`} label={`Name of ${row}`} className="w-64" />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.splineCount`} label={`Splines of ${row}`} className="w-16" />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.majorDiameterMm`}
-          label={`Spline major diameter (mm) of ${row}`}
-          hint={inches(3)}
-          className="w-24"
-        />
-      </td>
-      <td className={TD}>
-        <SelectInput
-          name={`${p}.jointSeriesId`}
-          label={`Ears (joint series) of ${row}`}
-          options={series}
-          className="w-28"
-        />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.sealSurfaceLengthMm`}
-          label={`Seal surface length (mm) of ${row}`}
-          hint={inches(2)}
-          className="w-24"
-        />
-      </td>
-      <td className={TD}>
-        <NumberInput
-          name={`${p}.minEngagementMm`}
-          label={`Least spline engagement (mm) of ${row}`}
-          hint={inches(2)}
-          className="w-24"
-        />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.massKg`} label={`Mass (kg) of ${row}`} className="w-20" />
-      </td>
-      <td className={TD}>
-        <NumberInput name={`${p}.priceCents`} label={`Price of ${row}`} money className="w-28" />
-      </td>
-      <td className={TD}>
-        <TextInput name={`${p}.source`} label={`Source of ${row}`} className="w-72" />
-      </td>
-      <td className={TD}>
-        <RemoveButton label={`Remove ${row}`} onClick={onRemove} />
-      </td>
-    </tr>
-  );
-}
-
-/** Slip yokes matched to a transmission's output spline; their least engagement and seal surface are checked. */
-export function SlipYokesSection() {
-  const { fields, append, remove } = useFieldArray<ShopConfigDocumentInput, "catalogue.slipYokes">({
-    name: "catalogue.slipYokes",
-  });
-  const series = useSeriesOptions();
-  return (
-    <Section
-      id="slip-yokes"
-      title={`Slip yokes (${fields.length})`}
-      description="Slip yokes for transmission and transfer-case outputs, matched by spline count and major diameter. The least spline engagement at full droop and the ground seal surface's length come from the maker's sheet; each row names its source."
-      action={
-        <AddButton
-          label="Add slip yoke"
-          onClick={() =>
-            append({ id: "", name: "", jointSeriesId: series[0]?.value ?? "", source: "" } as never, {
-              focusName: `catalogue.slipYokes.${fields.length}.id`,
-            })
-          }
-        />
-      }
-    >
-      {fields.length === 0 ? (
-        <p className="card p-5 text-sm text-ink-muted">
-          No slip yokes yet. Without them the shop&apos;s fixed spline engagement applies and slip yokes are
-          not priced in quotes.
-        </p>
-      ) : (
-        <Table
-          caption="Slip yokes"
-          headings={[
-            "Id",
-            "Name",
-            { label: "Splines", right: true },
-            { label: "Major diameter (mm)", right: true },
-            "Ears (joint series)",
-            { label: "Seal surface (mm)", right: true },
-            { label: "Least engagement (mm)", right: true },
-            { label: "Mass (kg)", right: true },
-            { label: "Price", right: true },
-            "Source",
-            { label: "Remove", srOnly: true },
-          ]}
-        >
-          {fields.map((f, i) => (
-            <SlipYokeRow key={f.id} index={i} onRemove={() => remove(i)} series={series} />
-          ))}
-        </Table>
-      )}
-    </Section>
-  );
-}
-
 /** One limit: its value, its source, and the reference default to go back to. */
 function LimitRow({
   base,
@@ -936,7 +190,8 @@ export function LimitsSection() {
       title="Engineering limits"
       description="The limits every design is checked against, each with its source (printed on the report). Tighten them for your shop; loosening a limit needs a source that allows it."
     >
-      <Table
+      <TableCard
+        dense
         caption="Engineering limits with their sources"
         headings={["Limit", "Value", "Source", "Reference"]}
       >
@@ -948,7 +203,7 @@ export function LimitsSection() {
             reference={defaultSettings[key]}
           />
         ))}
-      </Table>
+      </TableCard>
     </Section>
   );
 }
@@ -1001,24 +256,23 @@ function RoutingRow({
         <LinesInput name={`${p}.instructions`} label={`Instructions of ${row}`} />
       </td>
       <td className={`${TD} whitespace-nowrap`}>
-        <button
-          type="button"
-          className="rounded-md p-2 text-ink-muted hover:bg-paper-sunk disabled:opacity-30"
-          aria-label={`Move ${row} up`}
-          disabled={index === 0}
-          onClick={() => onMove(index - 1)}
-        >
-          <ArrowUp className="size-4" aria-hidden="true" />
-        </button>
-        <button
-          type="button"
-          className="rounded-md p-2 text-ink-muted hover:bg-paper-sunk disabled:opacity-30"
-          aria-label={`Move ${row} down`}
-          disabled={index === count - 1}
-          onClick={() => onMove(index + 1)}
-        >
-          <ArrowDown className="size-4" aria-hidden="true" />
-        </button>
+        {(
+          [
+            ["up", ArrowUp, index - 1],
+            ["down", ArrowDown, index + 1],
+          ] as const
+        ).map(([way, Icon, to]) => (
+          <button
+            key={way}
+            type="button"
+            className="rounded-md p-2 text-ink-muted hover:bg-paper-sunk disabled:opacity-30"
+            aria-label={`Move ${row} ${way}`}
+            disabled={to < 0 || to >= count}
+            onClick={() => onMove(to)}
+          >
+            <Icon className="size-4" aria-hidden="true" />
+          </button>
+        ))}
         <RemoveButton label={`Remove ${row}`} onClick={onRemove} />
       </td>
     </tr>
@@ -1068,7 +322,8 @@ export function FloorSection() {
           visibleLabel
         />
       </div>
-      <Table
+      <TableCard
+        dense
         caption="Floor tolerances with their sources"
         headings={["Tolerance", "Value", "Source", "Reference"]}
       >
@@ -1080,7 +335,7 @@ export function FloorSection() {
             reference={defaultFloorLimits[key]}
           />
         ))}
-      </Table>
+      </TableCard>
       <div className="flex flex-wrap items-end justify-between gap-3 pt-2">
         <h3 className="font-semibold">Routing ({fields.length} steps)</h3>
         <AddButton
@@ -1100,7 +355,8 @@ export function FloorSection() {
           Routing {routingMessage}
         </p>
       )}
-      <Table
+      <TableCard
+        dense
         caption="Floor routing"
         headings={[
           { label: "Order", srOnly: true },
@@ -1120,7 +376,7 @@ export function FloorSection() {
             onMove={(to) => move(i, to)}
           />
         ))}
-      </Table>
+      </TableCard>
     </Section>
   );
 }

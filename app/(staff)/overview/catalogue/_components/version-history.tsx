@@ -1,5 +1,5 @@
-import { describeChange } from "@/lib/catalogue/describe";
 import type { VersionView } from "@/lib/catalogue/versions";
+import { ChangesTable } from "./changes-table";
 
 /** How many changes a version lists before the rest fold away. */
 const SHOWN = 8;
@@ -21,34 +21,10 @@ function Changes({ version, currency }: { version: VersionView; currency: string
       </p>
     );
   }
-  const rows = version.changes.map((c) => ({ key: c.path, ...describeChange(c, currency) }));
-  const table = (list: typeof rows) => (
-    <table className="w-full text-left text-sm">
-      <caption className="sr-only">Changes in version {version.version}</caption>
-      <thead className="text-xs text-ink-muted uppercase">
-        <tr>
-          <th scope="col" className="py-1 pr-3">
-            Changed
-          </th>
-          <th scope="col" className="py-1 pr-3">
-            Before
-          </th>
-          <th scope="col" className="py-1">
-            After
-          </th>
-        </tr>
-      </thead>
-      <tbody className="divide-y divide-line">
-        {list.map((r) => (
-          <tr key={r.key}>
-            <td className="py-1 pr-3">{r.where}</td>
-            <td className="py-1 pr-3 text-ink-muted">{r.kind === "added" ? "(new)" : r.before}</td>
-            <td className="py-1 font-medium">{r.kind === "removed" ? "(removed)" : r.after}</td>
-          </tr>
-        ))}
-      </tbody>
-    </table>
+  const table = (changes: typeof version.changes) => (
+    <ChangesTable changes={changes} currency={currency} caption={`Changes in version ${version.version}`} />
   );
+  const rows = version.changes;
   return (
     <div className="overflow-x-auto">
       {table(rows.slice(0, SHOWN))}

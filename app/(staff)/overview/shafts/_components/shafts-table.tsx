@@ -1,6 +1,6 @@
 "use client";
 import Link from "next/link";
-import { DataTable, type TableQueryState } from "@/components/data-table/data-table";
+import { DataTable, type TablePage } from "@/components/data-table/data-table";
 import { tableColumns } from "@/components/data-table/columns";
 import { ShopTime } from "@/components/shop-locale";
 import { SHAFT_COLUMNS, WORK_ORDER_STATE_LABEL, type ShaftTableRow } from "@/lib/tables/shafts-spec";
@@ -57,28 +57,21 @@ const columns = tableColumns<ShaftTableRow>(SHAFT_COLUMNS, {
   released: (r) => <ShopTime at={r.releasedAt} format="isoDate" className="whitespace-nowrap" />,
 });
 
-export function ShaftsTable(props: {
-  rows: ShaftTableRow[];
-  total: number;
-  query: TableQueryState;
-  filtered: boolean;
-}) {
+export function ShaftsTable(props: TablePage<ShaftTableRow>) {
   return (
     <DataTable
       caption="Shafts"
       columns={columns}
-      rows={props.rows}
-      total={props.total}
-      query={props.query}
+      page={props}
       defaults={{ sort: "promised", dir: "asc" }}
       getRowId={(r) => r.workOrderId}
       exportHref="/api/exports/shafts"
       empty={{
-        title: props.filtered ? "No shafts match these filters" : "No shafts on the floor yet",
-        text: props.filtered
-          ? "Loosen a filter or clear them all to see more."
-          : "A shaft gets its serial when its order is released to the shop.",
-        filtered: props.filtered,
+        none: {
+          title: "No shafts on the floor yet",
+          text: "A shaft gets its serial when its order is released to the shop.",
+        },
+        noMatch: { title: "No shafts match these filters" },
       }}
     />
   );

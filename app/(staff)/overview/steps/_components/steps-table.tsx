@@ -1,6 +1,6 @@
 "use client";
 import Link from "next/link";
-import { DataTable, type TableQueryState } from "@/components/data-table/data-table";
+import { DataTable, type TablePage } from "@/components/data-table/data-table";
 import { tableColumns } from "@/components/data-table/columns";
 import { ShopTime } from "@/components/shop-locale";
 import { STEP_COLUMNS, STEP_OUTCOME_LABEL, type StepTableRow } from "@/lib/tables/steps-spec";
@@ -35,28 +35,21 @@ const columns = tableColumns<StepTableRow>(STEP_COLUMNS, {
   notes: (r) => (r.notes ? <span className="block max-w-md text-xs">{r.notes}</span> : ""),
 });
 
-export function StepsTable(props: {
-  rows: StepTableRow[];
-  total: number;
-  query: TableQueryState;
-  filtered: boolean;
-}) {
+export function StepsTable(props: TablePage<StepTableRow>) {
   return (
     <DataTable
       caption="Step records"
       columns={columns}
-      rows={props.rows}
-      total={props.total}
-      query={props.query}
+      page={props}
       defaults={{ sort: "at", dir: "desc" }}
       getRowId={(r) => r.id}
       exportHref="/api/exports/steps"
       empty={{
-        title: props.filtered ? "No step records match these filters" : "No steps signed yet",
-        text: props.filtered
-          ? "Loosen a filter or clear them all to see more."
-          : "Each step the floor signs off (and each hold) is recorded here.",
-        filtered: props.filtered,
+        none: {
+          title: "No steps signed yet",
+          text: "Each step the floor signs off (and each hold) is recorded here.",
+        },
+        noMatch: { title: "No step records match these filters" },
       }}
     />
   );
