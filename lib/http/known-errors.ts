@@ -11,9 +11,10 @@ export const DATABASE_DOWN_MESSAGE = "The database is not reachable just now; tr
  * went away mid-statement, or a pooled client broke and was handed back. Knex's "Transaction query
  * already complete" is the same fault seen one step later: the connection died, knex ended the
  * transaction, and the next statement of that unit of work found it gone (nothing was committed).
+ * "Timeout acquiring a connection" is knex's pool giving up while the server cannot be reached.
  */
 const CONNECTION_LOST =
-  /Connection terminated|connection error and is not queryable|Client was closed and is not queryable|Connection ended unexpectedly|timeout exceeded when trying to connect|Transaction query already complete/i;
+  /Connection terminated|connection error and is not queryable|Client was closed and is not queryable|Connection ended unexpectedly|timeout exceeded when trying to connect|Transaction query already complete|Timeout acquiring a connection/i;
 
 /** Node socket errors and PostgreSQL shutdown/start-up states (57P01–57P03). */
 const DOWN_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "EPIPE", "57P01", "57P02", "57P03"]);

@@ -13,6 +13,8 @@ describe("knownError", () => {
     "timeout exceeded when trying to connect",
     // Knex, on the next statement of a transaction whose connection died (seen in the restart test).
     "Transaction query already complete, run with DEBUG=knex:tx for more info",
+    // Knex's pool, when no connection can be had in time.
+    "Knex: Timeout acquiring a connection. The pool is probably full. Are you missing a .transacting(trx) call?",
   ])("a lost connection (%s) is unavailable", (message) => {
     expect(knownError(new Error(message))?.code).toBe("unavailable");
   });
