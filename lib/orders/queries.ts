@@ -13,6 +13,7 @@ import { nextPaymentKind, amountDue } from "./payments";
 import { needsEngineeringSignoff } from "./acknowledgements";
 import { notesFor } from "./notes";
 import { frozenChecks } from "./engineering-signoff";
+import { shopToday } from "@/lib/shop/locale";
 
 export type { AcknowledgementView, OrderRow, OrderView, RetubeView, ShaftView } from "./views";
 
@@ -65,7 +66,7 @@ export async function listOrders(
     orderBy: all ? { promisedDate: "asc", createdAt: "asc" } : { createdAt: "desc" },
     limit: 200,
   });
-  const today = new Date().toISOString().slice(0, 10);
+  const today = await shopToday();
   return orders.map((o) => toRow(o, today, all));
 }
 
@@ -187,12 +188,15 @@ export function shaftView(s: ShaftSource): ShaftView {
   };
 }
 
-/** Everything an order page shows, as plain data. Customers see only public timeline entries. */
-export function orderView(order: Order, user: CurrentUser): OrderView {
+/**
+ * Everything an order page shows, as plain data. Customers see only public timeline entries.
+ * `today` is the shop's date (`shopToday()`), from which "late" is counted.
+ */
+export function orderView(order: Order, user: CurrentUser, today: string): OrderView {
   const staff = seesAllOrders(user);
   const kind = nextPaymentKind(order);
   return {
-    ...toRow(order, new Date().toISOString().slice(0, 10), staff),
+    ...toRow(order, today, staff),
     customerEmail: order.customer.email,
     fulfilment: order.fulfilment,
     shipTo: order.shipTo ?? null,

@@ -7,9 +7,12 @@ import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { ClientBase } from "pg";
 
-/** What the queries are run for: today's date (UTC, ISO), the chart window and the routing's codes. */
+/** What the queries are run for: today's date in the shop, the chart window and the routing's codes. */
 export interface OverviewQueryContext {
+  /** Today in the shop's time zone (ISO date): "late" is promised before it. */
   today: string;
+  /** The shop's IANA time zone: the day an expected finish falls on. */
+  timeZone: string;
   /** Start of the oldest week the charts show. */
   chartsSince: Date;
   /** Start of the window the step averages are measured over. */
@@ -126,10 +129,10 @@ export const OVERVIEW_QUERIES = {
           )
           select oo.id, oo.number, oo.status, to_char(oo.promised_date, 'YYYY-MM-DD') as promised_date, c.name as customer_name,
             oo.total_cents, r.seconds::float8 as remaining_seconds, r.steps_left,
-            to_char((?::timestamptz + make_interval(secs => r.seconds)) at time zone 'UTC', 'YYYY-MM-DD') as expected_date,
+            to_char((?::timestamptz + make_interval(secs => r.seconds)) at time zone ?, 'YYYY-MM-DD') as expected_date,
             count(*) over ()::int as total
           from open_order oo join remaining r on r.id = oo.id join customer c on c.id = oo.customer_id
-          where oo.promised_date < ((?::timestamptz + make_interval(secs => r.seconds)) at time zone 'UTC')::date
+          where oo.promised_date < ((?::timestamptz + make_interval(secs => r.seconds)) at time zone ?)::date
           order by oo.promised_date, oo.number
           limit 50`,
     params: (c) => [
@@ -138,7 +141,9 @@ export const OVERVIEW_QUERIES = {
       c.today,
       c.routingSeconds,
       c.now.toISOString(),
+      c.timeZone,
       c.now.toISOString(),
+      c.timeZone,
     ],
   },
   /** Late orders, soonest promise first (the list beside the count). */

@@ -12,6 +12,8 @@ import {
   type OverviewQueryContext,
   type OverviewQueryName,
 } from "./overview-queries";
+import { shopIsoDate } from "@/lib/dates";
+import { getShopLocale } from "./locale";
 
 const HOUR_S = 3600;
 const DAY_MS = 86_400_000;
@@ -188,11 +190,15 @@ async function run<T>(exec: Exec, name: OverviewQueryName, ctx: OverviewQueryCon
   return exec<T>(q.sql, q.params(ctx));
 }
 
-/** The routing codes of final inspection and dispatch, and the context the queries run with. */
+/**
+ * The routing codes of final inspection and dispatch, and the context the queries run with. Today
+ * and the expected finish days are the shop's (`timeZone`); the chart weeks stay Monday-to-Monday UTC.
+ */
 export function overviewContext(
   now: Date,
   floor: FloorSettings,
   averages: StepAverage[] = [],
+  timeZone = "UTC",
 ): OverviewQueryContext {
   const codes = (kind: string) => floor.routing.filter((s) => s.kind === kind).map((s) => s.code);
   const routingHours = floor.routing.reduce(
@@ -201,7 +207,8 @@ export function overviewContext(
   );
   return {
     now,
-    today: now.toISOString().slice(0, 10),
+    today: shopIsoDate(now, timeZone),
+    timeZone,
     chartsSince: new Date(`${lastWeeks(now, CHART_WEEKS)[0]}T00:00:00Z`),
     averagesSince: new Date(now.getTime() - AVERAGE_WINDOW_DAYS * DAY_MS),
     routingCodes: floor.routing.map((s) => s.code),
@@ -234,18 +241,19 @@ const cents = (v: unknown) => Number(v ?? 0);
  * What the owner sees first: orders by state with their value, late and at risk (the remaining
  * steps at the shop's measured step times against each promise), shafts on hold and why, money
  * (taken, deposits held, balances due, refunds by week), throughput, days to ship and time per
- * step. "Late" = promised date before today (UTC) and neither shipped nor cancelled. `exec` runs
+ * step. "Late" = promised date before the shop's today (its time zone) and neither shipped nor cancelled. `exec` runs
  * the SQL (default: the request's entity manager; tests pass their own connection).
  */
 export async function overviewFigures(
   now = new Date(),
   execIn?: Exec,
   floorIn?: FloorSettings,
+  timeZoneIn?: string,
 ): Promise<OverviewFigures> {
   const exec = execIn ?? emExec(await getEm());
   const floor = floorIn ?? (await getShopEngineering()).floor;
   const stepAverages = await measuredStepAverages(exec, floor, now);
-  const ctx = overviewContext(now, floor, stepAverages);
+  const ctx = overviewContext(now, floor, stepAverages, timeZoneIn ?? (await getShopLocale()).timeZone);
   type Row = Record<string, unknown>;
   const [byStatus, open, owed, atRisk, late, onHold, taken, refunds, finished, toShip] = await Promise.all([
     run<Row>(exec, "byStatus", ctx),

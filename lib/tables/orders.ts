@@ -5,7 +5,8 @@ import { orderStatusLabel } from "@/lib/orders/labels";
 import type { OrderStatus, PaymentState } from "@/entities";
 import type { ListOrdersQuery, OrderTableRow } from "./orders-spec";
 import { containsPattern } from "./params";
-import { pagedSelect, type Page, todayIso } from "./sql";
+import { shopToday } from "@/lib/shop/locale";
+import { pagedSelect, type Page } from "./sql";
 
 /** The SQL each sort column orders by (never user text); the order's id breaks ties. */
 const ORDER_BY: Record<ListOrdersQuery["sort"], string[]> = {
@@ -113,7 +114,7 @@ export async function orderTablePage(
   q: ListOrdersQuery,
   options: { limit?: number; offset?: number; today?: string } = {},
 ): Promise<Page<OrderTableRow>> {
-  const today = options.today ?? todayIso();
+  const today = options.today ?? (await shopToday());
   const knex = em.getKnex();
   const base = knex
     .select(

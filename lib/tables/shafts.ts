@@ -3,7 +3,8 @@ import type { EntityManager } from "@mikro-orm/postgresql";
 import type { WorkOrderState } from "@/entities";
 import type { ListShaftsQuery, ShaftTableRow } from "./shafts-spec";
 import { containsPattern } from "./params";
-import { pagedSelect, todayIso, type Page } from "./sql";
+import { shopToday } from "@/lib/shop/locale";
+import { pagedSelect, type Page } from "./sql";
 
 const ORDER_BY: Record<ListShaftsQuery["sort"], string[]> = {
   serial: ["w.serial_year", "w.serial_sequence"],
@@ -54,7 +55,7 @@ export async function shaftTablePage(
   q: ListShaftsQuery,
   options: { limit?: number; offset?: number; today?: string } = {},
 ): Promise<Page<ShaftTableRow>> {
-  const today = options.today ?? todayIso();
+  const today = options.today ?? (await shopToday());
   const knex = em.getKnex();
   const base = knex
     .select(

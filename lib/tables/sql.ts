@@ -8,9 +8,6 @@ export interface Page<R> {
   total: number;
 }
 
-/** The shop's dates are ISO yyyy-mm-dd (UTC), as elsewhere (lib/orders/queries.ts). */
-export const todayIso = () => new Date().toISOString().slice(0, 10);
-
 /**
  * Runs a table's filtered `base` select as ONE statement: the page (sorted by `sortKeys` then the
  * row's id, cut to `limit`/`offset`, so an index on the sort column serves it), the count of every

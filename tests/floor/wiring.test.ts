@@ -9,6 +9,7 @@ import { orderView, populateOrder } from "@/lib/orders/queries";
 import { dbTest } from "../setup/db";
 import { newCustomer, payWithCard, paymentsHarnessForFile, saveDesign } from "../setup/orders";
 import { code, good, key, staff } from "./helpers";
+import { shopToday } from "@/lib/shop/locale";
 
 const harness = paymentsHarnessForFile();
 
@@ -34,7 +35,7 @@ async function pay(orderId: string, user: CurrentUser, kind?: Payment["kind"]) {
 async function view(orderId: string, user: CurrentUser) {
   const em = (await getEm()).fork();
   const order = await em.findOneOrFail(Order, { id: orderId }, { populate: ["customer"] });
-  return orderView(await populateOrder(em, order), user);
+  return orderView(await populateOrder(em, order), user, await shopToday());
 }
 
 const mails = async (orderId: string, template: string) =>

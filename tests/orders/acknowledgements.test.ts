@@ -10,6 +10,7 @@ import { createStaffUser } from "@/lib/users/staff";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
 import { dbTest } from "../setup/db";
 import { failingVan, newCustomer, saveDesign, streetTruck } from "../setup/orders";
+import { shopToday } from "@/lib/shop/locale";
 
 // No payment provider answers on this port: an order is still placed (checkout opened later).
 Object.assign(process.env, {
@@ -133,7 +134,7 @@ describe("warnings are acknowledged before ordering", () => {
       // The order page's view carries them (staff and customer pages both render shaftViews).
       const order = await em.findOneOrFail(Order, { id: res.body.id });
       await populateOrder(em, order);
-      const view = orderView(order, user);
+      const view = orderView(order, user, await shopToday());
       expect(view.shaftViews[0]!.warningAcknowledgements.map((a) => a.checkId)).toEqual(["angle-difference"]);
       expect(view.shaftViews[0]!.needsSignoff).toBe(false);
     },
@@ -224,7 +225,7 @@ describe("a design that fails a check", () => {
       const frozen = shaft!.evaluation as { overall: string; checks: { status: string }[] };
       expect(frozen.overall).toBe("fail");
       expect(frozen.checks.some((c) => c.status === "fail")).toBe(true);
-      const view = orderView(order, desk.user).shaftViews[0]!;
+      const view = orderView(order, desk.user, await shopToday()).shaftViews[0]!;
       expect(view.needsSignoff).toBe(true);
       expect(view.overall).toBe("fail");
       expect(view.checks.filter((c) => c.status === "fail").length).toBeGreaterThan(0);

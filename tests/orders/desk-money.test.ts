@@ -24,6 +24,7 @@ import { formatStepCode } from "@/lib/traveller/codes";
 import { dbTest, requireDatabase } from "../setup/db";
 import { payWithCard, placedOrder, reloadOrder, startPaymentsHarness } from "../setup/orders";
 import { staff } from "../floor/helpers";
+import { shopToday } from "@/lib/shop/locale";
 
 // Demo data: the invented shop keeps 10 % of the deposit when an order is cancelled before release.
 const FEE_PERCENT = 10;
@@ -96,7 +97,7 @@ describe("payments taken at the counter", () => {
       // The customer sees it like any payment.
       const mine = await em.findOneOrFail(Order, { id: order.id });
       await populateOrder(em, mine);
-      const view = orderView(mine, user);
+      const view = orderView(mine, user, await shopToday());
       expect(view.payments).toEqual([
         expect.objectContaining({ method: "terminal", status: "succeeded", amountCents: order.depositCents }),
       ]);

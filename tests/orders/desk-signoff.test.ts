@@ -27,6 +27,7 @@ import { exampleReport } from "../traveller/fixtures";
 import { staff } from "../floor/helpers";
 
 import { updateOrderDetailsAction } from "@/lib/actions/update-order-details";
+import { shopToday } from "@/lib/shop/locale";
 
 // Server actions read the session from next/headers; outside a Next request we hand it the cookie.
 const session = vi.hoisted(() => ({ cookie: "" }));
@@ -189,12 +190,12 @@ describe("notes on an order", () => {
     const row = await em.findOneOrFail(Order, { id: order.id });
     await populateOrder(em, row);
 
-    const customerView = orderView(row, user);
+    const customerView = orderView(row, user, await shopToday());
     expect(customerView.shopNotes.map((n) => n.body)).toEqual(["Bring the old shaft for the yokes."]);
     expect(JSON.stringify(customerView)).not.toContain("cash only");
     expect(customerView.shopNotes[0]).toMatchObject({ byName: counter.name, visibility: "customer" });
 
-    const staffView = orderView(row, counter);
+    const staffView = orderView(row, counter, await shopToday());
     expect(staffView.shopNotes.map((n) => [n.visibility, n.body])).toEqual([
       ["customer", "Bring the old shaft for the yokes."],
       ["staff", "Customer disputes last invoice; cash only."],

@@ -21,6 +21,7 @@ import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests"
 import { dbTest } from "../setup/db";
 import { newCustomer, saveDesign } from "../setup/orders";
 import { code, good, key } from "../floor/helpers";
+import { shopToday } from "@/lib/shop/locale";
 
 const PASSWORD = "a-long-password-1";
 const staff: Record<"counter" | "owner" | "floor", { user: CurrentUser; cookie: string }> = {} as never;
@@ -143,6 +144,7 @@ describe("a re-tube order from the counter through the floor", () => {
       const view = orderView(
         await populateOrder(em, await em.findOneOrFail(Order, { id: order.id })),
         a.user,
+        await shopToday(),
       );
       expect(view.shaftViews.map((s) => s.retube?.weldToWeldMm ?? null)).toEqual([1188.8, 1188.8, null]);
       expect(view.events.map((e) => e.label)).toContain("Order received (3 shafts, 2 re-tubes)");

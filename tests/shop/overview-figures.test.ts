@@ -198,7 +198,8 @@ describe("overview figures on a hand-built shop", () => {
     });
     await payment(ids.C, "deposit", 300, "2026-06-02T10:00:00Z", [[300, "2026-06-03T10:00:00Z"]]);
 
-    f = await overviewFigures(NOW, pgExec(db), defaultFloorSettings);
+    // The hand-built orders below are dated in UTC days: the shop here keeps UTC.
+    f = await overviewFigures(NOW, pgExec(db), defaultFloorSettings, "UTC");
   });
 
   afterAll(async () => {

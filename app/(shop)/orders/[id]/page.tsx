@@ -5,6 +5,7 @@ import { getEm } from "@/lib/db/orm";
 import { orderPageTitle } from "@/lib/orders/order-title";
 import { loadOrderForUser, seesAllOrders } from "@/lib/orders/access";
 import { can } from "@/lib/auth/permissions";
+import { shopToday } from "@/lib/shop/locale";
 import { orderView, populateOrder } from "@/lib/orders/queries";
 import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
@@ -39,7 +40,7 @@ export default async function CustomerOrderPage({ params, searchParams }: PagePr
     throw e;
   });
   await populateOrder(em, order);
-  const view = orderView(order, user);
+  const view = orderView(order, user, await shopToday());
   const [serials, files] = await Promise.all([orderShaftSerials(em, order.id), listOrderUploads(em, order)]);
   return (
     <>

@@ -8,6 +8,7 @@ import { getEm } from "@/lib/db/orm";
 import { workQueue, type QueueItem } from "@/lib/floor/queries";
 import { asBuiltHref } from "@/lib/floor/scan";
 import { getShopEngineering } from "@/lib/shop/config";
+import { shopToday } from "@/lib/shop/locale";
 import { PageHeader } from "@/components/ui/page-header";
 import { ShopTime } from "@/components/shop-locale";
 import { EmptyState } from "@/components/ui/empty-state";
@@ -73,7 +74,7 @@ function ShaftCard({ item, today, deskLinks }: { item: QueueItem; today: string;
 export default async function WorkQueuePage() {
   const user = await requireRole(STAFF_ROLES, "/floor/queue");
   const [items, { floor }] = await Promise.all([getEm().then(workQueue), getShopEngineering()]);
-  const today = new Date().toISOString().slice(0, 10);
+  const today = await shopToday();
   const deskLinks = can(user.role, "orders.desk");
   const held = items.filter((i) => i.state === "on_hold");
   // Shafts grouped by the step they wait for, in routing order.

@@ -5,6 +5,7 @@ import { can } from "@/lib/auth/permissions";
 import { getEm } from "@/lib/db/orm";
 import { orderPageTitle } from "@/lib/orders/order-title";
 import { loadOrderForUser } from "@/lib/orders/access";
+import { shopToday } from "@/lib/shop/locale";
 import { orderView, populateOrder } from "@/lib/orders/queries";
 import { AppError } from "@/lib/http/errors";
 import { PageHeader } from "@/components/ui/page-header";
@@ -39,7 +40,7 @@ export default async function DeskOrderPage({ params, searchParams }: PageProps<
   });
   await populateOrder(em, order);
   const [floor, quote] = await Promise.all([orderFloorState(em, order.id), cancellationQuote(em, order)]);
-  const view = orderView(order, user);
+  const view = orderView(order, user, await shopToday());
   const signoff = signoffView(order.shafts.getItems());
   const cancelled = order.status === "cancelled";
   const blocked = cancelled
