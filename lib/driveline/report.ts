@@ -1,4 +1,5 @@
 /** Shape of the evaluation report (contract fields plus additions) and the standing texts. */
+import type { SlipYoke } from "./catalogue/types";
 import type { Check, CheckStatus } from "./checks";
 import type { CurveSet } from "./curves";
 import type { DoubleCardanReport } from "./double-cardan";
@@ -114,17 +115,7 @@ export interface SlipReport {
 }
 
 /** A catalogue slip yoke as the report gives it. */
-export interface SlipYokeSummary {
-  readonly id: string;
-  readonly name: string;
-  readonly splineCount: number;
-  readonly majorDiameterMm: number;
-  readonly jointSeriesId: string;
-  readonly sealSurfaceLengthMm: number;
-  readonly minEngagementMm: number;
-  readonly massKg: number;
-  readonly priceCents: number;
-  readonly source: string;
+export interface SlipYokeSummary extends SlipYoke {
   /** "design" when slip.slipYokeId names it, "matched" from interface.transmissionOutput. */
   readonly origin: "design" | "matched";
 }

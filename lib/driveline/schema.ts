@@ -323,15 +323,16 @@ function catalogueIssues(design: DesignFile, catalogue: Catalogue): FieldIssue[]
   for (const end of ["front", "rear"] as const) {
     const fittingId = design.ends?.[end]?.fittingId;
     if (fittingId != null && !catalogue.endFittings.some((f) => f.id === fittingId)) {
-      const path = `ends.${end}.fittingId`;
-      issues.push({
-        path,
-        message: `${path}: must be an end fitting in the catalogue (unknown "${fittingId}")`,
-      });
+      issues.push(unknownReference(`ends.${end}.fittingId`, "an end fitting", fittingId));
     }
   }
   issues.push(...fittingReferenceIssues(design, catalogue));
   return issues;
+}
+
+/** A design names a catalogue part (`what`, e.g. "an end fitting") by an id the catalogue lacks. */
+function unknownReference(path: string, what: string, id: string): FieldIssue {
+  return { path, message: `${path}: must be ${what} in the catalogue (unknown "${id}")` };
 }
 
 /** The slip yoke and the vehicle-side joint series a design names must be in the catalogue. */
@@ -348,11 +349,7 @@ function fittingReferenceIssues(design: DesignFile, catalogue: Catalogue): Field
   for (const end of ["front", "pinion"] as const) {
     const seriesId = design.interface?.[end]?.jointSeriesId;
     if (seriesId != null && !catalogue.jointSeries.some((j) => j.id === seriesId)) {
-      const path = `interface.${end}.jointSeriesId`;
-      issues.push({
-        path,
-        message: `${path}: must be a joint series in the catalogue (unknown "${seriesId}")`,
-      });
+      issues.push(unknownReference(`interface.${end}.jointSeriesId`, "a joint series", seriesId));
     }
   }
   const bearingId = design.centreBearing?.bearingId;
@@ -361,10 +358,7 @@ function fittingReferenceIssues(design: DesignFile, catalogue: Catalogue): Field
     bearingId != null &&
     !(catalogue.centreBearings ?? []).some((b) => b.id === bearingId)
   ) {
-    issues.push({
-      path: "centreBearing.bearingId",
-      message: `centreBearing.bearingId: must be a centre bearing in the catalogue (unknown "${bearingId}")`,
-    });
+    issues.push(unknownReference("centreBearing.bearingId", "a centre bearing", bearingId));
   }
   return issues;
 }

@@ -3,7 +3,7 @@
  * day) an order promised for that Chicago day is not late yet. Offsets from the IANA time zone
  * database (tzdata): America/Chicago is UTC−6 in winter.
  */
-import { describe, expect } from "vitest";
+import { describe, expect, test } from "vitest";
 import { defaultFloorSettings } from "@/lib/traveller/settings";
 import { overviewContext } from "@/lib/shop/overview";
 import { shopToday } from "@/lib/shop/locale";
@@ -12,7 +12,7 @@ import { dbTest } from "../setup/db";
 const lateEvening = new Date("2026-12-05T03:30:00Z"); // 21:30 CST on 4 December in Chicago
 
 describe("the shop's day", () => {
-  dbTest("the owner's overview counts late from the shop's today", () => {
+  test("the owner's overview counts late from the shop's today", () => {
     expect(overviewContext(lateEvening, defaultFloorSettings, [], "America/Chicago").today).toBe(
       "2026-12-04",
     );
