@@ -139,6 +139,8 @@ function SizeSelect({
         className="field-input"
         value={current != null ? String(current) : "custom"}
         onChange={(e) => onPick(Number(e.target.value))}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${id}-error` : undefined}
       >
         {current == null && (
           <option value="custom">
@@ -151,7 +153,11 @@ function SizeSelect({
           </option>
         ))}
       </select>
-      {error && <p className="field-error">{error}</p>}
+      {error && (
+        <p id={`${id}-error`} className="field-error">
+          {error}
+        </p>
+      )}
     </div>
   );
 }
