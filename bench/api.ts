@@ -1,9 +1,10 @@
 /**
- * Evaluate and quote against the trivial handler (GET /api/bench/noop) in the same run, with
- * autocannon: throughput flat out (target ≥ 80 % of the trivial handler's) and latency at a fixed
- * 300 requests/s (target p99 < 25 ms).
+ * Evaluate and quote against the trivial handler (GET /api/bench/noop) in the same run:
+ * throughput flat out with autocannon (target ≥ 80 % of the trivial handler's) and latency at a
+ * steady 300 requests/s (bench/steady.ts; target p99 < 25 ms).
  */
 import autocannon from "autocannon";
+import { steady } from "./steady";
 import { readFileSync } from "node:fs";
 import { addRow, httpFigure } from "./table";
 
@@ -15,21 +16,24 @@ const TARGET_RATIO = 0.8;
 const design = JSON.parse(readFileSync("examples/street-truck.json", "utf8")) as unknown;
 
 type Options = { url: string; body?: unknown; rate?: number; duration?: number };
+const asPost = (body: unknown) =>
+  body === undefined
+    ? {}
+    : {
+        method: "POST" as const,
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify(body),
+      };
 const load = ({ url, body, rate, duration = SECONDS }: Options) =>
-  autocannon({
-    url,
-    method: body === undefined ? "GET" : "POST",
-    connections: CONNECTIONS,
-    duration,
-    ...(rate ? { overallRate: rate } : {}),
-    ...(body === undefined
-      ? {}
-      : { headers: { "content-type": "application/json" }, body: JSON.stringify(body) }),
-  });
+  rate
+    ? steady({ url, rate, seconds: duration, ...asPost(body) })
+    : autocannon({ url, connections: CONNECTIONS, duration, ...asPost(body) });
 
 /** Runs against the app at `baseUrl` (scripts/bench.sh starts one of its own). */
 export async function benchApi(baseUrl: string): Promise<void> {
-  console.log(`\nevaluate and quote, ${SECONDS} s per run, ${CONNECTIONS} connections, against ${baseUrl}`);
+  console.log(
+    `\nevaluate and quote, ${SECONDS} s per run, ${CONNECTIONS} connections flat out, against ${baseUrl}`,
+  );
   const noop = `${baseUrl}/api/bench/noop`;
   const routes = [
     { what: "POST /api/designs/evaluate", url: `${baseUrl}/api/designs/evaluate`, body: design },
@@ -53,7 +57,7 @@ export async function benchApi(baseUrl: string): Promise<void> {
     met: null,
   });
   addRow({
-    what: `GET /api/bench/noop (trivial handler), ${RATE} req/s`,
+    what: `GET /api/bench/noop (trivial handler), steady ${RATE} req/s`,
     figure: httpFigure(floorRate),
     floor: "(the floor)",
     target: "",
@@ -72,7 +76,7 @@ export async function benchApi(baseUrl: string): Promise<void> {
     });
     const fixed = await load({ url: r.url, body: r.body, rate: RATE });
     addRow({
-      what: `${r.what}, ${RATE} req/s`,
+      what: `${r.what}, steady ${RATE} req/s`,
       figure: httpFigure(fixed),
       floor: `p99 ${floorRate.latency.p99} ms`,
       target: `p99 < ${TARGET_P99_MS} ms`,
