@@ -5,8 +5,6 @@ import { User } from "./user.entity";
 
 import { NOTE_VISIBILITIES, type NoteVisibility } from "../lib/orders/states";
 
-export { NOTE_VISIBILITIES, type NoteVisibility };
-
 /** A note on an order by the shop: staff-only, or shown to the customer on their order page. */
 @Entity({ tableName: "order_note" })
 export class OrderNote {

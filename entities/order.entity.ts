@@ -21,9 +21,6 @@ import { OrderNote } from "./order-note.entity";
 
 import { ORDER_STATUSES, PAYMENT_STATES, type OrderStatus, type PaymentState } from "../lib/orders/states";
 
-// The state unions live in lib/orders/states.ts (screens use them without the ORM); re-exported here.
-export { ORDER_STATUSES, PAYMENT_STATES, type OrderStatus, type PaymentState };
-
 /** One customer order: one or more shafts, a price, a promised date, its payments and timeline. */
 @Entity({ tableName: "shop_order" })
 // Money the database itself refuses (Migration20261204110000): see lib/orders/payments.ts.

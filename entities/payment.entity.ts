@@ -5,8 +5,6 @@ import { User } from "./user.entity";
 
 import { PAYMENT_METHODS, type PaymentMethod } from "../lib/orders/states";
 
-export { PAYMENT_METHODS, type PaymentMethod };
-
 /**
  * Money on an order (deposit, balance or full): a request through a hosted checkout, or a payment
  * the counter took in person (recorded as succeeded, with its reference; no provider involved).

@@ -5,8 +5,7 @@ import { User } from "./user.entity";
 import type { WorkOrder } from "./work-order.entity";
 import type { WorkOrderStep } from "./work-order-step.entity";
 
-export const STEP_OUTCOMES = ["pass", "hold", "rework", "concession"] as const;
-export type StepOutcome = (typeof STEP_OUTCOMES)[number];
+import { STEP_OUTCOMES, type StepOutcome } from "../lib/floor/states";
 
 /** One submission at a station (or an owner's concession): who, when, what was measured, the outcome. Rows are only added. */
 @Entity({ tableName: "step_record" })

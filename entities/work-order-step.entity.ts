@@ -4,9 +4,7 @@ import type { StepSpec } from "../lib/traveller/steps";
 import { User } from "./user.entity";
 import type { WorkOrder } from "./work-order.entity";
 
-export const STEP_STATES = ["pending", "on_hold", "done"] as const;
-export type StepState = (typeof STEP_STATES)[number];
-export type StepCompletion = "pass" | "rework" | "concession";
+import { STEP_STATES, type StepCompletion, type StepState } from "../lib/floor/states";
 
 /** One routing step of one traveller revision, with its record sheet and limits frozen. */
 @Entity({ tableName: "work_order_step" })

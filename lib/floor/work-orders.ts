@@ -16,9 +16,8 @@ import {
   User,
   WorkOrder,
   WorkOrderStep,
-  type StepOutcome,
-  type WorkOrderState,
 } from "@/entities";
+import type { StepOutcome, WorkOrderState } from "@/lib/floor/states";
 import { AccessError, type CurrentUser } from "@/lib/auth/access";
 import { can, type Permission } from "@/lib/auth/permissions";
 import { recordAudit } from "@/lib/audit";
@@ -511,8 +510,8 @@ export async function voidAndReissue(
   });
 }
 
-export type OrderFloorState =
-  "not_released" | "released" | "in_shop" | "on_hold" | "ready" | "shipped" | "picked_up";
+/** An order's floor state: its shafts' least advanced state, or not released yet. */
+export type OrderFloorState = "not_released" | WorkOrderState;
 
 export interface OrderFloorSummary {
   state: OrderFloorState;

@@ -22,3 +22,18 @@ export type PaymentMethod = (typeof PAYMENT_METHODS)[number];
 export const NOTE_VISIBILITIES = ["staff", "customer"] as const;
 /** Who may read an order note: staff only, or the customer too. */
 export type NoteVisibility = (typeof NOTE_VISIBILITIES)[number];
+
+export const ORDER_EVENT_KINDS = [
+  "received",
+  "paid",
+  "payment_failed",
+  "step",
+  "ready",
+  "shipped",
+  "refunded",
+  "note",
+  "file",
+  "cancelled",
+] as const;
+/** What one entry of an order's timeline records. */
+export type OrderEventKind = (typeof ORDER_EVENT_KINDS)[number];
