@@ -45,7 +45,9 @@ describe("state unions live outside the entity files", () => {
     const offenders = entityFiles.flatMap((f) =>
       unionsIn(readFileSync(path.join(root, "entities", f), "utf8")).map((name) => `entities/${f}: ${name}`),
     );
-    expect(offenders, "move these to lib/orders/states.ts or lib/floor/states.ts and import them").toEqual([]);
+    expect(offenders, "move these to lib/orders/states.ts or lib/floor/states.ts and import them").toEqual(
+      [],
+    );
   });
 
   it("the union modules import nothing, so client components may use them", () => {
@@ -70,7 +72,9 @@ describe("state unions live outside the entity files", () => {
         expect(source, `${file} imports ${name}`).toMatch(
           new RegExp(`import \\{[^}]*\\b${name}\\b[^}]*\\} from "\\.\\./lib/(orders|floor)/states"`),
         );
-        expect(source, `${file} uses ${name} for an @Enum`).toMatch(new RegExp(`items: \\(\\) => ${name}\\b`));
+        expect(source, `${file} uses ${name} for an @Enum`).toMatch(
+          new RegExp(`items: \\(\\) => ${name}\\b`),
+        );
       }
     }
   });
