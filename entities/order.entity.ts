@@ -18,7 +18,7 @@ import { Payment } from "./payment.entity";
 import { OrderEvent } from "./order-event.entity";
 import { WorkOrder } from "./work-order.entity";
 import { OrderNote } from "./order-note.entity";
-
+// State unions live in lib/orders/states.ts, so screens and client code name them without the ORM.
 import { ORDER_STATUSES, PAYMENT_STATES, type OrderStatus, type PaymentState } from "../lib/orders/states";
 
 /** One customer order: one or more shafts, a price, a promised date, its payments and timeline. */

@@ -2,7 +2,7 @@ import { Check, Entity, Enum, Index, ManyToOne, OptionalProps, PrimaryKey, Prope
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import { User } from "./user.entity";
-
+// State unions live in lib/orders/states.ts, so screens and client code name them without the ORM.
 import { PAYMENT_METHODS, type PaymentMethod } from "../lib/orders/states";
 
 /**

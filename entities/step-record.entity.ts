@@ -4,7 +4,7 @@ import type { Failure, SiValues } from "../lib/traveller/measure";
 import { User } from "./user.entity";
 import type { WorkOrder } from "./work-order.entity";
 import type { WorkOrderStep } from "./work-order-step.entity";
-
+// State unions live in lib/floor/states.ts, so screens and client code name them without the ORM.
 import { STEP_OUTCOMES, type StepOutcome } from "../lib/floor/states";
 
 /** One submission at a station (or an owner's concession): who, when, what was measured, the outcome. Rows are only added. */
