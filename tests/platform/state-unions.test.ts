@@ -4,14 +4,15 @@ import { describe, expect, it } from "vitest";
 
 /**
  * State and kind unions (an order's statuses, a work order's states, a step's outcomes, …) live in
- * plain modules outside the entity files (lib/orders/states.ts, lib/floor/states.ts), so screens,
- * client components and views name them without importing the ORM. The entities import them for
- * their columns. This fails when an entity file defines or re-exports one again.
+ * plain modules outside the entity files (lib/orders/states.ts, lib/floor/states.ts,
+ * lib/mail/states.ts), so screens, client components and views name them without importing the
+ * ORM. The entities import them for their columns. This fails when an entity file defines or
+ * re-exports one again, or writes an enum column's values inline.
  */
 const root = path.resolve(import.meta.dirname, "../..");
 
 /** The union modules: importable from the browser, so they import nothing at all. */
-const UNION_MODULES = ["lib/orders/states.ts", "lib/floor/states.ts"];
+const UNION_MODULES = ["lib/orders/states.ts", "lib/floor/states.ts", "lib/mail/states.ts"];
 
 /** `export const X_STATES = [...] as const`, an exported string-literal union type, or a re-export of a *_STATES-like name. */
 function unionsIn(source: string): string[] {
@@ -23,6 +24,9 @@ function unionsIn(source: string): string[] {
   for (const m of source.matchAll(/^export\s*(?:type\s*)?\{([^}]*)\}/gm))
     for (const name of m[1]!.split(",").map((n) => n.replace(/^\s*type\s+/, "").trim()))
       if (/_(STATES|STATUSES|OUTCOMES|KINDS|METHODS|VISIBILITIES|COMPLETIONS)$/.test(name)) found.push(name);
+  // An enum column whose values are written inline: `@Enum({ items: ["a", "b"], ... })`.
+  for (const m of source.matchAll(/@Enum\(\{\s*items:\s*\[([^\]]*)\]/g))
+    found.push(`@Enum items [${m[1]!.trim()}]`);
   return found;
 }
 
@@ -36,8 +40,15 @@ describe("state unions live outside the entity files", () => {
       `export type WidgetKind =\n  | "round"\n  | "square";`,
       `export { PAYMENT_METHODS, type PaymentMethod };`,
       `export interface NotAUnion { a: "x" | "y" }`,
+      `class W { @Enum({ items: ["on", "off"], nativeEnumName: "w" }) s!: string; }`,
+      `class V { @Enum({ items: () => WIDGET_STATES, nativeEnumName: "v" }) s!: string; }`,
     ].join("\n");
-    expect(unionsIn(probe)).toEqual(["WIDGET_STATES", "WidgetKind", "PAYMENT_METHODS"]);
+    expect(unionsIn(probe)).toEqual([
+      "WIDGET_STATES",
+      "WidgetKind",
+      "PAYMENT_METHODS",
+      '@Enum items ["on", "off"]',
+    ]);
     expect(entityFiles.length).toBeGreaterThan(20);
   });
 
@@ -45,9 +56,10 @@ describe("state unions live outside the entity files", () => {
     const offenders = entityFiles.flatMap((f) =>
       unionsIn(readFileSync(path.join(root, "entities", f), "utf8")).map((name) => `entities/${f}: ${name}`),
     );
-    expect(offenders, "move these to lib/orders/states.ts or lib/floor/states.ts and import them").toEqual(
-      [],
-    );
+    expect(
+      offenders,
+      "move these to lib/orders/states.ts, lib/floor/states.ts or lib/mail/states.ts and import them",
+    ).toEqual([]);
   });
 
   it("the union modules import nothing, so client components may use them", () => {
@@ -60,8 +72,9 @@ describe("state unions live outside the entity files", () => {
 
   it("the entities take their enum columns' values from the union modules", () => {
     for (const [file, names] of [
-      ["order.entity.ts", ["ORDER_STATUSES", "PAYMENT_STATES"]],
-      ["payment.entity.ts", ["PAYMENT_METHODS"]],
+      ["order.entity.ts", ["ORDER_STATUSES", "PAYMENT_STATES", "ORDER_CHANNELS", "FULFILMENTS"]],
+      ["payment.entity.ts", ["PAYMENT_METHODS", "PAYMENT_KINDS", "PAYMENT_STATUSES"]],
+      ["email-message.entity.ts", ["EMAIL_STATUSES"]],
       ["order-note.entity.ts", ["NOTE_VISIBILITIES"]],
       ["work-order.entity.ts", ["WORK_ORDER_STATES"]],
       ["work-order-step.entity.ts", ["STEP_STATES"]],
@@ -70,7 +83,7 @@ describe("state unions live outside the entity files", () => {
       const source = readFileSync(path.join(root, "entities", file), "utf8");
       for (const name of names) {
         expect(source, `${file} imports ${name}`).toMatch(
-          new RegExp(`import \\{[^}]*\\b${name}\\b[^}]*\\} from "\\.\\./lib/(orders|floor)/states"`),
+          new RegExp(`import \\{[^}]*\\b${name}\\b[^}]*\\} from "\\.\\./lib/(orders|floor|mail)/states"`),
         );
         expect(source, `${file} uses ${name} for an @Enum`).toMatch(
           new RegExp(`items: \\(\\) => ${name}\\b`),
