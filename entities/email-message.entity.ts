@@ -1,5 +1,7 @@
 import { Entity, Enum, Index, OptionalProps, PrimaryKey, Property } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
+// State unions live in lib/mail/states.ts, so screens and client code name them without the ORM.
+import { EMAIL_STATUSES, type EmailStatus } from "../lib/mail/states";
 
 /**
  * Every e-mail the app sends, kept as an outbox: written with the change that causes it,
@@ -32,8 +34,8 @@ export class EmailMessage {
   orderId?: string | null;
 
   @Index()
-  @Enum({ items: ["queued", "sent", "failed"], nativeEnumName: "email_status" })
-  status: "queued" | "sent" | "failed" = "queued";
+  @Enum({ items: () => EMAIL_STATUSES, nativeEnumName: "email_status" })
+  status: EmailStatus = "queued";
 
   @Property({ type: "integer", default: 0 })
   attempts: number = 0;

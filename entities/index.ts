@@ -51,15 +51,7 @@ export {
   StepRecord,
   StaffInvitation,
 };
-export type { OrderStatus, PaymentState } from "./order.entity";
-export type { OrderEventKind } from "./order-event.entity";
-export type { WarningAcknowledgement } from "./order-shaft.entity";
-export type { NoteVisibility } from "./order-note.entity";
-export type { PaymentMethod } from "./payment.entity";
-export type { FailedCheckAcceptance } from "./order-shaft.entity";
-export type { WorkOrderState } from "./work-order.entity";
-export type { StepState, StepCompletion } from "./work-order-step.entity";
-export type { StepOutcome } from "./step-record.entity";
+export type { WarningAcknowledgement, FailedCheckAcceptance } from "./order-shaft.entity";
 
 /** Every entity, for the ORM configuration. */
 export const entities = [

@@ -2,18 +2,7 @@ import { Entity, Index, ManyToOne, OptionalProps, PrimaryKey, Property } from "@
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import { User } from "./user.entity";
-
-export type OrderEventKind =
-  | "received"
-  | "paid"
-  | "payment_failed"
-  | "step"
-  | "ready"
-  | "shipped"
-  | "refunded"
-  | "note"
-  | "file"
-  | "cancelled";
+import type { OrderEventKind } from "../lib/orders/states";
 
 /** One entry of an order's timeline, as the customer sees it. */
 @Entity({ tableName: "order_event" })

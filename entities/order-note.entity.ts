@@ -2,10 +2,8 @@ import { Entity, Enum, Index, ManyToOne, OptionalProps, PrimaryKey, Property } f
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import { User } from "./user.entity";
-
+// State unions live in lib/orders/states.ts, so screens and client code name them without the ORM.
 import { NOTE_VISIBILITIES, type NoteVisibility } from "../lib/orders/states";
-
-export { NOTE_VISIBILITIES, type NoteVisibility };
 
 /** A note on an order by the shop: staff-only, or shown to the customer on their order page. */
 @Entity({ tableName: "order_note" })

@@ -18,11 +18,17 @@ import { Payment } from "./payment.entity";
 import { OrderEvent } from "./order-event.entity";
 import { WorkOrder } from "./work-order.entity";
 import { OrderNote } from "./order-note.entity";
-
-import { ORDER_STATUSES, PAYMENT_STATES, type OrderStatus, type PaymentState } from "../lib/orders/states";
-
-// The state unions live in lib/orders/states.ts (screens use them without the ORM); re-exported here.
-export { ORDER_STATUSES, PAYMENT_STATES, type OrderStatus, type PaymentState };
+// State unions live in lib/orders/states.ts, so screens and client code name them without the ORM.
+import {
+  FULFILMENTS,
+  ORDER_CHANNELS,
+  ORDER_STATUSES,
+  PAYMENT_STATES,
+  type Fulfilment,
+  type OrderChannel,
+  type OrderStatus,
+  type PaymentState,
+} from "../lib/orders/states";
 
 /** One customer order: one or more shafts, a price, a promised date, its payments and timeline. */
 @Entity({ tableName: "shop_order" })
@@ -76,8 +82,8 @@ export class Order {
   @ManyToOne(() => User, { nullable: true, deleteRule: "set null" })
   placedBy?: User | null;
 
-  @Enum({ items: ["online", "counter"], nativeEnumName: "order_channel" })
-  channel!: "online" | "counter";
+  @Enum({ items: () => ORDER_CHANNELS, nativeEnumName: "order_channel" })
+  channel!: OrderChannel;
 
   @Index()
   @Enum({ items: () => ORDER_STATUSES, nativeEnumName: "order_status" })
@@ -86,8 +92,8 @@ export class Order {
   @Enum({ items: () => PAYMENT_STATES, nativeEnumName: "payment_state" })
   paymentState: PaymentState = "unpaid";
 
-  @Enum({ items: ["pickup", "ship"], nativeEnumName: "fulfilment" })
-  fulfilment!: "pickup" | "ship";
+  @Enum({ items: () => FULFILMENTS, nativeEnumName: "fulfilment" })
+  fulfilment!: Fulfilment;
 
   @Property({ type: "text", nullable: true })
   shipTo?: string | null;

@@ -2,10 +2,15 @@ import { Check, Entity, Enum, Index, ManyToOne, OptionalProps, PrimaryKey, Prope
 import { randomUUID } from "node:crypto";
 import type { Order } from "./order.entity";
 import { User } from "./user.entity";
-
-import { PAYMENT_METHODS, type PaymentMethod } from "../lib/orders/states";
-
-export { PAYMENT_METHODS, type PaymentMethod };
+// State unions live in lib/orders/states.ts, so screens and client code name them without the ORM.
+import {
+  PAYMENT_KINDS,
+  PAYMENT_METHODS,
+  PAYMENT_STATUSES,
+  type PaymentKind,
+  type PaymentMethod,
+  type PaymentStatus,
+} from "../lib/orders/states";
 
 /**
  * Money on an order (deposit, balance or full): a request through a hosted checkout, or a payment
@@ -36,8 +41,8 @@ export class Payment {
   @ManyToOne("Order", { deleteRule: "restrict" })
   order!: Order;
 
-  @Enum({ items: ["deposit", "balance", "full"], nativeEnumName: "payment_kind" })
-  kind!: "deposit" | "balance" | "full";
+  @Enum({ items: () => PAYMENT_KINDS, nativeEnumName: "payment_kind" })
+  kind!: PaymentKind;
 
   @Property({ type: "integer" })
   amountCents!: number;
@@ -45,8 +50,8 @@ export class Payment {
   @Property({ type: "text" })
   currency!: string;
 
-  @Enum({ items: ["open", "succeeded", "failed", "expired"], nativeEnumName: "payment_status" })
-  status: "open" | "succeeded" | "failed" | "expired" = "open";
+  @Enum({ items: () => PAYMENT_STATUSES, nativeEnumName: "payment_status" })
+  status: PaymentStatus = "open";
 
   @Enum({ items: () => PAYMENT_METHODS, nativeEnumName: "payment_method", default: "checkout" })
   method: PaymentMethod = "checkout";

@@ -4,9 +4,8 @@ import type { Failure, SiValues } from "../lib/traveller/measure";
 import { User } from "./user.entity";
 import type { WorkOrder } from "./work-order.entity";
 import type { WorkOrderStep } from "./work-order-step.entity";
-
-export const STEP_OUTCOMES = ["pass", "hold", "rework", "concession"] as const;
-export type StepOutcome = (typeof STEP_OUTCOMES)[number];
+// State unions live in lib/floor/states.ts, so screens and client code name them without the ORM.
+import { STEP_OUTCOMES, type StepOutcome } from "../lib/floor/states";
 
 /** One submission at a station (or an owner's concession): who, when, what was measured, the outcome. Rows are only added. */
 @Entity({ tableName: "step_record" })

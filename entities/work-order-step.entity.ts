@@ -3,10 +3,8 @@ import { randomUUID } from "node:crypto";
 import type { StepSpec } from "../lib/traveller/steps";
 import { User } from "./user.entity";
 import type { WorkOrder } from "./work-order.entity";
-
-export const STEP_STATES = ["pending", "on_hold", "done"] as const;
-export type StepState = (typeof STEP_STATES)[number];
-export type StepCompletion = "pass" | "rework" | "concession";
+// State unions live in lib/floor/states.ts, so screens and client code name them without the ORM.
+import { STEP_STATES, type StepCompletion, type StepState } from "../lib/floor/states";
 
 /** One routing step of one traveller revision, with its record sheet and limits frozen. */
 @Entity({ tableName: "work_order_step" })

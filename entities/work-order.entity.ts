@@ -16,9 +16,8 @@ import type { Order } from "./order.entity";
 import type { OrderShaft } from "./order-shaft.entity";
 import { User } from "./user.entity";
 import { WorkOrderStep } from "./work-order-step.entity";
-
-export const WORK_ORDER_STATES = ["released", "in_shop", "on_hold", "ready", "shipped", "picked_up"] as const;
-export type WorkOrderState = (typeof WORK_ORDER_STATES)[number];
+// State unions live in lib/floor/states.ts, so screens and client code name them without the ORM.
+import { WORK_ORDER_STATES, type WorkOrderState } from "../lib/floor/states";
 
 /** One shaft of a released order on the shop floor: its serial for life, its traveller revision, where it is. */
 @Entity({ tableName: "work_order" })

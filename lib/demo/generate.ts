@@ -353,7 +353,9 @@ function drawPlan(rnd: () => number, created: number, now: number): Plan {
 
 /** What the newest orders do in a showcase (by age: 0 = the newest). */
 const SHOWCASE: Record<number, Partial<Plan>> = {
-  0: { payH: 0.3, releaseH: 10_000, cancel: null }, // paid; the desk has not released it yet
+  // Paid, not yet released: the release sweep (lib/floor/release-sweep.ts) takes it to the shop
+  // within a minute of the app starting, as it would an order whose automatic release went missing.
+  0: { payH: 0.3, releaseH: 10_000, cancel: null },
   1: { payH: null, cancel: null }, // awaiting its deposit
   3: { payH: 0.3, releaseH: 0.02, cancel: null, hold: { step: 0, reworkH: Infinity }, slow: 0.2 }, // on hold at the saw
 };
@@ -460,6 +462,12 @@ export async function generateShop(db: ClientBase, opts: GenerateOptions): Promi
     );
     const orderId = randomUUID();
     const number = await nextNumber(createdAt);
+    // Every order has its shafts from the moment it is placed (released or not, cancelled or not).
+    const shaftIds = picked.map((d, p) => {
+      const id = randomUUID();
+      rows.shafts.push([id, orderId, p + 1, d.name, d.key]);
+      return id;
+    });
     const promised = addBusinessDays(new Date(createdAt), book.leadTimeWorkingDays)
       .toISOString()
       .slice(0, 10);
@@ -631,8 +639,7 @@ export async function generateShop(db: ClientBase, opts: GenerateOptions): Promi
       let last = releaseAt;
       for (let p = 0; p < picked.length; p++) {
         const d = picked[p]!;
-        const shaftId = randomUUID();
-        rows.shafts.push([shaftId, orderId, p + 1, d.name, d.key]);
+        const shaftId = shaftIds[p]!;
         const woId = randomUUID();
         const serial = await nextSerial(releaseAt);
         const specs = d.steps[fulfilment];

@@ -4,7 +4,8 @@ import "server-only";
  * as-built record.
  */
 import type { EntityManager } from "@mikro-orm/postgresql";
-import { StepRecord, WorkOrder, WorkOrderStep, type StepOutcome, type WorkOrderState } from "@/entities";
+import { StepRecord, WorkOrder, WorkOrderStep } from "@/entities";
+import type { StepOutcome, WorkOrderState } from "@/lib/floor/states";
 import type { Failure, SiValues } from "@/lib/traveller/measure";
 import type { StepSpec } from "@/lib/traveller/steps";
 import { findWorkOrderBySerial } from "./work-orders";

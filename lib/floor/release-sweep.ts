@@ -1,7 +1,7 @@
 import "server-only";
 import { freshEm } from "@/lib/db/orm";
 import { logger } from "@/lib/logger";
-import { releaseOrderOnDeposit } from "./work-orders";
+import { releaseOrderOnDeposit, UnroutableOrderError } from "./work-orders";
 
 /** How long a paid order waits for its own release (the webhook's, right after the commit) before the sweep takes it. */
 export const RELEASE_SWEEP_AFTER_SECONDS = 60;
@@ -10,7 +10,9 @@ export const RELEASE_SWEEP_AFTER_SECONDS = 60;
  * Releases orders whose deposit is paid but that never reached the shop (the release after the
  * payment failed, e.g. the database went away between the payment's commit and the release).
  * Orders waiting for an owner's engineering sign-off stay as they are (releaseOrderOnDeposit
- * refuses them quietly). Returns the numbers released.
+ * refuses them quietly). An order whose stored evaluation the routing cannot read (no `shopFloor`,
+ * say) is skipped with a warning naming the order and what is missing; the rest go on. Returns the
+ * ids of the orders released.
  */
 export async function releasePaidOrders(options: { olderThanSeconds?: number } = {}): Promise<string[]> {
   const em = await freshEm();
@@ -28,7 +30,12 @@ export async function releasePaidOrders(options: { olderThanSeconds?: number } =
       const result = await releaseOrderOnDeposit(id);
       if (result) released.push(id);
     } catch (err) {
-      logger.warn({ err, orderId: id }, "release sweep could not release a paid order");
+      if (err instanceof UnroutableOrderError)
+        logger.warn(
+          { orderId: id, orderNumber: err.orderNumber, missing: err.missing },
+          `release sweep skipped order ${err.orderNumber}: ${err.detail}`,
+        );
+      else logger.warn({ err, orderId: id }, "release sweep could not release a paid order");
     }
   }
   if (released.length) logger.info({ released }, "release sweep released paid orders");

@@ -5,7 +5,8 @@ import "server-only";
  * record). Void revisions and codes that fail their check character are refused with a message.
  */
 import type { EntityManager } from "@mikro-orm/postgresql";
-import { StepRecord, WorkOrder, WorkOrderStep, type WorkOrderState } from "@/entities";
+import { StepRecord, WorkOrder, WorkOrderStep } from "@/entities";
+import type { WorkOrderState } from "@/lib/floor/states";
 import { AppError } from "@/lib/http/errors";
 import { assertCurrentRevision, assertNotVoided } from "./work-orders";
 import { getShopEngineering } from "@/lib/shop/config";

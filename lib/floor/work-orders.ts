@@ -7,18 +7,8 @@ import "server-only";
  */
 import { LockMode, UniqueConstraintViolationException } from "@mikro-orm/core";
 import type { EntityManager } from "@mikro-orm/postgresql";
-import {
-  Order,
-  OrderEvent,
-  OrderShaft,
-  Shop,
-  StepRecord,
-  User,
-  WorkOrder,
-  WorkOrderStep,
-  type StepOutcome,
-  type WorkOrderState,
-} from "@/entities";
+import { Order, OrderEvent, OrderShaft, Shop, StepRecord, User, WorkOrder, WorkOrderStep } from "@/entities";
+import type { StepOutcome, WorkOrderState } from "@/lib/floor/states";
 import { AccessError, type CurrentUser } from "@/lib/auth/access";
 import { can, type Permission } from "@/lib/auth/permissions";
 import { recordAudit } from "@/lib/audit";
@@ -29,7 +19,7 @@ import { getShopEngineering } from "@/lib/shop/config";
 import { formatSerial, parseSerial, parseStepCode } from "@/lib/traveller/codes";
 import { checkMeasurements, type Failure, type SiValues } from "@/lib/traveller/measure";
 import type { FloorSettings } from "@/lib/traveller/settings";
-import { deriveSteps, type StepSpec } from "@/lib/traveller/steps";
+import { deriveSteps, missingForRouting, type StepSpec } from "@/lib/traveller/steps";
 import { buildTravellerView, type TravellerView } from "@/lib/traveller/view";
 import { acceptedExceptions, assertSignedOff } from "@/lib/orders/engineering-signoff";
 import { reusedParts, RETUBE_PART_LABEL, type RepairBlock } from "@/lib/retube/intake";
@@ -111,8 +101,29 @@ export async function releaseOrderOnDeposit(orderId: string): Promise<ReleaseRes
   try {
     return await release(orderId, null, null);
   } catch (error) {
+    if (error instanceof UnroutableOrderError) throw error; // not a quiet "not now": the desk must look
     if (error instanceof AppError && (error.code === "conflict" || error.code === "invalid")) return null;
     throw error;
+  }
+}
+
+/**
+ * An order whose stored evaluation lacks what the routing reads (e.g. its `shopFloor` tolerances):
+ * nothing is released, and the message names the order, the shaft and what is missing.
+ */
+export class UnroutableOrderError extends AppError {
+  /** E.g. "shaft 1's stored evaluation has no shopFloor". */
+  readonly detail: string;
+
+  constructor(
+    readonly orderNumber: string,
+    readonly missing: { shaft: number; parts: string[] }[],
+  ) {
+    const detail = missing
+      .map((m) => `shaft ${m.shaft}'s stored evaluation has no ${m.parts.join(", ")}`)
+      .join("; ");
+    super("conflict", `Order ${orderNumber} cannot be released to the shop: ${detail}.`);
+    this.detail = detail;
   }
 }
 
@@ -133,6 +144,10 @@ async function release(orderId: string, by: CurrentUser | null, note: string | n
     }
     const shafts = await em.find(OrderShaft, { order: order.id }, { orderBy: { position: "asc" } });
     if (!shafts.length) throw new AppError("conflict", `Order ${order.number} has no shafts.`);
+    const unroutable = shafts
+      .map((s) => ({ shaft: s.position, parts: missingForRouting(s.evaluation) }))
+      .filter((m) => m.parts.length > 0);
+    if (unroutable.length) throw new UnroutableOrderError(order.number, unroutable);
 
     // Serials run per year; one release at a time takes the next numbers.
     const year = new Date().getUTCFullYear();
@@ -511,8 +526,8 @@ export async function voidAndReissue(
   });
 }
 
-export type OrderFloorState =
-  "not_released" | "released" | "in_shop" | "on_hold" | "ready" | "shipped" | "picked_up";
+/** An order's floor state: its shafts' least advanced state, or not released yet. */
+export type OrderFloorState = "not_released" | WorkOrderState;
 
 export interface OrderFloorSummary {
   state: OrderFloorState;

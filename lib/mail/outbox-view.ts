@@ -2,6 +2,7 @@ import "server-only";
 import { isUuid } from "@/lib/http/known-errors";
 import { EmailMessage } from "@/entities";
 import { getEm } from "@/lib/db/orm";
+import type { EmailStatus } from "./states";
 
 export interface OutboxRow {
   id: string;
@@ -9,7 +10,7 @@ export interface OutboxRow {
   to: string;
   subject: string;
   template: string;
-  status: "queued" | "sent" | "failed";
+  status: EmailStatus;
   attempts: number;
   lastError: string | null;
   provider: string | null;

@@ -1,5 +1,6 @@
 import "server-only";
-import { OrderEvent, Payment, User, type PaymentMethod } from "@/entities";
+import { OrderEvent, Payment, User } from "@/entities";
+import type { PaymentMethod } from "./states";
 import type { CurrentUser } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/permissions";
 import { recordAudit } from "@/lib/audit";

@@ -1,6 +1,7 @@
 import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
-import { AuditEvent, Customer, User, type OrderStatus } from "@/entities";
+import { AuditEvent, Customer, User } from "@/entities";
+import type { OrderStatus } from "@/lib/orders/states";
 import { getEm } from "@/lib/db/orm";
 import type { Failure } from "@/lib/traveller/measure";
 import type { FloorSettings } from "@/lib/traveller/settings";

@@ -1,6 +1,6 @@
 /** The orders table: its query (URL), its row and its columns. Pure: server and browser import it. */
 import { z } from "zod";
-import type { OrderStatus, PaymentState } from "@/entities";
+import type { OrderStatus, PaymentState } from "@/lib/orders/states";
 import { ORDER_STATUS_LABEL, PAYMENT_STATE_LABEL } from "@/lib/orders/labels";
 import { csvMoney, hideableIds, shortTimestamp, type ColumnSpec } from "./columns";
 import {

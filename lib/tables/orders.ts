@@ -2,7 +2,7 @@ import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { Knex } from "@mikro-orm/knex";
 import { orderStatusLabel } from "@/lib/orders/labels";
-import type { OrderStatus, PaymentState } from "@/entities";
+import type { OrderStatus, PaymentState } from "@/lib/orders/states";
 import type { ListOrdersQuery, OrderTableRow } from "./orders-spec";
 import { containsPattern } from "./params";
 import { shopToday } from "@/lib/shop/locale";

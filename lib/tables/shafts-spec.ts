@@ -1,6 +1,6 @@
 /** The shafts table (one row per work order): its query, row and columns. Pure. */
 import { z } from "zod";
-import type { WorkOrderState } from "@/entities";
+import type { WorkOrderState } from "@/lib/floor/states";
 import { hideableIds, shortTimestamp, type ColumnSpec } from "./columns";
 import { flagParam, hideParam, pagingShape, searchParam, sortParam } from "./params";
 

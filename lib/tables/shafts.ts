@@ -1,6 +1,6 @@
 import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
-import type { WorkOrderState } from "@/entities";
+import type { WorkOrderState } from "@/lib/floor/states";
 import type { ListShaftsQuery, ShaftTableRow } from "./shafts-spec";
 import { containsPattern } from "./params";
 import { shopToday } from "@/lib/shop/locale";

@@ -1,6 +1,6 @@
 /** The step records table (who signed which step of which shaft, when, with what result). Pure. */
 import { z } from "zod";
-import type { StepOutcome } from "@/entities";
+import type { StepOutcome } from "@/lib/floor/states";
 import { hideableIds, shortTimestamp, type ColumnSpec } from "./columns";
 import { dateRangeRefine, hideParam, isoDateParam, pagingShape, sortParam } from "./params";
 import { stepCodeParam } from "./shafts-spec";

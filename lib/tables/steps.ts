@@ -1,6 +1,6 @@
 import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
-import type { StepOutcome } from "@/entities";
+import type { StepOutcome } from "@/lib/floor/states";
 import type { ListStepsQuery, StepTableRow } from "./steps-spec";
 import { pagedSelect, type Page } from "./sql";
 

@@ -10,6 +10,7 @@ import { shaftUseLabel } from "@/lib/driveline/uses";
 import { GREY, MARGIN, PAGE, Writer, drawQr, embedFonts, type Fonts } from "./pdf-kit";
 import { describeLimit, type BalanceWeight, type SiValues } from "./measure";
 import type { FieldSpec, StepSpec } from "./steps";
+import type { StepCompletion } from "@/lib/floor/states";
 import { formatQuantity, type FloorUnits } from "./units";
 import { formatTimestamp } from "../dates";
 
@@ -59,7 +60,7 @@ export interface InstallSheetView extends PapersHeader {
 
 export interface AsBuiltStep {
   spec: StepSpec;
-  completion: "pass" | "rework" | "concession" | null;
+  completion: StepCompletion | null;
   completedAt: Date | null;
   byName: string | null;
   /** The values of the record that completed the step (SI). */

@@ -259,6 +259,31 @@ export function fieldsFor(step: RoutingStep, ctx: StepContext): FieldSpec[] {
   }
 }
 
+/**
+ * What a stored evaluation report lacks that the routing reads (deriveSteps), as paths such as
+ * "shopFloor" or "shopFloor.lengthToleranceMm"; empty when the routing can be derived. A frozen
+ * report is JSON from the database, so its shape is checked here rather than trusted.
+ */
+export function missingForRouting(report: unknown): string[] {
+  if (report == null || typeof report !== "object") return ["the evaluation report"];
+  const r = report as Record<string, unknown>;
+  const isObject = (v: unknown): v is Record<string, unknown> => v != null && typeof v === "object";
+  const missing: string[] = [];
+  if (!isObject(r.shopFloor)) missing.push("shopFloor");
+  else
+    for (const key of ["lengthToleranceMm", "runoutEndsMm", "runoutCentreMm", "phasingToleranceDeg"])
+      if (typeof r.shopFloor[key] !== "number") missing.push(`shopFloor.${key}`);
+  if (typeof r.lengthMm !== "number") missing.push("lengthMm");
+  if (!isObject(r.phasing)) missing.push("phasing");
+  if (r.layout === "two-piece") {
+    if (!Array.isArray(r.pieces)) missing.push("pieces");
+  } else {
+    if (!isObject(r.service)) missing.push("service");
+    if (!isObject(r.balance)) missing.push("balance");
+  }
+  return missing;
+}
+
 /** The record sheet of every step of the routing, in order. */
 export function deriveSteps(ctx: StepContext): StepSpec[] {
   if (ctx.report.layout === "two-piece") return deriveTwoPieceSteps(ctx);

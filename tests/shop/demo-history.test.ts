@@ -107,4 +107,29 @@ describe("the demo history", () => {
       expect(release).toEqual([]);
     },
   );
+
+  dbTest("every order has its shafts, as many as its timeline says, released or not", async () => {
+    const received = await q<{ number: string; status: string; label: string; shafts: number }>(`
+      select o.number, o.status::text, e.label, (select count(*)::int from order_shaft s where s.order_id = o.id) shafts
+      from shop_order o join order_event e on e.order_id = o.id and e.kind = 'received'`);
+    expect(received).toHaveLength(DEMO_HISTORY_ORDERS);
+    const disagree = received.filter((r) => {
+      const said = /^Order received \((\d+) shafts?\)$/.exec(r.label);
+      return !said || Number(said[1]) !== r.shafts || r.shafts < 1;
+    });
+    expect(disagree).toEqual([]);
+    // Those never released (awaiting payment, paid but not yet released, cancelled) included.
+    for (const status of ["awaiting_payment", "received", "cancelled"])
+      expect(received.filter((r) => r.status === status && r.shafts > 0).length, status).toBeGreaterThan(0);
+    // Released shafts each have their work order; an order's shafts are numbered 1..n.
+    const gaps = await q(`
+      select o.number from shop_order o where exists (
+        select 1 from order_shaft s where s.order_id = o.id
+        group by s.order_id having min(s.position) <> 1 or max(s.position) <> count(*))
+        or exists (select 1 from work_order w where w.order_id = o.id)
+          and exists (select 1 from order_shaft s where s.order_id = o.id
+            and not exists (select 1 from work_order w where w.order_shaft_id = s.id))`);
+    expect(gaps).toEqual([]);
+    expect(made.shafts).toBe(received.reduce((n, r) => n + r.shafts, 0));
+  });
 });
