@@ -28,6 +28,7 @@ import { staff } from "../floor/helpers";
 
 import { updateOrderDetailsAction } from "@/lib/actions/update-order-details";
 import { shopToday } from "@/lib/shop/locale";
+import { shopIsoDate } from "@/lib/dates";
 
 // Server actions read the session from next/headers; outside a Next request we hand it the cookie.
 const session = vi.hoisted(() => ({ cookie: "" }));
@@ -158,7 +159,8 @@ describe("engineering sign-off", () => {
       expect(text).toContain(`ACCEPTED EXCEPTION - check "${check.id}" FAILED`);
       expect(text).toContain("Slow industrial conveyor drive");
       expect(text).toContain(`accepted by ${owner.name}`);
-      expect(text).toContain(new Date().toISOString().slice(0, 10));
+      // The traveller dates the acceptance in the shop's own day, not UTC's.
+      expect(text).toContain(shopIsoDate(new Date(), (await getShopEngineering()).priceBook.timeZone));
     },
   );
 
