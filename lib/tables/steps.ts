@@ -2,6 +2,7 @@ import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { StepOutcome } from "@/lib/floor/states";
 import type { ListStepsQuery, StepTableRow } from "./steps-spec";
+import { getShopLocale } from "@/lib/shop/locale";
 import { pagedSelect, type Page } from "./sql";
 
 const ORDER_BY: Record<ListStepsQuery["sort"], string[]> = {
@@ -56,9 +57,10 @@ export async function stepTablePage(
   if (q.step) base.where("s.code", q.step);
   if (q.result) base.where("r.outcome", q.result);
   if (q.user) base.where("r.by_id", q.user);
-  // Whole UTC days, the `to` day included.
-  if (q.from) base.where("r.at", ">=", knex.raw("?::date", [q.from]));
-  if (q.to) base.where("r.at", "<", knex.raw("?::date + 1", [q.to]));
+  // Whole days in the shop's time zone (its midnight to midnight), the `to` day included.
+  const { timeZone } = await getShopLocale();
+  if (q.from) base.where("r.at", ">=", knex.raw("(?::date)::timestamp at time zone ?", [q.from, timeZone]));
+  if (q.to) base.where("r.at", "<", knex.raw("(?::date + 1)::timestamp at time zone ?", [q.to, timeZone]));
   const page = await pagedSelect<RawStepRow>(em, {
     base,
     idColumn: "r.id",

@@ -16,6 +16,7 @@ import { listCustomersQuerySchema } from "@/lib/tables/customers-spec";
 import { shaftTablePage } from "@/lib/tables/shafts";
 import { listShaftsQuerySchema } from "@/lib/tables/shafts-spec";
 import { stepTablePage } from "@/lib/tables/steps";
+import { shopToday } from "@/lib/shop/locale";
 import { listStepsQuerySchema } from "@/lib/tables/steps-spec";
 import { authRequest, sessionCookie, signUpVerified, uniqueEmail } from "../setup/auth-requests";
 import { dbTest, requireDatabase } from "../setup/db";
@@ -367,8 +368,17 @@ describe("the staff tables on known data", () => {
       expect((await steps({ result: "hold" })).rows.map((r) => r.stepCode)).toEqual(["RUN"]);
       expect((await steps({ step: "WLD" })).rows.map((r) => r.stepCode)).toEqual(["WLD"]);
       expect((await steps({ from: "2000-01-01", to: "2000-12-31" })).total).toBe(0);
-      const today = new Date().toISOString().slice(0, 10);
+      const today = await shopToday();
       expect((await steps({ from: today, to: today })).total).toBe(3);
+      // Days are the shop's (America/Chicago by default), not UTC's: 03:30 UTC on 10 March 2026 is
+      // 22:30 on the 9th in Chicago (CDT, UTC−5, from 8 March 2026 — the IANA tz database).
+      await em
+        .getConnection()
+        .execute(`update step_record set at = '2026-03-10T03:30:00Z' where id = ?`, [all.rows[0]!.id]);
+      expect((await steps({ from: "2026-03-09", to: "2026-03-09" })).rows.map((r) => r.stepCode)).toEqual([
+        "CUT",
+      ]);
+      expect((await steps({ from: "2026-03-10", to: "2026-03-10" })).total).toBe(0);
     },
   );
 });

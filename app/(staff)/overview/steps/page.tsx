@@ -39,7 +39,7 @@ export default async function StepsTablePage({ searchParams }: PageProps<"/overv
       options: STEP_OUTCOME_VALUES.map((o) => ({ value: o, label: STEP_OUTCOME_LABEL[o] })),
     },
     { kind: "select", name: "user", label: "Signed by", allLabel: "Anyone", options: users },
-    { kind: "date-range", label: "Signed between (UTC)", from: "from", to: "to" },
+    { kind: "date-range", label: "Signed between", from: "from", to: "to" },
   ];
   return (
     <>
