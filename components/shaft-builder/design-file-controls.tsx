@@ -3,7 +3,8 @@
 import { useRef, useState } from "react";
 import type { UseFormReturn } from "react-hook-form";
 import { Download, FileUp } from "lucide-react";
-import { parseDesign, type Catalogue, type DesignFile } from "@/lib/driveline";
+import type { Catalogue, DesignFile } from "@/lib/driveline";
+import { parseDesign } from "@/lib/driveline/schema";
 import { Alert } from "@/components/ui/alert";
 import { designFileJson, designFileName, designFileToForm, type BuilderForm } from "./model";
 

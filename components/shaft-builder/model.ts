@@ -4,6 +4,8 @@
  * switch only changes how numbers are shown, so it can never lose precision.
  */
 import { z } from "zod";
+import type { Catalogue, DesignFile, FieldIssue } from "@/lib/driveline";
+import { parseDesign } from "@/lib/driveline/schema";
 import {
   inToMm,
   kgToLb,
@@ -13,11 +15,7 @@ import {
   mmToIn,
   mphToKmh,
   nmToLbft,
-  parseDesign,
-  type Catalogue,
-  type DesignFile,
-  type FieldIssue,
-} from "@/lib/driveline";
+} from "@/lib/driveline/units";
 import { designApplicationSchema, designNameSchema, type ShaftUse } from "@/lib/designs/schemas";
 
 export type UnitSystem = "imperial" | "metric";

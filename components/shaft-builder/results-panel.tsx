@@ -4,19 +4,17 @@ import { formatMoney } from "@/lib/money";
 
 import { useState } from "react";
 import { AlertTriangle, CheckCircle2, XCircle } from "lucide-react";
-import {
-  DEMO_CATALOGUE_NOTE,
-  DISCLAIMER,
-  SAFETY_CAUTION,
-  kgToLb,
-  type Catalogue,
-  type CheckStatus,
-  type DesignFile,
-  type EvaluationReport,
-  type TubeCandidate,
-  type TubePreference,
-  sameTube,
+import type {
+  Catalogue,
+  CheckStatus,
+  DesignFile,
+  EvaluationReport,
+  TubeCandidate,
+  TubePreference,
 } from "@/lib/driveline";
+import { sameTube } from "@/lib/driveline/catalogue/tube-match";
+import { DEMO_CATALOGUE_NOTE, DISCLAIMER, SAFETY_CAUTION } from "@/lib/driveline/report";
+import { kgToLb } from "@/lib/driveline/units";
 import { DrivelineView } from "./driveline-diagram";
 import { SpeedRatioPlot } from "./speed-ratio-plot";
 import { LoadsSummary } from "./loads-summary";

@@ -2,7 +2,8 @@
 
 import { useState } from "react";
 import type { UseFormReturn } from "react-hook-form";
-import { parseDesign, type Catalogue } from "@/lib/driveline";
+import type { Catalogue } from "@/lib/driveline";
+import { parseDesign } from "@/lib/driveline/schema";
 import type { DraftSummary, DraftView } from "@/lib/designs/drafts";
 import type { ActionResult } from "@/lib/actions/define-action";
 import { UNREACHABLE, sendJson, useMutation, type MutationError } from "@/lib/browser/mutation";

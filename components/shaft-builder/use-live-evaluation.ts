@@ -2,15 +2,8 @@
 
 import { useDeferredValue, useMemo, useState } from "react";
 import { useWatch, type Control } from "react-hook-form";
-import {
-  DesignInputError,
-  evaluateDesign,
-  type Catalogue,
-  type DesignFile,
-  type EvaluationReport,
-  type ShopSettings,
-  type TubePreference,
-} from "@/lib/driveline";
+import type { Catalogue, DesignFile, EvaluationReport, ShopSettings, TubePreference } from "@/lib/driveline";
+import { DesignInputError, evaluateDesign } from "@/lib/driveline/evaluate";
 import { validateBuilderForm, type BuilderForm, type FormValidation } from "./model";
 
 export interface Evaluation {
