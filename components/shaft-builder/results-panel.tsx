@@ -119,7 +119,7 @@ export function ResultsPanel({
           data-testid="calculating-note"
         >
           <Loader2 className="size-4 animate-spin" aria-hidden="true" />
-          Calculating your changes…
+          Calculating your changes… the results below are from your previous entries.
         </div>
       )}
       <div className={`space-y-5 ${stale ? "opacity-50 grayscale" : calculating ? "opacity-60" : ""}`}>

@@ -1,0 +1,44 @@
+import { chromium } from "playwright";
+const base = process.env.BASE!;
+const out = "/tmp/wt-bundle-shots";
+const res = await fetch(`${base}/api/auth/sign-in/email`, { method: "POST", headers: { "content-type": "application/json", origin: base }, body: JSON.stringify({ email: "rosa@customer.example", password: "yokeline-demo-2026" }) });
+const cookies = res.headers.getSetCookie().map((c) => { const [p] = c.split(";"); const i = p!.indexOf("="); return { name: p!.slice(0, i), value: p!.slice(i + 1), url: base }; });
+const browser = await chromium.launch({ executablePath: "/usr/bin/chromium" });
+for (const width of [1280, 390]) {
+  const ctx = await browser.newContext({ viewport: { width, height: 900 } });
+  await ctx.addCookies(cookies);
+  const page = await ctx.newPage();
+  const scripts: string[] = [];
+  let loaded = false;
+  page.on("request", (r) => { if (r.resourceType() === "script") scripts.push((loaded ? "after " : "before ") + r.url().replace(base, "")); });
+  page.on("console", (m) => { if (m.type() === "error") console.log("console error:", m.text()); });
+  page.on("pageerror", (e) => console.log("page error:", e.message));
+  // Slow the on-demand chunks a little so the loading states can be seen.
+  await page.route("**/_next/static/chunks/**", async (r) => { if (loaded) await new Promise((f) => setTimeout(f, 1500)); await r.continue(); });
+  await page.goto(`${base}/build`, { waitUntil: "load" });
+  loaded = true;
+  await page.locator("[data-builder-ready]").waitFor();
+  await page.waitForTimeout(1500);
+  console.log(width, "verdict at start:", (await page.locator("#results").innerText()).slice(0, 200).replace(/\n/g, " | "));
+  await page.screenshot({ path: `${out}/build-${width}-start.png`, fullPage: width === 1280 });
+  const len = page.getByLabel("Installed length");
+  await len.fill("95");
+  await page.waitForTimeout(300);
+  await page.screenshot({ path: `${out}/build-${width}-calculating.png` });
+  console.log(width, "calculating note:", await page.getByTestId("calculating-note").count());
+  await page.getByTestId("calculating-note").waitFor({ state: "detached", timeout: 10000 });
+  await page.waitForTimeout(500);
+  console.log(width, "after edit:", (await page.locator("#results").innerText()).slice(0, 300).replace(/\n/g, " | "));
+  await page.screenshot({ path: `${out}/build-${width}-after.png` });
+  const guide = page.getByText("How to measure: installed length");
+  await guide.scrollIntoViewIfNeeded();
+  await page.mouse.move(0, 0);
+  await guide.click();
+  await page.waitForTimeout(300);
+  await page.screenshot({ path: `${out}/build-${width}-guide-loading.png` });
+  await page.waitForTimeout(2500);
+  await page.screenshot({ path: `${out}/build-${width}-guide.png` });
+  console.log(scripts.join("\n"));
+  await ctx.close();
+}
+await browser.close();
