@@ -11,6 +11,7 @@ export function BuilderResults({
   form,
   shown,
   stale,
+  calculating = false,
   system,
   catalogue,
   tubeChosen,
@@ -21,6 +22,8 @@ export function BuilderResults({
   form: BuilderForm;
   shown: Evaluation | null;
   stale: boolean;
+  /** The form changed and the engineering is still loading: `shown` is the last result. */
+  calculating?: boolean;
   system: UnitSystem;
   catalogue: Catalogue;
   tubeChosen: boolean;
@@ -39,6 +42,7 @@ export function BuilderResults({
           report={shown.report}
           design={shown.design}
           stale={stale}
+          calculating={calculating}
           system={system}
           catalogue={catalogue}
           tubeChosen={tubeChosen}
@@ -56,7 +60,15 @@ export function BuilderResults({
 }
 
 /** On a phone: the overall result pinned to the bottom, linking to the results. */
-export function ResultBar({ shown, stale }: { shown: Evaluation | null; stale: boolean }) {
+export function ResultBar({
+  shown,
+  stale,
+  calculating = false,
+}: {
+  shown: Evaluation | null;
+  stale: boolean;
+  calculating?: boolean;
+}) {
   if (!shown) return null;
   return (
     <a
@@ -64,7 +76,7 @@ export function ResultBar({ shown, stale }: { shown: Evaluation | null; stale: b
       className="no-print fixed inset-x-3 bottom-3 z-30 flex items-center justify-between rounded-card border border-line bg-paper-raised px-4 py-2 text-sm no-underline shadow-card lg:hidden"
     >
       <span className="text-ink">
-        {stale ? "Last valid: " : "Result: "}
+        {calculating ? "Calculating… last: " : stale ? "Last valid: " : "Result: "}
         <StatusWord status={shown.report.overall} />
       </span>
       <span className="font-medium text-steel-700">See results ↓</span>

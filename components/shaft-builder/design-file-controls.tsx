@@ -3,8 +3,9 @@
 import { useRef, useState } from "react";
 import type { UseFormReturn } from "react-hook-form";
 import { Download, FileUp } from "lucide-react";
-import { parseDesign, type Catalogue, type DesignFile } from "@/lib/driveline";
+import type { Catalogue, DesignFile } from "@/lib/driveline";
 import { Alert } from "@/components/ui/alert";
+import { loadBuilderCore } from "./load-builder-core";
 import { designFileJson, designFileName, designFileToForm, type BuilderForm } from "./model";
 
 type UploadState =
@@ -41,6 +42,17 @@ export function useDesignFile({
 
   async function load(file: File) {
     let input: unknown;
+    let parseDesign;
+    try {
+      ({ parseDesign } = await loadBuilderCore());
+    } catch {
+      setUpload({
+        kind: "error",
+        fileName: file.name,
+        messages: ["The shop could not be reached to check the file. Check the connection, then try again."],
+      });
+      return;
+    }
     try {
       input = JSON.parse(await file.text());
     } catch {

@@ -2,7 +2,7 @@
 import { ShopTime } from "@/components/shop-locale";
 
 import { FolderOpen } from "lucide-react";
-import { shaftUseLabel } from "@/lib/driveline";
+import { shaftUseLabel } from "@/lib/driveline/uses";
 import type { Drafts } from "./use-drafts";
 import { withUnit, type UnitSystem } from "./model";
 

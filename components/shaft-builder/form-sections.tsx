@@ -1,7 +1,8 @@
 "use client";
 
 import type { FieldErrors } from "react-hook-form";
-import { SHAFT_USE_LABEL, shaftUseLabel, type EvaluationReport } from "@/lib/driveline";
+import type { EvaluationReport } from "@/lib/driveline";
+import { SHAFT_USE_LABEL, shaftUseLabel } from "@/lib/driveline/uses";
 import { SHAFT_USES } from "@/lib/designs/schemas";
 import { RadioChoices, type FieldKit } from "./field-kit";
 import { FrontJointField } from "./layout-fields";

@@ -1,6 +1,7 @@
 "use client";
 
-import { shaftUseLabel, type Catalogue, type DesignFile, type EvaluationReport } from "@/lib/driveline";
+import type { Catalogue, DesignFile, EvaluationReport } from "@/lib/driveline";
+import { shaftUseLabel } from "@/lib/driveline/uses";
 import { formatNumber, withUnit, type UnitSystem } from "./model";
 import { interfaceLines, reportAdditions, speedPathText, torqueText } from "./report-additions";
 

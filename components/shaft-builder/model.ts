@@ -3,7 +3,7 @@
  * unit display. The form keeps every quantity in SI (the design file's own units); a unit
  * switch only changes how numbers are shown, so it can never lose precision.
  */
-import { z } from "zod";
+import type { DesignFile, EvaluationReport, FieldIssue } from "@/lib/driveline";
 import {
   inToMm,
   kgToLb,
@@ -13,12 +13,8 @@ import {
   mmToIn,
   mphToKmh,
   nmToLbft,
-  parseDesign,
-  type Catalogue,
-  type DesignFile,
-  type FieldIssue,
-} from "@/lib/driveline";
-import { designApplicationSchema, designNameSchema, type ShaftUse } from "@/lib/designs/schemas";
+} from "@/lib/driveline/units";
+import type { ShaftUse } from "@/lib/designs/schemas";
 
 export type UnitSystem = "imperial" | "metric";
 
@@ -258,7 +254,7 @@ const angles = (a: AnglesModel, offset: boolean) => ({
 
 /**
  * The design file (engineering contract, SI) the form describes. Not validated here: run
- * `parseDesign` on the result (see `validateBuilderForm`).
+ * `parseDesign` on the result (see `validateBuilderForm` in builder-core.ts).
  */
 export function formToDesignFile(form: BuilderForm): Record<string, unknown> {
   const { extras } = form;
@@ -451,35 +447,17 @@ export function formPathOf(designPath: string): string {
   return designPath;
 }
 
+/** A valid design and its evaluation report. */
+export interface Evaluation {
+  design: DesignFile;
+  report: EvaluationReport;
+}
+
 export interface FormValidation {
   design: DesignFile | null;
   /** Form path → the core's message ("lengthMm: must be a positive number"). */
   fieldErrors: Record<string, string>;
   issues: FieldIssue[];
-}
-
-/** Validates the form by parsing its design file with the core (the core's rules, not ours). */
-export function validateBuilderForm(form: BuilderForm, catalogue: Catalogue): FormValidation {
-  const parsed = parseDesign(formToDesignFile(form), { catalogue });
-  if (parsed.ok) return { design: parsed.design, fieldErrors: {}, issues: [] };
-  const fieldErrors: Record<string, string> = {};
-  for (const issue of parsed.issues) fieldErrors[formPathOf(issue.path)] ??= issue.message;
-  return { design: null, fieldErrors, issues: parsed.issues };
-}
-
-/**
- * The zod schema of the whole form for react-hook-form: the name and application by their own
- * schemas, the engineering fields by the core's parseDesign.
- */
-export function builderFormSchema(catalogue: Catalogue) {
-  return z
-    .object({ name: designNameSchema, application: designApplicationSchema })
-    .passthrough()
-    .superRefine((value, ctx) => {
-      const { issues } = validateBuilderForm(value as unknown as BuilderForm, catalogue);
-      for (const issue of issues)
-        ctx.addIssue({ code: "custom", path: formPathOf(issue.path).split("."), message: issue.message });
-    });
 }
 
 // ————— Units —————

@@ -1,4 +1,5 @@
-import { shaftUseLabel, type Catalogue } from "@/lib/driveline";
+import type { Catalogue } from "@/lib/driveline";
+import { shaftUseLabel } from "@/lib/driveline/uses";
 import { tubeLabel } from "./results-panel";
 import {
   formatNumber,

@@ -3,20 +3,18 @@ import { useShopLocale } from "@/components/shop-locale";
 import { formatMoney } from "@/lib/money";
 
 import { useState } from "react";
-import { AlertTriangle, CheckCircle2, XCircle } from "lucide-react";
-import {
-  DEMO_CATALOGUE_NOTE,
-  DISCLAIMER,
-  SAFETY_CAUTION,
-  kgToLb,
-  type Catalogue,
-  type CheckStatus,
-  type DesignFile,
-  type EvaluationReport,
-  type TubeCandidate,
-  type TubePreference,
-  sameTube,
+import { AlertTriangle, CheckCircle2, Loader2, XCircle } from "lucide-react";
+import type {
+  Catalogue,
+  CheckStatus,
+  DesignFile,
+  EvaluationReport,
+  TubeCandidate,
+  TubePreference,
 } from "@/lib/driveline";
+import { sameTube } from "@/lib/driveline/catalogue/tube-match";
+import { DEMO_CATALOGUE_NOTE, DISCLAIMER, SAFETY_CAUTION } from "@/lib/driveline/report";
+import { kgToLb } from "@/lib/driveline/units";
 import { DrivelineView } from "./driveline-diagram";
 import { SpeedRatioPlot } from "./speed-ratio-plot";
 import { LoadsSummary } from "./loads-summary";
@@ -70,6 +68,8 @@ interface ResultsPanelProps {
   design: DesignFile;
   /** True when the form has errors and these results are from the last valid state. */
   stale: boolean;
+  /** The form changed and the engineering is still loading (a moment): these are the last results. */
+  calculating?: boolean;
   system: UnitSystem;
   catalogue: Catalogue;
   /** The customer chose the tube (rather than letting Yokeline pick). */
@@ -86,6 +86,7 @@ export function ResultsPanel({
   report,
   design,
   stale,
+  calculating = false,
   system,
   catalogue,
   tubeChosen,
@@ -111,7 +112,17 @@ export function ResultsPanel({
           Fix the highlighted fields — these results are from your last valid entries.
         </div>
       )}
-      <div className={`space-y-5 ${stale ? "opacity-50 grayscale" : ""}`}>
+      {calculating && (
+        <div
+          role="status"
+          className="flex items-center gap-2 rounded-md border border-line bg-paper-sunk p-3 text-sm font-medium text-ink-soft"
+          data-testid="calculating-note"
+        >
+          <Loader2 className="size-4 animate-spin" aria-hidden="true" />
+          Calculating your changes… the results below are from your previous entries.
+        </div>
+      )}
+      <div className={`space-y-5 ${stale ? "opacity-50 grayscale" : calculating ? "opacity-60" : ""}`}>
         <Verdict {...view} />
         {tubeChosen && critical?.status === "fail" && (
           <SuggestedTube {...view} suggested={suggested} onUseTube={onUseTube} />

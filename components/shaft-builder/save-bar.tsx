@@ -50,12 +50,15 @@ export function SaveBar({ drafts, dirty }: { drafts: Drafts; dirty: boolean }) {
 export function QuoteButton({
   drafts,
   report,
+  calculating = false,
   quoteHref,
   allowFailing,
 }: {
   drafts: Drafts;
   /** The current (not stale) evaluation's report; null while the form has errors. */
   report: EvaluationReport | null;
+  /** The form changed and its results are still being calculated (a moment). */
+  calculating?: boolean;
   quoteHref: (draftId: string) => string;
   allowFailing: boolean;
 }) {
@@ -66,11 +69,13 @@ export function QuoteButton({
     return id ? { ok: true, data: id } : { ok: false, error: { code: "not_saved", message: "" } };
   });
   const fails = report?.overall === "fail";
-  const blocked = !report
-    ? "Fix the highlighted fields first."
-    : fails && !allowFailing
-      ? "A check fails: change the design (or take the suggested tube) until nothing fails."
-      : null;
+  const blocked = calculating
+    ? "Calculating your changes…"
+    : !report
+      ? "Fix the highlighted fields first."
+      : fails && !allowFailing
+        ? "A check fails: change the design (or take the suggested tube) until nothing fails."
+        : null;
   const busy = quote.pending || leaving;
   return (
     <>

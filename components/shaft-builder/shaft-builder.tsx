@@ -2,18 +2,19 @@
 
 import { useEffect, useMemo, useState, useSyncExternalStore } from "react";
 import { useForm, type Resolver } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
 import type { Catalogue, ShopSettings, TubePreference } from "@/lib/driveline";
 import type { DraftSummary, DraftView } from "@/lib/designs/drafts";
 import { BuilderResults, ResultBar } from "./builder-results";
 import { DesignFileButtons, UploadNotice, useDesignFile } from "./design-file-controls";
 import { DraftList } from "./draft-list";
-import { builderFormSchema, type BuilderForm, type UnitSystem } from "./model";
+import type { BuilderStart } from "./builder-core";
+import { loadBuilderCore } from "./load-builder-core";
+import type { BuilderForm, UnitSystem } from "./model";
 import type { TubeChoice } from "./results-panel";
 import { QuoteButton, SaveBar } from "./save-bar";
 import { ShaftForm } from "./shaft-form";
 import { UnitsSwitch } from "./units-switch";
-import { initialForm, useDrafts } from "./use-drafts";
+import { useDrafts } from "./use-drafts";
 import { useFieldKit } from "./use-field-kit";
 import { useLiveEvaluation } from "./use-live-evaluation";
 
@@ -23,6 +24,11 @@ export interface ShaftBuilderProps {
   settings: ShopSettings;
   /** A saved draft to open, or null for a new design. */
   initialDraft?: DraftView | null;
+  /**
+   * Its form, that form's check and results, computed on the server with the same core
+   * (`builderStart()` in builder-core.ts): the page shows results before the core has loaded.
+   */
+  start: BuilderStart;
   /** Drafts listed for loading (the customer's own; at the counter, the customer's). */
   drafts?: readonly DraftSummary[];
   /** Where "Get a quote" goes once the draft is saved. */
@@ -60,6 +66,7 @@ export function ShaftBuilder({
   catalogue,
   settings,
   initialDraft,
+  start,
   drafts: initialDrafts = [],
   quoteHref,
   customerId,
@@ -76,17 +83,19 @@ export function ShaftBuilder({
     () => true,
     () => false,
   );
+  // The form's check is the core's parser, fetched with the core when it is first needed.
   const resolver = useMemo(
-    () => zodResolver(builderFormSchema(catalogue)) as unknown as Resolver<BuilderForm>,
+    (): Resolver<BuilderForm> => async (values, context, options) =>
+      (await loadBuilderCore()).builderResolver(catalogue)(values, context, options),
     [catalogue],
   );
   const methods = useForm<BuilderForm>({
-    defaultValues: initialForm(initialDraft),
+    defaultValues: start.form,
     resolver,
     mode: "onTouched",
   });
   const { errors, isDirty } = methods.formState;
-  const live = useLiveEvaluation(methods.control, { catalogue, settings, tubePreference });
+  const live = useLiveEvaluation(methods.control, start, { catalogue, settings, tubePreference });
   const drafts = useDrafts({ methods, catalogue, initialDraft, initialDrafts, customerId, draftHref });
   const designFile = useDesignFile({ methods, catalogue, markChanged: drafts.markChanged });
   const kit = useFieldKit({
@@ -120,6 +129,7 @@ export function ShaftBuilder({
     <QuoteButton
       drafts={drafts}
       report={live.evaluation?.report ?? null}
+      calculating={live.calculating}
       quoteHref={quoteHref}
       allowFailing={allowFailing}
     />
@@ -148,6 +158,7 @@ export function ShaftBuilder({
           form={live.form}
           shown={live.shown}
           stale={live.stale}
+          calculating={live.calculating}
           system={system}
           catalogue={catalogue}
           tubeChosen={live.values.tubeMode === "chosen"}
@@ -160,7 +171,7 @@ export function ShaftBuilder({
           }
         />
       </div>
-      <ResultBar shown={live.shown} stale={live.stale} />
+      <ResultBar shown={live.shown} stale={live.stale} calculating={live.calculating} />
     </div>
   );
 }

@@ -1,6 +1,7 @@
 "use client";
 
-import { sameTubeOd, sameTubeWall, type Catalogue } from "@/lib/driveline";
+import type { Catalogue } from "@/lib/driveline";
+import { sameTubeOd, sameTubeWall } from "@/lib/driveline/catalogue/tube-match";
 import { RadioChoices, type FieldKit } from "./field-kit";
 import { withUnit, type SiNumber } from "./model";
 

@@ -2,24 +2,15 @@
 
 import { useState } from "react";
 import type { UseFormReturn } from "react-hook-form";
-import { parseDesign, type Catalogue } from "@/lib/driveline";
+import type { Catalogue } from "@/lib/driveline";
 import type { DraftSummary, DraftView } from "@/lib/designs/drafts";
 import type { ActionResult } from "@/lib/actions/define-action";
 import { UNREACHABLE, sendJson, useMutation, type MutationError } from "@/lib/browser/mutation";
-import { defaultBuilderForm, designFileToForm, validateBuilderForm, type BuilderForm } from "./model";
+import { loadBuilderCore } from "./load-builder-core";
+import { defaultBuilderForm, type BuilderForm } from "./model";
 
 /** What the save status line says (a request in flight is the mutation's `pending`). */
 export type DraftStatus = { kind: "idle" } | { kind: "saved" } | { kind: "error"; message: string };
-
-/** The form a saved draft opens as (a new design without one). */
-export function initialForm(draft: DraftView | null | undefined): BuilderForm {
-  if (!draft) return defaultBuilderForm();
-  const parsed = parseDesign(draft.design);
-  const form = parsed.ok
-    ? designFileToForm(parsed.design, { application: draft.application })
-    : { ...defaultBuilderForm(), application: draft.application };
-  return { ...form, name: draft.name };
-}
 
 /** Drops `draft` from the address bar, keeping the rest (the counter's `customer`, for one). */
 function forgetDraftInAddress() {
@@ -88,7 +79,14 @@ export function useDrafts({
   /** Saves the form as the open draft (or a new one); the draft's id, or null when it was not saved. */
   async function save(): Promise<string | null> {
     const current = methods.getValues();
-    const checked = validateBuilderForm(current, catalogue);
+    let core;
+    try {
+      core = await loadBuilderCore();
+    } catch {
+      setStatus({ kind: "error", message: failure(UNREACHABLE, "") });
+      return null;
+    }
+    const checked = core.validateBuilderForm(current, catalogue);
     if (!checked.design || !(await methods.trigger())) {
       setStatus({ kind: "error", message: "Fix the highlighted fields before saving." });
       return null;
@@ -125,7 +123,14 @@ export function useDrafts({
         setStatus({ kind: "error", message: failure(result.error, "That draft could not be opened.") });
       return false;
     }
-    methods.reset(initialForm(result.data));
+    let core;
+    try {
+      core = await loadBuilderCore();
+    } catch {
+      setStatus({ kind: "error", message: failure(UNREACHABLE, "") });
+      return false;
+    }
+    methods.reset(core.initialForm(result.data));
     setDraftId(result.data.id);
     window.history.replaceState(null, "", draftHref(result.data.id));
     return true;

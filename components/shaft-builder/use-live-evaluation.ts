@@ -2,21 +2,11 @@
 
 import { useDeferredValue, useMemo, useState } from "react";
 import { useWatch, type Control } from "react-hook-form";
-import {
-  DesignInputError,
-  evaluateDesign,
-  type Catalogue,
-  type DesignFile,
-  type EvaluationReport,
-  type ShopSettings,
-  type TubePreference,
-} from "@/lib/driveline";
-import { validateBuilderForm, type BuilderForm, type FormValidation } from "./model";
+import type { BuilderShop, BuilderStart } from "./builder-core";
+import { useBuilderCore } from "./load-builder-core";
+import type { BuilderForm, Evaluation, FormValidation } from "./model";
 
-export interface Evaluation {
-  design: DesignFile;
-  report: EvaluationReport;
-}
+export type { Evaluation } from "./model";
 
 const NAN = "\u0000NaN";
 /** A stable text key of the form values (NaN kept, so an unparseable entry stays invalid). */
@@ -28,18 +18,15 @@ const fromKey = (key: string) => JSON.parse(key, (_k, x) => (x === NAN ? NaN : x
  * Live evaluation: the same engineering core as the server, run in the browser on every change
  * (deferred while typing, so no request can fail or hang). While the form has errors the last
  * valid results stay on screen, marked stale.
+ *
+ * The page brings the starting form's check and results (`start`, computed on the server with
+ * the same core), so the core itself is fetched only at the first change; until it has arrived
+ * (a moment), the last results stay on screen marked as being calculated.
  */
 export function useLiveEvaluation(
   control: Control<BuilderForm>,
-  {
-    catalogue,
-    settings,
-    tubePreference,
-  }: {
-    catalogue: Catalogue;
-    settings: ShopSettings;
-    tubePreference: TubePreference;
-  },
+  start: BuilderStart,
+  shop: BuilderShop,
 ): {
   /** The form as typed (this render). */
   values: BuilderForm;
@@ -50,30 +37,39 @@ export function useLiveEvaluation(
   /** What the results show: this evaluation, or the last valid one. */
   shown: Evaluation | null;
   stale: boolean;
+  /** The form changed and the core is still on its way: `shown` is the last result. */
+  calculating: boolean;
 } {
   const values = useWatch({ control }) as BuilderForm;
+  const startKey = useMemo(() => keyOf(start.form), [start.form]);
   const deferredKey = useDeferredValue(keyOf(values));
+  const atStart = deferredKey === startKey;
+  const core = useBuilderCore(!atStart);
   const form = useMemo(() => fromKey(deferredKey), [deferredKey]);
-  const validation = useMemo(() => validateBuilderForm(form, catalogue), [form, catalogue]);
-  const evaluation = useMemo((): Evaluation | null => {
-    if (!validation.design) return null;
-    try {
-      return {
-        design: validation.design,
-        report: evaluateDesign(validation.design, {
-          catalogue,
-          settings,
-          tubePreference,
-          curves: { points: 181 },
-          alternatives: true,
-        }),
-      };
-    } catch (error) {
-      if (error instanceof DesignInputError) return null;
-      throw error;
-    }
-  }, [validation.design, catalogue, settings, tubePreference]);
-  const [lastGood, setLastGood] = useState(evaluation);
-  if (evaluation && evaluation !== lastGood) setLastGood(evaluation);
-  return { values, form, validation, evaluation, shown: evaluation ?? lastGood, stale: evaluation === null };
+  const { catalogue, settings, tubePreference } = shop;
+  const checked = useMemo(
+    () => (core && !atStart ? core.validateBuilderForm(form, catalogue) : null),
+    [core, atStart, form, catalogue],
+  );
+  const evaluation = useMemo(
+    () =>
+      core && checked ? core.evaluateBuilderForm(checked, { catalogue, settings, tubePreference }) : null,
+    [core, checked, catalogue, settings, tubePreference],
+  );
+  const calculating = !atStart && !core;
+  const validation: FormValidation = atStart
+    ? start.validation
+    : (checked ?? { design: null, fieldErrors: {}, issues: [] });
+  const current = atStart ? start.evaluation : evaluation;
+  const [lastGood, setLastGood] = useState(start.evaluation);
+  if (current && current !== lastGood) setLastGood(current);
+  return {
+    values,
+    form,
+    validation,
+    evaluation: current,
+    shown: current ?? lastGood,
+    stale: !calculating && current === null,
+    calculating,
+  };
 }

@@ -12,9 +12,9 @@ import {
   formatInUnits,
   formToDesignFile,
   parseInUnits,
-  validateBuilderForm,
   type BuilderForm,
 } from "@/components/shaft-builder/model";
+import { validateBuilderForm } from "@/components/shaft-builder/builder-core";
 
 const example = (name: string): DesignFile => {
   const parsed = parseDesign(JSON.parse(readFileSync(`examples/${name}.json`, "utf8")));
