@@ -59,3 +59,34 @@ export async function pagedSelect<R>(
   );
   return { rows: rows.filter((r) => r.id != null), total: rows[0]?.total ?? 0 };
 }
+
+/** At most this many statement texts are kept prepared; any further ones run unprepared. */
+const MAX_PREPARED = 200;
+const preparedNames = new Map<string, string>();
+
+/**
+ * Runs one read-only statement (`?` placeholders, values bound, never spliced into the text) as a
+ * named prepared statement: each pooled connection parses and plans a given text once and reuses
+ * the plan (PostgreSQL's plan cache: custom plans for the first runs, a generic one once it is no
+ * dearer). Texts come from a fixed set (the filters and sort chosen, never user text); the name is
+ * derived from the text, so one name is always one text. Runs in the entity manager's transaction
+ * when it has one.
+ */
+export async function preparedRows<R>(
+  em: EntityManager,
+  prefix: string,
+  sql: string,
+  bindings: readonly unknown[],
+): Promise<R[]> {
+  let name = preparedNames.get(sql);
+  if (name === undefined && preparedNames.size < MAX_PREPARED) {
+    name = `${prefix}_${preparedNames.size + 1}`;
+    preparedNames.set(sql, name);
+  }
+  const query = em.getKnex().raw(sql, bindings as Knex.RawBinding[]);
+  if (name) query.options({ name });
+  const ctx = em.getTransactionContext<Knex.Transaction>();
+  if (ctx) query.transacting(ctx);
+  const result = (await query) as unknown as { rows: R[] };
+  return result.rows;
+}
