@@ -58,6 +58,16 @@ export { ORDER_STATUSES, PAYMENT_STATES, type OrderStatus, type PaymentState };
   name: "shop_order_owed_index",
   expression: `create index "shop_order_owed_index" on "shop_order" ("status") include ("total_cents", "paid_cents") where paid_cents < total_cents and status <> 'cancelled'`,
 })
+// The orders table's sorts by total and by balance due: the page is read off an index, not a sort of
+// every order (Migration20261207100000, lib/tables/orders.ts).
+@Index({
+  name: "shop_order_total_cents_index",
+  expression: `create index "shop_order_total_cents_index" on "shop_order" ("total_cents")`,
+})
+@Index({
+  name: "shop_order_balance_index",
+  expression: `create index "shop_order_balance_index" on "shop_order" (("total_cents" - "paid_cents"))`,
+})
 export class Order {
   [OptionalProps]?:
     "status" | "paymentState" | "paidCents" | "refundedCents" | "createdAt" | "updatedAt" | "version";

@@ -126,18 +126,22 @@ export async function orderTablePage(
   // The limit is one of a few page sizes and the first page has no offset, both part of the text so
   // the plan knows them (PostgreSQL keeps planning a statement whose offset it cannot see); a later
   // page's offset is bound.
+  // The page is cut from the orders alone; only its rows meet their customer (unless the sort is the
+  // customer's name), so a sort or filter never joins every order to its customer.
+  const byCustomer = q.sort === "customer";
   const sql = `with ${match}n as (select count(*)::int as n from shop_order o ${where}),
     p as (
-      select o.id, o.number, o.customer_id, c.name as customer_name, c.email as customer_email,
-             c.company as customer_company, o.created_at, o.promised_date::text as promised_date, o.status,
+      select o.id, o.number, o.customer_id, o.created_at, o.promised_date::text as promised_date, o.status,
              o.payment_state, o.channel, o.fulfilment, o.total_cents, o.paid_cents, o.currency, ${sortKey} as _s
-      from shop_order o join customer c on c.id = o.customer_id
+      from shop_order o${byCustomer ? " join customer c on c.id = o.customer_id" : ""}
       ${where}
       order by ${sortKey} ${dir}, o.id ${dir}
       limit ${Math.trunc(limit)}${offset > 0 ? " offset ?" : ""}
     )
-    select p.*, n.n as total, s.shafts, coalesce(s.shaft_count, 0) as shaft_count, w.floor_k, w.floor_n, w.on_hold
+    select p.*, c.name as customer_name, c.email as customer_email, c.company as customer_company,
+           n.n as total, s.shafts, coalesce(s.shaft_count, 0) as shaft_count, w.floor_k, w.floor_n, w.on_hold
     from n left join p on true
+    left join customer c on c.id = p.customer_id
     left join lateral (
       select string_agg(s.name, ', ' order by s.position) as shafts, count(*)::int as shaft_count
       from order_shaft s where s.order_id = p.id
