@@ -5,7 +5,7 @@ import type { OrderStatus, PaymentState } from "@/entities";
 import type { ListOrdersQuery, OrderTableRow } from "./orders-spec";
 import { containsPattern } from "./params";
 import { shopToday } from "@/lib/shop/locale";
-import { preparedRows, type Page } from "./sql";
+import { tableRows, type Page } from "./sql";
 
 /** The SQL each sort column orders by (never user text); the order's id breaks ties. */
 const ORDER_BY: Record<ListOrdersQuery["sort"], string> = {
@@ -102,7 +102,7 @@ function toRow(r: RawOrderRow, today: string): OrderTableRow {
 }
 
 /**
- * One page of orders (staff: every order) and how many match, in ONE prepared statement: the
+ * One page of orders (staff: every order) and how many match, in ONE statement: the
  * filtered, sorted, limited orders with their count beside them, then each page row's shafts and
  * floor progress (the least advanced shaft's step of its count, any shaft on hold) — at most a
  * page's worth of index look-ups, never a query per row, and no entities (a read-only view).
@@ -159,11 +159,12 @@ export async function orderTablePage(
     ...params,
     ...(offset > 0 ? [offset] : []),
   ];
-  const rows = await preparedRows<RawOrderRow & { id: string | null; total: number }>(
+  // Prepared (planned once per connection) unless it searches: a search's best plan depends on its text.
+  const rows = await tableRows<RawOrderRow & { id: string | null; total: number }>(
     em,
-    "tables_orders",
     sql,
     bindings,
+    q.q ? undefined : "tables_orders",
   );
   return {
     rows: rows.filter((r) => r.id != null).map((r) => toRow(r, today)),

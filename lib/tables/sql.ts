@@ -65,22 +65,24 @@ const MAX_PREPARED = 200;
 const preparedNames = new Map<string, string>();
 
 /**
- * Runs one read-only statement (`?` placeholders, values bound, never spliced into the text) as a
- * named prepared statement: each pooled connection parses and plans a given text once and reuses
- * the plan (PostgreSQL's plan cache: custom plans for the first runs, a generic one once it is no
- * dearer). Texts come from a fixed set (the filters and sort chosen, never user text); the name is
- * derived from the text, so one name is always one text. Runs in the entity manager's transaction
- * when it has one.
+ * Runs one read-only statement (`?` placeholders; the values are bound, never spliced into the
+ * text) in one round trip, in the entity manager's transaction when it has one. With `prepareAs`
+ * it is a named prepared statement: each pooled connection parses and plans a given text once and
+ * then reuses the plan (PostgreSQL's plan cache: custom plans for the first runs, a generic one once
+ * that is no dearer). Only for texts from a fixed set (the filters and sort chosen, never user text)
+ * whose generic plan is good for any value: not for free-text searches, whose best plan depends on
+ * the text (a generic plan would scan every row). The name is derived from the text, so one name is
+ * always one text.
  */
-export async function preparedRows<R>(
+export async function tableRows<R>(
   em: EntityManager,
-  prefix: string,
   sql: string,
   bindings: readonly unknown[],
+  prepareAs?: string,
 ): Promise<R[]> {
-  let name = preparedNames.get(sql);
-  if (name === undefined && preparedNames.size < MAX_PREPARED) {
-    name = `${prefix}_${preparedNames.size + 1}`;
+  let name = prepareAs ? preparedNames.get(sql) : undefined;
+  if (prepareAs && name === undefined && preparedNames.size < MAX_PREPARED) {
+    name = `${prepareAs}_${preparedNames.size + 1}`;
     preparedNames.set(sql, name);
   }
   const query = em.getKnex().raw(sql, bindings as Knex.RawBinding[]);
