@@ -123,11 +123,11 @@ export async function orderTablePage(
     ? "m as (select array(select cs.id from customer cs where cs.name ilike ? or cs.email ilike ? or cs.company ilike ?) as ids), "
     : "";
   const like = q.q ? containsPattern(q.q) : null;
-  // The limit is one of a few page sizes and the first page has no offset, both part of the text so
-  // the plan knows them (PostgreSQL keeps planning a statement whose offset it cannot see); a later
-  // page's offset is bound.
   // The page is cut from the orders alone; only its rows meet their customer (unless the sort is the
-  // customer's name), so a sort or filter never joins every order to its customer.
+  // customer's name), so a sort or filter never joins every order to its customer. The limit is one
+  // of a few page sizes and the first page has no offset, both part of the text so the plan knows
+  // them (PostgreSQL keeps planning a statement whose offset it cannot see); a later page's offset
+  // is bound.
   const byCustomer = q.sort === "customer";
   const sql = `with ${match}n as (select count(*)::int as n from shop_order o ${where}),
     p as (
