@@ -159,12 +159,13 @@ export async function orderTablePage(
     ...params,
     ...(offset > 0 ? [offset] : []),
   ];
-  // Prepared (planned once per connection) unless it searches: a search's best plan depends on its text.
+  // Prepared: planned once per connection. A search too — its generic plan (once PostgreSQL finds it
+  // no dearer than planning each text) reads the same indexes, and saves about 1 ms a search.
   const rows = await tableRows<RawOrderRow & { id: string | null; total: number }>(
     em,
     sql,
     bindings,
-    q.q ? undefined : "tables_orders",
+    "tables_orders",
   );
   return {
     rows: rows.filter((r) => r.id != null).map((r) => toRow(r, today)),

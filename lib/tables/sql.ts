@@ -68,11 +68,10 @@ const preparedNames = new Map<string, string>();
  * Runs one read-only statement (`?` placeholders; the values are bound, never spliced into the
  * text) in one round trip, in the entity manager's transaction when it has one. With `prepareAs`
  * it is a named prepared statement: each pooled connection parses and plans a given text once and
- * then reuses the plan (PostgreSQL's plan cache: custom plans for the first runs, a generic one once
- * that is no dearer). Only for texts from a fixed set (the filters and sort chosen, never user text)
- * whose generic plan is good for any value: not for free-text searches, whose best plan depends on
- * the text (a generic plan would scan every row). The name is derived from the text, so one name is
- * always one text.
+ * then reuses the plan (PostgreSQL's plan cache: custom plans for the first five runs, then a
+ * generic one only if its estimated cost is no higher than theirs). Only for texts from a fixed set
+ * (the filters and sort chosen; user text is always a bound value). The name is derived from the
+ * text, so one name is always one text.
  */
 export async function tableRows<R>(
   em: EntityManager,
