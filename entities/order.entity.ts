@@ -43,10 +43,11 @@ import {
 @Check({ name: "shop_order_refunded_within_paid_check", expression: "refunded_cents <= paid_cents" })
 // The owner's overview (Migration20261204150200, lib/shop/overview-queries.ts); the open-orders index also
 // serves the staff tables' "late" and "open" filters.
-// The orders table's search: the order number by substring (Migration20261206100000).
+// The orders table's search: the order number by substring (Migration20261206100000), with no pending
+// list that every search would read through after many inserts (fastupdate off: Migration20261207100000).
 @Index({
   name: "shop_order_number_trgm_index",
-  expression: `create index "shop_order_number_trgm_index" on "shop_order" using gin ("number" gin_trgm_ops)`,
+  expression: `create index "shop_order_number_trgm_index" on "shop_order" using gin ("number" gin_trgm_ops) with (fastupdate = off)`,
 })
 @Index({
   name: "shop_order_status_money_index",
@@ -63,6 +64,16 @@ import {
 @Index({
   name: "shop_order_owed_index",
   expression: `create index "shop_order_owed_index" on "shop_order" ("status") include ("total_cents", "paid_cents") where paid_cents < total_cents and status <> 'cancelled'`,
+})
+// The orders table's sorts by total and by balance due: the page is read off an index, not a sort of
+// every order (Migration20261207100000, lib/tables/orders.ts).
+@Index({
+  name: "shop_order_total_cents_index",
+  expression: `create index "shop_order_total_cents_index" on "shop_order" ("total_cents")`,
+})
+@Index({
+  name: "shop_order_balance_index",
+  expression: `create index "shop_order_balance_index" on "shop_order" (("total_cents" - "paid_cents"))`,
 })
 export class Order {
   [OptionalProps]?:

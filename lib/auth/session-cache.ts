@@ -55,12 +55,14 @@ export async function rememberedSessionUser(
     entries.delete(cookie);
     return undefined;
   }
-  const { rows } = await pool.query<CachedSessionUser>(
-    `select u.id, u.name, u.email, u.role
+  // A named statement: each pooled connection parses and plans it once (every signed-in request runs it).
+  const { rows } = await pool.query<CachedSessionUser>({
+    name: "session_cache_user",
+    text: `select u.id, u.name, u.email, u.role
        from auth_session s join app_user u on u.id = s.user_id
       where s.token = $1 and s.expires_at > now()`,
-    [entry.token],
-  );
+    values: [entry.token],
+  });
   if (!rows[0]) {
     entries.delete(cookie);
     return null;

@@ -24,17 +24,28 @@ export interface ShopEngineering {
 }
 
 const CACHE_MS = 5_000;
-let cached: { at: number; value: ShopEngineering } | null = null;
+let cached: { at: number; value: Promise<ShopEngineering> } | null = null;
 
 /**
  * The shop's catalogue, engineering limits and price book, falling back to the built-in
- * defaults. Cached for a few seconds: it is read on every evaluation and changes rarely.
+ * defaults. Cached for a few seconds: it is read on every evaluation and changes rarely. One read
+ * at a time: requests arriving while it is being read wait for that read (not one read each);
+ * a failed read is not kept.
  */
 export async function getShopEngineering(): Promise<ShopEngineering> {
   if (cached && Date.now() - cached.at < CACHE_MS) return cached.value;
+  const entry = { at: Date.now(), value: readShopEngineering() };
+  cached = entry;
+  entry.value.catch(() => {
+    if (cached === entry) cached = null;
+  });
+  return entry.value;
+}
+
+async function readShopEngineering(): Promise<ShopEngineering> {
   const em = await getEm();
   const row = await em.findOne(ShopConfig, { id: 1 });
-  const value: ShopEngineering = {
+  return {
     catalogue: row?.catalogue ?? defaultCatalogue,
     settings: resolveSettings(row?.settings ?? {}),
     settingOverrides: (row?.settings ?? {}) as Record<string, number | Limit>,
@@ -42,8 +53,6 @@ export async function getShopEngineering(): Promise<ShopEngineering> {
     floor: resolveFloorSettings(row?.floor),
     version: row?.version ?? 1,
   };
-  cached = { at: Date.now(), value };
-  return value;
 }
 
 /** Forget the cached configuration (after an owner edits it, and in tests). */

@@ -1,56 +1,54 @@
 import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
-import type { Knex } from "@mikro-orm/knex";
 import { orderStatusLabel } from "@/lib/orders/labels";
 import type { OrderStatus, PaymentState } from "@/lib/orders/states";
 import type { ListOrdersQuery, OrderTableRow } from "./orders-spec";
 import { containsPattern } from "./params";
 import { shopToday } from "@/lib/shop/locale";
-import { pagedSelect, type Page } from "./sql";
+import { tableRows, type Page } from "./sql";
 
 /** The SQL each sort column orders by (never user text); the order's id breaks ties. */
-const ORDER_BY: Record<ListOrdersQuery["sort"], string[]> = {
-  number: ["o.number"],
-  customer: ["lower(c.name)"],
-  created: ["o.created_at"],
-  promised: ["o.promised_date"],
-  status: ["o.status"],
-  payment: ["o.payment_state"],
-  channel: ["o.channel"],
-  total: ["o.total_cents"],
-  balance: ["(o.total_cents - o.paid_cents)"],
+const ORDER_BY: Record<ListOrdersQuery["sort"], string> = {
+  number: "o.number",
+  customer: "lower(c.name)",
+  created: "o.created_at",
+  promised: "o.promised_date",
+  status: "o.status",
+  payment: "o.payment_state",
+  channel: "o.channel",
+  total: "o.total_cents",
+  balance: "(o.total_cents - o.paid_cents)",
 };
 
 const CLOSED: OrderStatus[] = ["shipped", "cancelled"];
 
-/** The filters of the query as a WHERE on shop_order o join customer c. */
-function applyFilters(qb: Knex.QueryBuilder, q: ListOrdersQuery, today: string): void {
-  if (q.status === "open") qb.whereNotIn("o.status", CLOSED);
-  else if (q.status) qb.where("o.status", q.status);
-  if (q.payment) qb.where("o.payment_state", q.payment);
-  if (q.channel) qb.where("o.channel", q.channel);
-  // Late (the shared contract): promised before today and not shipped or cancelled.
-  if (q.late) qb.whereNotIn("o.status", CLOSED).where("o.promised_date", "<", today);
-  if (q.hold)
-    qb.whereExists((sub) =>
-      sub.select(1).from("work_order as hw").whereRaw("hw.order_id = o.id").where("hw.state", "on_hold"),
-    );
-  if (q.from) qb.where("o.promised_date", ">=", q.from);
-  if (q.to) qb.where("o.promised_date", "<=", q.to);
-  if (q.q) {
-    // The order's number, or its customer's name, e-mail or company. The customers are matched
-    // first (an array, so both sides are index look-ups: the trigram index on the number, the
-    // customer_id index), never an ILIKE per order joined to its customer.
-    const like = containsPattern(q.q);
-    qb.where((w) =>
-      w
-        .whereRaw("o.number ilike ?", [like])
-        .orWhereRaw(
-          "o.customer_id = any(array(select cs.id from customer cs where cs.name ilike ? or cs.email ilike ? or cs.company ilike ?))",
-          [like, like, like],
-        ),
-    );
-  }
+/**
+ * The filters of the query as one WHERE on `shop_order o` (never the customer: the search matches
+ * customers apart, in the `m` CTE of the statement), with `?` placeholders and their values in order.
+ * Only SQL from this function reaches the text; every value the user chose is bound.
+ */
+function orderFilters(q: ListOrdersQuery, today: string): { where: string; params: unknown[] } {
+  const parts: string[] = [];
+  const params: unknown[] = [];
+  const add = (sql: string, ...values: unknown[]) => {
+    parts.push(sql);
+    params.push(...values);
+  };
+  if (q.status === "open") add("o.status not in ('shipped', 'cancelled')");
+  else if (q.status) add("o.status = ?", q.status);
+  if (q.payment) add("o.payment_state = ?", q.payment);
+  if (q.channel) add("o.channel = ?", q.channel);
+  // Late (the shared contract): promised before the shop's today and not shipped or cancelled.
+  if (q.late) add("o.status not in ('shipped', 'cancelled') and o.promised_date < ?::date", today);
+  if (q.hold) add("exists (select 1 from work_order hw where hw.order_id = o.id and hw.state = 'on_hold')");
+  if (q.from) add("o.promised_date >= ?::date", q.from);
+  if (q.to) add("o.promised_date <= ?::date", q.to);
+  // The order's number, or its customer's name, e-mail or company: the customers are matched once
+  // (`m`, an array), so both the page and the count are index look-ups (the trigram index on the
+  // number, the customer_id index), never an ILIKE per order joined to its customer.
+  if (q.q)
+    add("(o.number ilike ? or o.customer_id = any((select ids from m)::uuid[]))", containsPattern(q.q));
+  return { where: parts.length ? `where ${parts.join(" and ")}` : "", params };
 }
 
 interface RawOrderRow {
@@ -104,10 +102,10 @@ function toRow(r: RawOrderRow, today: string): OrderTableRow {
 }
 
 /**
- * One page of orders (staff: every order) and how many match, in one statement: the filtered,
- * sorted, limited orders with their count (a window), then each page row's shafts and floor
- * progress (the least advanced shaft's step of its count, any shaft on hold) — at most a page's
- * worth of index lookups, never one query per row.
+ * One page of orders (staff: every order) and how many match, in ONE statement: the
+ * filtered, sorted, limited orders with their count beside them, then each page row's shafts and
+ * floor progress (the least advanced shaft's step of its count, any shaft on hold) — at most a
+ * page's worth of index look-ups, never a query per row, and no entities (a read-only view).
  */
 export async function orderTablePage(
   em: EntityManager,
@@ -115,53 +113,62 @@ export async function orderTablePage(
   options: { limit?: number; offset?: number; today?: string } = {},
 ): Promise<Page<OrderTableRow>> {
   const today = options.today ?? (await shopToday());
-  const knex = em.getKnex();
-  const base = knex
-    .select(
-      "o.id",
-      "o.number",
-      "o.customer_id",
-      "c.name as customer_name",
-      "c.email as customer_email",
-      "c.company as customer_company",
-      "o.created_at",
-      knex.raw("o.promised_date::text as promised_date"),
-      "o.status",
-      "o.payment_state",
-      "o.channel",
-      "o.fulfilment",
-      "o.total_cents",
-      "o.paid_cents",
-      "o.currency",
+  const limit = options.limit ?? q.size;
+  const offset = options.offset ?? (q.page - 1) * q.size;
+  const { where, params } = orderFilters(q, today);
+  const sortKey = ORDER_BY[q.sort];
+  const dir = q.dir === "asc" ? "asc" : "desc";
+  // The customers the search matches, once for both the page and the count.
+  const match = q.q
+    ? "m as (select array(select cs.id from customer cs where cs.name ilike ? or cs.email ilike ? or cs.company ilike ?) as ids), "
+    : "";
+  const like = q.q ? containsPattern(q.q) : null;
+  // The page is cut from the orders alone; only its rows meet their customer (unless the sort is the
+  // customer's name), so a sort or filter never joins every order to its customer. The limit is one
+  // of a few page sizes and the first page has no offset, both part of the text so the plan knows
+  // them (PostgreSQL keeps planning a statement whose offset it cannot see); a later page's offset
+  // is bound.
+  const byCustomer = q.sort === "customer";
+  const sql = `with ${match}n as (select count(*)::int as n from shop_order o ${where}),
+    p as (
+      select o.id, o.number, o.customer_id, o.created_at, o.promised_date::text as promised_date, o.status,
+             o.payment_state, o.channel, o.fulfilment, o.total_cents, o.paid_cents, o.currency, ${sortKey} as _s
+      from shop_order o${byCustomer ? " join customer c on c.id = o.customer_id" : ""}
+      ${where}
+      order by ${sortKey} ${dir}, o.id ${dir}
+      limit ${Math.trunc(limit)}${offset > 0 ? " offset ?" : ""}
     )
-    .from("shop_order as o")
-    .join("customer as c", "c.id", "o.customer_id");
-  applyFilters(base, q, today);
-  // Every order has its customer (a required key), and the search matches customers apart: the count never joins them.
-  const countBase = knex.from("shop_order as o");
-  applyFilters(countBase, q, today);
-
-  const page = await pagedSelect<RawOrderRow>(em, {
-    base,
-    countBase,
-    idColumn: "o.id",
-    sortKeys: ORDER_BY[q.sort],
-    dir: q.dir,
-    limit: options.limit ?? q.size,
-    offset: options.offset ?? (q.page - 1) * q.size,
-    // Per page row: its shafts and its floor progress.
-    enrich: `
-      left join lateral (
-        select string_agg(s.name, ', ' order by s.position) as shafts, count(*)::int as shaft_count
-        from order_shaft s where s.order_id = p.id
-      ) s on true
-      left join lateral (
-        select (array_agg(least(w.current_position, w.step_count) order by w.current_position))[1]::int as floor_k,
-               (array_agg(w.step_count order by w.current_position))[1]::int as floor_n,
-               bool_or(w.state = 'on_hold') as on_hold
-        from work_order w where w.order_id = p.id
-      ) w on true`,
-    enrichColumns: "s.shafts, coalesce(s.shaft_count, 0) as shaft_count, w.floor_k, w.floor_n, w.on_hold",
-  });
-  return { rows: page.rows.map((r) => toRow(r, today)), total: page.total };
+    select p.*, c.name as customer_name, c.email as customer_email, c.company as customer_company,
+           n.n as total, s.shafts, coalesce(s.shaft_count, 0) as shaft_count, w.floor_k, w.floor_n, w.on_hold
+    from n left join p on true
+    left join customer c on c.id = p.customer_id
+    left join lateral (
+      select string_agg(s.name, ', ' order by s.position) as shafts, count(*)::int as shaft_count
+      from order_shaft s where s.order_id = p.id
+    ) s on true
+    left join lateral (
+      select (array_agg(least(w.current_position, w.step_count) order by w.current_position))[1]::int as floor_k,
+             (array_agg(w.step_count order by w.current_position))[1]::int as floor_n,
+             bool_or(w.state = 'on_hold') as on_hold
+      from work_order w where w.order_id = p.id
+    ) w on true
+    order by p._s ${dir}, p.id ${dir}`;
+  const bindings = [
+    ...(like ? [like, like, like] : []),
+    ...params,
+    ...params,
+    ...(offset > 0 ? [offset] : []),
+  ];
+  // Prepared: planned once per connection. A search too — its generic plan (once PostgreSQL finds it
+  // no dearer than planning each text) reads the same indexes, and saves about 1 ms a search.
+  const rows = await tableRows<RawOrderRow & { id: string | null; total: number }>(
+    em,
+    sql,
+    bindings,
+    "tables_orders",
+  );
+  return {
+    rows: rows.filter((r) => r.id != null).map((r) => toRow(r, today)),
+    total: rows[0]?.total ?? 0,
+  };
 }

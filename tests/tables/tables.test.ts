@@ -163,6 +163,60 @@ describe("the staff tables on known data", () => {
     expect(balance.rows[2]!.balanceCents).toBeLessThan(60_000);
   });
 
+  dbTest(
+    "sorting by the customer's name (any capitals), each row with its own customer, across pages",
+    async () => {
+      // Two customers of their own (demo data), so the other tests' counts stay as they are.
+      const other = `srt${randomUUID().slice(0, 6)}`;
+      const em = await getEm();
+      const [bea, abe] = ["Bea", "abe"].map((first) =>
+        em.create(Customer, {
+          name: `${first} ${other}`,
+          email: `${first.toLowerCase()}-${other}@test.example`,
+          company: first === "Bea" ? `Bea Haulage ${other}` : null,
+          createdAt: new Date(),
+        }),
+      );
+      for (const [customer, n] of [
+        [bea!, "1"],
+        [abe!, "2"],
+        [bea!, "3"],
+      ] as const)
+        em.create(Order, {
+          number: `${other}-${n}`,
+          customer,
+          channel: "online",
+          fulfilment: "pickup",
+          currency: "USD",
+          subtotalCents: 5_000,
+          taxCents: 0,
+          shippingCents: 0,
+          totalCents: 5_000,
+          depositCents: 2_500,
+          promisedDate: "2026-09-01",
+          createdAt: new Date(),
+          updatedAt: new Date(),
+        });
+      await em.flush();
+      const page = await orderTablePage(em, q(`q=${other}&sort=customer&dir=asc&size=25`));
+      expect(page.total).toBe(3);
+      // "abe" before "Bea": the sort ignores capitals.
+      expect(page.rows.map((r) => r.customerName)).toEqual([`abe ${other}`, `Bea ${other}`, `Bea ${other}`]);
+      expect(page.rows[0]).toMatchObject({
+        number: `${other}-2`,
+        customerEmail: `abe-${other}@test.example`,
+        customerCompany: null,
+      });
+      expect(page.rows[1]).toMatchObject({ customerCompany: `Bea Haulage ${other}` });
+      const desc = await orderTablePage(em, q(`q=${other}&sort=customer&dir=desc`), { limit: 2, offset: 2 });
+      expect(desc).toMatchObject({ total: 3, rows: [{ number: `${other}-2` }] });
+      // Found by the company of one customer only.
+      expect(
+        numbers((await orderTablePage(em, q(`q=bea%20haulage%20${other}&sort=number&dir=asc`))).rows),
+      ).toEqual([`${other}-1`, `${other}-3`]);
+    },
+  );
+
   dbTest("customers: found by name, company, e-mail and phone digits, with their order counts", async () => {
     const em = await getEm();
     for (const text of [`ada ${tag}`, `gearworks ${tag}`, `ada-${tag}`]) {
