@@ -16,6 +16,7 @@ const ISOLATED = [
   "tests/orders/desk-signoff.test.ts",
   "tests/platform/database-recovery.test.ts",
   "tests/platform/restart-in-flight.test.ts",
+  "tests/tables/prepared-names.test.ts",
   "tests/users/staff.test.ts",
 ];
 
