@@ -17,6 +17,7 @@ export DATABASE_URL="$DB_BASE/yokeline_bench" BETTER_AUTH_SECRET="bench-$(head -
 export LOG_LEVEL=warn
 npx mikro-orm migration:up >/dev/null
 npx tsx scripts/seed.ts >/dev/null
+npx tsx bench/settle.ts
 if scripts/needs-build.sh; then echo "Building…"; NODE_ENV=production npx next build >"$TMP_DIR/build.log" 2>&1 || { cat "$TMP_DIR/build.log"; exit 1; }; fi
 # The same server settings as `npm start`.
 NODE_OPTIONS="--max-semi-space-size=64" NODE_ENV=production setsid npx next start -H 127.0.0.1 -p "$APP_PORT" >"$TMP_DIR/app.log" 2>&1 &
