@@ -21,6 +21,8 @@ const ORDER_BY: Record<ListOrdersQuery["sort"], string> = {
 };
 
 const CLOSED: OrderStatus[] = ["shipped", "cancelled"];
+/** "Still open", as SQL on `shop_order o`, from CLOSED (fixed words, never user text). */
+const OPEN_SQL = `o.status not in (${CLOSED.map((s) => `'${s}'`).join(", ")})`;
 
 /**
  * The filters of the query as one WHERE on `shop_order o` (never the customer: the search matches
@@ -34,12 +36,12 @@ function orderFilters(q: ListOrdersQuery, today: string): { where: string; param
     parts.push(sql);
     params.push(...values);
   };
-  if (q.status === "open") add("o.status not in ('shipped', 'cancelled')");
+  if (q.status === "open") add(OPEN_SQL);
   else if (q.status) add("o.status = ?", q.status);
   if (q.payment) add("o.payment_state = ?", q.payment);
   if (q.channel) add("o.channel = ?", q.channel);
   // Late (the shared contract): promised before the shop's today and not shipped or cancelled.
-  if (q.late) add("o.status not in ('shipped', 'cancelled') and o.promised_date < ?::date", today);
+  if (q.late) add(`${OPEN_SQL} and o.promised_date < ?::date`, today);
   if (q.hold) add("exists (select 1 from work_order hw where hw.order_id = o.id and hw.state = 'on_hold')");
   if (q.from) add("o.promised_date >= ?::date", q.from);
   if (q.to) add("o.promised_date <= ?::date", q.to);
