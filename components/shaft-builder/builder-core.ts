@@ -34,6 +34,19 @@ export interface BuilderShop {
   tubePreference: TubePreference;
 }
 
+/** The part of the shop's configuration (getShopEngineering()) the builder's evaluation reads. */
+export function builderShopOf(shop: {
+  catalogue: Catalogue;
+  settings: ShopSettings;
+  priceBook: { tubePreference: TubePreference };
+}): BuilderShop {
+  return {
+    catalogue: shop.catalogue,
+    settings: shop.settings,
+    tubePreference: shop.priceBook.tubePreference,
+  };
+}
+
 /** Validates the form by parsing its design file with the core (the core's rules, not ours). */
 export function validateBuilderForm(form: BuilderForm, catalogue: Catalogue): FormValidation {
   const parsed = parseDesign(formToDesignFile(form), { catalogue });

@@ -4,7 +4,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { Alert } from "@/components/ui/alert";
 import { findDraft, listDrafts } from "@/lib/designs/drafts";
 import { getShopEngineering } from "@/lib/shop/config";
-import { builderStart } from "@/components/shaft-builder/builder-core";
+import { builderShopOf, builderStart } from "@/components/shaft-builder/builder-core";
 import { CustomerBuilder } from "./_components/customer-builder";
 
 export const metadata: Metadata = { title: "Design a shaft" };
@@ -41,11 +41,7 @@ export default async function BuildPage({
         settings={shop.settings}
         tubePreference={shop.priceBook.tubePreference}
         initialDraft={draft}
-        start={builderStart(draft, {
-          catalogue: shop.catalogue,
-          settings: shop.settings,
-          tubePreference: shop.priceBook.tubePreference,
-        })}
+        start={builderStart(draft, builderShopOf(shop))}
         drafts={drafts}
       />
     </>

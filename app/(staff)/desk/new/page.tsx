@@ -9,7 +9,7 @@ import { getShopEngineering } from "@/lib/shop/config";
 import { PageHeader } from "@/components/ui/page-header";
 import { InviteButton } from "@/components/customers/invite-button";
 import { CustomerPicker } from "./_components/customer-picker";
-import { builderStart } from "@/components/shaft-builder/builder-core";
+import { builderShopOf, builderStart } from "@/components/shaft-builder/builder-core";
 import { CounterBuilder } from "./_components/counter-builder";
 
 export const metadata: Metadata = { title: "New phone order" };
@@ -64,11 +64,7 @@ export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/de
         settings={shop.settings}
         tubePreference={shop.priceBook.tubePreference}
         initialDraft={draft}
-        start={builderStart(draft, {
-          catalogue: shop.catalogue,
-          settings: shop.settings,
-          tubePreference: shop.priceBook.tubePreference,
-        })}
+        start={builderStart(draft, builderShopOf(shop))}
         drafts={drafts}
         customerId={customerId}
       />
