@@ -18,7 +18,13 @@ import { checkAtMost, checkOf, fmt, worstStatus, type Check } from "./checks";
 import { sampleChainCurves } from "./curves";
 import { designDirections } from "./design-geometry";
 import { add, angleBetweenRad, normalise, phaseIndexRad, type Vec3 } from "./geometry";
-import { chainResponse, makeChain, smallAngleEquivalentRad, type Chain } from "./phasing";
+import {
+  chainOutputPeakToPeak,
+  chainResponse,
+  makeChain,
+  smallAngleEquivalentRad,
+  type Chain,
+} from "./phasing";
 import { SAFETY_CAUTION, type EndReport, type EvaluationReport, type JointReport } from "./report";
 import type { DesignFile } from "./schema";
 import type { ShopSettings } from "./settings";
@@ -156,10 +162,10 @@ export function applyDoubleCardan(report: EvaluationReport, ctx: DoubleCardanCon
   const chain = makeDoubleCardanChain(shafts);
   const response = chainResponse(chain);
   const cvAlone = chainResponse(makeChain([shafts[0], chain.shafts[1]!, shafts[1]], [0]));
-  const inPhase = chainResponse(makeDoubleCardanChain(shafts, 0));
-  const specified =
+  const inPhasePeakToPeak = chainOutputPeakToPeak(makeDoubleCardanChain(shafts, 0));
+  const specifiedPeakToPeak =
     design.phaseIndexDeg != null
-      ? chainResponse(makeDoubleCardanChain(shafts, design.phaseIndexDeg * RAD))
+      ? chainOutputPeakToPeak(makeDoubleCardanChain(shafts, design.phaseIndexDeg * RAD))
       : null;
 
   const front = report.joints[0]!;
@@ -191,20 +197,21 @@ export function applyDoubleCardan(report: EvaluationReport, ctx: DoubleCardanCon
 
   const best = (chain.phaseIndexRad[1] ?? 0) * DEG;
   const eqDeg = equivalentAngleRad(response.outputPeakToPeak) * DEG;
-  const asSpecified = specified
-    ? {
-        phaseIndexDeg: design.phaseIndexDeg!,
-        outputSpeedVariationPct: specified.outputPeakToPeak * 100,
-        equivalentAngleDeg: equivalentAngleRad(specified.outputPeakToPeak) * DEG,
-      }
-    : undefined;
+  const asSpecified =
+    specifiedPeakToPeak !== null
+      ? {
+          phaseIndexDeg: design.phaseIndexDeg!,
+          outputSpeedVariationPct: specifiedPeakToPeak * 100,
+          equivalentAngleDeg: equivalentAngleRad(specifiedPeakToPeak) * DEG,
+        }
+      : undefined;
   const phasing: EvaluationReport["phasing"] = {
     phaseIndexDeg: best,
     outputSpeedVariationPct: response.outputPeakToPeak * 100,
     equivalentAngleDeg: eqDeg,
     equivalentAngleSmallAngleDeg: smallAngleEquivalentRad(chain.workingAngleRad) * DEG,
     jointPlaneAngleDeg: best,
-    inPhaseOutputSpeedVariationPct: inPhase.outputPeakToPeak * 100,
+    inPhaseOutputSpeedVariationPct: inPhasePeakToPeak * 100,
     toleranceDeg: settings.phasingToleranceDeg.value,
     ...(asSpecified ? { asSpecified } : {}),
   };

@@ -25,7 +25,7 @@ import { sampleChainCurves } from "./curves";
 import { designDirections } from "./design-geometry";
 import { applyDoubleCardan } from "./double-cardan";
 import { fitInterface } from "./interface";
-import { chainResponse, makeChain, phasingResult } from "./phasing";
+import { chainOutputPeakToPeak, chainResponse, makeChain, phasingResult } from "./phasing";
 import {
   DEMO_CATALOGUE_NOTE,
   DISCLAIMER,
@@ -274,18 +274,17 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
 
   // Tube: given, or the lightest catalogue tube that passes.
   let selection: TubeSelection | null = null;
-  const rank = (): TubeSelection =>
-    rankTubes({
-      spanMm: use.criticalSpeedLengthMm,
-      tubeLengthMm: lengthMm - seatAllowanceMm,
-      maxShaftRpm: rpm,
-      peakShaftTorqueNm: torqueNm,
-      fittings: namedEnds,
-      catalogue,
-      settings,
-      criticalSpeedRatioLimit: use.criticalSpeedRatioLimit,
-      warnCriticalSpeedRatio: use.criticalSpeedWarn.value,
-    });
+  const rankInput = {
+    spanMm: use.criticalSpeedLengthMm,
+    tubeLengthMm: lengthMm - seatAllowanceMm,
+    maxShaftRpm: rpm,
+    peakShaftTorqueNm: torqueNm,
+    fittings: namedEnds,
+    catalogue,
+    settings,
+    criticalSpeedRatioLimit: use.criticalSpeedRatioLimit,
+    warnCriticalSpeedRatio: use.criticalSpeedWarn.value,
+  };
   let tubeSpec: {
     id: string | null;
     materialId: string;
@@ -296,9 +295,9 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   if (design.tube) {
     tubeSpec = { id: null, ...design.tube, origin: "design" };
     tubeSpec.id = findCatalogueTube(catalogue, design.tube)?.id ?? null;
-    if (options?.alternatives) selection = rank();
+    if (options?.alternatives) selection = rankTubes(rankInput);
   } else {
-    selection = rank();
+    selection = rankTubes(rankInput);
     const pick = pickTube(selection, options?.tubePreference);
     const fallback = catalogue.tubes[0];
     if (pick)
@@ -368,7 +367,8 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   const chain = makeChain(shafts);
   const response = chainResponse(chain);
   const phasing0 = phasingResult(chain, response);
-  const inPhase = chain.phaseIndexRad[0] === 0 ? response : chainResponse(makeChain(shafts, [0]));
+  const inPhasePeakToPeak =
+    chain.phaseIndexRad[0] === 0 ? response.outputPeakToPeak : chainOutputPeakToPeak(makeChain(shafts, [0]));
   let asSpecified: EvaluationReport["phasing"]["asSpecified"];
   let outputResponse = response;
   if (design.phaseIndexDeg != null) {
@@ -482,7 +482,7 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
   // Two-piece proposal when no single tube passes critical speed at this length.
   let twoPiece: TwoPieceProposal | null = null;
   if (criticalSpeedRatio > use.criticalSpeedRatioLimit.value) {
-    selection ??= rank();
+    selection ??= rankTubes(rankInput);
     if (!selection.anyPassesCriticalSpeed) {
       twoPiece = proposeTwoPiece(u, lengthMm, rpm, torqueNm, catalogue, settings, index);
     }
@@ -523,7 +523,7 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
       equivalentAngleDeg: phasing0.equivalentAngleDeg,
       equivalentAngleSmallAngleDeg: phasing0.equivalentAngleSmallAngleDeg,
       jointPlaneAngleDeg: phasing0.phaseIndexDeg,
-      inPhaseOutputSpeedVariationPct: inPhase.outputPeakToPeak * 100,
+      inPhaseOutputSpeedVariationPct: inPhasePeakToPeak * 100,
       toleranceDeg: settings.phasingToleranceDeg.value,
       ...(asSpecified ? { asSpecified } : {}),
     },
@@ -571,21 +571,20 @@ export function evaluateDesign(design: DesignFile, options?: EvaluateOptions): E
     checks,
     cautions,
   };
-  const doubleCardan = (r: EvaluationReport) =>
-    design.frontJointType === "double-cardan"
-      ? applyDoubleCardan(r, { design, settings, catalogue, index })
-      : r;
+  let out = report;
   if (options?.curves) {
     const points = typeof options.curves === "object" ? options.curves.points : 181;
-    return doubleCardan({
+    out = {
       ...report,
       curves: sampleChainCurves(
         design.phaseIndexDeg != null ? makeChain(shafts, [design.phaseIndexDeg * RAD]) : chain,
         points,
       ),
-    });
+    };
   }
-  return doubleCardan(report);
+  return design.frontJointType === "double-cardan"
+    ? applyDoubleCardan(out, { design, settings, catalogue, index })
+    : out;
 }
 
 const CATALOGUE_SOURCE = "shop catalogue (maker's rating)";

@@ -110,6 +110,7 @@ export {
 export {
   makeChain,
   chainResponse,
+  chainOutputPeakToPeak,
   chainSpeedRatiosAt,
   chainShaftAnglesRad,
   bestPhaseIndicesRad,

@@ -136,14 +136,13 @@ export function criticalSpeedCheck(
   const span = longer
     ? ` over ${fmt(use.criticalSpeedLengthMm, 1)} mm, the length at full droop (${fmt(lengthMm, 1)} + ${fmt(use.droopExtensionMm, 1)} mm)`
     : "";
-  const forUse = (l: Limit): Limit =>
-    use.use === "street" ? l : { ...l, source: `${use.use} use: ${l.source}` };
+  const limit = use.criticalSpeedRatioLimit;
   return checkAtMost({
     id: "critical-speed",
     what: `Critical-speed ratio (${Math.round(rpm)} rpm service / ${Math.round(nc)} rpm critical${span})`,
     value: ratio,
     unit: "",
-    limit: forUse(use.criticalSpeedRatioLimit),
+    limit: use.use === "street" ? limit : { ...limit, source: `${use.use} use: ${limit.source}` },
     digits: 3,
     warnAbove: use.criticalSpeedWarn.value,
     warnSource: use.criticalSpeedWarn.source,

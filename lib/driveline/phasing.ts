@@ -153,6 +153,18 @@ const scratchDerivative: Float64Array[] = [];
  * period, extremes refined by a parabola through the neighbours.
  */
 export function chainResponse(chain: Chain): ChainResponse {
+  return sampleChain(chain, true);
+}
+
+/**
+ * Only the output's speed variation, (max − min) of ω(output)/ω(input): chainResponse's
+ * `outputPeakToPeak` without the derivatives (the in-phase comparison reads nothing else).
+ */
+export function chainOutputPeakToPeak(chain: Chain): number {
+  return sampleChain(chain, false).outputPeakToPeak;
+}
+
+function sampleChain(chain: Chain, derivatives: boolean): ChainResponse {
   const joints = jointConstants(chain);
   const nJoints = joints.length;
   const nTubes = nJoints - 1;
@@ -199,11 +211,13 @@ export function chainResponse(chain: Chain): ChainResponse {
       const sin2Beta = K[o + 10]!;
       const den = 1 - sin2Beta * c * c;
       const r = cosBeta / den;
-      const dr = (-cosBeta * sin2Beta * 2 * s * c) / (den * den);
-      deriv = deriv * r + ratio * ratio * dr;
+      if (derivatives) {
+        const dr = (-cosBeta * sin2Beta * 2 * s * c) / (den * den);
+        deriv = deriv * r + ratio * ratio * dr;
+      }
       ratio *= r;
       if (i === nTubes) break;
-      scratchDerivative[i]![k] = deriv < 0 ? -deriv : deriv;
+      if (derivatives) scratchDerivative[i]![k] = deriv < 0 ? -deriv : deriv;
       // Arm on the output shaft: b × e, normalised; then turned by the phase index about b.
       const bx = K[o + 6]!,
         by = K[o + 7]!,
@@ -232,6 +246,17 @@ export function chainResponse(chain: Chain): ChainResponse {
   }
   const outputMaxRatio = refinePeak(scratchRatio, kMax);
   const outputMinRatio = refinePeak(scratchRatio, kMin);
+  const spread = outputMaxRatio - outputMinRatio;
+  // Below 1e-12 the spread is rounding noise of an exact cancellation.
+  const outputPeakToPeak = spread > 1e-12 ? spread : 0;
+  if (!derivatives)
+    return {
+      outputPeakToPeak,
+      outputMaxRatio,
+      outputMinRatio,
+      tubePeakRatioDerivative: [],
+      outputPeakRatioDerivative: NaN,
+    };
   const tubePeakRatioDerivative: number[] = [];
   for (let t = 0; t < nTubes; t++) {
     const d = scratchDerivative[t]!;
@@ -245,8 +270,7 @@ export function chainResponse(chain: Chain): ChainResponse {
   const outputDerivative = refinePeak(scratchOutputDerivative, ko);
   return {
     outputPeakRatioDerivative: outputDerivative > 1e-12 ? outputDerivative : 0,
-    // Below 1e-12 the spread is rounding noise of an exact cancellation.
-    outputPeakToPeak: outputMaxRatio - outputMinRatio > 1e-12 ? outputMaxRatio - outputMinRatio : 0,
+    outputPeakToPeak,
     outputMaxRatio,
     outputMinRatio,
     tubePeakRatioDerivative,

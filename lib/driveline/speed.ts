@@ -35,15 +35,19 @@ export function serviceSpeed(speed: SpeedInput): ServiceSpeed | null {
       : null;
   const engineRpm =
     speed.maxEngineRpm != null && speed.topGearRatio != null ? speed.maxEngineRpm / speed.topGearRatio : null;
-  let best: ServiceSpeed | null = null;
-  const consider = (rpm: number | null | undefined, governedBy: ServiceSpeed["governedBy"]): void => {
-    if (rpm != null && (best === null || rpm > best.maxShaftRpm))
-      best = { maxShaftRpm: rpm, governedBy, vehicleRpm, engineRpm };
-  };
-  consider(speed.maxShaftRpm, "maxShaftRpm");
-  consider(vehicleRpm, "vehicle");
-  consider(engineRpm, "engine");
-  return best;
+  // The first of equals wins: maxShaftRpm, then the vehicle, then the engine.
+  let rpm: number | null = null;
+  let governedBy: ServiceSpeed["governedBy"] = "maxShaftRpm";
+  if (speed.maxShaftRpm != null) rpm = speed.maxShaftRpm;
+  if (vehicleRpm !== null && (rpm === null || vehicleRpm > rpm)) {
+    rpm = vehicleRpm;
+    governedBy = "vehicle";
+  }
+  if (engineRpm !== null && (rpm === null || engineRpm > rpm)) {
+    rpm = engineRpm;
+    governedBy = "engine";
+  }
+  return rpm === null ? null : { maxShaftRpm: rpm, governedBy, vehicleRpm, engineRpm };
 }
 
 export interface TorqueInput {

@@ -25,7 +25,7 @@ import { criticalSpeedRpm } from "./critical-speed";
 import { sampleChainCurves } from "./curves";
 import { designDirections } from "./design-geometry";
 import { add, dot, normalise, scale, sub, type Vec3 } from "./geometry";
-import { chainResponse, makeChain } from "./phasing";
+import { chainOutputPeakToPeak, chainResponse, makeChain } from "./phasing";
 import {
   DesignInputError,
   endReport,
@@ -433,7 +433,7 @@ export function evaluateTwoPiece(design: DesignFile, options?: EvaluateOptions):
   // Joints and phasing: one chain of three.
   const chain = makeChain(geo.shafts);
   const response = chainResponse(chain);
-  const inPhase = chainResponse(makeChain(geo.shafts, [0, 0]));
+  const inPhasePeakToPeak = chainOutputPeakToPeak(makeChain(geo.shafts, [0, 0]));
   const maxAngleDeg =
     maxAngleForAccelerationRad(settings.maxJointAngularAccelerationRadS2.value, omega) * DEG;
   const yoke = centreYoke(catalogue, index, bearing, t.odMm, weldFamily);
@@ -550,7 +550,7 @@ export function evaluateTwoPiece(design: DesignFile, options?: EvaluateOptions):
       equivalentAngleDeg: eqDeg,
       equivalentAngleSmallAngleDeg: eqDeg,
       jointPlaneAngleDeg: indicesDeg[0] ?? 0,
-      inPhaseOutputSpeedVariationPct: inPhase.outputPeakToPeak * 100,
+      inPhaseOutputSpeedVariationPct: inPhasePeakToPeak * 100,
     },
     peakAngularAccelerationRadS2: omega * omega * Math.max(...response.tubePeakRatioDerivative),
     tube,

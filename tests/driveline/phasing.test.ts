@@ -3,6 +3,7 @@ import fc from "fast-check";
 import {
   angleBetweenRad,
   bestPhaseIndicesRad,
+  chainOutputPeakToPeak,
   chainResponse,
   chainShaftAnglesRad,
   chainSpeedRatiosAt,
@@ -37,6 +38,31 @@ function unwrapDiff(a: number, b: number): number {
   while (d < -Math.PI) d += 2 * Math.PI;
   return d;
 }
+
+describe("output speed variation alone", () => {
+  it("one joint at β swings the output between cos β and 1/cos β (Cardan's law; SAE AE-7)", () => {
+    const x: Vec3 = { x: 1, y: 0, z: 0 };
+    for (const betaDeg of [1, 3, 7, 12]) {
+      const b = betaDeg * RAD;
+      const out = { x: Math.cos(b), y: Math.sin(b), z: 0 };
+      expect(chainOutputPeakToPeak(makeChain([x, out], []))).toBeCloseTo(1 / Math.cos(b) - Math.cos(b), 5);
+    }
+  });
+
+  it("gives the full response's spread for any 3-D chain and index", () => {
+    fc.assert(
+      fc.property(
+        fc.tuple(shaftArb, shaftArb, shaftArb),
+        fc.double({ min: -180, max: 180, noNaN: true }),
+        (s, idx) => {
+          const chain = makeChain(s, [idx * RAD]);
+          expect(chainOutputPeakToPeak(chain)).toBe(chainResponse(chain).outputPeakToPeak);
+        },
+      ),
+      { numRuns: 200 },
+    );
+  });
+});
 
 describe("two-joint phasing", () => {
   it("parallel-offset (Z) and broken-back (W) with equal angles, in phase, give constant output", () => {
