@@ -1,5 +1,5 @@
 import "server-only";
-import { NextResponse, type NextRequest } from "next/server";
+import type { NextRequest } from "next/server";
 import { ZodError, type ZodType } from "zod";
 import { AccessError, authorize, type CurrentUser } from "@/lib/auth/guard";
 import type { Permission } from "@/lib/auth/permissions";
@@ -68,8 +68,11 @@ export function errorResponse(error: unknown): Response {
   return json<ErrorBody>({ error: { code: "internal", message: "Something went wrong on our side." } }, 500);
 }
 
+/** A JSON response (a plain Response: NextResponse.json builds a second one around the first). */
 export function json<T>(body: T, status = 200, headers?: HeadersInit): Response {
-  return NextResponse.json(body, { status, headers });
+  const h = new Headers(headers);
+  if (!h.has("content-type")) h.set("content-type", "application/json");
+  return new Response(JSON.stringify(body), { status, headers: h });
 }
 
 /**
