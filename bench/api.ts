@@ -15,7 +15,7 @@ const TARGET_P99_MS = 25;
 const TARGET_RATIO = 0.8;
 /** Flat-out windows: PAIRS pairs of the trivial handler and the route, WINDOW seconds each. */
 const PAIRS = 6;
-const WINDOW = 3;
+const WINDOW = 4;
 const design = JSON.parse(readFileSync("examples/street-truck.json", "utf8")) as unknown;
 
 function median(xs: readonly number[]): number {

@@ -97,9 +97,18 @@ export function formatDateTime(at: Instant, timeZone: string): string {
   return `${fmt("dateTime", timeZone).format(toDate(at))} ${zoneName(at, timeZone)}`;
 }
 
+/** The last day worked out per zone, by the UTC second it was for (every request asks for today). */
+const dayBySecond = new Map<string, { second: number; date: string }>();
+
 /** An instant's calendar day in the shop as an ISO date, e.g. "2026-12-04" (tables, CSV, filters). */
 export function shopIsoDate(at: Instant, timeZone: string): string {
-  return isoParts(at, timeZone).date;
+  // Zone offsets are whole seconds (even the old local mean times), so one second is one day.
+  const second = Math.floor(toDate(at).getTime() / 1000);
+  const hit = dayBySecond.get(timeZone);
+  if (hit?.second === second) return hit.date;
+  const date = isoParts(at, timeZone).date;
+  dayBySecond.set(timeZone, { second, date });
+  return date;
 }
 
 /** A compact, sortable timestamp in the shop's zone, e.g. "2026-12-04 15:05 CST" (tables, papers, CSV). */

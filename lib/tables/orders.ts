@@ -60,7 +60,8 @@ interface RawOrderRow {
   customer_name: string;
   customer_email: string;
   customer_company: string | null;
-  created_at: Date;
+  /** ISO 8601 in UTC, written by the statement (no Date made per row). */
+  created_at: string;
   promised_date: string;
   status: OrderStatus;
   payment_state: PaymentState;
@@ -85,7 +86,7 @@ function toRow(r: RawOrderRow, today: string): OrderTableRow {
     customerName: r.customer_name,
     customerEmail: r.customer_email,
     customerCompany: r.customer_company,
-    createdAt: new Date(r.created_at).toISOString(),
+    createdAt: r.created_at,
     promisedDate: r.promised_date,
     status: r.status,
     statusLabel: orderStatusLabel(r.status, r.fulfilment, floor, true),
@@ -133,14 +134,17 @@ export async function orderTablePage(
   const byCustomer = q.sort === "customer";
   const sql = `with ${match}n as (select count(*)::int as n from shop_order o ${where}),
     p as (
-      select o.id, o.number, o.customer_id, o.created_at, o.promised_date::text as promised_date, o.status,
+      select o.id, o.number, o.customer_id,
+             to_char(o.created_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') as created_at,
+             o.promised_date::text as promised_date, o.status,
              o.payment_state, o.channel, o.fulfilment, o.total_cents, o.paid_cents, o.currency, ${sortKey} as _s
       from shop_order o${byCustomer ? " join customer c on c.id = o.customer_id" : ""}
       ${where}
       order by ${sortKey} ${dir}, o.id ${dir}
       limit ${Math.trunc(limit)}${offset > 0 ? " offset ?" : ""}
     )
-    select p.*, c.name as customer_name, c.email as customer_email, c.company as customer_company,
+    select p.id, p.number, p.customer_id, p.created_at, p.promised_date, p.status, p.payment_state,
+           p.channel, p.fulfilment, p.total_cents, p.paid_cents, p.currency, c.name as customer_name, c.email as customer_email, c.company as customer_company,
            n.n as total, s.shafts, coalesce(s.shaft_count, 0) as shaft_count, w.floor_k, w.floor_n, w.on_hold
     from n left join p on true
     left join customer c on c.id = p.customer_id

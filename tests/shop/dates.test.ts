@@ -25,6 +25,18 @@ describe("dates in the shop's time zone", () => {
     expect(formatTimestamp(lateEvening, "America/Chicago", { zone: false })).toBe("2026-12-04 21:30");
   });
 
+  it("the day turns at the shop's midnight to the millisecond, however often it is asked", () => {
+    // Chicago is UTC−6 in December: its 4 December begins at 06:00 UTC.
+    const asked = ["05:59:59.000", "05:59:59.999", "06:00:00.000", "06:00:00.999", "05:59:59.999"];
+    expect(asked.map((t) => shopIsoDate(`2026-12-04T${t}Z`, "America/Chicago"))).toEqual([
+      "2026-12-03",
+      "2026-12-03",
+      "2026-12-04",
+      "2026-12-04",
+      "2026-12-03",
+    ]);
+  });
+
   it("and a shop east of UTC is already on the next day", () => {
     const utcEvening = new Date("2026-12-04T12:30:00Z");
     expect(shopIsoDate(utcEvening, "Pacific/Auckland")).toBe("2026-12-05");

@@ -112,6 +112,11 @@ describe("the staff tables on known data", () => {
     expect(numbers(page.rows)).toEqual([`${tag}-01`, `${tag}-02`]);
     expect(page.total).toBe(2);
     expect(page.rows.every((r) => r.late)).toBe(true);
+    // The creation instant comes back as ISO 8601 in UTC, to the millisecond, as it was stored.
+    const created = new Map(
+      KNOWN.map(([n], i) => [`${tag}-${n}`, new Date(Date.UTC(2026, 0, 1 + i)).toISOString()]),
+    );
+    for (const row of page.rows) expect(row.createdAt).toBe(created.get(row.number));
   });
 
   dbTest("status, payment, channel, promised range and the search each narrow the rows", async () => {
