@@ -5,7 +5,7 @@ import type { UseFormReturn } from "react-hook-form";
 import { Download, FileUp } from "lucide-react";
 import type { Catalogue, DesignFile } from "@/lib/driveline";
 import { Alert } from "@/components/ui/alert";
-import { loadBuilderCore } from "./load-builder-core";
+import { tryLoadBuilderCore } from "./load-builder-core";
 import { designFileJson, designFileName, designFileToForm, type BuilderForm } from "./model";
 
 type UploadState =
@@ -42,10 +42,8 @@ export function useDesignFile({
 
   async function load(file: File) {
     let input: unknown;
-    let parseDesign;
-    try {
-      ({ parseDesign } = await loadBuilderCore());
-    } catch {
+    const core = await tryLoadBuilderCore();
+    if (!core) {
       setUpload({
         kind: "error",
         fileName: file.name,
@@ -63,7 +61,7 @@ export function useDesignFile({
       });
       return;
     }
-    const parsed = parseDesign(input, { catalogue });
+    const parsed = core.parseDesign(input, { catalogue });
     if (!parsed.ok) {
       setUpload({ kind: "error", fileName: file.name, messages: parsed.issues.map((i) => i.message) });
       return;

@@ -15,6 +15,11 @@ export function loadBuilderCore(): Promise<BuilderCore> {
   return loading;
 }
 
+/** The builder's engineering, or null when it could not be fetched (the caller says so and stops). */
+export async function tryLoadBuilderCore(): Promise<BuilderCore | null> {
+  return loadBuilderCore().catch(() => null);
+}
+
 /**
  * The builder's engineering once `wanted` (null until it has arrived). A failed fetch (a dropped
  * connection) is tried again a few seconds later, so live results never stay off for good.

@@ -2,12 +2,11 @@
 
 import { useEffect, useMemo, useState, useSyncExternalStore } from "react";
 import { useForm, type Resolver } from "react-hook-form";
-import type { Catalogue, ShopSettings, TubePreference } from "@/lib/driveline";
 import type { DraftSummary, DraftView } from "@/lib/designs/drafts";
 import { BuilderResults, ResultBar } from "./builder-results";
 import { DesignFileButtons, UploadNotice, useDesignFile } from "./design-file-controls";
 import { DraftList } from "./draft-list";
-import type { BuilderStart } from "./builder-core";
+import type { BuilderShop, BuilderStart } from "./builder-core";
 import { loadBuilderCore } from "./load-builder-core";
 import type { BuilderForm, UnitSystem } from "./model";
 import type { TubeChoice } from "./results-panel";
@@ -19,9 +18,11 @@ import { useFieldKit } from "./use-field-kit";
 import { useLiveEvaluation } from "./use-live-evaluation";
 
 export interface ShaftBuilderProps {
-  /** The shop's catalogue and limits (plain objects from getShopEngineering()). */
-  catalogue: Catalogue;
-  settings: ShopSettings;
+  /**
+   * The shop's catalogue, limits and how it picks a tube the customer leaves to Yokeline
+   * (`builderShopOf(getShopEngineering())`, plain objects).
+   */
+  shop: BuilderShop;
   /** A saved draft to open, or null for a new design. */
   initialDraft?: DraftView | null;
   /**
@@ -39,8 +40,6 @@ export interface ShaftBuilderProps {
   draftHref?: (draftId: string) => string;
   /** Unit system to start in (default inches). */
   initialUnits?: UnitSystem;
-  /** How the shop picks a tube the customer leaves to Yokeline (its price book's setting). */
-  tubePreference?: TubePreference;
   /**
    * The counter's compact, keyboard-first layout: the fields in the order of a paper measuring
    * sheet (use and vehicle, length, angles, torque, speed, tube; then the optional slip, layout
@@ -63,8 +62,7 @@ const noSubscribe = () => () => {};
  * the design-file controls (`design-file-controls.tsx`) and the tube picker (`tube-picker.tsx`).
  */
 export function ShaftBuilder({
-  catalogue,
-  settings,
+  shop,
   initialDraft,
   start,
   drafts: initialDrafts = [],
@@ -72,10 +70,10 @@ export function ShaftBuilder({
   customerId,
   draftHref = (id) => `?draft=${id}`,
   initialUnits = "imperial",
-  tubePreference = "lightest",
   compact = false,
   allowFailing = false,
 }: ShaftBuilderProps) {
+  const { catalogue, tubePreference } = shop;
   const [system, setSystem] = useState<UnitSystem>(initialUnits);
   // True once hydrated (tests wait for it); false in the server render.
   const ready = useSyncExternalStore(
@@ -95,7 +93,7 @@ export function ShaftBuilder({
     mode: "onTouched",
   });
   const { errors, isDirty } = methods.formState;
-  const live = useLiveEvaluation(methods.control, start, { catalogue, settings, tubePreference });
+  const live = useLiveEvaluation(methods.control, start, shop);
   const drafts = useDrafts({ methods, catalogue, initialDraft, initialDrafts, customerId, draftHref });
   const designFile = useDesignFile({ methods, catalogue, markChanged: drafts.markChanged });
   const kit = useFieldKit({

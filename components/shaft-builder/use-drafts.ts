@@ -6,7 +6,7 @@ import type { Catalogue } from "@/lib/driveline";
 import type { DraftSummary, DraftView } from "@/lib/designs/drafts";
 import type { ActionResult } from "@/lib/actions/define-action";
 import { UNREACHABLE, sendJson, useMutation, type MutationError } from "@/lib/browser/mutation";
-import { loadBuilderCore } from "./load-builder-core";
+import { tryLoadBuilderCore } from "./load-builder-core";
 import { defaultBuilderForm, type BuilderForm } from "./model";
 
 /** What the save status line says (a request in flight is the mutation's `pending`). */
@@ -79,10 +79,8 @@ export function useDrafts({
   /** Saves the form as the open draft (or a new one); the draft's id, or null when it was not saved. */
   async function save(): Promise<string | null> {
     const current = methods.getValues();
-    let core;
-    try {
-      core = await loadBuilderCore();
-    } catch {
+    const core = await tryLoadBuilderCore();
+    if (!core) {
       setStatus({ kind: "error", message: failure(UNREACHABLE, "") });
       return null;
     }
@@ -123,10 +121,8 @@ export function useDrafts({
         setStatus({ kind: "error", message: failure(result.error, "That draft could not be opened.") });
       return false;
     }
-    let core;
-    try {
-      core = await loadBuilderCore();
-    } catch {
+    const core = await tryLoadBuilderCore();
+    if (!core) {
       setStatus({ kind: "error", message: failure(UNREACHABLE, "") });
       return false;
     }

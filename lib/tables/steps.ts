@@ -58,9 +58,11 @@ export async function stepTablePage(
   if (q.result) base.where("r.outcome", q.result);
   if (q.user) base.where("r.by_id", q.user);
   // Whole days in the shop's time zone (its midnight to midnight), the `to` day included.
-  const { timeZone } = await getShopLocale();
-  if (q.from) base.where("r.at", ">=", knex.raw("(?::date)::timestamp at time zone ?", [q.from, timeZone]));
-  if (q.to) base.where("r.at", "<", knex.raw("(?::date + 1)::timestamp at time zone ?", [q.to, timeZone]));
+  if (q.from || q.to) {
+    const { timeZone } = await getShopLocale();
+    if (q.from) base.where("r.at", ">=", knex.raw("(?::date)::timestamp at time zone ?", [q.from, timeZone]));
+    if (q.to) base.where("r.at", "<", knex.raw("(?::date + 1)::timestamp at time zone ?", [q.to, timeZone]));
+  }
   const page = await pagedSelect<RawStepRow>(em, {
     base,
     idColumn: "r.id",

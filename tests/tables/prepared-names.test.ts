@@ -1,4 +1,4 @@
-import { describe, expect, vi } from "vitest";
+import { describe, expect, test, vi } from "vitest";
 import { getEm } from "@/lib/db/orm";
 import { dbTest, requireDatabase } from "../setup/db";
 
@@ -23,7 +23,7 @@ describe("prepared table statements", () => {
     });
   });
 
-  dbTest("a name follows from the text", async () => {
+  test("a name follows from the text", async () => {
     const { preparedName } = await import("@/lib/tables/sql");
     expect(preparedName("t", "select 1")).toBe(preparedName("t", "select 1"));
     expect(preparedName("t", "select 1")).not.toBe(preparedName("t", "select 2"));

@@ -22,6 +22,8 @@ export default async function BuildPage({
     listDrafts(user),
     findDraft(user, draftId),
   ]);
+  // What the builder's engineering reads from the shop, for its first results and for the browser.
+  const builderShop = builderShopOf(shop);
   return (
     <>
       <PageHeader
@@ -37,11 +39,9 @@ export default async function BuildPage({
       )}
       <CustomerBuilder
         key={draft?.id ?? "new"}
-        catalogue={shop.catalogue}
-        settings={shop.settings}
-        tubePreference={shop.priceBook.tubePreference}
+        shop={builderShop}
         initialDraft={draft}
-        start={builderStart(draft, builderShopOf(shop))}
+        start={builderStart(draft, builderShop)}
         drafts={drafts}
       />
     </>

@@ -39,6 +39,8 @@ export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/de
     listDrafts(user, { customerId }),
     findDraft(user, draftId),
   ]);
+  // What the builder's engineering reads from the shop, for its first results and for the browser.
+  const builderShop = builderShopOf(shop);
   return (
     <>
       <PageHeader
@@ -60,11 +62,9 @@ export default async function NewPhoneOrderPage({ searchParams }: PageProps<"/de
       </p>
       <CounterBuilder
         key={draft?.id ?? "new"}
-        catalogue={shop.catalogue}
-        settings={shop.settings}
-        tubePreference={shop.priceBook.tubePreference}
+        shop={builderShop}
         initialDraft={draft}
-        start={builderStart(draft, builderShopOf(shop))}
+        start={builderStart(draft, builderShop)}
         drafts={drafts}
         customerId={customerId}
       />
