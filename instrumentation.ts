@@ -13,6 +13,14 @@ export async function register() {
     import("./lib/auth/client-address"),
   ]);
   installClientAddressStamp(Server);
+  // The design routes' worker threads (lib/designs/pool.ts), ready before the first evaluation.
+  const { startDesignWorkers } = await import("./lib/designs/pool");
+  try {
+    startDesignWorkers();
+  } catch (error) {
+    process.stderr.write(`Yokeline cannot start: ${(error as Error).message}\n`);
+    process.exit(1);
+  }
   if (process.env.YOKELINE_JOBS !== "0") {
     const { startBackgroundJobs } = await import("./lib/jobs/start");
     startBackgroundJobs();
