@@ -11,6 +11,17 @@ import { pgExec } from "@/lib/shop/overview-queries";
 // The demo shop's history as the seed makes it (same size, shape and random sequence), on empty
 // tables inside a transaction that is rolled back: every state is there, and the rows agree with
 // each other the way the app's own code keeps them.
+/**
+ * The clock of the shop in this test: the latest Wednesday, 14:00 UTC. "At risk" is remaining
+ * floor time running past a promise, and promises fall on working days, so on a Saturday or a
+ * Sunday nothing due on Monday is at risk yet; the history is made and read at the same moment.
+ */
+function lastWednesdayAfternoon(today = new Date()): Date {
+  const at = new Date(Date.UTC(today.getUTCFullYear(), today.getUTCMonth(), today.getUTCDate(), 14));
+  at.setUTCDate(at.getUTCDate() - ((at.getUTCDay() - 3 + 7) % 7 || (at > today ? 7 : 0)));
+  return at;
+}
+
 let db: Client;
 let made: GenerateResult;
 let figures: OverviewFigures;
@@ -25,7 +36,7 @@ describe("the demo history", () => {
     await db.query(
       "truncate refund, payment, step_record, work_order_step, work_order, order_event, order_shaft, upload, email_message, shop_order, customer cascade",
     );
-    const now = new Date();
+    const now = lastWednesdayAfternoon();
     const t0 = performance.now();
     const customers = await insertCustomers(db, 28, now, 11);
     made = await generateShop(db, {
