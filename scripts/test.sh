@@ -57,7 +57,9 @@ else
   build &
   BUILD_PID=$!
   set +m
-  trap '[ -n "${BUILD_PID:-}" ] && kill -- -"$BUILD_PID" 2>/dev/null; throwaway_down' EXIT
+  # (`|| true`: under `set -e` a failed kill — the build already done — would end the trap before
+  # the cluster is stopped.)
+  trap '[ -n "${BUILD_PID:-}" ] && { kill -- -"$BUILD_PID" 2>/dev/null || true; }; throwaway_down' EXIT
   echo "▸ Lint (ESLint, Next's rules)"
   npx eslint . --max-warnings 0
   echo "▸ Formatting (Prettier)"
