@@ -14,13 +14,8 @@ export async function register() {
   ]);
   installClientAddressStamp(Server);
   // The design routes' worker threads (lib/designs/pool.ts), ready before the first evaluation.
-  const { startDesignWorkers } = await import("./lib/designs/pool");
-  try {
-    startDesignWorkers();
-  } catch (error) {
-    process.stderr.write(`Yokeline cannot start: ${(error as Error).message}\n`);
-    process.exit(1);
-  }
+  const { startDesignWorkersOrStop } = await import("./lib/designs/pool");
+  startDesignWorkersOrStop("Yokeline");
   if (process.env.YOKELINE_JOBS !== "0") {
     const { startBackgroundJobs } = await import("./lib/jobs/start");
     startBackgroundJobs();

@@ -88,6 +88,16 @@ export function startDesignWorkers(): void {
   for (let i = 0; i < pool.slots.length; i++) pool.slots[i] ??= startSlot(i);
 }
 
+/** At start-up: the workers, or (a bad DESIGN_WORKERS) its message on stderr and exit 1. */
+export function startDesignWorkersOrStop(what: string): void {
+  try {
+    startDesignWorkers();
+  } catch (error) {
+    process.stderr.write(`${what} cannot start: ${(error as Error).message}\n`);
+    process.exit(1);
+  }
+}
+
 /** The least busy worker, started (or restarted after a failure) when needed. */
 function pickSlot(): Slot {
   startDesignWorkers();
