@@ -13,9 +13,6 @@ export async function register() {
     import("./lib/auth/client-address"),
   ]);
   installClientAddressStamp(Server);
-  // The design routes' worker threads (lib/designs/pool.ts), ready before the first evaluation.
-  const { startDesignWorkersOrStop } = await import("./lib/designs/pool");
-  startDesignWorkersOrStop("Yokeline");
   if (process.env.YOKELINE_JOBS !== "0") {
     const { startBackgroundJobs } = await import("./lib/jobs/start");
     startBackgroundJobs();

@@ -20,7 +20,7 @@ npx tsx scripts/seed.ts >/dev/null
 npx tsx bench/settle.ts
 if scripts/needs-build.sh; then echo "Building…"; NODE_ENV=production npx next build >"$TMP_DIR/build.log" 2>&1 || { cat "$TMP_DIR/build.log"; exit 1; }; fi
 # The same server settings as `npm start`.
-NODE_ENV=production setsid npx next start -H 127.0.0.1 -p "$APP_PORT" >"$TMP_DIR/app.log" 2>&1 &
+NODE_OPTIONS="--max-semi-space-size=64" NODE_ENV=production setsid npx next start -H 127.0.0.1 -p "$APP_PORT" >"$TMP_DIR/app.log" 2>&1 &
 APP_PID=$!
 for _ in $(seq 1 60); do curl -sf "http://127.0.0.1:$APP_PORT/api/health" >/dev/null && break; sleep 0.5; done
 BENCH_BASE_URL="http://127.0.0.1:$APP_PORT" npx tsx bench/run.ts

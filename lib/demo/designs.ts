@@ -5,7 +5,7 @@
  */
 import streetTruck from "@/examples/street-truck.json";
 import compoundOffset from "@/examples/compound-offset.json";
-import { quoteDesigns } from "@/lib/pricing/quote-designs";
+import { quoteDesigns } from "@/lib/orders/place-order";
 import type { ShopEngineering } from "@/lib/shop/config";
 import type { QuoteLine } from "@/lib/pricing/price-book";
 import { deriveSteps, type StepSpec } from "@/lib/traveller/steps";

@@ -88,39 +88,24 @@ export function jsonDepth(text: string): number {
 
 const FORM_TYPES = /^\s*(application\/x-www-form-urlencoded|multipart\/form-data)\b/i;
 
-function invalidBody(message: string): AppError {
-  return new AppError("invalid", message, { body: message });
-}
-
-/**
- * Reads a JSON body's text capped at `limitBytes` (413); a form is a 422 on the field "body".
- * The design routes hand this text to the design worker, which parses it (parseJsonText).
- */
-export async function readJsonText(req: Request, limitBytes = JSON_BODY_LIMIT_BYTES): Promise<string> {
-  if (FORM_TYPES.test(req.headers.get("content-type") ?? "")) {
-    await req.body?.cancel().catch(() => undefined);
-    throw invalidBody("Send the body as JSON (application/json), not as a form.");
-  }
-  return readText(req, limitBytes);
-}
-
-/** Parses a JSON body's text: text that is not JSON, or nests over `MAX_JSON_DEPTH`, is a 422 on "body". */
-export function parseJsonText(text: string): unknown {
-  if (jsonDepth(text) > MAX_JSON_DEPTH)
-    throw invalidBody(`The request body nests more than ${MAX_JSON_DEPTH} levels deep.`);
-  try {
-    return JSON.parse(text) as unknown;
-  } catch {
-    throw invalidBody("The request body is not valid JSON.");
-  }
-}
-
 /**
  * Reads a JSON body capped at `limitBytes` (413) and `MAX_JSON_DEPTH` levels; a form, text that is
  * not JSON or JSON nested too deeply is a 422 on the field "body".
  */
 export async function readJson(req: Request, limitBytes = JSON_BODY_LIMIT_BYTES): Promise<unknown> {
-  return parseJsonText(await readJsonText(req, limitBytes));
+  const invalid = (message: string) => new AppError("invalid", message, { body: message });
+  if (FORM_TYPES.test(req.headers.get("content-type") ?? "")) {
+    await req.body?.cancel().catch(() => undefined);
+    throw invalid("Send the body as JSON (application/json), not as a form.");
+  }
+  const text = await readText(req, limitBytes);
+  if (jsonDepth(text) > MAX_JSON_DEPTH)
+    throw invalid(`The request body nests more than ${MAX_JSON_DEPTH} levels deep.`);
+  try {
+    return JSON.parse(text) as unknown;
+  } catch {
+    throw invalid("The request body is not valid JSON.");
+  }
 }
 
 /**

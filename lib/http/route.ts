@@ -1,11 +1,11 @@
 import "server-only";
 import type { NextRequest } from "next/server";
-import type { ZodType } from "zod";
+import { ZodError, type ZodType } from "zod";
 import { AccessError, authorize, type CurrentUser } from "@/lib/auth/guard";
 import type { Permission } from "@/lib/auth/permissions";
 import { logger } from "@/lib/logger";
-import type { ErrorBody } from "./errors";
-import { errorAnswer } from "./error-body";
+import { AppError, STATUS_OF, type ErrorBody } from "./errors";
+import { zodIssues } from "@/lib/validation";
 import { JSON_BODY_LIMIT_BYTES, readJson } from "./body";
 import { knownError } from "./known-errors";
 
@@ -42,8 +42,26 @@ export function errorResponse(error: unknown): Response {
     const code = error.status === 401 ? "unauthenticated" : "forbidden";
     return json<ErrorBody>({ error: { code, message: error.message } }, error.status);
   }
-  const answer = errorAnswer(error);
-  if (answer) return json<ErrorBody>(answer.body, answer.status);
+  if (error instanceof AppError) {
+    return json<ErrorBody>(
+      { error: { code: error.code, message: error.message, fields: error.fields } },
+      STATUS_OF[error.code],
+    );
+  }
+  if (error instanceof ZodError) {
+    const issues = zodIssues(error);
+    return json<ErrorBody>(
+      {
+        error: {
+          code: "invalid",
+          message: issues.map((i) => `${i.path || "body"}: ${i.message}`).join("\n"),
+          // An issue on the whole body (not an object at all) is reported on "body".
+          fields: Object.fromEntries(issues.map((i) => [i.path || "body", i.message])),
+        },
+      },
+      422,
+    );
+  }
   const known = knownError(error);
   if (known) return errorResponse(known);
   logger.error({ err: error }, "unhandled error in route handler");

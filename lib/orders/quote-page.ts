@@ -4,7 +4,7 @@ import { getEm } from "@/lib/db/orm";
 import type { CurrentUser } from "@/lib/auth/guard";
 import { seesAllOrders } from "./access";
 import { shaftView, type ShaftView } from "./queries";
-import { quoteDesigns } from "@/lib/pricing/quote-designs";
+import { quoteDesigns } from "./place-order";
 import { getShopEngineering } from "@/lib/shop/config";
 import { AppError } from "@/lib/http/errors";
 import { quoteOrder, type OrderQuote } from "@/lib/pricing/price-book";

@@ -2,7 +2,7 @@ import { describe, expect } from "vitest";
 import { AuditEvent } from "@/entities";
 import { getEm } from "@/lib/db/orm";
 import { currentShopConfig, SAVE_ACTION } from "@/lib/catalogue/versions";
-import { quoteDesigns } from "@/lib/pricing/quote-designs";
+import { quoteDesigns } from "@/lib/orders/place-order";
 import { emptyIntake } from "@/lib/retube/intake";
 import { getShopEngineering } from "@/lib/shop/config";
 import { createStaffUser } from "@/lib/users/staff";
