@@ -11,6 +11,11 @@ import { pgExec } from "@/lib/shop/overview-queries";
 // The demo shop's history as the seed makes it (same size, shape and random sequence), on empty
 // tables inside a transaction that is rolled back: every state is there, and the rows agree with
 // each other the way the app's own code keeps them.
+let db: Client;
+let made: GenerateResult;
+let figures: OverviewFigures;
+let ms = 0;
+
 /**
  * The clock of the shop in this test: the latest Wednesday, 14:00 UTC. "At risk" is remaining
  * floor time running past a promise, and promises fall on working days, so on a Saturday or a
@@ -18,14 +23,12 @@ import { pgExec } from "@/lib/shop/overview-queries";
  */
 function lastWednesdayAfternoon(today = new Date()): Date {
   const at = new Date(Date.UTC(today.getUTCFullYear(), today.getUTCMonth(), today.getUTCDate(), 14));
-  at.setUTCDate(at.getUTCDate() - ((at.getUTCDay() - 3 + 7) % 7 || (at > today ? 7 : 0)));
+  let daysBack = (at.getUTCDay() + 4) % 7; // days since Wednesday (day 3)
+  if (daysBack === 0 && at > today) daysBack = 7; // a Wednesday morning: the week before
+  at.setUTCDate(at.getUTCDate() - daysBack);
   return at;
 }
 
-let db: Client;
-let made: GenerateResult;
-let figures: OverviewFigures;
-let ms = 0;
 const q = async <T = Record<string, unknown>>(sql: string) => (await db.query(sql)).rows as T[];
 
 describe("the demo history", () => {
