@@ -7,7 +7,7 @@ import { BuilderResults, ResultBar } from "./builder-results";
 import { DesignFileButtons, UploadNotice, useDesignFile } from "./design-file-controls";
 import { DraftList } from "./draft-list";
 import type { BuilderShop, BuilderStart } from "./builder-core";
-import { loadBuilderCore } from "./load-builder-core";
+import { tryLoadBuilderCore } from "./load-builder-core";
 import type { BuilderForm, UnitSystem } from "./model";
 import type { TubeChoice } from "./results-panel";
 import { QuoteButton, SaveBar } from "./save-bar";
@@ -81,10 +81,14 @@ export function ShaftBuilder({
     () => true,
     () => false,
   );
-  // The form's check is the core's parser, fetched with the core when it is first needed.
+  // The form's check is the core's parser, fetched with the core when it is first needed. When it
+  // cannot be fetched (a dropped connection) the fields are left unmarked rather than the check
+  // failing: saving and quoting fetch it again and say the shop could not be reached.
   const resolver = useMemo(
-    (): Resolver<BuilderForm> => async (values, context, options) =>
-      (await loadBuilderCore()).builderResolver(catalogue)(values, context, options),
+    (): Resolver<BuilderForm> => async (values, context, options) => {
+      const core = await tryLoadBuilderCore();
+      return core ? core.builderResolver(catalogue)(values, context, options) : { values, errors: {} };
+    },
     [catalogue],
   );
   const methods = useForm<BuilderForm>({

@@ -132,3 +132,28 @@ test("a customer deletes a saved design after confirming (a dropped connection f
   await page.locator("[data-builder-ready]").waitFor();
   await expect(page.getByTestId("draft-list").getByText(name)).toHaveCount(0);
 });
+
+test("the builder's checks cannot be fetched: no error in the page, and saving says the shop is unreachable", async ({
+  page,
+}) => {
+  const pageErrors: string[] = [];
+  page.on("pageerror", (error) => pageErrors.push(error.message));
+  await signIn(page, ACCOUNTS.customer);
+  await page.goto("/build");
+  await page.locator("[data-builder-ready]").waitFor();
+  // The page has its scripts; the engineering core is fetched at the first edit, and that fails.
+  await page.route("**/_next/static/chunks/**", (r) => r.abort("internetdisconnected"));
+  await page.getByLabel("Design name").fill(`Offline ${Date.now()}`);
+  await typeInto(page, "Installed length", "52");
+  await page.getByRole("button", { name: /Save (as )?draft/ }).click();
+  await expect(page.getByTestId("save-status")).toContainText("No connection to the shop");
+  await expect(page.getByRole("button", { name: /Save (as )?draft/ })).toBeEnabled();
+  // Enter in a field submits the form through its check: nothing is thrown there either.
+  await page.getByLabel("Installed length", { exact: true }).press("Enter");
+  expect(pageErrors).toEqual([]);
+
+  await page.unrouteAll();
+  await page.getByRole("button", { name: /Save (as )?draft/ }).click();
+  await expect(page.getByTestId("save-status")).toContainText("Saved ✓");
+  expect(pageErrors).toEqual([]);
+});
