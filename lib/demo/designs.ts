@@ -9,6 +9,7 @@ import { quoteDesigns } from "@/lib/orders/place-order";
 import type { ShopEngineering } from "@/lib/shop/config";
 import type { QuoteLine } from "@/lib/pricing/price-book";
 import { deriveSteps, type StepSpec } from "@/lib/traveller/steps";
+import type { Fulfilment } from "@/lib/orders/states";
 
 export interface DemoDesign {
   key: number;
@@ -105,7 +106,7 @@ export function demoDesigns(shop: ShopEngineering): DemoDesign[] {
     }
     if (quoted.report.overall === "fail") continue;
     const evaluation = JSON.parse(JSON.stringify(quoted.report)) as Record<string, unknown>;
-    const steps = (fulfilment: "pickup" | "ship") =>
+    const steps = (fulfilment: Fulfilment) =>
       deriveSteps({ report: quoted.report, fulfilment, floor: shop.floor });
     out.push({
       key: out.length,

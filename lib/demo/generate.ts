@@ -1,4 +1,5 @@
 import "server-only";
+import type { Fulfilment, PaymentKind } from "@/lib/orders/states";
 /**
  * Generates a shop's history (demo data): orders over past weeks in every state, with their
  * shafts, work orders, routing steps, step records (holds and rework included), payments,
@@ -253,12 +254,7 @@ export async function insertCustomers(
 }
 
 /** In-limit values for a step's record sheet, in SI, with small spread (what a station would record). */
-function passValues(
-  spec: StepSpec,
-  rnd: () => number,
-  fulfilment: "pickup" | "ship",
-  serial: string,
-): SiValues {
+function passValues(spec: StepSpec, rnd: () => number, fulfilment: Fulfilment, serial: string): SiValues {
   const v: SiValues = {};
   for (const f of spec.fields) {
     if (f.type === "text") {
@@ -453,7 +449,7 @@ export async function generateShop(db: ClientBase, opts: GenerateOptions): Promi
     const plan = { ...drawPlan(rnd, createdAt, now), ...showcase };
     const customer = opts.customers[Math.floor(rnd() * opts.customers.length)]!;
     const online = customer.userId != null && rnd() < 0.7;
-    const fulfilment: "pickup" | "ship" = rnd() < 0.45 ? "ship" : "pickup";
+    const fulfilment: Fulfilment = rnd() < 0.45 ? "ship" : "pickup";
     const picked = Array.from({ length: plan.shafts }, () => designs[Math.floor(rnd() * designs.length)]!);
     const quote = quoteOrder(
       picked.map((d) => d.lines),
@@ -487,7 +483,7 @@ export async function generateShop(db: ClientBase, opts: GenerateOptions): Promi
     let refunded = 0;
     let status = "awaiting_payment";
     let updated = createdAt;
-    const pay = (kind: "deposit" | "balance" | "full", amount: number, at: number) => {
+    const pay = (kind: PaymentKind, amount: number, at: number) => {
       const id = randomUUID();
       const payment: Row = [
         id,

@@ -8,6 +8,7 @@ import type { UpdateOrderDetailsInput } from "./desk-schemas";
 import { lockOrder } from "./payments";
 import { formatDateTime } from "@/lib/dates";
 import { getShopLocale } from "@/lib/shop/locale";
+import type { Fulfilment } from "./states";
 
 const AUDIT_ACTION = "order.details";
 
@@ -16,7 +17,7 @@ export interface OrderDetailsView {
   version: number;
   promisedDate: string;
   shipTo: string | null;
-  fulfilment: "ship" | "pickup";
+  fulfilment: Fulfilment;
 }
 
 /**

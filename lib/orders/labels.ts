@@ -1,4 +1,4 @@
-import type { OrderStatus, PaymentState } from "./states";
+import type { OrderStatus, PaymentState, Fulfilment } from "./states";
 
 export const ORDER_STATUS_LABEL: Record<OrderStatus, string> = {
   awaiting_payment: "Awaiting payment",
@@ -22,7 +22,7 @@ export interface FloorProgress {
  */
 export function orderStatusLabel(
   status: OrderStatus,
-  fulfilment: "pickup" | "ship",
+  fulfilment: Fulfilment,
   floor: FloorProgress | null,
   staff: boolean,
 ): string {

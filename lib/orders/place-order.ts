@@ -28,6 +28,7 @@ import {
 } from "./acknowledgements";
 import type { WarningAcknowledgement } from "@/entities";
 import { retubeCutLengthMm, reusedForPrice } from "@/lib/retube/intake";
+import type { Fulfilment } from "./states";
 
 /** What a quote is made from: a saved design, or a design file sent as is. */
 export type QuoteSource = Pick<Design, "name" | "design"> &
@@ -47,7 +48,7 @@ export interface QuotedShaft<S extends QuoteSource = QuoteSource> {
 export function quoteDesigns<S extends QuoteSource>(
   designs: S[],
   shop: ShopEngineering,
-  fulfilment: "pickup" | "ship",
+  fulfilment: Fulfilment,
 ): { shafts: QuotedShaft<S>[]; quote: OrderQuote } {
   const shafts = designs.map((design) => {
     const parsed = parseDesign(design.design, { catalogue: shop.catalogue });

@@ -4,7 +4,15 @@
  */
 import type { QuoteLine } from "@/lib/pricing/price-book";
 import type { RetubePart } from "@/lib/retube/intake";
-import type { NoteVisibility, OrderStatus, PaymentMethod, PaymentState } from "./states";
+import type {
+  NoteVisibility,
+  OrderStatus,
+  PaymentMethod,
+  PaymentState,
+  Fulfilment,
+  OrderChannel,
+  PaymentKind,
+} from "./states";
 
 export interface OrderRow {
   id: string;
@@ -18,7 +26,7 @@ export interface OrderRow {
   paidCents: number;
   currency: string;
   shafts: string[];
-  channel: "online" | "counter";
+  channel: OrderChannel;
   late: boolean;
   /** The status in words, e.g. "In the shop — step 3 of 6" (lib/orders/labels.ts). */
   statusLabel: string;
@@ -32,7 +40,7 @@ export interface AcknowledgementView {
   /** The warning's text as it was shown when acknowledged. */
   message: string;
   byName: string;
-  channel: "online" | "counter";
+  channel: OrderChannel;
   /** ISO date-time. */
   at: string;
 }
@@ -75,7 +83,7 @@ export interface OrderNoteView {
 
 export interface OrderView extends OrderRow {
   customerEmail: string;
-  fulfilment: "pickup" | "ship";
+  fulfilment: Fulfilment;
   shipTo: string | null;
   notes: string | null;
   subtotalCents: number;
@@ -108,5 +116,5 @@ export interface OrderView extends OrderRow {
   /** Every shaft passed final inspection: the as-built certificate can be downloaded. */
   asBuiltReady: boolean;
   /** What the order asks for next, if anything. */
-  due: { kind: "deposit" | "balance" | "full"; amountCents: number } | null;
+  due: { kind: PaymentKind; amountCents: number } | null;
 }

@@ -2,6 +2,7 @@ import { addBusinessDays, formatISO } from "date-fns";
 import { z } from "zod";
 import { DEFAULT_TIME_ZONE, isTimeZone } from "../dates";
 import { DEFAULT_CURRENCY } from "../money";
+import type { Fulfilment } from "@/lib/orders/states";
 
 const money = () =>
   z
@@ -288,7 +289,7 @@ export interface OrderQuote {
 /** Totals an order: the shafts' lines, shipping (none for pickup), tax on everything, the deposit. */
 export function quoteOrder(
   shaftLines: readonly QuoteLine[][],
-  fulfilment: "pickup" | "ship",
+  fulfilment: Fulfilment,
   book: PriceBook,
 ): OrderQuote {
   const lines = shaftLines.flat();

@@ -1,6 +1,6 @@
 /** The orders table: its query (URL), its row and its columns. Pure: server and browser import it. */
 import { z } from "zod";
-import type { OrderStatus, PaymentState } from "@/lib/orders/states";
+import type { OrderStatus, PaymentState, Fulfilment, OrderChannel } from "@/lib/orders/states";
 import { ORDER_STATUS_LABEL, PAYMENT_STATE_LABEL } from "@/lib/orders/labels";
 import { csvMoney, hideableIds, shortTimestamp, type ColumnSpec } from "./columns";
 import {
@@ -30,8 +30,8 @@ export interface OrderTableRow {
   /** e.g. "In the shop — step 3 of 6", "On hold — step 2 of 6" (lib/orders/labels.ts, staff wording). */
   statusLabel: string;
   paymentState: PaymentState;
-  channel: "online" | "counter";
-  fulfilment: "pickup" | "ship";
+  channel: OrderChannel;
+  fulfilment: Fulfilment;
   totalCents: number;
   paidCents: number;
   /** What is still owed: total − paid. */

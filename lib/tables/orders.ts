@@ -1,7 +1,7 @@
 import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { orderStatusLabel } from "@/lib/orders/labels";
-import type { OrderStatus, PaymentState } from "@/lib/orders/states";
+import type { OrderStatus, PaymentState, Fulfilment, OrderChannel } from "@/lib/orders/states";
 import type { ListOrdersQuery, OrderTableRow } from "./orders-spec";
 import { containsPattern } from "./params";
 import { shopToday } from "@/lib/shop/locale";
@@ -65,8 +65,8 @@ interface RawOrderRow {
   promised_date: string;
   status: OrderStatus;
   payment_state: PaymentState;
-  channel: "online" | "counter";
-  fulfilment: "pickup" | "ship";
+  channel: OrderChannel;
+  fulfilment: Fulfilment;
   total_cents: number;
   paid_cents: number;
   currency: string;

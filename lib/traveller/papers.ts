@@ -13,6 +13,7 @@ import type { FieldSpec, StepSpec } from "./steps";
 import type { StepCompletion } from "@/lib/floor/states";
 import { formatQuantity, type FloorUnits } from "./units";
 import { formatTimestamp } from "../dates";
+import type { Fulfilment } from "@/lib/orders/states";
 
 /** 1 lbf·ft = 0.3048 m × 4.4482216152605 N (exact by definition of the pound-force and the foot). */
 const NM_PER_LBF_FT = 0.3048 * 4.4482216152605;
@@ -49,7 +50,7 @@ export interface PaperShaft {
 export interface PapersHeader {
   /** `timeZone`: the shop's (price book), for the dates printed. */
   shop: { name: string; phone: string | null; timeZone: string };
-  order: { number: string; customerName: string; fulfilment: "pickup" | "ship" };
+  order: { number: string; customerName: string; fulfilment: Fulfilment };
   units: FloorUnits;
   paperSize: keyof typeof PAGE;
 }

@@ -10,6 +10,7 @@ import type { FloorQuantity } from "./units";
 import { retubeCutLengthMm, type RepairIntake } from "@/lib/retube/intake";
 import { inspectionFields, teardownFields, withRetubeSteps } from "@/lib/retube/steps";
 import { assemblyFields, deriveTwoPieceSteps } from "./two-piece-steps";
+import type { Fulfilment } from "@/lib/orders/states";
 
 /** A numeric limit in SI. `min`/`max` bound the value; for a `nominal` the tolerance is ±. */
 export interface NumericLimit {
@@ -60,7 +61,7 @@ export interface StepSpec {
 
 export interface StepContext {
   report: EvaluationReport;
-  fulfilment: "pickup" | "ship";
+  fulfilment: Fulfilment;
   floor: FloorSettings;
   /** A re-tube's intake (lib/retube/intake.ts); absent or null for a new shaft. */
   repair?: Pick<RepairIntake, "weldToWeldMm" | "parts"> | null;

@@ -6,6 +6,7 @@ import type { EvaluationReport } from "@/lib/driveline/report";
 import { formatStepCode } from "./codes";
 import type { FloorSettings } from "./settings";
 import type { StepSpec } from "./steps";
+import type { Fulfilment } from "@/lib/orders/states";
 
 export interface TravellerStep extends StepSpec {
   /** The text of the step's Code 128. */
@@ -36,7 +37,7 @@ export interface TravellerView {
     number: string;
     customerName: string;
     promisedDate: string;
-    fulfilment: "pickup" | "ship";
+    fulfilment: Fulfilment;
   };
   shaft: {
     name: string;

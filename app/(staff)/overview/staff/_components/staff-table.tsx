@@ -7,15 +7,14 @@ import { CELL, TableCard } from "@/components/ui/table-card";
 import { useConfirmedMutation } from "@/lib/browser/mutation";
 import { Alert } from "@/components/ui/alert";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
-
-export type StaffRoleValue = "counter" | "floor" | "owner";
+import type { StaffRole } from "@/lib/auth/roles";
 
 /** One staff account as the table shows it (a plain object; dates already in words). */
 export interface StaffMemberView {
   id: string;
   name: string;
   email: string;
-  role: StaffRoleValue;
+  role: StaffRole;
   roleLabel: string;
   active: boolean;
   /** e.g. "3 Dec 2026, 14:05", or null when never */
@@ -24,12 +23,12 @@ export interface StaffMemberView {
 }
 
 export interface RoleOption {
-  value: StaffRoleValue;
+  value: StaffRole;
   label: string;
 }
 
 type Pending =
-  | { kind: "role"; member: StaffMemberView; role: StaffRoleValue }
+  | { kind: "role"; member: StaffMemberView; role: StaffRole }
   | { kind: "active"; member: StaffMemberView; active: boolean };
 
 const pill = "inline-flex items-center rounded-full px-2.5 py-0.5 text-xs font-semibold whitespace-nowrap";
@@ -199,9 +198,9 @@ function RolePicker({
 }: {
   member: StaffMemberView;
   roles: RoleOption[];
-  onPick: (role: StaffRoleValue) => void;
+  onPick: (role: StaffRole) => void;
 }) {
-  const [role, setRole] = useState<StaffRoleValue>(member.role);
+  const [role, setRole] = useState<StaffRole>(member.role);
   const id = `role-${member.id}`;
   return (
     <span className="inline-flex items-center gap-1">
@@ -212,7 +211,7 @@ function RolePicker({
         id={id}
         className="rounded-md border border-line-strong bg-white px-2 py-1 text-xs"
         value={role}
-        onChange={(e) => setRole(e.target.value as StaffRoleValue)}
+        onChange={(e) => setRole(e.target.value as StaffRole)}
       >
         {roles.map((r) => (
           <option key={r.value} value={r.value}>

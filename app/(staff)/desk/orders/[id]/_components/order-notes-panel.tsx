@@ -3,6 +3,7 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { Eye, Lock } from "lucide-react";
 import type { OrderNoteView } from "@/lib/orders/views";
+import type { NoteVisibility } from "@/lib/orders/states";
 import { addOrderNoteAction } from "@/lib/actions/add-order-note";
 import { useMutation } from "@/lib/browser/mutation";
 import { Alert } from "@/components/ui/alert";
@@ -13,7 +14,7 @@ import { ShopTime } from "@/components/shop-locale";
 export function OrderNotesPanel({ orderId, notes }: { orderId: string; notes: OrderNoteView[] }) {
   const router = useRouter();
   const [body, setBody] = useState("");
-  const [visibility, setVisibility] = useState<"staff" | "customer">("staff");
+  const [visibility, setVisibility] = useState<NoteVisibility>("staff");
   const add = useMutation(addOrderNoteAction);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<string | null>(null);

@@ -9,8 +9,10 @@ import { recordCounterPaymentAction } from "@/lib/actions/record-counter-payment
 import { Alert } from "@/components/ui/alert";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Field } from "@/components/ui/field";
+import type { PaymentKind, PaymentMethod } from "@/lib/orders/states";
 
-type Method = "cash" | "cheque" | "terminal";
+/** The counter takes every method but the hosted checkout. */
+type Method = Exclude<PaymentMethod, "checkout">;
 const METHODS: { value: Method; label: string; reference: string }[] = [
   { value: "terminal", label: "Card terminal", reference: "Terminal receipt reference" },
   { value: "cash", label: "Cash", reference: "Reference (optional)" },
@@ -30,7 +32,7 @@ export function TakePayment({
   orderId: string;
   currency: string;
   customerEmail: string;
-  due: { kind: "deposit" | "balance" | "full"; amountCents: number } | null;
+  due: { kind: PaymentKind; amountCents: number } | null;
   owedCents: number;
   /** Why no payment can be taken now (cancelled, engineering sign-off), or null. */
   blocked: string | null;
