@@ -15,6 +15,24 @@ async function sessionUser(requestHeaders: Headers): Promise<CurrentUser | null>
   // A cookie the auth library accepted a moment ago: its session row and user read live (session-cache.ts).
   const remembered = cookie ? await rememberedSessionUser(cookie, authPool) : undefined;
   if (remembered !== undefined) return remembered && currentUser(remembered);
+  if (!cookie) return librarySessionUser(requestHeaders, null);
+  // Requests with one cookie that arrive together (a page's parallel fetches, or every request of a
+  // busy client the moment its remembered session runs out) share one read by the auth library.
+  let pending = resolving.get(cookie);
+  if (!pending) {
+    pending = librarySessionUser(requestHeaders, cookie).finally(() => resolving.delete(cookie));
+    resolving.set(cookie, pending);
+  }
+  return pending;
+}
+
+/** Cookies the auth library is reading now: the answer each will get (per server process). */
+const resolving = new Map<string, Promise<CurrentUser | null>>();
+
+async function librarySessionUser(
+  requestHeaders: Headers,
+  cookie: string | null,
+): Promise<CurrentUser | null> {
   const session = await auth.api.getSession({ headers: requestHeaders });
   if (!session) return null;
   if (cookie) rememberSession(cookie, session.session.token, session.session.expiresAt);

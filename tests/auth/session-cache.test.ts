@@ -1,6 +1,6 @@
-import { describe, expect } from "vitest";
+import { describe, expect, vi } from "vitest";
 import { authorize } from "@/lib/auth/guard";
-import { authPool } from "@/lib/auth/server";
+import { auth, authPool } from "@/lib/auth/server";
 import { forgetSessions } from "@/lib/auth/session-cache";
 import { createStaffUser, setStaffActive } from "@/lib/users/staff";
 import { authRequest, sessionCookie, uniqueEmail } from "../setup/auth-requests";
@@ -64,4 +64,32 @@ describe("the remembered session is read live on every request", () => {
     await expect(authorize(null, forged)).rejects.toMatchObject({ status: 401 });
     await expect(authorize(null, floor.headers)).resolves.toMatchObject({ id: floor.id });
   });
+});
+
+describe("a cookie not remembered yet", () => {
+  dbTest(
+    "requests that arrive together share one read by the auth library, each cookie its own",
+    async () => {
+      forgetSessions();
+      const a = await staff("floor");
+      const b = await staff("owner");
+      const read = vi.spyOn(auth.api, "getSession");
+      try {
+        const answers = await Promise.all(
+          Array.from({ length: 20 }, (_, i) => authorize(null, i % 2 ? b.headers : a.headers)),
+        );
+        expect(answers.map((u) => u.id)).toEqual(Array.from({ length: 20 }, (_, i) => (i % 2 ? b.id : a.id)));
+        expect(read).toHaveBeenCalledTimes(2);
+        // Remembered now: the next requests read the session row, not the auth library.
+        await authorize(null, a.headers);
+        expect(read).toHaveBeenCalledTimes(2);
+        // Once the shared read is over it is not kept: a forgotten cookie is read again.
+        forgetSessions();
+        await expect(authorize(null, a.headers)).resolves.toMatchObject({ id: a.id });
+        expect(read).toHaveBeenCalledTimes(3);
+      } finally {
+        read.mockRestore();
+      }
+    },
+  );
 });
