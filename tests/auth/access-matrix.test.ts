@@ -51,6 +51,7 @@ const HANDLERS: Row[] = [
   ["POST /api/auth/invite", "/api/auth/invite", "empty", [422, 422, 422, 422, 422, 422]],
   ["POST /api/auth/staff-invite", "/api/auth/staff-invite", "empty", [422, 422, 422, 422, 422, 422]],
   ["GET /api/bench/noop", "/api/bench/noop", "none", [200, 200, 200, 200, 200, 200]],
+  ["POST /api/bench/noop", "/api/bench/noop", "design", [200, 200, 200, 200, 200, 200]],
   ["GET /api/catalogue/versions", "/api/catalogue/versions", "none", [401, 403, 403, 403, 403, 200]],
   ["POST /api/catalogue/versions", "/api/catalogue/versions", "empty", [401, 403, 403, 403, 403, 422]],
   ["GET /api/customers/search", "/api/customers/search?q=Buyer", "none", [401, 403, 403, 200, 403, 200]],

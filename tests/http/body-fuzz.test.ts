@@ -3,6 +3,7 @@ import path from "node:path";
 import { beforeAll, describe, expect, test, vi } from "vitest";
 import fc from "fast-check";
 import { NextRequest } from "next/server";
+import { POST as benchNoopPost } from "@/app/api/bench/noop/route";
 import { POST as evaluatePost } from "@/app/api/designs/evaluate/route";
 import { POST as quotePost } from "@/app/api/designs/quote/route";
 import { POST as saveDesignPost } from "@/app/api/designs/route";
@@ -87,6 +88,7 @@ const HANDLERS: [name: string, handler: Handler, as: keyof typeof cookies | null
   ["POST /api/orders", placeOrderPost as Handler, "customer"],
   ["POST /api/floor/steps", stepsPost as Handler, "floor"],
   ["POST /api/auth/invite", invitePost as Handler, null],
+  ["POST /api/bench/noop", benchNoopPost as Handler, null],
 ];
 
 describe("route bodies under fuzzing", () => {
