@@ -60,6 +60,12 @@ describe("what a scanned code means", () => {
       expect(held.hold!.failures).toEqual([
         expect.objectContaining({ key: "runoutMidMm", message: expect.stringContaining("0.0500 in") }),
       ]);
+      // When it was held, in ISO 8601 UTC, as the record has it.
+      const [record] = await em.execute<{ at: string }[]>(
+        "select r.at from step_record r join work_order_step s on s.id = r.step_id where s.work_order_id = ? and r.outcome = 'hold'",
+        [wo.id],
+      );
+      expect(held.hold!.at).toBe(new Date(record!.at).toISOString());
     },
   );
 
@@ -81,6 +87,16 @@ describe("what a scanned code means", () => {
       code: "invalid",
       fields: { code: expect.any(String) },
     });
+    // A work order voided with its order (cancelled): its traveller says not to work on it.
+    await em.execute(
+      "update work_order set voided_at = now(), void_reason = 'Order cancelled' where id = ?",
+      [wo.id],
+    );
+    await expect(scanCode(await getEm(), code(wo.serial, "CUT"))).rejects.toMatchObject({
+      code: "conflict",
+      message: expect.stringContaining("Order cancelled. Do not work on this shaft."),
+    });
+    await em.execute("update work_order set voided_at = null, void_reason = null where id = ?", [wo.id]);
     await voidAndReissue(wo.id, await staff("counter"), "Length changed");
     await expect(scanCode(await getEm(), code(wo.serial, "CUT", 1))).rejects.toMatchObject({
       code: "conflict",
