@@ -1,5 +1,4 @@
 import "server-only";
-import type { Fulfilment, PaymentKind } from "@/lib/orders/states";
 /**
  * Generates a shop's history (demo data): orders over past weeks in every state, with their
  * shafts, work orders, routing steps, step records (holds and rework included), payments,
@@ -20,6 +19,7 @@ import type { StepKind } from "@/lib/traveller/settings";
 import type { StepSpec } from "@/lib/traveller/steps";
 import { fromSi } from "@/lib/traveller/units";
 import { formatMoney } from "@/lib/money";
+import type { Fulfilment, PaymentKind } from "@/lib/orders/states";
 import { demoDesigns, type DemoDesign } from "./designs";
 
 const HOUR = 3_600_000;

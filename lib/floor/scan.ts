@@ -9,8 +9,8 @@ import { WorkOrder } from "@/entities";
 import type { StepState, WorkOrderState } from "@/lib/floor/states";
 import { AppError } from "@/lib/http/errors";
 import { assertCurrentRevision, assertNotVoided } from "./work-orders";
+import { preparedRows } from "@/lib/db/prepared";
 import { getShopEngineering } from "@/lib/shop/config";
-import { tableRows } from "@/lib/tables/sql";
 import { normaliseCode, parseSerial, parseStepCode } from "@/lib/traveller/codes";
 import { describeLimit, type Failure } from "@/lib/traveller/measure";
 import type { FieldSpec, StepSpec } from "@/lib/traveller/steps";
@@ -157,16 +157,12 @@ export async function scanCode(em: EntityManager, raw: string): Promise<ScanResu
   // steps of the current revision and, for a step on hold, the latest hold record. The ORM's
   // look-ups took three or four statements in two or three round trips, most of a scan's time.
   const [[row], { floor }] = await Promise.all([
-    tableRows<ScanRow>(em, SCAN_SQL, [asStep.step, asStep.serial], "floor_scan"),
+    preparedRows<ScanRow>(em, SCAN_SQL, [asStep.step, asStep.serial], "floor_scan"),
     getShopEngineering(),
   ]);
   if (!row) throw new AppError("not_found", `No shaft with serial ${asStep.serial}.`);
   assertCurrentRevision(row, asStep.revision);
-  assertNotVoided({
-    serial: row.serial,
-    voidedAt: row.voided_at === null ? null : new Date(row.voided_at),
-    voidReason: row.void_reason,
-  });
+  assertNotVoided({ serial: row.serial, voidedAt: row.voided_at, voidReason: row.void_reason });
   const steps = row.steps ?? [];
   const step = steps.find((s) => s.code === asStep.step);
   if (!step) throw new AppError("not_found", `${row.serial} has no step ${asStep.step}.`);

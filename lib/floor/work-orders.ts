@@ -268,7 +268,8 @@ export function assertCurrentRevision(wo: { serial: string; revision: number }, 
 /** A work order of a cancelled order: every code of its traveller is refused. */
 export function assertNotVoided(wo: {
   serial: string;
-  voidedAt?: Date | null;
+  /** An entity's Date, or a raw row's timestamp text: only whether it is set matters. */
+  voidedAt?: Date | string | null;
   voidReason?: string | null;
 }): void {
   if (wo.voidedAt)

@@ -5,7 +5,8 @@ import type { OrderStatus, PaymentState, Fulfilment, OrderChannel } from "@/lib/
 import type { ListOrdersQuery, OrderTableRow } from "./orders-spec";
 import { containsPattern } from "./params";
 import { shopToday } from "@/lib/shop/locale";
-import { tableRows, type Page } from "./sql";
+import { preparedRows } from "@/lib/db/prepared";
+import type { Page } from "./sql";
 
 /** The SQL each sort column orders by (never user text); the order's id breaks ties. */
 const ORDER_BY: Record<ListOrdersQuery["sort"], string> = {
@@ -167,7 +168,7 @@ export async function orderTablePage(
   ];
   // Prepared: planned once per connection. A search too — its generic plan (once PostgreSQL finds it
   // no dearer than planning each text) reads the same indexes, and saves about 1 ms a search.
-  const rows = await tableRows<RawOrderRow & { id: string | null; total: number }>(
+  const rows = await preparedRows<RawOrderRow & { id: string | null; total: number }>(
     em,
     sql,
     bindings,
