@@ -38,8 +38,11 @@ export interface CustomerRow {
   hasAccount: boolean;
 }
 
-/** The text the search matches, as the trigram index `customer_search_trgm_index` has it. */
-const searchText = (c: string) =>
+/**
+ * The text a customer search matches, as the trigram index `customer_search_trgm_index` has it
+ * (name, e-mail, company and phone, in lower case); `c` is the table's alias with its dot, or "".
+ */
+export const customerSearchText = (c: string) =>
   `lower(${c}name || ' ' || ${c}email || ' ' || coalesce(${c}company, '') || ' ' || coalesce(${c}phone, ''))`;
 /** The phone's digits alone (index `customer_phone_digits_trgm_index`): "555 0163" finds "(555) 016-3…". */
 const phoneDigits = (c: string) => `regexp_replace(coalesce(${c}phone, ''), '[^0-9]', '', 'g')`;
@@ -62,9 +65,9 @@ export function customerMatch(query: string, alias = ""): { sql: string; params:
     params.push(containsPattern(word));
     if (digits.length >= 3 && /^[0-9()+\-.\s]+$/.test(word)) {
       params.push(containsPattern(digits));
-      where.push(`(${searchText(c)} like ? or ${phoneDigits(c)} like ?)`);
+      where.push(`(${customerSearchText(c)} like ? or ${phoneDigits(c)} like ?)`);
     } else {
-      where.push(`${searchText(c)} like ?`);
+      where.push(`${customerSearchText(c)} like ?`);
     }
   }
   return { sql: `(${where.join(" and ")})`, params };

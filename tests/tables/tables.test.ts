@@ -130,9 +130,10 @@ describe("the staff tables on known data", () => {
     expect(await nums("channel=counter")).toEqual([`${tag}-02`, `${tag}-04`, `${tag}-06`]);
     expect(await nums("from=2026-06-01&to=2026-06-15")).toEqual([`${tag}-01`, `${tag}-02`, `${tag}-05`]);
     expect((await nums("status=open")).length).toBe(4 + 30);
-    // The search finds the order number, the customer's name, e-mail and company.
+    // The search finds the order number, the customer's name, e-mail, company and phone (any capitals;
+    // the customer's words are one text, so the company runs on into the phone).
     expect(await nums("")).toHaveLength(36);
-    for (const text of [`Ada ${tag}`, `ada-${tag}@test`, `GEARWORKS ${tag}`])
+    for (const text of [`Ada ${tag}`, `ada-${tag}@test`, `GEARWORKS ${tag}`, `gearworks ${tag} 555-0142`])
       expect(
         numbers((await orderTablePage(em, q(`q=${encodeURIComponent(text)}&size=100`))).rows),
       ).toHaveLength(36);

@@ -17,7 +17,12 @@ import { OrdersTable } from "./_components/orders-table";
 export const metadata: Metadata = { title: "Orders" };
 
 const FILTERS: FilterSpec[] = [
-  { kind: "search", name: "q", label: "Search", placeholder: "Order number, customer, e-mail, company" },
+  {
+    kind: "search",
+    name: "q",
+    label: "Search",
+    placeholder: "Order number, customer, e-mail, company, phone",
+  },
   {
     kind: "select",
     name: "status",
