@@ -10,7 +10,7 @@ import {
   torsionShearStressMPa,
   type DesignFile,
 } from "../lib/driveline";
-import { addRow } from "./table";
+import { addRow, median } from "./table";
 
 const TARGET_EVAL_US = 20;
 const TARGET_RANK_MS = 2;
@@ -21,11 +21,6 @@ function loadExample(name: string): DesignFile {
   );
   if (!parsed.ok) throw new Error(parsed.issues.map((i) => i.message).join("\n"));
   return parsed.design;
-}
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)]!;
 }
 
 /** Time `fn` in batches; returns the median µs per call. */
