@@ -41,7 +41,7 @@ export function FilterBar({ filters, idPrefix }: { filters: FilterSpec[]; idPref
         switch (f.kind) {
           case "search":
             return (
-              <div key={id} className="min-w-56 flex-1">
+              <div key={id} className="min-w-80 flex-1">
                 <label htmlFor={id} className="field-label">
                   {f.label}
                 </label>
