@@ -23,12 +23,14 @@ if scripts/needs-build.sh; then echo "Building…"; NODE_ENV=production npx next
 NODE_OPTIONS="--max-semi-space-size=64" NODE_ENV=production setsid npx next start -H 127.0.0.1 -p "$APP_PORT" >"$TMP_DIR/app.log" 2>&1 &
 APP_PID=$!
 for _ in $(seq 1 60); do curl -sf "http://127.0.0.1:$APP_PORT/api/health" >/dev/null && break; sleep 0.5; done
-# On 2 cores PostgreSQL is kept to the second core (the app, the load tool and the bench may use
-# both): left free, a query wakes its backend on the app's own core, and the app's one JavaScript
-# thread waits while its database runs. BENCH_PIN=0 leaves it free; more cores are never pinned.
-if [ "${BENCH_PIN:-1}" != 0 ] && [ "$(nproc)" -eq 2 ] && command -v taskset >/dev/null; then
+# On 2 cores (CPUs 0 and 1) PostgreSQL is kept to the second (the app, the load tool and the bench
+# may use both): left free, a query wakes its backend on the app's own core, and the app's one
+# JavaScript thread waits while its database runs. BENCH_PIN=0 leaves it free; other machines are
+# never pinned.
+if [ "${BENCH_PIN:-1}" != 0 ] && [ "$(awk '/^Cpus_allowed_list/ {print $2}' /proc/self/status)" = 0-1 ] \
+  && command -v taskset >/dev/null; then
   PG_PID="$(head -1 "$(pg_dir "$PG_DIR")/postmaster.pid")"
-  for pid in "$PG_PID" $(pgrep -P "$PG_PID"); do taskset -a -p -c 1 "$pid" >/dev/null; done
+  for pid in "$PG_PID" $(pgrep -P "$PG_PID"); do taskset -a -p -c 1 "$pid" >/dev/null 2>&1 || true; done
   echo "PostgreSQL pinned to CPU 1 (BENCH_PIN=0 leaves it free)."
 fi
 BENCH_BASE_URL="http://127.0.0.1:$APP_PORT" npx tsx bench/run.ts
