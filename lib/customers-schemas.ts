@@ -22,7 +22,8 @@ export const searchCustomersQuerySchema = z.object({
     .string({ error: "Type part of a name, phone, e-mail or company." })
     .trim()
     .min(1, { error: "Type part of a name, phone, e-mail or company." })
-    .max(100, { error: "At most 100 characters." }),
+    .max(100, { error: "At most 100 characters." })
+    .refine((s) => !s.includes("\u0000"), { error: "Must not contain a NUL character." }),
   limit: z.coerce
     .number({ error: "A whole number from 1 to 20." })
     .int({ error: "A whole number from 1 to 20." })

@@ -101,11 +101,35 @@ export async function readJson(req: Request, limitBytes = JSON_BODY_LIMIT_BYTES)
   const text = await readText(req, limitBytes);
   if (jsonDepth(text) > MAX_JSON_DEPTH)
     throw invalid(`The request body nests more than ${MAX_JSON_DEPTH} levels deep.`);
+  let value: unknown;
   try {
-    return JSON.parse(text) as unknown;
+    value = JSON.parse(text) as unknown;
   } catch {
     throw invalid("The request body is not valid JSON.");
   }
+  // PostgreSQL stores no NUL character in text; refused here, where the field can still be named.
+  // (A raw NUL is not valid JSON, so only its escape can bring one; the walk runs only then.)
+  if (text.includes("\\u0000")) {
+    const field = nulPath(value, "");
+    if (field !== null) {
+      const message = "must not contain a NUL character (\\u0000)";
+      throw new AppError("invalid", `${field || "body"}: ${message}`, { [field || "body"]: message });
+    }
+  }
+  return value;
+}
+
+/** The path (as the validation messages write it: `a.b[2].c`) of the first string holding a NUL. */
+function nulPath(value: unknown, path: string): string | null {
+  if (typeof value === "string") return value.includes("\u0000") ? path : null;
+  if (typeof value !== "object" || value === null) return null;
+  for (const [key, item] of Object.entries(value)) {
+    const at = nulPath(item, Array.isArray(value) ? `${path}[${key}]` : path ? `${path}.${key}` : key);
+    if (at !== null) return at;
+  }
+  // A key may hold one too.
+  for (const key of Object.keys(value)) if (key.includes("\u0000")) return path || "body";
+  return null;
 }
 
 /**

@@ -29,7 +29,8 @@ export function isUuid(value: unknown): value is string {
 /**
  * Errors that come from a request the caller got wrong, not from a fault of ours, as the AppError
  * they should be answered with: a record that is not there (MikroORM's findOneOrFail) or an id
- * PostgreSQL cannot read (22P02) is not_found; a number out of a column's range (22003) invalid;
+ * PostgreSQL cannot read (22P02) is not_found; a number out of a column's range (22003) or text it
+ * cannot take (a NUL: 22021, 08P01) invalid;
  * a unique index's refusal (23505) conflict.
  * A database that went away after a good start (refused connection, server shut down or starting,
  * SQLSTATE class 08) is unavailable (503), so the caller is told to try again.
@@ -39,6 +40,10 @@ export function knownError(error: unknown): AppError | null {
   const code = typeof error === "object" && error !== null ? (error as { code?: unknown }).code : undefined;
   if (code === "22P02") return new AppError("not_found", "No such record.");
   if (code === "22003") return new AppError("invalid", "A number is out of range.");
+  // Text PostgreSQL cannot take (a NUL character: 22021 in a statement's value, or 08P01 when the
+  // driver cannot even frame it): the caller's input, not a lost connection, whatever its class.
+  if (code === "22021" || code === "08P01")
+    return new AppError("invalid", "The request holds a character the shop cannot store (NUL).");
   // A pre-check can lose a race; the database's unique index still says no (e.g. a customer e-mail).
   if (code === "23505") return new AppError("conflict", "That already exists.");
   const message = error instanceof Error ? error.message : "";

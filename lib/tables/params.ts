@@ -49,7 +49,11 @@ export const isoDateParam = z
 export const flagParam = z.literal("1", { message: 'must be "1" or left out' });
 
 /** Free text to search for, trimmed, at most 100 characters. */
-export const searchParam = z.string().trim().max(100, "must be at most 100 characters");
+export const searchParam = z
+  .string()
+  .trim()
+  .max(100, "must be at most 100 characters")
+  .refine((s) => !s.includes("\u0000"), "must not contain a NUL character");
 
 /** A sort column from a fixed list (anything else is named in the notice). */
 export function sortParam<const S extends readonly [string, ...string[]]>(sorts: S, fallback: S[number]) {

@@ -87,6 +87,21 @@ describe("readJson", () => {
     ).rejects.toMatchObject({ code: "invalid", fields: { body: expect.stringMatching(/not as a form/) } });
   });
 
+  test("a NUL in any string is a 422 naming its field (PostgreSQL stores no NUL in text)", async () => {
+    const post = (body: string) => readJson(new Request("http://127.0.0.1/x", { method: "POST", body }));
+    await expect(
+      post(String.raw`{"name":"ok","application":{"lines":["a","b\u0000c"]}}`),
+    ).rejects.toMatchObject({
+      code: "invalid",
+      fields: { "application.lines[1]": expect.stringMatching(/NUL/) },
+    });
+    await expect(post(String.raw`"\u0000"`)).rejects.toMatchObject({
+      fields: { body: expect.stringMatching(/NUL/) },
+    });
+    // An escaped backslash before "u0000" is plain text, and is let through.
+    await expect(post(String.raw`{"name":"C:\\u0000"}`)).resolves.toEqual({ name: String.raw`C:\u0000` });
+  });
+
   test("the JSON cap is about 1 MB", () => {
     expect(JSON_BODY_LIMIT_BYTES).toBe(1024 * 1024);
   });

@@ -26,4 +26,10 @@ describe("knownError", () => {
     expect(knownError(Object.assign(new Error("x"), { code: "08006" }))?.code).toBe("unavailable");
     expect(knownError(new Error("something else"))).toBeNull();
   });
+
+  test("text PostgreSQL cannot take (a NUL: 22021, or 08P01 when the driver cannot frame it) is the caller's, not a lost database", () => {
+    // 08P01 is what a NUL in a table search's value gave through the ORM: it was answered 503.
+    for (const code of ["22021", "08P01"])
+      expect(knownError(Object.assign(new Error("invalid byte sequence"), { code }))?.code).toBe("invalid");
+  });
 });
