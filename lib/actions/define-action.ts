@@ -2,6 +2,7 @@ import "server-only";
 import type { ZodType } from "zod";
 import { AccessError, authorize, type CurrentUser } from "@/lib/auth/guard";
 import type { Permission } from "@/lib/auth/permissions";
+import { throwIfNul } from "@/lib/http/body";
 import { AppError } from "@/lib/http/errors";
 import { knownError } from "@/lib/http/known-errors";
 import { logger } from "@/lib/logger";
@@ -23,6 +24,7 @@ export function defineAction<I, O>(
   return async (raw) => {
     try {
       const user = await authorize(permission);
+      throwIfNul(raw); // PostgreSQL stores no NUL in text: named here, not a bare 422 from the database
       const parsed = schema.safeParse(raw);
       if (!parsed.success) {
         const issues = zodIssues(parsed.error);

@@ -109,17 +109,24 @@ export async function readJson(req: Request, limitBytes = JSON_BODY_LIMIT_BYTES)
   }
   // PostgreSQL stores no NUL character in text; refused here, where the field can still be named.
   // (A raw NUL is not valid JSON, so only its escape can bring one; the walk runs only then.)
-  if (text.includes("\\u0000")) {
-    const field = nulPath(value, "");
-    if (field !== null) {
-      const message = "must not contain a NUL character (\\u0000)";
-      throw new AppError("invalid", `${field || "body"}: ${message}`, { [field || "body"]: message });
-    }
-  }
+  if (text.includes("\\u0000")) throwIfNul(value);
   return value;
 }
 
-/** The path (as the validation messages write it: `a.b[2].c`) of the first string holding a NUL. */
+const NUL_MESSAGE = "must not contain a NUL character (\\u0000)";
+
+/**
+ * Refuses input holding a NUL character anywhere (PostgreSQL stores none in text) with a 422 that
+ * names the field, as the validation messages write it (`a.b[2].c`; `body` for the whole input).
+ */
+export function throwIfNul(value: unknown): void {
+  const field = nulPath(value, "");
+  if (field === null) return;
+  const name = field || "body";
+  throw new AppError("invalid", `${name}: ${NUL_MESSAGE}`, { [name]: NUL_MESSAGE });
+}
+
+/** The path of the first string (value or key) holding a NUL, "" for the input itself. */
 function nulPath(value: unknown, path: string): string | null {
   if (typeof value === "string") return value.includes("\u0000") ? path : null;
   if (typeof value !== "object" || value === null) return null;
@@ -128,8 +135,15 @@ function nulPath(value: unknown, path: string): string | null {
     if (at !== null) return at;
   }
   // A key may hold one too.
-  for (const key of Object.keys(value)) if (key.includes("\u0000")) return path || "body";
+  for (const key of Object.keys(value)) if (key.includes("\u0000")) return path;
   return null;
+}
+
+/** A form's fields (names, text values and file names) as one object, for throwIfNul. */
+function formFields(form: FormData): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const [name, value] of form.entries()) fields[name] = typeof value === "string" ? value : value.name;
+  return fields;
 }
 
 /**
@@ -149,11 +163,14 @@ export async function readForm(
     throw new AppError("invalid", message, { [field]: message });
   }
   const bytes = await readBody(req, limitBytes, { field, message: options.sizeMessage });
+  let form: FormData;
   try {
-    return await new Response(bytes, { headers: { "content-type": contentType } }).formData();
+    form = await new Response(bytes, { headers: { "content-type": contentType } }).formData();
   } catch {
     throw new AppError("invalid", message, { [field]: message });
   }
+  throwIfNul(formFields(form));
+  return form;
 }
 
 /**
@@ -169,6 +186,7 @@ export function withBodyLimit<A extends unknown[]>(
     let bytes: Uint8Array<ArrayBuffer>;
     try {
       bytes = await readBody(req, limitBytes);
+      await refuseNul(bytes, req.headers.get("content-type") ?? "");
     } catch (error) {
       return onError(error);
     }
@@ -179,4 +197,28 @@ export function withBodyLimit<A extends unknown[]>(
     if (req.method !== "GET" && req.method !== "HEAD") init.body = bytes;
     return handler(new Request(req.url, init), ...rest);
   };
+}
+
+/**
+ * A JSON or form body (read whole, capped) holding a NUL anywhere is refused naming the field,
+ * before a library that would pass it to the database sees it. Only bodies that can hold one
+ * (an escaped `\u0000`, a raw 0 byte, a `%00`) are parsed here.
+ */
+async function refuseNul(bytes: Uint8Array<ArrayBuffer>, contentType: string): Promise<void> {
+  const text = new TextDecoder().decode(bytes);
+  if (!/\\u0000|\u0000|%00/i.test(text)) return;
+  if (FORM_TYPES.test(contentType)) {
+    const form = await new Response(bytes, { headers: { "content-type": contentType } })
+      .formData()
+      .catch(() => null);
+    if (form) throwIfNul(formFields(form));
+    return;
+  }
+  let value: unknown;
+  try {
+    value = JSON.parse(text) as unknown;
+  } catch {
+    return; // not JSON: the library answers it
+  }
+  throwIfNul(value);
 }

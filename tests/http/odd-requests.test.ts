@@ -11,8 +11,10 @@ import { POST as checkout } from "@/app/api/orders/[id]/checkout/route";
 import { GET as listFiles, POST as postFile } from "@/app/api/orders/[id]/files/route";
 import { GET as getFile } from "@/app/api/files/[id]/route";
 import { POST as signIn } from "@/app/api/sign-in/route";
+import { POST as authPost } from "@/app/api/auth/[...all]/route";
 import { requestBalanceAction } from "@/lib/actions/request-balance";
 import { refundPaymentAction } from "@/lib/actions/refund-payment";
+import { addOrderNoteAction } from "@/lib/actions/add-order-note";
 import { getEm } from "@/lib/db/orm";
 import { createStaffUser } from "@/lib/users/staff";
 import { authRequest, sessionCookie, signUpVerified, uniqueEmail } from "../setup/auth-requests";
@@ -345,6 +347,41 @@ const cases = (): Case[] => [
     code: "invalid",
     field: "body",
   },
+  // A NUL character (PostgreSQL stores none in text) is refused naming its field, also where a
+  // form or the auth library's JSON carries it.
+  {
+    name: "sign-in form: a NUL in the e-mail",
+    handler: signIn,
+    path: "/api/sign-in",
+    body: { form: { email: "a\u0000@b.example", password: PASSWORD } },
+    who: "anyone",
+    status: 422,
+    code: "invalid",
+    field: "email",
+    fieldMessage: /NUL/,
+  },
+  {
+    name: "auth library sign-in: a NUL in the e-mail",
+    handler: authPost,
+    path: "/api/auth/sign-in/email",
+    body: { json: JSON.stringify({ email: "a\u0000@b.example", password: PASSWORD }) },
+    who: "anyone",
+    status: 422,
+    code: "invalid",
+    field: "email",
+    fieldMessage: /NUL/,
+  },
+  {
+    name: "auth library sign-up: a NUL in the name, sent raw in a form",
+    handler: authPost,
+    path: "/api/auth/sign-up/email",
+    body: { form: { name: "A\u0000B", email: "nul@b.example", password: PASSWORD } },
+    who: "anyone",
+    status: 422,
+    code: "invalid",
+    field: "name",
+    fieldMessage: /NUL/,
+  },
 ];
 
 describe("odd requests answer 4xx with the usual error shape, never 500", () => {
@@ -372,7 +409,7 @@ describe("odd requests answer 4xx with the usual error shape, never 500", () => 
   }
 });
 
-describe("server actions with unknown ids answer not_found, not internal", () => {
+describe("server actions: an unknown id is not_found, odd text a field error, never internal", () => {
   dbTest("asking the balance of an order that does not exist", async () => {
     session.cookie = counterCookie;
     const result = await requestBalanceAction({ orderId: randomUUID() });
@@ -386,6 +423,20 @@ describe("server actions with unknown ids answer not_found, not internal", () =>
       ok: false,
       error: { code: "invalid", fields: { orderId: expect.any(String) } },
     });
+  });
+
+  dbTest("a NUL character in an action's text is a field error, and nothing is saved", async () => {
+    session.cookie = counterCookie;
+    const result = await addOrderNoteAction({ orderId, body: "Call\u0000back", visibility: "staff" });
+    expect(result).toMatchObject({
+      ok: false,
+      error: { code: "invalid", fields: { body: expect.stringMatching(/NUL/) } },
+    });
+    const em = (await getEm()).fork();
+    const [notes] = await em
+      .getConnection()
+      .execute<{ n: number }[]>("select count(*)::int as n from order_note where order_id = ?", [orderId]);
+    expect(notes?.n).toBe(0);
   });
 
   dbTest("refunding a payment that does not exist", async () => {
