@@ -42,9 +42,16 @@ export function FilterBar({ filters, idPrefix }: { filters: FilterSpec[]; idPref
           case "search":
             return (
               <div key={id} className="min-w-80 flex-1">
-                <label htmlFor={id} className="field-label">
-                  {f.label}
-                </label>
+                <div className="mb-1 flex flex-wrap items-baseline gap-x-2">
+                  <label htmlFor={id} className="field-label mb-0">
+                    {f.label}
+                  </label>
+                  {f.hint && (
+                    <span id={`${id}-hint`} className="text-sm text-ink-muted">
+                      {f.hint}
+                    </span>
+                  )}
+                </div>
                 <div className="relative">
                   <Search
                     className="pointer-events-none absolute top-2.5 left-2.5 size-4 text-ink-muted"
@@ -56,6 +63,7 @@ export function FilterBar({ filters, idPrefix }: { filters: FilterSpec[]; idPref
                     type="search"
                     defaultValue={current(f.name)}
                     placeholder={f.placeholder}
+                    aria-describedby={f.hint ? `${id}-hint` : undefined}
                     maxLength={100}
                     className="field-input py-1.5 pl-8 text-sm"
                   />

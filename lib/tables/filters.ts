@@ -1,6 +1,13 @@
 /** A table's filters, as plain data: the server page describes them, the filter bar draws them. Pure. */
 export type FilterSpec =
-  | { kind: "search"; name: string; label: string; placeholder?: string }
+  | {
+      kind: "search";
+      name: string;
+      label: string;
+      placeholder?: string;
+      /** What the search looks in, shown under the label (a placeholder is cut off on a phone). */
+      hint?: string;
+    }
   | {
       kind: "select";
       name: string;

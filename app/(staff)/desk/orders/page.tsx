@@ -21,7 +21,8 @@ const FILTERS: FilterSpec[] = [
     kind: "search",
     name: "q",
     label: "Search",
-    placeholder: "Order number, customer, e-mail, company, phone",
+    hint: "order number, customer, e-mail, company or phone",
+    placeholder: "e.g. Y26-0042 or a name",
   },
   {
     kind: "select",
