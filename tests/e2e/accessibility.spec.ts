@@ -19,19 +19,61 @@ async function violations(page: Page) {
     );
 }
 
+/**
+ * What sticks out past the screen's right edge at desk and phone widths (a page that scrolls
+ * sideways): the outermost such elements, outside boxes that scroll on purpose (wide tables).
+ */
+async function widerThanScreen(page: Page): Promise<string[]> {
+  const found: string[] = [];
+  const size = page.viewportSize() ?? { width: 1280, height: 720 };
+  for (const width of [1280, 390]) {
+    await page.setViewportSize({ width, height: size.height });
+    await page.evaluate(() => new Promise((done) => requestAnimationFrame(() => done(null))));
+    found.push(
+      ...(await page.evaluate((screen) => {
+        if (document.documentElement.scrollWidth <= screen) return [];
+        const sticking = [...document.querySelectorAll("body *")].filter(
+          (el) =>
+            el.getBoundingClientRect().right > screen + 1 && !el.closest(".overflow-x-auto, .overflow-auto"),
+        );
+        return sticking
+          .filter((el) => !sticking.includes(el.parentElement as Element))
+          .slice(0, 3)
+          .map(
+            (el) => `${screen} px: <${el.tagName.toLowerCase()} class="${el.getAttribute("class") ?? ""}">`,
+          );
+      }, width)),
+    );
+  }
+  await page.setViewportSize(size);
+  return found;
+}
+
 const SCREENS = [
   {
     who: null,
     paths: ["/", "/sign-in", "/sign-up", "/check-email?email=a%40b.example", "/set-password?token=x"],
   },
   { who: ACCOUNTS.customer, paths: ["/orders", "/build"] },
-  { who: ACCOUNTS.counter, paths: ["/desk", "/desk/new", "/desk/customers"] },
-  { who: ACCOUNTS.owner, paths: ["/overview", "/overview/staff", "/overview/mail", "/overview/catalogue"] },
+  { who: ACCOUNTS.counter, paths: ["/desk", "/desk/new", "/desk/customers", "/desk/orders"] },
+  {
+    who: ACCOUNTS.owner,
+    paths: [
+      "/overview",
+      "/overview/staff",
+      "/overview/mail",
+      "/overview/catalogue",
+      "/overview/steps",
+      "/overview/shafts",
+    ],
+  },
   { who: ACCOUNTS.floor, paths: ["/floor", "/floor/queue", "/floor/shafts"] },
 ] as const;
 
 for (const { who, paths } of SCREENS) {
-  test(`no serious accessibility problems: ${paths.join(", ")}`, async ({ page }) => {
+  test(`no serious accessibility problems, nothing wider than the screen: ${paths.join(", ")}`, async ({
+    page,
+  }) => {
     // axe reads every one of the catalogue editor's thousand inputs: about 40 s on 2 cores.
     test.setTimeout(150_000);
     if (who) await signIn(page, who);
@@ -39,11 +81,14 @@ for (const { who, paths } of SCREENS) {
       await page.goto(path);
       await page.waitForLoadState("networkidle");
       expect(await violations(page), path).toEqual([]);
+      expect(await widerThanScreen(page), path).toEqual([]);
     }
   });
 }
 
-test("no serious accessibility problems on an order page and its quote", async ({ page }) => {
+test("no serious accessibility problems on an order page, nothing wider than the screen", async ({
+  page,
+}) => {
   await signIn(page, ACCOUNTS.counter);
   await page.goto("/desk");
   await page
@@ -52,6 +97,7 @@ test("no serious accessibility problems on an order page and its quote", async (
     .click();
   await page.waitForLoadState("networkidle");
   expect(await violations(page), page.url()).toEqual([]);
+  expect(await widerThanScreen(page), page.url()).toEqual([]);
 });
 
 test("no serious accessibility problems on the floor's screens with a shaft in the shop", async ({
@@ -76,6 +122,7 @@ test("no serious accessibility problems on the floor's screens with a shaft in t
   }
   await expect(box.getByRole("link", { name: "Print traveller" })).toBeVisible();
   expect(await violations(desk), desk.url()).toEqual([]);
+  expect(await widerThanScreen(desk), desk.url()).toEqual([]);
   const serial = (await box.locator("a.font-mono").first().textContent())!.trim();
   await desk.close();
 
@@ -97,5 +144,6 @@ test("no serious accessibility problems on the floor's screens with a shaft in t
     await page.goto(path);
     await page.waitForLoadState("networkidle");
     expect(await violations(page), path).toEqual([]);
+    expect(await widerThanScreen(page), path).toEqual([]);
   }
 });

@@ -33,29 +33,33 @@ export function ChartCard({
           <div className="mt-3 print:hidden" aria-hidden="true">
             {chart}
           </div>
-          <table className="sr-only mt-3 w-full text-left text-sm print:not-sr-only">
-            <caption className="sr-only">{table.caption}</caption>
-            <thead>
-              <tr>
-                {table.headings.map((h) => (
-                  <th key={h} scope="col" className="px-2 py-1">
-                    {h}
-                  </th>
-                ))}
-              </tr>
-            </thead>
-            <tbody>
-              {table.rows.map((r, i) => (
-                <tr key={i}>
-                  {r.map((c, j) => (
-                    <td key={j} className="px-2 py-1 tabular-nums">
-                      {c}
-                    </td>
+          {/* The box is what hides: a table ignores sr-only's 1px width and lays out as wide as its
+              rows, widening the page beyond the screen. */}
+          <div className="sr-only print:not-sr-only">
+            <table className="mt-3 w-full text-left text-sm">
+              <caption className="sr-only">{table.caption}</caption>
+              <thead>
+                <tr>
+                  {table.headings.map((h) => (
+                    <th key={h} scope="col" className="px-2 py-1">
+                      {h}
+                    </th>
                   ))}
                 </tr>
-              ))}
-            </tbody>
-          </table>
+              </thead>
+              <tbody>
+                {table.rows.map((r, i) => (
+                  <tr key={i}>
+                    {r.map((c, j) => (
+                      <td key={j} className="px-2 py-1 tabular-nums">
+                        {c}
+                      </td>
+                    ))}
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
         </>
       )}
     </section>
