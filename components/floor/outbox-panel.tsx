@@ -72,7 +72,7 @@ export function OutboxPanel() {
               <CloudOff className="size-5" aria-hidden="true" />
               {queued.length === 1 ? "1 sign-off waits" : `${queued.length} sign-offs wait`} to be sent
             </h2>
-            <button type="button" className="btn-secondary" onClick={flush}>
+            <button type="button" className="btn-quiet" onClick={flush}>
               <RefreshCw className="size-4" aria-hidden="true" /> Send now
             </button>
           </div>

@@ -68,7 +68,7 @@ export function OrderDetailsPanel({ orderId, details }: { orderId: string; detai
           />
         )}
         {message && <Alert tone={message.tone === "success" ? "success" : "error"} title={message.text} />}
-        <button type="submit" className="btn-secondary" disabled={save.pending || !changed}>
+        <button type="submit" className="btn-quiet" disabled={save.pending || !changed}>
           {save.pending ? "Saving…" : "Save details"}
         </button>
       </form>
