@@ -14,21 +14,81 @@ const root = path.resolve(import.meta.dirname, "../..");
 /** Markers that style other elements (`group-hover:`…), not themselves. */
 const MARKER = /^(group|peer)(\/[a-z]+)?$/;
 
-function tsxFiles(dir: string): string[] {
+function sourceFiles(dir: string): string[] {
   return readdirSync(path.join(root, dir), { withFileTypes: true }).flatMap((e) => {
     const rel = `${dir}/${e.name}`;
-    if (e.isDirectory()) return tsxFiles(rel);
-    return e.name.endsWith(".tsx") ? [rel] : [];
+    if (e.isDirectory()) return sourceFiles(rel);
+    return /\.tsx?$/.test(e.name) ? [rel] : [];
   });
 }
 
+/** A file's `const NAME = …` initializers, by name. */
+function constants(source: ts.SourceFile): Map<string, ts.Expression> {
+  const found = new Map<string, ts.Expression>();
+  const visit = (node: ts.Node) => {
+    if (ts.isVariableDeclaration(node) && ts.isIdentifier(node.name) && node.initializer)
+      found.set(node.name.text, node.initializer);
+    ts.forEachChild(node, visit);
+  };
+  visit(source);
+  return found;
+}
+
+/**
+ * What an expression stands for, through the same file's constants: `CELL` is its string,
+ * `TONE[state]` every value of TONE, `STEP[s].badge` every value's `badge`. Calls stay unread.
+ */
+function resolve(node: ts.Expression, consts: Map<string, ts.Expression>, depth = 0): ts.Expression[] {
+  if (depth > 8) return [];
+  if (ts.isParenthesizedExpression(node) || ts.isAsExpression(node) || ts.isSatisfiesExpression(node))
+    return resolve(node.expression, consts, depth + 1);
+  if (ts.isIdentifier(node)) {
+    const value = consts.get(node.text);
+    return value ? resolve(value, consts, depth + 1) : [];
+  }
+  if (ts.isElementAccessExpression(node))
+    return resolve(node.expression, consts, depth + 1).flatMap((target) =>
+      ts.isObjectLiteralExpression(target)
+        ? target.properties.flatMap((p) =>
+            ts.isPropertyAssignment(p) ? resolve(p.initializer, consts, depth + 1) : [],
+          )
+        : ts.isArrayLiteralExpression(target)
+          ? target.elements.flatMap((e) => resolve(e, consts, depth + 1))
+          : [],
+    );
+  if (ts.isPropertyAccessExpression(node))
+    return resolve(node.expression, consts, depth + 1).flatMap((target) =>
+      ts.isObjectLiteralExpression(target)
+        ? target.properties.flatMap((p) =>
+            ts.isPropertyAssignment(p) && p.name.getText() === node.name.text
+              ? resolve(p.initializer, consts, depth + 1)
+              : [],
+          )
+        : [],
+    );
+  return [node];
+}
+
 /** The text a className expression can produce: its strings and templates' fixed parts. */
-function classTexts(node: ts.Node, out: string[]): void {
-  if (ts.isStringLiteral(node) || ts.isNoSubstitutionTemplateLiteral(node)) out.push(node.text);
+function classTexts(node: ts.Node, out: string[], consts: Map<string, ts.Expression>): void {
+  if (ts.isIdentifier(node) || ts.isPropertyAccessExpression(node) || ts.isElementAccessExpression(node)) {
+    for (const value of resolve(node, consts)) if (value !== node) classTexts(value, out, consts);
+  } else if (ts.isConditionalExpression(node)) {
+    // `a ? "x" : "y"`: the condition is not a class.
+    classTexts(node.whenTrue, out, consts);
+    classTexts(node.whenFalse, out, consts);
+  } else if (
+    ts.isBinaryExpression(node) &&
+    node.operatorToken.kind === ts.SyntaxKind.AmpersandAmpersandToken
+  ) {
+    classTexts(node.right, out, consts);
+  } else if (ts.isCallExpression(node) || ts.isObjectLiteralExpression(node)) {
+    // A helper's result or a whole record: not read.
+  } else if (ts.isStringLiteral(node) || ts.isNoSubstitutionTemplateLiteral(node)) out.push(node.text);
   else if (ts.isTemplateExpression(node)) {
     out.push(node.head.text);
     for (const span of node.templateSpans) {
-      classTexts(span.expression, out);
+      classTexts(span.expression, out, consts);
       out.push(span.literal.text);
     }
   } else if (
@@ -37,23 +97,36 @@ function classTexts(node: ts.Node, out: string[]): void {
       node.operatorToken.kind,
     )
   ) {
-    // `tone === "danger" ? … : …`: the compared value is not a class.
-    classTexts(node.left, out);
-  } else ts.forEachChild(node, (child) => classTexts(child, out));
+    // `tone === "danger"`: the compared value is not a class.
+  } else ts.forEachChild(node, (child) => classTexts(child, out, consts));
 }
 
 /** Every class token written in a `className` of app/ and components/, with a file that uses it. */
 function classNames(): Map<string, string> {
+  const sources = ["app", "components"]
+    .flatMap(sourceFiles)
+    .map((file) =>
+      ts.createSourceFile(file, readFileSync(path.join(root, file), "utf8"), ts.ScriptTarget.Latest, true),
+    );
+  // Class lists one file exports and another imports (`CELL`), by name; a file's own come first.
+  const exported = new Map<string, ts.Expression>();
+  for (const source of sources)
+    for (const statement of source.statements)
+      if (
+        ts.isVariableStatement(statement) &&
+        statement.modifiers?.some((m) => m.kind === ts.SyntaxKind.ExportKeyword)
+      )
+        for (const d of statement.declarationList.declarations)
+          if (ts.isIdentifier(d.name) && d.initializer) exported.set(d.name.text, d.initializer);
   const found = new Map<string, string>();
-  for (const file of ["app", "components"].flatMap(tsxFiles)) {
-    const text = readFileSync(path.join(root, file), "utf8");
-    const source = ts.createSourceFile(file, text, ts.ScriptTarget.Latest, true, ts.ScriptKind.TSX);
+  for (const source of sources) {
+    const consts = new Map([...exported, ...constants(source)]);
     const visit = (node: ts.Node) => {
       if (ts.isJsxAttribute(node) && node.name.getText(source) === "className" && node.initializer) {
         const texts: string[] = [];
-        classTexts(node.initializer, texts);
+        classTexts(node.initializer, texts, consts);
         for (const token of texts.join(" ").split(/\s+/))
-          if (token && !found.has(token)) found.set(token, file);
+          if (token && !found.has(token)) found.set(token, source.fileName);
       }
       ts.forEachChild(node, visit);
     };
