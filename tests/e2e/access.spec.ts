@@ -35,6 +35,9 @@ test("floor staff are refused the owner's pages", async ({ page }) => {
   await signIn(page, ACCOUNTS.floor);
   for (const path of ["/overview", "/overview/staff", "/desk"]) {
     expect((await page.goto(path))?.status(), path).toBe(403);
+    // They are staff: the page says their role does not include it, not that it is for staff.
+    await expect(page.getByRole("heading", { name: "This page is not part of your role" })).toBeVisible();
+    await expect(page.getByText("Your account (Floor) does not have access to it.")).toBeVisible();
   }
 });
 
