@@ -58,7 +58,7 @@ export default async function OrderDeskPage() {
           >
             {orders.map((o) => (
               <tr key={o.id} className={o.late ? "bg-fail-soft/40" : undefined}>
-                <td className={`${CELL} font-mono font-semibold`}>
+                <td className={`${CELL} font-mono font-semibold whitespace-nowrap`}>
                   <Link href={`/desk/orders/${o.id}`}>{o.number}</Link>
                 </td>
                 <td className={CELL}>{o.customerName}</td>

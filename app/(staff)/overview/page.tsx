@@ -349,7 +349,7 @@ function RiskRow({
 }) {
   return (
     <tr>
-      <td className={`${CELL} font-mono font-semibold`}>
+      <td className={`${CELL} font-mono font-semibold whitespace-nowrap`}>
         <Link href={`/desk/orders/${o.id}`}>{o.number}</Link>
       </td>
       <td className={CELL}>{o.customerName}</td>
