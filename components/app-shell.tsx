@@ -6,6 +6,7 @@ import { isDemo } from "@/lib/shop/shop";
 import { BrandMark } from "./brand-mark";
 import { NavLinks } from "./nav-links";
 import { SignOutButton } from "./sign-out-button";
+import { SiteFooter } from "@/components/site-footer";
 
 /** The frame of every signed-in screen: brand, the role's navigation, who is signed in. */
 export function AppShell({
@@ -70,10 +71,7 @@ export function AppShell({
       <main id="main" className="mx-auto w-full max-w-7xl flex-1 px-4 py-6 md:py-8">
         {children}
       </main>
-      <footer className="no-print border-t border-line py-4 text-center text-xs text-ink-muted">
-        Yokeline · engineering estimates for shop use; they do not replace a qualified engineer or local
-        rules.
-      </footer>
+      <SiteFooter />
     </div>
   );
 }

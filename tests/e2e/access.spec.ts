@@ -22,6 +22,18 @@ test("an anonymous visitor is sent to sign-in, and comes back after", async ({ p
   await expect(page.getByRole("cell", { name: "Harlan Voss" })).toBeVisible();
 });
 
+test("a visitor's Design your shaft asks them to sign in, then opens the builder", async ({ page }) => {
+  await page.goto("/");
+  await expect(page.getByText(/do not replace a qualified engineer/)).toBeVisible();
+  await page.getByRole("link", { name: "Design your shaft" }).click();
+  await expect(page).toHaveURL(/\/sign-in\?next=%2Fbuild/);
+  await page.getByLabel("E-mail").fill(ACCOUNTS.customer);
+  await page.getByLabel("Password").fill("yokeline-demo-2026");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page).toHaveURL("/build");
+  await expect(page.getByRole("heading", { name: "Design a shaft" })).toBeVisible();
+});
+
 test("a customer is refused every staff page with 403", async ({ page }) => {
   await signIn(page, ACCOUNTS.customer);
   for (const path of STAFF_PAGES) {
