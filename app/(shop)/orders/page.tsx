@@ -47,7 +47,9 @@ export default async function MyOrdersPage({ searchParams }: PageProps<"/orders"
                 className="flex flex-wrap items-center gap-x-6 gap-y-2 card p-4 text-ink no-underline hover:border-steel-500"
               >
                 <span className="font-mono font-semibold">{o.number}</span>
-                <span className="min-w-0 flex-1 truncate">{o.shafts.join(", ")}</span>
+                <span className="min-w-0 basis-full truncate sm:flex-1 sm:basis-0">
+                  {o.shafts.join(", ")}
+                </span>
                 <OrderStatusBadge status={o.status} label={o.statusLabel} />
                 <PaymentBadge state={o.paymentState} />
                 <span className="tabular-nums">{formatMoney(o.totalCents, o.currency)}</span>
