@@ -2,8 +2,8 @@
  * The scan route under load: GET /api/floor/scan?code=… (a floor user's session, a step looked up)
  * beside a trivial route handler (GET /api/bench/noop) measured in the same run, both at a steady
  * 200 requests/s (bench/steady.ts; the scan in three rounds, judged on the median one). Targets: at
- * that rate, at least 70 % of the trivial handler's throughput and p99 < 50 ms. The flat-out throughput (autocannon, 10 connections) is printed for
- * comparison.
+ * that rate, at least 70 % of the trivial handler's throughput and p99 < 50 ms. The flat-out
+ * throughput (autocannon, 10 connections) is printed for comparison.
  */
 import autocannon from "autocannon";
 import { steady } from "./steady";

@@ -6,7 +6,7 @@ import { isDemo } from "@/lib/shop/shop";
 import { BrandMark } from "./brand-mark";
 import { NavLinks } from "./nav-links";
 import { SignOutButton } from "./sign-out-button";
-import { SiteFooter } from "@/components/site-footer";
+import { SiteFooter } from "./site-footer";
 
 /** The frame of every signed-in screen: brand, the role's navigation, who is signed in. */
 export function AppShell({

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { hasNoNul } from "@/lib/validation";
 
 export const createCustomerBodySchema = z.object({
   name: z.string().trim().min(2, { error: "Enter the customer's name." }).max(120),
@@ -23,7 +24,7 @@ export const searchCustomersQuerySchema = z.object({
     .trim()
     .min(1, { error: "Type part of a name, phone, e-mail or company." })
     .max(100, { error: "At most 100 characters." })
-    .refine((s) => !s.includes("\u0000"), { error: "Must not contain a NUL character." }),
+    .refine(hasNoNul, { error: "Must not contain a NUL character." }),
   limit: z.coerce
     .number({ error: "A whole number from 1 to 20." })
     .int({ error: "A whole number from 1 to 20." })

@@ -9,3 +9,10 @@ export function zodIssues(error: ZodError): { path: string; message: string }[] 
     message: issue.message,
   }));
 }
+
+/**
+ * PostgreSQL stores no NUL character in text, so free text carrying one is refused before it gets
+ * there: the query-string schemas refine with this; bodies and action inputs go through
+ * `throwIfNul` (lib/http/body.ts), which names the field.
+ */
+export const hasNoNul = (text: string): boolean => !text.includes("\u0000");

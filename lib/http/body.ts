@@ -1,3 +1,4 @@
+import { hasNoNul } from "@/lib/validation";
 import { AppError } from "./errors";
 
 /** JSON endpoints: a design file with its application text is a few kB; 1 MB is ample. */
@@ -128,14 +129,14 @@ export function throwIfNul(value: unknown): void {
 
 /** The path of the first string (value or key) holding a NUL, "" for the input itself. */
 function nulPath(value: unknown, path: string): string | null {
-  if (typeof value === "string") return value.includes("\u0000") ? path : null;
+  if (typeof value === "string") return hasNoNul(value) ? null : path;
   if (typeof value !== "object" || value === null) return null;
   for (const [key, item] of Object.entries(value)) {
     const at = nulPath(item, Array.isArray(value) ? `${path}[${key}]` : path ? `${path}.${key}` : key);
     if (at !== null) return at;
   }
   // A key may hold one too.
-  for (const key of Object.keys(value)) if (key.includes("\u0000")) return path;
+  for (const key of Object.keys(value)) if (!hasNoNul(key)) return path;
   return null;
 }
 

@@ -5,6 +5,7 @@
  * the field), so both run the very same query. Pure: imported by server and browser code.
  */
 import { z } from "zod";
+import { hasNoNul } from "@/lib/validation";
 
 /** Next's `searchParams` or a URLSearchParams, as one string per key. */
 export type RawParams = URLSearchParams | Record<string, string | string[] | undefined>;
@@ -53,7 +54,7 @@ export const searchParam = z
   .string()
   .trim()
   .max(100, "must be at most 100 characters")
-  .refine((s) => !s.includes("\u0000"), "must not contain a NUL character");
+  .refine(hasNoNul, "must not contain a NUL character");
 
 /** A sort column from a fixed list (anything else is named in the notice). */
 export function sortParam<const S extends readonly [string, ...string[]]>(sorts: S, fallback: S[number]) {
